@@ -1,0 +1,129 @@
+package org.kinduct.scene;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+
+/**
+ * A whole arrangement: bodies, field sources and conductors, with a default time window.
+ * Immutable; edits make new scenes ({@code withXxx}).
+ *
+ * <p>Sign conventions (used throughout Kinduct): SI units; x right, y up, z out of the screen;
+ * B_z &gt; 0 points out of the screen; loops are positive counter-clockwise (normal +z).
+ */
+public record Scene(String name, String description, List<Body> bodies, List<Source> sources,
+                    List<Conductor> conductors, TimeSpan time) {
+
+    /** File format name written in every scene file. */
+    public static final String FORMAT = "kinduct-scene";
+    /** Current file format version. */
+    public static final int VERSION = 1;
+
+    public Scene {
+        name = name == null ? "" : name;
+        description = description == null ? "" : description;
+        bodies = withFixedFrame(Checks.nonNull(bodies, "bodies"));
+        sources = List.copyOf(Checks.nonNull(sources, "sources"));
+        conductors = List.copyOf(Checks.nonNull(conductors, "conductors"));
+        Checks.nonNull(time, "time");
+        checkReferences(bodies, sources, conductors);
+    }
+
+    public static Scene empty(String name) {
+        return new Scene(name, "", List.of(), List.of(), List.of(), new TimeSpan(0, 1, 0.01));
+    }
+
+    public Map<String, Body> bodiesById() {
+        Map<String, Body> map = new LinkedHashMap<>();
+        bodies.forEach(b -> map.put(b.id(), b));
+        return map;
+    }
+
+    public Optional<Body> body(String id) {
+        return bodies.stream().filter(b -> b.id().equals(id)).findFirst();
+    }
+
+    public Optional<Source> source(String id) {
+        return sources.stream().filter(s -> s.id().equals(id)).findFirst();
+    }
+
+    public Optional<Conductor> conductor(String id) {
+        return conductors.stream().filter(c -> c.id().equals(id)).findFirst();
+    }
+
+    public Scene withSources(List<Source> newSources) {
+        return new Scene(name, description, bodies, newSources, conductors, time);
+    }
+
+    public Scene withConductors(List<Conductor> newConductors) {
+        return new Scene(name, description, bodies, sources, newConductors, time);
+    }
+
+    public Scene withBodies(List<Body> newBodies) {
+        return new Scene(name, description, newBodies, sources, conductors, time);
+    }
+
+    public Scene withTime(TimeSpan newTime) {
+        return new Scene(name, description, bodies, sources, conductors, newTime);
+    }
+
+    public Scene withText(String newName, String newDescription) {
+        return new Scene(newName, newDescription, bodies, sources, conductors, time);
+    }
+
+    private static List<Body> withFixedFrame(List<Body> given) {
+        List<Body> all = new ArrayList<>();
+        all.add(Body.fixed());
+        for (Body b : given) {
+            if (!Body.FIXED.equals(b.id())) {
+                all.add(b);
+            }
+        }
+        return List.copyOf(all);
+    }
+
+    private static void checkReferences(List<Body> bodies, List<Source> sources, List<Conductor> conductors) {
+        Set<String> bodyIds = new HashSet<>();
+        for (Body b : bodies) {
+            if (!bodyIds.add(b.id())) {
+                throw new IllegalArgumentException("body id '" + b.id() + "' is used twice");
+            }
+            if (b.motion() instanceof Motion.Free free) {
+                for (Motion.Free.Spring s : free.springs()) {
+                    if (s.otherBody() != null && !bodies.stream().anyMatch(o -> o.id().equals(s.otherBody()))) {
+                        throw new IllegalArgumentException("body '" + b.id() + "' has a spring to unknown body '"
+                                + s.otherBody() + "'");
+                    }
+                }
+            }
+        }
+        Set<String> objectIds = new HashSet<>();
+        for (Source s : sources) {
+            if (!objectIds.add(s.id())) {
+                throw new IllegalArgumentException("id '" + s.id() + "' is used twice");
+            }
+            requireBody(bodyIds, s.body(), "source '" + s.id() + "'");
+        }
+        for (Conductor c : conductors) {
+            if (!objectIds.add(c.id())) {
+                throw new IllegalArgumentException("id '" + c.id() + "' is used twice");
+            }
+            requireBody(bodyIds, c.body(), "conductor '" + c.id() + "'");
+            for (Conductor.Vertex v : c.vertices()) {
+                if (v.body() != null) {
+                    requireBody(bodyIds, v.body(), "a vertex of conductor '" + c.id() + "'");
+                }
+            }
+        }
+    }
+
+    private static void requireBody(Set<String> bodyIds, String id, String who) {
+        if (!bodyIds.contains(id)) {
+            throw new IllegalArgumentException(who + " rides unknown body '" + id + "'");
+        }
+    }
+}

@@ -1,0 +1,161 @@
+package org.kinduct.scene;
+
+import java.util.List;
+
+/**
+ * A source of magnetic field. Only B_z, the component normal to the drawing plane, enters the
+ * plan-view model (see DEVELOPERS.md, "Physical model"). Positions are as drawn (t = 0); the
+ * source rides body {@link #body()}.
+ */
+public sealed interface Source
+        permits Source.FieldPatch, Source.UniformField, Source.BlockMagnet, Source.CylinderMagnet,
+                Source.SourceCoil {
+
+    String id();
+
+    /** Id of the body the source rides; {@link Body#FIXED} for the fixed frame. */
+    String body();
+
+    /** An ideal region of uniform B_z (tesla, + out of the screen) bounded by a simple polygon. */
+    record FieldPatch(String id, String body, List<Vec2> outline, double bzT) implements Source {
+        public FieldPatch {
+            Checks.id(id, "Source");
+            Checks.id(body, "Body");
+            outline = Polygons.requireSimple(outline, "field patch outline");
+            Checks.finite(bzT, "B_z");
+        }
+    }
+
+    /** Uniform B_z everywhere (tesla), e.g. the normal component of the Earth's field. */
+    record UniformField(String id, double bzT) implements Source {
+        public UniformField {
+            Checks.id(id, "Source");
+            Checks.finite(bzT, "B_z");
+        }
+
+        @Override
+        public String body() {
+            return Body.FIXED;
+        }
+    }
+
+    /** Which side of the drawing plane a magnet or coil sits on. */
+    enum Side {
+        /** z < 0, behind the screen. */
+        BELOW,
+        /** z > 0, in front of the screen. */
+        ABOVE
+    }
+
+    /** Direction of a magnet's magnetization: its north face points to +z (out of the screen) or −z. */
+    enum Magnetization { PLUS_Z, MINUS_Z }
+
+    /**
+     * A rectangular block magnet magnetized along ±z, uniform and rigid (recoil permeability 1).
+     *
+     * @param sizeXM edge along the magnet's own x axis (before rotation), metres
+     * @param sizeYM edge along its own y axis, metres
+     * @param heightM thickness along z, metres
+     * @param angleRad rotation of the magnet about z, counter-clockwise
+     * @param standoffM gap between the drawing plane and the magnet's nearer face, metres (≥ 0)
+     */
+    record BlockMagnet(String id, String body, Vec2 center, double sizeXM, double sizeYM, double heightM,
+                       double angleRad, double standoffM, Side side, double remanenceT,
+                       Magnetization magnetization) implements Source {
+        public BlockMagnet {
+            Checks.id(id, "Source");
+            Checks.id(body, "Body");
+            Checks.nonNull(center, "center");
+            Checks.positive(sizeXM, "size x");
+            Checks.positive(sizeYM, "size y");
+            Checks.positive(heightM, "height");
+            Checks.finite(angleRad, "angle");
+            Checks.nonNegative(standoffM, "stand-off");
+            Checks.nonNull(side, "side");
+            Checks.positive(remanenceT, "remanence");
+            Checks.nonNull(magnetization, "magnetization");
+        }
+    }
+
+    /** A cylindrical magnet, axis along z, magnetized along ±z. Stand-off as for {@link BlockMagnet}. */
+    record CylinderMagnet(String id, String body, Vec2 center, double radiusM, double heightM,
+                          double standoffM, Side side, double remanenceT, Magnetization magnetization)
+            implements Source {
+        public CylinderMagnet {
+            Checks.id(id, "Source");
+            Checks.id(body, "Body");
+            Checks.nonNull(center, "center");
+            Checks.positive(radiusM, "radius");
+            Checks.positive(heightM, "height");
+            Checks.nonNegative(standoffM, "stand-off");
+            Checks.nonNull(side, "side");
+            Checks.positive(remanenceT, "remanence");
+            Checks.nonNull(magnetization, "magnetization");
+        }
+    }
+
+    /**
+     * A thin-filament source coil of {@code turns} turns in the plane z = {@code planeZM}
+     * (must not be 0: a filament in the drawing plane has a singular field there). Current is
+     * positive counter-clockwise seen from +z, along the polygon's vertex order.
+     */
+    record SourceCoil(String id, String body, CoilShape shape, int turns, double planeZM, Drive drive)
+            implements Source {
+        public SourceCoil {
+            Checks.id(id, "Source");
+            Checks.id(body, "Body");
+            Checks.nonNull(shape, "shape");
+            if (turns < 1) {
+                throw new IllegalArgumentException("turns must be at least 1, got " + turns);
+            }
+            Checks.finite(planeZM, "plane offset z");
+            if (planeZM == 0) {
+                throw new IllegalArgumentException("a source coil must sit off the drawing plane (z ≠ 0)");
+            }
+            Checks.nonNull(drive, "drive");
+        }
+    }
+
+    /** The outline of a source coil. */
+    sealed interface CoilShape permits CoilShape.Polygon, CoilShape.Circle {
+        /** Closed polygon, vertex order gives the positive current direction. */
+        record Polygon(List<Vec2> vertices) implements CoilShape {
+            public Polygon {
+                vertices = Polygons.requireSimple(vertices, "coil outline");
+            }
+        }
+
+        /** Circle; positive current counter-clockwise. */
+        record Circle(Vec2 center, double radiusM) implements CoilShape {
+            public Circle {
+                Checks.nonNull(center, "center");
+                Checks.positive(radiusM, "radius");
+            }
+        }
+    }
+
+    /**
+     * Coil current i(t) = dc + amplitude·sin(2πf·t + phase), amperes (per turn).
+     */
+    record Drive(double dcA, double amplitudeA, double frequencyHz, double phaseRad) {
+        public Drive {
+            Checks.finite(dcA, "DC current");
+            Checks.finite(amplitudeA, "current amplitude");
+            Checks.nonNegative(frequencyHz, "frequency");
+            Checks.finite(phaseRad, "phase");
+        }
+
+        public static Drive dc(double amps) {
+            return new Drive(amps, 0, 0, 0);
+        }
+
+        public double currentAt(double tS) {
+            return dcA + amplitudeA * Math.sin(2 * Math.PI * frequencyHz * tS + phaseRad);
+        }
+
+        public double rateAt(double tS) {
+            double w = 2 * Math.PI * frequencyHz;
+            return amplitudeA * w * Math.cos(w * tS + phaseRad);
+        }
+    }
+}
