@@ -1,0 +1,36 @@
+package org.kinduct.solver;
+
+import java.util.List;
+import org.kinduct.scene.Vec2;
+
+/**
+ * Everything computed for one conductor at one instant. EMF and current are positive along the
+ * conductor's vertex order; for loops, flux is positive with the normal given by that order
+ * (right-hand rule), so a counter-clockwise loop in B_z &gt; 0 has positive flux.
+ *
+ * @param vertices the conductor's vertices where they are at this instant, metres
+ * @param fluxWb flux through one turn (NaN for wires)
+ * @param linkageWb flux linkage N·Φ (NaN for wires)
+ * @param emfFluxV −dλ/dt (NaN for wires)
+ * @param emfMotionalV ∮ or ∫ (v × B − ∂A/∂t)·dl, times turns for loops
+ * @param emfV the EMF reported (motional method; the flux method is its check)
+ * @param disagreement |emfFlux − emfMotional| / max(|emfFlux|, |emfMotional|, floor); 0 for wires
+ * @param positiveEnd + terminal for wires and open loops; NONE for closed loops
+ * @param currentA current along the vertex order (0 for wires and open loops)
+ * @param direction current sense on screen for closed loops
+ * @param forceN magnetic force on the conductor in the plane, N (I ∮ dl × B, times turns)
+ * @param resistanceOhm total series resistance (winding + load); NaN for wires
+ * @param inducedFieldIncluded false when an idealized source varies in time, so −∂A/∂t along a
+ *        wire could not be included (closed loops always include it through the flux change)
+ */
+public record ConductorState(String id, Kind kind, List<Vec2> vertices, double fluxWb, double linkageWb,
+                             double emfFluxV, double emfMotionalV, double emfV, double disagreement,
+                             Terminal positiveEnd, double currentA, Circulation direction, Vec2 forceN,
+                             double resistanceOhm, boolean inducedFieldIncluded) {
+
+    public ConductorState {
+        vertices = List.copyOf(vertices);
+    }
+
+    public enum Kind { WIRE, LOOP }
+}
