@@ -8,7 +8,7 @@ import org.kinduct.scene.Vec2;
 import org.kinduct.ui.view.ViewTransform;
 
 /** Outlines of field sources where their bodies have carried them. */
-final class SourcePainter {
+public final class SourcePainter {
 
     private static final int CIRCLE_SEGMENTS = 72;
 
@@ -65,7 +65,7 @@ final class SourcePainter {
     }
 
     /** The source's outline in scene metres at this instant (empty for a field without outline). */
-    static List<Vec2> outline(Source src, Placement placement) {
+    public static List<Vec2> outline(Source src, Placement placement) {
         if (src instanceof Source.FieldPatch p) {
             return placement.place(p.body(), p.outline());
         }
