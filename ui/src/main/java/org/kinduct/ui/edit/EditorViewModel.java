@@ -80,6 +80,9 @@ public final class EditorViewModel {
     private final ObservableSet<Layer> layers = FXCollections.observableSet(EnumSet.complementOf(
             EnumSet.of(Layer.SYMBOLS)));
     private final ObservableSet<String> selection = FXCollections.observableSet();
+    private final ObjectProperty<ToolKind> tool = new SimpleObjectProperty<>(ToolKind.SELECT);
+    private final BooleanProperty snapToGrid = new SimpleBooleanProperty(true);
+    private final BooleanProperty snapAngles = new SimpleBooleanProperty(true);
     private SceneEvaluator evaluator;
     private long evaluatorRevision = -1;
 
@@ -133,7 +136,15 @@ public final class EditorViewModel {
 
     /** Replaces the whole scene (opened file, new scene); history starts afresh. */
     public void load(Scene newScene, Path from) {
+        load(newScene, from, false);
+    }
+
+    /** As {@link #load(Scene, Path)}; {@code unsaved} marks recovered work that still needs saving. */
+    public void load(Scene newScene, Path from, boolean unsaved) {
         history.reset(newScene);
+        if (unsaved) {
+            history.markUnsaved();
+        }
         file.set(from);
         selection.clear();
         playing.set(false);
@@ -273,6 +284,15 @@ public final class EditorViewModel {
         return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
     }
 
+    /** Exact B_z at a scene point at the current time (for the cursor readout); NaN if the solver fails. */
+    public double bzAt(double x, double y) {
+        try {
+            return evaluator().fieldAt(time.get()).bz(x, y);
+        } catch (RuntimeException e) {
+            return Double.NaN;
+        }
+    }
+
     // ---- status ----
 
     public void say(String message) {
@@ -347,6 +367,18 @@ public final class EditorViewModel {
 
     public ObservableSet<Layer> layers() {
         return layers;
+    }
+
+    public ObjectProperty<ToolKind> toolProperty() {
+        return tool;
+    }
+
+    public BooleanProperty snapToGridProperty() {
+        return snapToGrid;
+    }
+
+    public BooleanProperty snapAnglesProperty() {
+        return snapAngles;
     }
 
     public ObservableSet<String> selection() {

@@ -89,6 +89,11 @@ public final class UndoHistory {
         return current();
     }
 
+    /** Treats the current state as never saved (recovered work). */
+    public void markUnsaved() {
+        savedIndex = -1;
+    }
+
     public void markSaved() {
         savedIndex = index;
     }
