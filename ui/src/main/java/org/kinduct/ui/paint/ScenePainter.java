@@ -226,7 +226,7 @@ public final class ScenePainter {
     }
 
     private static LabelPlacer.Box legendBox(Surface s) {
-        double w = 168;
+        double w = 178;
         double h = 218;
         return new LabelPlacer.Box(s.width() - w - 10, s.height() - h - 10, w, h);
     }
@@ -242,7 +242,7 @@ public final class ScenePainter {
         double top = box.y() + 46;
         double barH = 120;
         s.fill(Palette.INK);
-        s.text("B_z, normal to the plane", x, box.y() + 8, FONT, true, Surface.Anchor.TOP_LEFT);
+        s.text("B_z (normal to plane)", x, box.y() + 8, FONT, true, Surface.Anchor.TOP_LEFT);
         int n = 64;
         int[] bar = new int[n];
         for (int i = 0; i < n; i++) {
