@@ -1,62 +1,44 @@
 package org.kinduct.ui.paint;
 
-import java.util.Locale;
+import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Units;
 
-/** Short, unit-carrying text for the values the painter and the panels show. */
+/** Short, unit-carrying text for the values the painter and the panels show ({@link Units} formatting). */
 public final class Quantities {
-
-    private static final String[] PREFIXES = {"p", "n", "µ", "m", "", "k", "M", "G"};
 
     private Quantities() {
     }
 
     public static String length(double m) {
-        return eng(m, "m");
+        return show(m, Dimension.LENGTH);
     }
 
     public static String bz(double t) {
-        return eng(t, "T");
+        return show(t, Dimension.FLUX_DENSITY);
     }
 
     public static String voltage(double v) {
-        return eng(v, "V");
+        return show(v, Dimension.VOLTAGE);
     }
 
     public static String current(double a) {
-        return eng(a, "A");
+        return show(a, Dimension.CURRENT);
     }
 
     public static String flux(double wb) {
-        return eng(wb, "Wb");
+        return show(wb, Dimension.FLUX);
     }
 
     public static String force(double n) {
-        return eng(n, "N");
+        return show(n, Dimension.FORCE);
     }
 
     public static String time(double s) {
-        return eng(s, "s");
+        return show(s, Dimension.TIME);
     }
 
-    public static String resistance(double ohm) {
-        return eng(ohm, "Ω");
-    }
-
-    /** Three significant digits with an SI prefix, e.g. 0.01234 V → "12.3 mV". */
-    public static String eng(double value, String unit) {
-        if (Double.isNaN(value)) {
-            return "—";
-        }
-        if (value == 0 || Double.isInfinite(value)) {
-            return (value == 0 ? "0" : Double.toString(value)) + " " + unit;
-        }
-        int exp3 = (int) Math.floor(Math.log10(Math.abs(value)) / 3);
-        exp3 = Math.max(-4, Math.min(3, exp3));
-        double scaled = value / Math.pow(1000, exp3);
-        double mag = Math.abs(scaled);
-        String digits = mag >= 100 ? String.format(Locale.ROOT, "%.0f", scaled)
-                : mag >= 10 ? String.format(Locale.ROOT, "%.1f", scaled)
-                : String.format(Locale.ROOT, "%.2f", scaled);
-        return digits + " " + PREFIXES[exp3 + 4] + unit;
+    /** "—" for a value that does not apply (NaN), else the formatted value. */
+    private static String show(double v, Dimension d) {
+        return Double.isNaN(v) ? "—" : Units.format(v, d);
     }
 }
