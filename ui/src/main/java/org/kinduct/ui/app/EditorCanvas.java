@@ -394,18 +394,8 @@ final class EditorCanvas extends Pane {
         if (ids.isEmpty()) {
             return;
         }
-        Scene only = SceneEdits.delete(vm.scene(), idsExcept(vm.scene(), ids));
-        SceneBounds b = SceneBounds.of(only, 0);
-        Vec2 c = new Vec2((b.minX() + b.maxX()) / 2, (b.minY() + b.maxY()) / 2);
+        Vec2 c = SceneBounds.ofObjects(vm.scene(), ids, 0).center();
         vm.apply("Rotate", s -> SceneEdits.rotate(s, ids, c, angleRad));
-    }
-
-    private static Set<String> idsExcept(Scene s, Set<String> keep) {
-        Set<String> others = new java.util.HashSet<>();
-        s.sources().forEach(x -> others.add(x.id()));
-        s.conductors().forEach(x -> others.add(x.id()));
-        others.removeAll(keep);
-        return others;
     }
 
     void repaintSoon() {

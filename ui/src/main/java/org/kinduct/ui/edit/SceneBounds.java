@@ -38,6 +38,19 @@ public record SceneBounds(double minX, double minY, double maxX, double maxY) {
         return new SceneBounds(x0, y0, x1, y1);
     }
 
+    /** Bounds of the objects {@code ids} alone at {@code tS}. */
+    public static SceneBounds ofObjects(Scene scene, java.util.Set<String> ids, double tS) {
+        java.util.Set<String> others = new java.util.HashSet<>();
+        scene.sources().forEach(s -> others.add(s.id()));
+        scene.conductors().forEach(c -> others.add(c.id()));
+        others.removeAll(ids);
+        return of(SceneEdits.delete(scene, others), tS);
+    }
+
+    public Vec2 center() {
+        return new Vec2((minX + maxX) / 2, (minY + maxY) / 2);
+    }
+
     /** This box grown to include {@code o}. */
     public SceneBounds union(SceneBounds o) {
         return new SceneBounds(Math.min(minX, o.minX), Math.min(minY, o.minY), Math.max(maxX, o.maxX),
