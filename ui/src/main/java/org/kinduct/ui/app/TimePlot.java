@@ -61,6 +61,7 @@ final class TimePlot extends Pane {
         widthProperty().addListener(o -> draw());
         heightProperty().addListener(o -> draw());
         vm.seriesProperty().addListener(o -> draw());
+        vm.sceneProperty().addListener(o -> draw());
         vm.timeProperty().addListener(o -> draw());
         vm.selection().addListener((javafx.collections.SetChangeListener<String>) c -> draw());
         setOnMouseClicked(e -> seek(e.getX()));
