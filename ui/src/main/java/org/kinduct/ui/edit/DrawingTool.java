@@ -38,7 +38,9 @@ public final class DrawingTool {
 
     /** Updates the cursor; {@code vertices} are the existing vertices it may snap to. */
     public void hover(Vec2 raw, Snapper snapper, List<Vec2> vertices) {
-        cursor = snapper.snap(raw, last(), vertices);
+        // A rectangle's second corner is free in both axes: no 15° steps from the first one.
+        Vec2 from = kind.gesture() == ToolKind.Gesture.RECTANGLE ? null : last();
+        cursor = snapper.snap(raw, from, vertices);
     }
 
     /** Adds the (snapped) point; returns the finished edit when the gesture is complete. */

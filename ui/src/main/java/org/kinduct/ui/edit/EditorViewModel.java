@@ -160,9 +160,9 @@ public final class EditorViewModel {
     }
 
     private void show(Scene s) {
+        selection.removeIf(id -> s.source(id).isEmpty() && s.conductor(id).isEmpty());
         scene.set(s);
         revision.set(revision.get() + 1);
-        selection.removeIf(id -> s.source(id).isEmpty() && s.conductor(id).isEmpty());
         updateFlags();
         double t = clampTime(time.get());
         if (t != time.get()) {

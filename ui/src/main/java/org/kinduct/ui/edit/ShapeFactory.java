@@ -57,7 +57,8 @@ public final class ShapeFactory {
 
     /** The outline a tool shows while drawing: as clicked, or the rectangle or circle it implies. */
     public static List<Vec2> preview(ToolKind kind, List<Vec2> pts) {
-        if (pts.size() == 2 && kind.gesture() == ToolKind.Gesture.RECTANGLE) {
+        if (pts.size() == 2 && kind.gesture() == ToolKind.Gesture.RECTANGLE
+                && pts.get(0).x() != pts.get(1).x() && pts.get(0).y() != pts.get(1).y()) {
             return rectangle(pts.get(0), pts.get(1));
         }
         if (pts.size() == 2 && kind.gesture() == ToolKind.Gesture.CIRCLE && radius(pts) > 0) {
