@@ -201,7 +201,13 @@ final class EditorWindow {
         grid.selectedProperty().bindBidirectional(vm.snapToGridProperty());
         CheckMenuItem angles = new CheckMenuItem("Snap to 15° steps");
         angles.selectedProperty().bindBidirectional(vm.snapAnglesProperty());
-        view.getItems().addAll(new SeparatorMenuItem(), grid, angles, new SeparatorMenuItem(),
+        CheckMenuItem autoRange = new CheckMenuItem("Automatic colour range");
+        autoRange.setSelected(vm.rangeProperty().get().auto());
+        autoRange.selectedProperty().addListener((obs, was, on) -> vm.rangeProperty().set(
+                new org.kinduct.ui.paint.ColourRange(on, vm.rangeProperty().get().manualLimitT())));
+        vm.rangeProperty().addListener((obs, old, r) -> autoRange.setSelected(r.auto()));
+        view.getItems().addAll(new SeparatorMenuItem(), autoRange, item("Fixed colour limit…", null, this::askLimit),
+                new SeparatorMenuItem(), grid, angles, new SeparatorMenuItem(),
                 item("Paint time overlay", "F12", canvas::toggleFrameTime));
         Menu play = new Menu("Motion");
         play.getItems().addAll(
@@ -217,6 +223,24 @@ final class EditorWindow {
         MenuBar bar = new MenuBar(file, edit, view, play, help);
         bar.setId("menu-bar");
         return bar;
+    }
+
+    /** Asks for a fixed symmetric colour limit ("5 mT", "20 G"); refuses anything but a positive flux density. */
+    private void askLimit() {
+        javafx.scene.control.TextInputDialog d = new javafx.scene.control.TextInputDialog(
+                Quantities.bz(vm.rangeProperty().get().limitFor(vm.rasterProperty().get())));
+        d.setTitle("Colour limit");
+        d.setHeaderText("Colours saturate at ± this flux density");
+        d.initOwner(stage);
+        d.showAndWait().ifPresent(text -> {
+            try {
+                double limit = org.kinduct.scene.units.Units.parse(text,
+                        org.kinduct.scene.units.Dimension.FLUX_DENSITY);
+                vm.rangeProperty().set(new org.kinduct.ui.paint.ColourRange(false, limit));
+            } catch (IllegalArgumentException e) {
+                vm.say("Colour limit: " + e.getMessage());
+            }
+        });
     }
 
     private static MenuItem item(String text, String accelerator, Runnable action) {
