@@ -65,6 +65,9 @@ final class EditorCanvas extends Pane {
     private Set<String> moving = Set.of();
     private Picker.VertexHit vertexDrag;
     private Scene dragPreview;
+    private boolean banding;
+    private double bandX;
+    private double bandY;
     private String cursorText = "";
     private final java.util.function.Consumer<String> cursorSink;
 
@@ -132,7 +135,7 @@ final class EditorCanvas extends Pane {
     Frame frame() {
         Scene scene = dragPreview != null ? dragPreview : vm.scene();
         EditorMarks marks = drawing != null ? drawing.marks(vm.selection())
-                : new EditorMarks(vm.selection(), List.of(), false, null, "");
+                : new EditorMarks(vm.selection(), banding ? band() : List.of(), true, null, "");
         String note = showFrameTime ? String.format(java.util.Locale.ROOT, "paint %.1f ms", frameMs) : "";
         return new Frame(scene, vm.timeProperty().get(), dragPreview != null ? null : vm.snapshotProperty().get(),
                 vm.rasterProperty().get(), vm.viewProperty().get(), vm.layers(), vm.rangeProperty().get(), marks, note);
@@ -210,6 +213,9 @@ final class EditorCanvas extends Pane {
                 vm.selection().clear();
             }
             moving = Set.of();
+            banding = true;
+            bandX = e.getX();
+            bandY = e.getY();
             return;
         }
         String id = hit.get();
@@ -227,6 +233,12 @@ final class EditorCanvas extends Pane {
         if (panning) {
             vm.viewProperty().set(pressView.pannedBy(e.getX() - pressX, e.getY() - pressY));
             interacting();
+            return;
+        }
+        if (banding) {
+            bandX = e.getX();
+            bandY = e.getY();
+            needsPaint = true;
             return;
         }
         Vec2 d = view().toScene(e.getX(), e.getY()).minus(view().toScene(pressX, pressY));
@@ -251,6 +263,12 @@ final class EditorCanvas extends Pane {
             vm.requestField(MapQuality.FINE);
             return;
         }
+        if (banding) {
+            banding = false;
+            selectInBand();
+            needsPaint = true;
+            return;
+        }
         if (dragPreview != null) {
             Scene target = dragPreview;
             dragPreview = null;
@@ -259,6 +277,36 @@ final class EditorCanvas extends Pane {
         vertexDrag = null;
         moving = Set.of();
         needsPaint = true;
+    }
+
+    /** The rubber band's corners in scene coordinates. */
+    private List<Vec2> band() {
+        ViewTransform v = view();
+        return List.of(v.toScene(pressX, pressY), v.toScene(bandX, pressY), v.toScene(bandX, bandY),
+                v.toScene(pressX, bandY));
+    }
+
+    /** Adds every object lying wholly inside the rubber band to the selection. */
+    private void selectInBand() {
+        if (Math.abs(bandX - pressX) < 3 && Math.abs(bandY - pressY) < 3) {
+            return;
+        }
+        ViewTransform v = view();
+        double x0 = Math.min(v.sceneX(pressX), v.sceneX(bandX));
+        double x1 = Math.max(v.sceneX(pressX), v.sceneX(bandX));
+        double y0 = Math.min(v.sceneY(pressY), v.sceneY(bandY));
+        double y1 = Math.max(v.sceneY(pressY), v.sceneY(bandY));
+        Scene s = vm.scene();
+        double t = vm.timeProperty().get();
+        java.util.Set<String> inside = new java.util.HashSet<>();
+        s.sources().forEach(x -> inside.add(x.id()));
+        s.conductors().forEach(x -> inside.add(x.id()));
+        inside.removeIf(id -> {
+            SceneBounds b = SceneBounds.ofObjects(s, Set.of(id), t);
+            return b.minX() < x0 || b.maxX() > x1 || b.minY() < y0 || b.maxY() > y1
+                    || s.source(id).filter(src -> src instanceof org.kinduct.scene.Source.UniformField).isPresent();
+        });
+        vm.selection().addAll(inside);
     }
 
     private void clicked(MouseEvent e) {

@@ -88,7 +88,7 @@ final class ConductorPainter {
                 double width = 1.5 + 4.5 * Math.sqrt(Math.abs(st.currentA()) / maxI);
                 currentArrows(s, v, pts, st.currentA() > 0, width);
                 Vec2 c0 = SourcePainter.centroid(pts);
-                Glyphs.fieldSymbol(s, v.screenX(c0.x()), v.screenY(c0.y()), 8, st.direction() == Circulation.CCW,
+                Glyphs.fieldSymbol(s, v.screenX(c0.x()), v.screenY(c0.y()), 10, st.direction() == Circulation.CCW,
                         Palette.CURRENT);
             }
         }

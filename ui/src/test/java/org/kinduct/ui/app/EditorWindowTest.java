@@ -109,6 +109,21 @@ class EditorWindowTest {
     }
 
     @Test
+    void rubberBandSelectsEverythingInsideIt(FxRobot robot) {
+        interact(() -> {
+            vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("a", Body.FIXED,
+                    List.of(Conductor.Vertex.at(-0.02, 0), Conductor.Vertex.at(0, 0.01)))));
+            vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("b", Body.FIXED,
+                    List.of(Conductor.Vertex.at(0.01, -0.01), Conductor.Vertex.at(0.02, 0.01)))));
+            vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("outside", Body.FIXED,
+                    List.of(Conductor.Vertex.at(0.08, 0), Conductor.Vertex.at(0.09, 0)))));
+        });
+        robot.drag(screenOf(robot, -0.03, 0.03), MouseButton.PRIMARY).dropTo(screenOf(robot, 0.03, -0.03));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(java.util.Set.of("a", "b"), vm.selection());
+    }
+
+    @Test
     void motionIsSetInThePropertiesPanel(FxRobot robot) {
         interact(() -> {
             vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("rod", Body.FIXED,
