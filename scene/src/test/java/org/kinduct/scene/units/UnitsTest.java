@@ -41,7 +41,7 @@ class UnitsTest {
     /** Half a unit in the third significant digit, the resolution of the default display. */
     private static final double DISPLAY_RELATIVE_RESOLUTION = 5e-3;
     private static final long FIRST_SEED = 7_340_113L;
-    private static final int RANDOM_CASES = 400;
+    private static final int RANDOM_CASES = 200;
 
     static Stream<Arguments> validInputs() {
         double pi = Math.PI;
