@@ -13,6 +13,7 @@ import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
 import java.util.List;
+import java.util.regex.Pattern;
 import org.kinduct.scene.units.Texts;
 
 /**
@@ -26,6 +27,11 @@ final class JsonTreeReader {
 
     /** Jackson quotes offending tokens at length; a line of an error report should stay readable. */
     private static final int MAX_MESSAGE = 200;
+
+    private static final Pattern SETTING_SOURCE = Pattern.compile(", from `[^`]*`");
+    private static final Pattern SETTING_HINT = Pattern.compile(": enable `[^`]*` to allow");
+    private static final Pattern COMMENT_HINT =
+            Pattern.compile("\\(not recognized as one since Feature '\\w+' not enabled for parser\\)");
 
     private static final JsonFactory FACTORY = JsonFactory.builder()
             .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_DEPTH).build())
@@ -130,11 +136,10 @@ final class JsonTreeReader {
 
     /** Jackson's message without its hints about parser settings, which a file's author cannot change. */
     private static String plain(String message) {
-        return String.valueOf(message)
-                .replaceAll(", from `[^`]*`", "")
-                .replaceAll(": enable `[^`]*` to allow", "")
-                .replaceAll("\\(not recognized as one since Feature '\\w+' not enabled for parser\\)",
-                        "(JSON has no comments)");
+        String m = String.valueOf(message);
+        m = SETTING_SOURCE.matcher(m).replaceAll("");
+        m = SETTING_HINT.matcher(m).replaceAll("");
+        return COMMENT_HINT.matcher(m).replaceAll("(JSON has no comments)");
     }
 
     private static int line(JsonLocation at) {

@@ -74,7 +74,8 @@ public final class SceneFiles {
     }
 
     static void writeAtomically(Path file, Content content) throws IOException {
-        Path target = file.toAbsolutePath();
+        // Saving through a link updates the file it points to and keeps the link.
+        Path target = Files.isSymbolicLink(file) && Files.exists(file) ? file.toRealPath() : file.toAbsolutePath();
         Path folder = target.getParent();
         if (folder == null) {
             throw new IOException("cannot save to " + target + ": not a file path");

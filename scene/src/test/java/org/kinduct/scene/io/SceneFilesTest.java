@@ -72,6 +72,24 @@ class SceneFilesTest {
     }
 
     @Test
+    void savingThroughALinkUpdatesTheLinkedFileAndKeepsTheLink() throws IOException, SceneFormatException {
+        Path real = Files.createDirectory(dir.resolve("real")).resolve("scene.json");
+        Files.write(real, OLD_CONTENT);
+        Path link = dir.resolve("link.json");
+        try {
+            Files.createSymbolicLink(link, real);
+        } catch (UnsupportedOperationException | IOException e) {
+            assumeTrue(false, "symbolic links not available: " + e);
+        }
+
+        SceneFiles.write(SampleScenes.everyVariant(), link);
+
+        assertTrue(Files.isSymbolicLink(link));
+        assertEquals(SampleScenes.everyVariant(), SceneFiles.read(real));
+        assertEquals(List.of("scene.json"), namesIn(real.getParent()));
+    }
+
+    @Test
     void failureWhileWritingLeavesTheOldFileAndNoTemporaryFile() throws IOException {
         Path file = dir.resolve("scene.json");
         Files.write(file, OLD_CONTENT);

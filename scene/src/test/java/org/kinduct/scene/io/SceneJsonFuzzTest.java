@@ -11,6 +11,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
+import java.util.regex.Pattern;
 import java.util.stream.LongStream;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -27,9 +28,11 @@ import org.kinduct.scene.units.Texts;
 class SceneJsonFuzzTest {
 
     private static final long FIRST_SEED = 91_827_364L;
-    private static final int BATCHES = 6;
+    private static final int BATCHES = 8;
     private static final int CASES_PER_BATCH = 500;
     private static final int SHOWN_INPUT = 3000;
+    /** JSON parsers, like editors, end a line at \r\n, \r or \n. */
+    private static final Pattern LINE_BREAK = Pattern.compile("\r\n|\r|\n");
 
     /** Tokens that stress the reader: structure, odd numbers, unit strings, names it knows, junk. */
     private static final String[] TOKENS = {
@@ -97,8 +100,7 @@ class SceneJsonFuzzTest {
         try {
             scene = SceneJson.read(input, "fuzz.json");
         } catch (SceneFormatException e) {
-            // JSON parsers, like editors, end a line at \r\n, \r or \n.
-            long lines = input.split("\r\n|\r|\n", -1).length;
+            long lines = LINE_BREAK.split(input, -1).length;
             assertFalse(e.problems().isEmpty(), "no problems listed");
             for (Problem p : e.problems()) {
                 assertTrue(p.line() <= lines, () -> "line beyond the text: " + p);
