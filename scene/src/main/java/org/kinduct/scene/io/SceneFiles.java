@@ -74,7 +74,8 @@ public final class SceneFiles {
     }
 
     static void writeAtomically(Path file, Content content) throws IOException {
-        Path target = file.toAbsolutePath();
+        // Saving through a link updates the file it points to and keeps the link.
+        Path target = Files.isSymbolicLink(file) && Files.exists(file) ? file.toRealPath() : file.toAbsolutePath();
         Path folder = target.getParent();
         if (folder == null) {
             throw new IOException("cannot save to " + target + ": not a file path");
@@ -143,9 +144,10 @@ public final class SceneFiles {
         }
         if (result.isError()) {
             out.flip();
-            String before = out.toString();
-            int line = 1 + (int) before.chars().filter(c -> c == '\n').count();
-            int column = before.length() - before.lastIndexOf('\n');
+            // Lines end at \r\n, \r or \n, as the JSON parser counts them for other problems.
+            String[] lines = out.toString().split("\r\n|\r|\n", -1);
+            int line = lines.length;
+            int column = lines[lines.length - 1].length() + 1;
             throw new SceneFormatException(sourceName, List.of(new Problem("", line, column,
                     "not UTF-8 text: invalid byte 0x" + String.format("%02x", bytes[in.position()] & 0xff)
                             + " at byte offset " + in.position())));
