@@ -18,6 +18,11 @@ public final class Demos {
     /** Demo names in the order they are listed; the file is {@code NAME.json}. */
     private static final List<String> NAMES = List.of(
             "carriage-pickup",
+            "pcb-harvester",
+            "flow-electrodes",
+            "gradiometer",
+            "spinning-coil-generator",
+            "rail-sled",
             "drive-sense-wire");
 
     private Demos() {
