@@ -1,6 +1,6 @@
 package org.kinduct.solver.field;
 
-import org.hipparchus.util.FastMath;
+import org.kinduct.scene.Checks;
 
 /**
  * A rectangular block magnet, uniformly and rigidly magnetized along +z (negative remanence:
@@ -57,20 +57,20 @@ public final class BlockMagnetField extends CurrentSourceField {
      */
     public BlockMagnetField(double cx, double cy, double angleRad, double sizeXM, double sizeYM,
                             double zLowM, double zHighM, double signedRemanenceT) {
-        this.cx = requireFinite(cx, "magnet centre x");
-        this.cy = requireFinite(cy, "magnet centre y");
-        requireFinite(angleRad, "magnet angle");
+        this.cx = Checks.finite(cx, "magnet centre x");
+        this.cy = Checks.finite(cy, "magnet centre y");
+        Checks.finite(angleRad, "magnet angle");
         this.cos = Math.cos(angleRad);
         this.sin = Math.sin(angleRad);
-        this.halfX = requirePositive(sizeXM, "magnet size x") / 2;
-        this.halfY = requirePositive(sizeYM, "magnet size y") / 2;
+        this.halfX = Checks.positive(sizeXM, "magnet size x") / 2;
+        this.halfY = Checks.positive(sizeYM, "magnet size y") / 2;
         requireOffPlane(zLowM, zHighM);
         this.zLowM = zLowM;
         this.zHighM = zHighM;
         // The outside of the bottom face is below it (z − z1 → 0⁻), of the top face above (→ 0⁺).
         this.dzBottom = zLowM == 0 ? -0.0 : -zLowM;
         this.dzTop = zHighM == 0 ? 0.0 : -zHighM;
-        this.brOver4Pi = requireFinite(signedRemanenceT, "remanence") / (4 * Math.PI);
+        this.brOver4Pi = Checks.finite(signedRemanenceT, "remanence") / (4 * Math.PI);
     }
 
     @Override
@@ -116,26 +116,45 @@ public final class BlockMagnetField extends CurrentSourceField {
     }
 
     /**
-     * ∫_{zLow}^{zHigh} [asinh(t2/√(c² + z²)) − asinh(t1/√(c² + z²))] dz: the potential of a unit
-     * ribbon running from t1 to t2 along its line, c the in-plane distance to that line.
+     * ∫_{zLow}^{zHigh} [asinh(t2/√(c² + z²)) − asinh(t1/√(c² + z²))] dz for t1 &lt; t2: the potential
+     * of a unit ribbon running from t1 to t2 along its line, c ≥ 0 the in-plane distance to that line.
      */
-    private double ribbon(double t1, double t2, double c) {
-        return heightIntegral(t2, c, zHighM) - heightIntegral(t2, c, zLowM)
-                - heightIntegral(t1, c, zHighM) + heightIntegral(t1, c, zLowM);
+    static double ribbon(double t1, double t2, double c, double zLow, double zHigh) {
+        double rho1 = Math.sqrt(c * c + t1 * t1);
+        double rho2 = Math.sqrt(c * c + t2 * t2);
+        return slice(t1, t2, c, rho1, rho2, zHigh) - slice(t1, t2, c, rho1, rho2, zLow);
     }
 
-    /** G(t, c, z), an antiderivative in z of asinh(t/√(c² + z²)); the zero guards are its limits. */
-    static double heightIntegral(double t, double c, double z) {
-        double g = 0;
-        if (z != 0) {
-            g += z * FastMath.asinh(t / Math.sqrt(c * c + z * z));
+    private double ribbon(double t1, double t2, double c) {
+        return ribbon(t1, t2, c, zLowM, zHighM);
+    }
+
+    /**
+     * G(t2, c, z) − G(t1, c, z), G the antiderivative in the class documentation, in forms free of
+     * cancellation: the z·asinh difference as one log ({@link StraightFilament#asinhDifference}),
+     * the t·asinh(z/ρ) terms through log1p. ρ_i = √(c² + t_i²). G(t, c, 0) = 0.
+     */
+    private static double slice(double t1, double t2, double c, double rho1, double rho2, double z) {
+        if (z == 0) {
+            return 0;
         }
-        if (t != 0) {
-            g += t * FastMath.asinh(z / Math.sqrt(c * c + t * t));
-        }
+        double z2 = z * z;
+        double r1 = Math.sqrt(rho1 * rho1 + z2);
+        double r2 = Math.sqrt(rho2 * rho2 + z2);
+        double g = z * StraightFilament.asinhDifference(t2, t1, r2, r1, c * c + z2, t2 - t1)
+                + weightedAsinh(t2, z, r2, rho2) - weightedAsinh(t1, z, r1, rho1);
         if (c != 0) {
-            g -= c * Math.atan(t * z / (c * Math.sqrt(c * c + t * t + z * z)));
+            g -= c * (Math.atan(t2 * z / (c * r2)) - Math.atan(t1 * z / (c * r1)));
         }
         return g;
+    }
+
+    /** t·asinh(z/ρ) with r = √(ρ² + z²), as t·sign(z)·log1p((|z| + z²/(r + ρ))/ρ); 0 for t = 0. */
+    private static double weightedAsinh(double t, double z, double r, double rho) {
+        if (t == 0) {
+            return 0;
+        }
+        double az = Math.abs(z);
+        return t * Math.copySign(Math.log1p((az + az * az / (r + rho)) / rho), z);
     }
 }

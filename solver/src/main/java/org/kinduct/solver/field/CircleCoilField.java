@@ -1,5 +1,7 @@
 package org.kinduct.solver.field;
 
+import org.kinduct.scene.Checks;
+
 /**
  * A circular filament coil of radius a centred at (cx, cy) in the plane z = z0 (z0 ≠ 0), current
  * (ampere-turns N·I) positive counter-clockwise seen from +z. B_z by Simpson et al. (NASA TR
@@ -22,14 +24,11 @@ public final class CircleCoilField extends CurrentSourceField {
      * @param ampereTurns N·I, amperes, positive counter-clockwise
      */
     public CircleCoilField(double cx, double cy, double radiusM, double z0M, double ampereTurns) {
-        this.cx = requireFinite(cx, "coil centre x");
-        this.cy = requireFinite(cy, "coil centre y");
-        this.radiusM = requirePositive(radiusM, "coil radius");
-        this.z0M = requireFinite(z0M, "coil plane z");
-        if (z0M == 0) {
-            throw new IllegalArgumentException("a coil must sit off the drawing plane (z ≠ 0)");
-        }
-        this.ampereTurns = requireFinite(ampereTurns, "ampere-turns");
+        this.cx = Checks.finite(cx, "coil centre x");
+        this.cy = Checks.finite(cy, "coil centre y");
+        this.radiusM = Checks.positive(radiusM, "coil radius");
+        this.z0M = requireCoilOffPlane(z0M);
+        this.ampereTurns = Checks.finite(ampereTurns, "ampere-turns");
     }
 
     @Override

@@ -1,5 +1,7 @@
 package org.kinduct.solver.field;
 
+import org.kinduct.scene.Checks;
+
 /**
  * The common part of the fields of real currents (source coils, and magnets through their
  * equivalent surface currents): their vector potential is physical, the flux through a polygon
@@ -18,10 +20,7 @@ abstract sealed class CurrentSourceField implements PlaneField
     /** ∮ A·dl around the polygon; accuracy as delivered by {@link EdgeQuadrature#STANDARD}. */
     @Override
     public final double flux(double[] xs, double[] ys) {
-        if (xs.length != ys.length || xs.length < 3) {
-            throw new IllegalArgumentException("a flux polygon needs matching coordinate arrays of at least 3 "
-                    + "vertices, got " + xs.length + " x and " + ys.length + " y");
-        }
+        requirePolygon(xs, ys, "a flux polygon");
         double[] a = new double[2];
         return EdgeQuadrature.STANDARD.closedPath((x, y, dx, dy) -> {
             potential(x, y, a);
@@ -37,24 +36,26 @@ abstract sealed class CurrentSourceField implements PlaneField
         out[1] = moments.firstMoment();
     }
 
-    static double requireFinite(double v, String what) {
-        if (!Double.isFinite(v)) {
-            throw new IllegalArgumentException(what + " must be a finite number, got " + v);
+    static void requirePolygon(double[] xs, double[] ys, String what) {
+        if (xs.length != ys.length || xs.length < 3) {
+            throw new IllegalArgumentException(what + " needs matching coordinate arrays of at least 3 vertices, got "
+                    + xs.length + " x and " + ys.length + " y");
         }
-        return v;
     }
 
-    static double requirePositive(double v, String what) {
-        if (!(v > 0) || !Double.isFinite(v)) {
-            throw new IllegalArgumentException(what + " must be positive, got " + v);
+    /** A coil filament in the drawing plane would have a singular field there. */
+    static double requireCoilOffPlane(double z0M) {
+        Checks.finite(z0M, "coil plane z");
+        if (z0M == 0) {
+            throw new IllegalArgumentException("a coil must sit off the drawing plane (z ≠ 0)");
         }
-        return v;
+        return z0M;
     }
 
     /** A magnet's z range must be ordered and must not reach through the drawing plane. */
     static void requireOffPlane(double zLowM, double zHighM) {
-        requireFinite(zLowM, "magnet bottom z");
-        requireFinite(zHighM, "magnet top z");
+        Checks.finite(zLowM, "magnet bottom z");
+        Checks.finite(zHighM, "magnet top z");
         if (!(zLowM < zHighM)) {
             throw new IllegalArgumentException("magnet bottom z must lie below its top z, got " + zLowM
                     + " and " + zHighM);

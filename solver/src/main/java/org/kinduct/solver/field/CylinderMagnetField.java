@@ -2,6 +2,7 @@ package org.kinduct.solver.field;
 
 import org.hipparchus.analysis.integration.gauss.GaussIntegrator;
 import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
+import org.kinduct.scene.Checks;
 
 /**
  * A cylindrical magnet of radius a, axis along z through (cx, cy), occupying zLow ≤ z ≤ zHigh on
@@ -68,13 +69,13 @@ public final class CylinderMagnetField extends CurrentSourceField {
      */
     public CylinderMagnetField(double cx, double cy, double radiusM, double zLowM, double zHighM,
                                double signedRemanenceT) {
-        this.cx = requireFinite(cx, "magnet centre x");
-        this.cy = requireFinite(cy, "magnet centre y");
-        this.radiusM = requirePositive(radiusM, "magnet radius");
+        this.cx = Checks.finite(cx, "magnet centre x");
+        this.cy = Checks.finite(cy, "magnet centre y");
+        this.radiusM = Checks.positive(radiusM, "magnet radius");
         requireOffPlane(zLowM, zHighM);
         this.zLowM = zLowM;
         this.zHighM = zHighM;
-        this.remanenceT = requireFinite(signedRemanenceT, "remanence");
+        this.remanenceT = Checks.finite(signedRemanenceT, "remanence");
     }
 
     @Override

@@ -1,5 +1,7 @@
 package org.kinduct.solver.field;
 
+import org.kinduct.scene.Checks;
+
 /**
  * A closed polygonal filament coil in the plane z = z0 (z0 ≠ 0): the sum of the straight
  * filaments along its edges ({@link StraightFilament}, Biot–Savart for a finite segment,
@@ -27,16 +29,9 @@ public final class PolygonCoilField extends CurrentSourceField {
      * @param ampereTurns N·I, amperes, positive along the vertex order
      */
     public PolygonCoilField(double[] xs, double[] ys, double z0M, double ampereTurns) {
-        if (xs.length != ys.length || xs.length < 3) {
-            throw new IllegalArgumentException("a coil polygon needs matching coordinate arrays of at least 3 "
-                    + "vertices, got " + xs.length + " x and " + ys.length + " y");
-        }
-        requireFinite(z0M, "coil plane z");
-        if (z0M == 0) {
-            throw new IllegalArgumentException("a coil must sit off the drawing plane (z ≠ 0)");
-        }
-        this.z0M = z0M;
-        this.ampereTurns = requireFinite(ampereTurns, "ampere-turns");
+        requirePolygon(xs, ys, "a coil polygon");
+        this.z0M = requireCoilOffPlane(z0M);
+        this.ampereTurns = Checks.finite(ampereTurns, "ampere-turns");
         int n = xs.length;
         this.xs = xs.clone();
         this.ys = ys.clone();
@@ -45,8 +40,8 @@ public final class PolygonCoilField extends CurrentSourceField {
         this.length = new double[n];
         for (int i = 0; i < n; i++) {
             int j = (i + 1) % n;
-            double dx = requireFinite(xs[j], "coil vertex x") - requireFinite(xs[i], "coil vertex x");
-            double dy = requireFinite(ys[j], "coil vertex y") - requireFinite(ys[i], "coil vertex y");
+            double dx = Checks.finite(xs[j], "coil vertex x") - Checks.finite(xs[i], "coil vertex x");
+            double dy = Checks.finite(ys[j], "coil vertex y") - Checks.finite(ys[i], "coil vertex y");
             double len = Math.hypot(dx, dy);
             if (len == 0) {
                 throw new IllegalArgumentException("coil polygon repeats vertex " + i);

@@ -115,19 +115,28 @@ class BlockMagnetFieldTest {
     }
 
     @RepeatedTest(100)
-    void heightIntegralIsAnAntiderivativeOfTheRibbonKernel(RepetitionInfo info) {
+    void ribbonClosedFormMatchesNumericalHeightIntegral(RepetitionInfo info) {
         long seed = SEED + 3000 + info.getCurrentRepetition();
         SplittableRandom r = new SplittableRandom(seed);
-        double t = r.nextDouble(-0.05, 0.05);
+        double t1 = r.nextDouble(-0.05, 0.05);
+        double t2 = t1 + r.nextDouble(0.001, 0.05);
         double c = r.nextInt(5) == 0 ? 0 : r.nextDouble(0, 0.05);
-        double z1 = r.nextDouble(-0.05, 0.05);
-        double z2 = r.nextDouble(-0.05, 0.05);
-        // Fundamental theorem of calculus against the numerical integral of asinh(t/√(c² + z²)).
-        double upper = kernelIntegralFromZero(t, c, z2);
-        double lower = kernelIntegralFromZero(t, c, z1);
-        double actual = BlockMagnetField.heightIntegral(t, c, z2) - BlockMagnetField.heightIntegral(t, c, z1);
-        // Both sides are differences of the two integrals from 0; compare at their size.
-        assertEquals(upper - lower, actual, 1e-12 * (Math.abs(upper) + Math.abs(lower)) + 1e-18, "seed " + seed);
+        double zLow = r.nextDouble(-0.05, 0.05);
+        double zHigh = r.nextInt(5) == 0 ? 0 : zLow + r.nextDouble(0.001, 0.05);
+        // The closed form G(t, c, z) = z·asinh(t/√(c²+z²)) + t·asinh(z/√(c²+t²)) − c·atan(tz/(cR))
+        // against numerical integrals of the kernel asinh(t/√(c² + z²)) (fundamental theorem of
+        // calculus), each taken from z = 0 where the kernel may be log-singular (c = 0).
+        double[] parts = new double[4];
+        double[] ts = {t2, t2, t1, t1};
+        double[] zs = {zHigh, zLow, zHigh, zLow};
+        double magnitude = 0;
+        for (int i = 0; i < 4; i++) {
+            parts[i] = kernelIntegralFromZero(ts[i], c, zs[i]);
+            magnitude += Math.abs(parts[i]);
+        }
+        double expected = parts[0] - parts[1] - parts[2] + parts[3];
+        assertEquals(expected, BlockMagnetField.ribbon(t1, t2, c, zLow, zHigh), 1e-12 * magnitude + 1e-18,
+                "seed " + seed);
     }
 
     /**
@@ -231,6 +240,38 @@ class BlockMagnetFieldTest {
             assertEquals(an[1], at[1], 1e-9 * BR * 0.01, "seed " + seed + " side " + z);
             assertTrue(Double.isFinite(touching.bz(0.01, 0.0)), "footprint edge stays finite");
         }
+    }
+
+    @Test
+    void fluxAndMomentsOfTouchingMagnetMatchQuadratureSplitAtTheFootprint() {
+        // Stand-off 0: B_z jumps across the footprint's edges and A has logarithmic kinks there.
+        // Reference: 2-D quadrature of B_z over the loop cut along the footprint lines x = ±10 mm,
+        // y = ±6 mm, where B_z is smooth on each piece (Stokes' theorem).
+        BlockMagnetField magnet = new BlockMagnetField(0, 0, 0, 0.020, 0.012, -0.005, -0.0, BR);
+        double[] xCuts = {-0.004, 0.010, 0.025};
+        double[] yCuts = {-0.013, -0.006, 0.006, 0.009};
+        double expected = 0;
+        double magnitude = 0;
+        for (int i = 0; i + 1 < xCuts.length; i++) {
+            for (int j = 0; j + 1 < yCuts.length; j++) {
+                expected += NumericalReference.integrateRectangle(magnet::bz, xCuts[i], xCuts[i + 1], yCuts[j],
+                        yCuts[j + 1], 8);
+                magnitude += NumericalReference.integrateRectangle((x, y) -> Math.abs(magnet.bz(x, y)), xCuts[i],
+                        xCuts[i + 1], yCuts[j], yCuts[j + 1], 8);
+            }
+        }
+        double flux = magnet.flux(new double[] {-0.004, 0.025, 0.025, -0.004}, new double[] {-0.013, -0.013, 0.009, 0.009});
+        assertEquals(expected, flux, QUADRATURE_LEVEL * magnitude);
+        // Moments along y = 0 from x = −4 mm to 25 mm, split at the footprint edge x = 10 mm (s = 14/29).
+        double[] moments = new double[2];
+        magnet.bzMoments(-0.004, 0, 0.025, 0, moments);
+        double cut = 14.0 / 29;
+        double m0 = NumericalReference.integrate(s -> magnet.bz(-0.004 + 0.029 * s, 0), 0, cut, 20)
+                + NumericalReference.integrate(s -> magnet.bz(-0.004 + 0.029 * s, 0), cut, 1, 20);
+        double m1 = NumericalReference.integrate(s -> s * magnet.bz(-0.004 + 0.029 * s, 0), 0, cut, 20)
+                + NumericalReference.integrate(s -> s * magnet.bz(-0.004 + 0.029 * s, 0), cut, 1, 20);
+        assertEquals(m0, moments[0], QUADRATURE_LEVEL * Math.abs(m0));
+        assertEquals(m1, moments[1], QUADRATURE_LEVEL * Math.abs(m0));
     }
 
     @Test

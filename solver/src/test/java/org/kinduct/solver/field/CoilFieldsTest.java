@@ -1,6 +1,7 @@
 package org.kinduct.solver.field;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.SplittableRandom;
@@ -104,5 +105,18 @@ class CoilFieldsTest {
         double bz = forward.bz(0.01, 0.007);
         assertTrue(bz > 0, "counter-clockwise current gives B_z > 0 inside");
         assertEquals(-bz, backward.bz(0.01, 0.007), ULP_LEVEL * bz);
+    }
+
+    @Test
+    void coilInTheDrawingPlaneIsRejected() {
+        IllegalArgumentException circle = assertThrows(IllegalArgumentException.class,
+                () -> new CircleCoilField(0, 0, 0.01, 0, AMPERE_TURNS));
+        assertTrue(circle.getMessage().contains("off the drawing plane"), circle.getMessage());
+        IllegalArgumentException polygon = assertThrows(IllegalArgumentException.class,
+                () -> new PolygonCoilField(new double[] {0, 1, 0}, new double[] {0, 0, 1}, 0, AMPERE_TURNS));
+        assertTrue(polygon.getMessage().contains("off the drawing plane"), polygon.getMessage());
+        IllegalArgumentException repeated = assertThrows(IllegalArgumentException.class,
+                () -> new PolygonCoilField(new double[] {0, 1, 1, 0}, new double[] {0, 0, 0, 1}, 0.01, AMPERE_TURNS));
+        assertTrue(repeated.getMessage().contains("repeats vertex 1"), repeated.getMessage());
     }
 }

@@ -134,6 +134,24 @@ class CylinderMagnetFieldTest {
     }
 
     @Test
+    void fluxOfTouchingMagnetThroughCoaxialPolygonMatchesRadialQuadrature() {
+        // Stand-off 0: B_z jumps at the rim ρ = a. Reference: Φ(b) = ∫₀^b 2πρ B_z(ρ) dρ split at
+        // ρ = a, for a circle of radius b = 1.6a; the polygon's defect is removed as in the coil
+        // tests (regular N-gons inscribed in the circle, Richardson over N = 256 and 512). The
+        // rim lies inside the loop, so the loop's edges stay where A is smooth.
+        CylinderMagnetField magnet = new CylinderMagnetField(0, 0, RADIUS, -0.006, -0.0, BR);
+        double b = 1.6 * RADIUS;
+        double expected = NumericalReference.integrate(rho -> 2 * Math.PI * rho * magnet.bz(rho, 0), 0, RADIUS, 20)
+                + NumericalReference.integrate(rho -> 2 * Math.PI * rho * magnet.bz(rho, 0), RADIUS, b, 20);
+        double[][] p1 = CoilFieldsTest.regularPolygon(0, 0, b, 256);
+        double[][] p2 = CoilFieldsTest.regularPolygon(0, 0, b, 512);
+        double extrapolated = (4 * magnet.flux(p2[0], p2[1]) - magnet.flux(p1[0], p1[1])) / 3;
+        assertEquals(expected, extrapolated, 1e-8 * Math.abs(expected));
+        // Stokes on the circle itself: 2πb·A_φ(b).
+        assertEquals(expected, 2 * Math.PI * b * magnet.aPhi(b), 1e-10 * Math.abs(expected));
+    }
+
+    @Test
     void magnetReachingThroughThePlaneIsRejected() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> new CylinderMagnetField(0, 0, RADIUS, -0.001, 0.002, BR));
