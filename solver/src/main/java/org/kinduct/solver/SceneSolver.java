@@ -49,7 +49,6 @@ public final class SceneSolver {
     /** Slack in counting steps so that t1 = t0 + n·dt computed with rounding still counts n. */
     private static final double STEP_COUNT_SLACK = 1e-9;
 
-    private final Scene scene;
     private final Kinematics kinematics;
     private final SceneIndex index;
     private final DifferenceStep step;
@@ -60,9 +59,8 @@ public final class SceneSolver {
     }
 
     public SceneSolver(Scene scene, Kinematics kinematics) {
-        this.scene = Checks.nonNull(scene, "scene");
         this.kinematics = Checks.nonNull(kinematics, "kinematics");
-        this.index = new SceneIndex(scene);
+        this.index = new SceneIndex(Checks.nonNull(scene, "scene"));
         this.step = new DifferenceStep(scene);
     }
 
