@@ -12,13 +12,11 @@ import org.kinduct.solver.field.PlaneField;
  *       v and dl only B_z enters: (v × B)·dl = B_z (v_y dx − v_x dy) (Griffiths, <i>Introduction to
  *       Electrodynamics</i>, 4th ed., 2013, §7.1.3);</li>
  *   <li>force per ampere ∫ dl × B = Σ M0·(d_y, −d_x), in-plane part (Griffiths §5.1.3,
- *       F = I ∫ dl × B);</li>
- *   <li>an EMF scale Σ |M0|·|d|·(|v_a| + |v_b|)/2: the motional EMF the conductor would have if
- *       no part cancelled another, against which rounding noise is judged.</li>
+ *       F = I ∫ dl × B).</li>
  * </ul>
  * Per turn; exact to the accuracy of the moments.
  */
-record EdgeSums(double motionalV, double scaleV, double forceXNPerA, double forceYNPerA) {
+record EdgeSums(double motionalV, double forceXNPerA, double forceYNPerA) {
 
     static EdgeSums along(PlaneField field, PlacedConductor conductor) {
         double[] xs = conductor.xs();
@@ -28,7 +26,6 @@ record EdgeSums(double motionalV, double scaleV, double forceXNPerA, double forc
         int n = xs.length;
         double[] moments = new double[2];
         double motional = 0;
-        double scale = 0;
         double fx = 0;
         double fy = 0;
         for (int a = 0; a < conductor.edgeCount(); a++) {
@@ -38,11 +35,9 @@ record EdgeSums(double motionalV, double scaleV, double forceXNPerA, double forc
             field.bzMoments(xs[a], ys[a], xs[b], ys[b], moments);
             motional += (dx * vy[a] - dy * vx[a]) * moments[0]
                     + (dx * (vy[b] - vy[a]) - dy * (vx[b] - vx[a])) * moments[1];
-            scale += Math.abs(moments[0]) * Math.hypot(dx, dy)
-                    * 0.5 * (Math.hypot(vx[a], vy[a]) + Math.hypot(vx[b], vy[b]));
             fx += moments[0] * dy;
             fy -= moments[0] * dx;
         }
-        return new EdgeSums(motional, scale, fx, fy);
+        return new EdgeSums(motional, fx, fy);
     }
 }

@@ -16,16 +16,19 @@ final class InstantSolver {
 
     /** |EMF| at or below TERMINAL_ABS_V + TERMINAL_REL·(EMF scale) shows no + end and no current sense. */
     static final double TERMINAL_ABS_V = 1e-12;
-    /** Relative part of the terminal threshold: well above the rounding noise of either method. */
+    /** Relative part of the terminal threshold: fifty times the rounding noise of a time difference. */
     static final double TERMINAL_REL = 1e-9;
     /**
      * Disagreement is relative to the larger EMF but to no less than this fraction of the loop's
-     * EMF scale, so that rounding noise around an EMF that cancels to nearly zero raises no alarm.
+     * EMF scale, so that rounding noise around an EMF that cancels to nearly zero raises no alarm:
+     * the flux method's noise is about 2e-11 of the scale, so this floor keeps it below 1e-6.
      */
-    static final double DISAGREEMENT_FLOOR = 1e-3;
+    static final double DISAGREEMENT_FLOOR = 1e-4;
 
     private final SceneIndex index;
     private final double h;
+    private final DifferenceStep.Pace pace;
+    private final double fieldScaleT;
     private final List<PlacedConductor> placed;
     private final SceneField field;
     private final SceneField[] aroundAll;
@@ -52,7 +55,9 @@ final class InstantSolver {
             placed.add(at);
         }
         field = now.all();
-        h = step.step(index, now, placed);
+        pace = step.pace(index, now, placed);
+        h = pace.stepS();
+        fieldScaleT = index.fieldScaleT();
 
         int sources = index.sourceCount();
         boolean[] varying = new boolean[sources];
@@ -130,7 +135,7 @@ final class InstantSolver {
         double emfFlux = turns * DifferenceStep.negativeDerivative(moved, h);
         double transformer = anyVarying ? DifferenceStep.negativeDerivative(frozen, h) : 0;
         double emf = turns * (sums.motionalV() + transformer);
-        double scale = turns * (sums.scaleV() + Math.abs(transformer));
+        double scale = turns * emfScale(at);
         double threshold = TERMINAL_ABS_V + TERMINAL_REL * scale;
         double denominator = Math.max(Math.max(Math.abs(emfFlux), Math.abs(emf)), DISAGREEMENT_FLOOR * scale);
         double disagreement = denominator > 0 ? Math.abs(emfFlux - emf) / denominator : 0;
@@ -167,10 +172,22 @@ final class InstantSolver {
             induced = DifferenceStep.negativeDerivative(lineIntegrals, h);
         }
         double emf = sums.motionalV() + induced;
-        double threshold = TERMINAL_ABS_V + TERMINAL_REL * (sums.scaleV() + Math.abs(induced));
+        double threshold = TERMINAL_ABS_V + TERMINAL_REL * emfScale(at);
         return new ConductorState(wire.id(), ConductorState.Kind.WIRE, vertices(at), Double.NaN, Double.NaN,
                 Double.NaN, emf, emf, 0, terminal(emf, threshold), 0, Circulation.NONE, Vec2.ZERO, Double.NaN,
                 !idealVarying);
+    }
+
+    /**
+     * EMF scale per turn, B·L²/T: every source's field scale summed, times the conductor's length
+     * squared, over the scene's time scale T (see {@link DifferenceStep}). Since T ≤ ℓ/v and
+     * T ≤ 1/(2πf), it bounds both the motional EMF B·L·v and the transformer EMF B·L²·2πf up to
+     * the modest factor in B, and the rounding noise of every time difference, about
+     * ε·B·L²/h = 1e5·ε·B·L²/T, is a fixed small fraction of it.
+     */
+    private double emfScale(PlacedConductor at) {
+        double length = at.lengthM();
+        return fieldScaleT * length * length / pace.timeScaleS();
     }
 
     private static Terminal terminal(double emf, double threshold) {

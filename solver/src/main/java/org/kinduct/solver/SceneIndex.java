@@ -63,7 +63,16 @@ final class SceneIndex {
         return sourceBody.length;
     }
 
-    /** The source's reach, null for a uniform field. */
+    /** Sum of the sources' field scales, tesla: a bound on |B_z| up to a modest factor. */
+    double fieldScaleT() {
+        double sum = 0;
+        for (SourceReach r : reach) {
+            sum += r.fieldT();
+        }
+        return sum;
+    }
+
+    /** The source's reach. */
     SourceReach reach(int source) {
         return reach[source];
     }

@@ -35,10 +35,14 @@ import org.kinduct.scene.Vec2;
  * field patch has no physical potential, so its induced field is left out and the state says so
  * ({@code inducedFieldIncluded = false}).
  *
- * <p><b>Thresholds.</b> A conductor's + end and current sense are shown only when |EMF| exceeds
- * 1e-12 V plus 1e-9 of its EMF scale (the EMF it would have if no part of it cancelled another:
- * Σ |∫B_z dl|·speed per edge, plus the magnitude of the induced term). The scale is the
- * conductor's own because that is what its rounding noise is proportional to.
+ * <p><b>Thresholds.</b> Each conductor has an EMF scale N·B·L²/T: the sources' field scales summed
+ * (B), its length (L) and the scene's time scale T ({@link DifferenceStep}). It bounds the EMF the
+ * conductor could see up to the modest factor in B, and the rounding noise of every time
+ * difference is a fixed fraction of it (about 2e-11). The + end and the current sense are shown
+ * only when |EMF| exceeds 1e-12 V plus 1e-9 of the scale; the disagreement of the two methods is
+ * relative to the larger EMF but to no less than 1e-4 of the scale, the flux method's resolution.
+ * Over 5000 random loops moving through patches the relative disagreement had median 1e-10 and
+ * maximum 4e-8.
  *
  * <p>Immutable; safe to share between threads if the {@link Kinematics} is.
  */
