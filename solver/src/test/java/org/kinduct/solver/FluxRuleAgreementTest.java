@@ -50,7 +50,7 @@ class FluxRuleAgreementTest {
     private static void assertMethodsAgree(Scene scene, double tS, long seed) {
         for (ConductorState state : new SceneSolver(scene).at(tS).conductors()) {
             int turns = ((Conductor.Loop) scene.conductor(state.id()).orElseThrow()).turns();
-            double bound = RandomScenes.emfBound(scene, state, turns, tS);
+            double bound = RandomScenes.emfBound(scene, state, turns);
             double larger = Math.max(Math.abs(state.emfFluxV()), Math.abs(state.emfMotionalV()));
             assertEquals(state.emfFluxV(), state.emfMotionalV(), AGREEMENT * larger + ROUNDING * bound,
                     "seed " + seed + ", t = " + tS);

@@ -6,6 +6,8 @@ import java.util.SplittableRandom;
 import java.util.stream.IntStream;
 import java.util.stream.LongStream;
 import java.util.stream.Stream;
+import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
@@ -105,34 +107,79 @@ final class RandomScenes {
         }
     }
 
+    /** Samples per second when looking for the peak speed of a scene's motions. */
+    private static final int SPEED_SAMPLES = 100;
+
     /**
-     * A bound on the EMF a conductor can have, N·(Σ|B|)·length·(fastest speed of a vertex or patch
-     * corner), against which rounding is judged; computed from the scene, not the solver.
+     * A bound on the EMF a conductor can have, N·(Σ|B|)·length·(peak speed of any vertex or patch
+     * corner over 0…1 s), against which rounding is judged; computed from the scene, not the solver.
      */
-    static double emfBound(Scene scene, ConductorState state, int turns, double tS) {
+    static double emfBound(Scene scene, ConductorState state, int turns) {
         Kinematics kinematics = Kinematics.prescribed(scene);
         double bSum = 0;
         double fastest = 0;
         for (Source source : scene.sources()) {
-            Pose pose = kinematics.poseAt(source.body(), tS);
             if (source instanceof Source.FieldPatch patch) {
                 bSum += Math.abs(patch.bzT());
-                for (Vec2 corner : patch.outline()) {
-                    fastest = Math.max(fastest, pose.velocityAt(pose.place(corner)).length());
-                }
+                fastest = Math.max(fastest, peakSpeed(kinematics, source.body(), patch.outline()));
             } else if (source instanceof Source.UniformField uniform) {
                 bSum += Math.abs(uniform.bzT());
             }
         }
         var conductor = scene.conductor(state.id()).orElseThrow();
+        for (var vertex : conductor.vertices()) {
+            fastest = Math.max(fastest, peakSpeed(kinematics, vertex.bodyOr(conductor.body()), List.of(vertex.at())));
+        }
         double length = 0;
         List<Vec2> at = state.vertices();
         for (int i = 0; i < at.size(); i++) {
-            var vertex = conductor.vertices().get(i);
-            Pose pose = kinematics.poseAt(vertex.bodyOr(conductor.body()), tS);
-            fastest = Math.max(fastest, pose.velocityAt(at.get(i)).length());
             length += at.get((i + 1) % at.size()).minus(at.get(i)).length();
         }
         return turns * bSum * length * fastest;
+    }
+
+    private static double peakSpeed(Kinematics kinematics, String body, List<Vec2> drawn) {
+        double fastest = 0;
+        for (int i = 0; i <= SPEED_SAMPLES; i++) {
+            Pose pose = kinematics.poseAt(body, (double) i / SPEED_SAMPLES);
+            for (Vec2 p : drawn) {
+                fastest = Math.max(fastest, pose.velocityAt(pose.place(p)).length());
+            }
+        }
+        return fastest;
+    }
+
+    /**
+     * A loop and a wire riding moving bodies among static and moving patches (and sometimes a
+     * uniform field), kept in parts so tests can recombine the sources.
+     */
+    record Mixed(List<Body> bodies, List<Source> staticSources, List<Source> movingSources,
+                 List<Conductor> conductors) {
+
+        Scene scene() {
+            List<Source> all = new ArrayList<>(staticSources);
+            all.addAll(movingSources);
+            return with(all);
+        }
+
+        Scene with(List<Source> sources) {
+            return TestScenes.scene(bodies, sources, conductors);
+        }
+    }
+
+    static Mixed mixed(SplittableRandom r) {
+        List<Body> bodies = List.of(
+                new Body("loops", "loops", vector(r, 2), rigidMotion(r)),
+                new Body("magnets", "magnets", vector(r, 2), rigidMotion(r)));
+        List<Source> still = new ArrayList<>(patches(r, "still", Body.FIXED));
+        if (r.nextBoolean()) {
+            still.add(new Source.UniformField("background", field(r)));
+        }
+        List<Source> moving = patches(r, "moving", "magnets");
+        Conductor.Loop loop = new Conductor.Loop("loop", "loops", TestScenes.vertices(loopShape(r)), 1 + r.nextInt(5),
+                TestScenes.COPPER_1MM, r.nextInt(4) == 0, r.nextDouble(0, 0.1), r.nextDouble(0, 80));
+        Conductor.Wire wire = new Conductor.Wire("wire", r.nextBoolean() ? "loops" : Body.FIXED,
+                TestScenes.vertices(tangle(r, Vec2.ZERO, 1, 2 + r.nextInt(4))));
+        return new Mixed(bodies, still, moving, List.of(loop, wire));
     }
 }
