@@ -7,6 +7,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.Optional;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.io.SceneFormatException;
 import org.kinduct.scene.io.SceneJson;
 
 /**
@@ -52,6 +53,8 @@ public final class Demos {
             return SceneJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8), name + ".json");
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read demo " + path, e);
+        } catch (SceneFormatException e) {
+            throw new IllegalStateException("demo " + path + " is not a valid scene: " + e.getMessage(), e);
         }
     }
 }
