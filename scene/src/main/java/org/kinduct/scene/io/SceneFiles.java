@@ -69,7 +69,14 @@ public final class SceneFiles {
      *         {@code file}, if any, is then unchanged and no temporary file is left behind
      */
     public static void write(Scene scene, Path file) throws IOException {
-        byte[] bytes = SceneJson.write(scene).getBytes(StandardCharsets.UTF_8);
+        writeAtomically(file, SceneJson.write(scene).getBytes(StandardCharsets.UTF_8));
+    }
+
+    /**
+     * Writes {@code bytes} to {@code file} with the same atomic replace as {@link #write(Scene, Path)};
+     * exports and result files use it so a failed write never leaves a partial file.
+     */
+    public static void writeAtomically(Path file, byte[] bytes) throws IOException {
         writeAtomically(file, out -> out.write(bytes));
     }
 
