@@ -79,7 +79,7 @@ final class ConductorPainter {
             if (st == null) {
                 continue;
             }
-            List<Vec2> pts = placement.vertices(c);
+            List<Vec2> pts = st.vertices();
             if (st.positiveEnd() != Terminal.NONE && maxEmf > 0) {
                 double r = 6 + 5 * Math.sqrt(Math.abs(st.emfV()) / maxEmf);
                 terminals(s, v, c, pts, st.positiveEnd() == Terminal.LAST, r);
@@ -169,7 +169,7 @@ final class ConductorPainter {
             if (st == null) {
                 continue;
             }
-            List<Vec2> pts = placement.vertices(c);
+            List<Vec2> pts = st.vertices();
             Vec2 anchor = anchor(c, pts);
             double ax = v.screenX(anchor.x());
             double ay = v.screenY(anchor.y());
