@@ -22,6 +22,8 @@ final class ConductorPainter {
     private static final double GAP_START = 0.38;
     private static final double GAP_END = 0.62;
     private static final double MIN_ARROW_EDGE_PX = 30;
+    /** Conductors smaller than this on screen keep labels off themselves. */
+    private static final double SMALL_PX = 160;
 
     private ConductorPainter() {
     }
@@ -164,6 +166,9 @@ final class ConductorPainter {
     static void placeCallouts(Surface s, ViewTransform v, Scene scene, Placement placement, Snapshot snap,
                               LabelPlacer placer, List<Runnable> labels) {
         double lineH = ScenePainter.FONT + 3;
+        for (ConductorState st : snap.conductors()) {
+            reserveIfSmall(v, st.vertices(), placer);
+        }
         for (Conductor c : scene.conductors()) {
             ConductorState st = snap.conductor(c.id()).orElse(null);
             if (st == null) {
@@ -174,7 +179,8 @@ final class ConductorPainter {
             double ax = v.screenX(anchor.x());
             double ay = v.screenY(anchor.y());
             if (c instanceof Conductor.Loop) {
-                placer.reserve(new LabelPlacer.Box(ax - 10, ay - 10, 20, 20));
+                Vec2 mid = SourcePainter.centroid(pts);
+                placer.reserve(new LabelPlacer.Box(v.screenX(mid.x()) - 12, v.screenY(mid.y()) - 12, 24, 24));
             }
             String[] lines = calloutLines(c, st);
             double w = 0;
@@ -207,9 +213,33 @@ final class ConductorPainter {
         }
     }
 
+    /** Keeps labels off small conductors (large ones would leave no room, so they stay open). */
+    private static void reserveIfSmall(ViewTransform v, List<Vec2> pts, LabelPlacer placer) {
+        double x0 = Double.POSITIVE_INFINITY;
+        double y0 = Double.POSITIVE_INFINITY;
+        double x1 = Double.NEGATIVE_INFINITY;
+        double y1 = Double.NEGATIVE_INFINITY;
+        for (Vec2 p : pts) {
+            x0 = Math.min(x0, v.screenX(p.x()));
+            x1 = Math.max(x1, v.screenX(p.x()));
+            y0 = Math.min(y0, v.screenY(p.y()));
+            y1 = Math.max(y1, v.screenY(p.y()));
+        }
+        if (x1 - x0 < SMALL_PX && y1 - y0 < SMALL_PX) {
+            placer.reserve(new LabelPlacer.Box(x0 - 4, y0 - 4, x1 - x0 + 8, y1 - y0 + 8));
+        }
+    }
+
+    /** Where a callout's leader points: a loop's upper-right-most vertex, a wire's middle. */
     private static Vec2 anchor(Conductor c, List<Vec2> pts) {
         if (c instanceof Conductor.Loop) {
-            return SourcePainter.centroid(pts);
+            Vec2 best = pts.get(0);
+            for (Vec2 p : pts) {
+                if (p.x() + p.y() > best.x() + best.y()) {
+                    best = p;
+                }
+            }
+            return best;
         }
         int mid = (pts.size() - 1) / 2;
         return lerp(pts.get(mid), pts.get(mid + 1), 0.5);

@@ -32,7 +32,7 @@ public final class LabelPlacer {
     }
 
     private static final double PAD = 3;
-    private static final double[] RINGS = {14, 34, 60, 95};
+    private static final double[] RINGS = {16, 36, 62, 96, 140};
     private static final int DIRECTIONS = 8;
 
     private final double width;

@@ -44,7 +44,7 @@ public final class ScenePainter {
         }
         Placement placement = Placement.of(f.scene(), f.tS());
         if (f.shows(Layer.SOURCES)) {
-            SourcePainter.draw(s, v, f.scene(), placement, f.marks());
+            SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer);
         }
         if (f.shows(Layer.CONDUCTORS)) {
             ConductorPainter.drawConductors(s, v, f.scene(), placement, f.marks());

@@ -15,7 +15,8 @@ public final class SourcePainter {
     private SourcePainter() {
     }
 
-    static void draw(Surface s, ViewTransform v, Scene scene, Placement placement, EditorMarks marks) {
+    static void draw(Surface s, ViewTransform v, Scene scene, Placement placement, EditorMarks marks,
+                     LabelPlacer placer) {
         for (Source src : scene.sources()) {
             boolean selected = marks.selected().contains(src.id());
             List<Vec2> outline = outline(src, placement);
@@ -34,6 +35,7 @@ public final class SourcePainter {
                 Vec2 c = centroid(outline);
                 Glyphs.fieldSymbol(s, v.screenX(c.x()), v.screenY(c.y()) - 10, 7, patch.bzT() > 0, Palette.INK);
                 label(s, v, c, Quantities.bz(patch.bzT()), 8);
+                placer.reserve(new LabelPlacer.Box(v.screenX(c.x()) - 30, v.screenY(c.y()) - 20, 60, 42));
             } else if (src instanceof Source.SourceCoil coil) {
                 polygon(s, v, outline, true);
                 s.stroke(Palette.COIL);
@@ -51,7 +53,9 @@ public final class SourcePainter {
                 s.lineWidth(2);
                 s.dash();
                 s.strokePath();
-                magnetHint(s, v, centroid(outline), src);
+                Vec2 c = centroid(outline);
+                magnetHint(s, v, c, src);
+                placer.reserve(new LabelPlacer.Box(v.screenX(c.x()) - 16, v.screenY(c.y()) - 18, 32, 32));
             }
             if (selected) {
                 polygon(s, v, outline, true);
