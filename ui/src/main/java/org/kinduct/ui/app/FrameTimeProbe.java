@@ -62,6 +62,7 @@ public final class FrameTimeProbe {
         FieldMapper mapper = new FieldMapper(Evaluators.solver(), Runnable::run, Runnable::run, r -> { }, e -> { });
         Canvas canvas = onFx(() -> new Canvas(WIDTH, HEIGHT));
         double[] paint = new double[frames];
+        double[] render = new double[frames];
         double[] compute = new double[frames];
         for (int i = 0; i < frames; i++) {
             double t = scene.time().t1S() * i / frames;
@@ -71,23 +72,40 @@ public final class FrameTimeProbe {
             compute[i] = (System.nanoTime() - c0) * 1e-6;
             Frame f = new Frame(scene, t, snap, raster, view, EnumSet.allOf(Layer.class), ColourRange.automatic(),
                     EditorMarks.none(), "");
-            paint[i] = onFx(() -> {
+            int frame = i;
+            onFx(() -> {
                 long p0 = System.nanoTime();
                 ScenePainter.draw(new FxSurface(canvas.getGraphicsContext2D(), WIDTH, HEIGHT), f);
+                long p1 = System.nanoTime();
                 canvas.snapshot(null, null);
-                return (System.nanoTime() - p0) * 1e-6;
+                paint[frame] = (p1 - p0) * 1e-6;
+                render[frame] = (System.nanoTime() - p1) * 1e-6;
+                return null;
             });
         }
-        double[] warm = Arrays.copyOfRange(paint, Math.min(10, frames - 1), frames);
-        Arrays.sort(warm);
-        double[] maps = compute.clone();
-        Arrays.sort(maps);
         return String.format(Locale.ROOT,
-                "%d frames of a %d-object scene at %d×%d: paint+render median %.1f ms, 95th percentile %.1f ms; "
-                        + "field map (4 px cells) + snapshot median %.1f ms on %d cores",
+                "%d frames of a %d-object scene at %d×%d on %d cores (median / 95th percentile, ms): "
+                        + "painter %.1f / %.1f; software rasterisation of the canvas %.1f / %.1f; "
+                        + "field map (4 px cells) + snapshot, off the UI thread, %.1f / %.1f",
                 frames, scene.sources().size() + scene.conductors().size(), WIDTH, HEIGHT,
-                warm[warm.length / 2], warm[(int) (warm.length * 0.95)], maps[maps.length / 2],
-                Runtime.getRuntime().availableProcessors());
+                Runtime.getRuntime().availableProcessors(), median(paint), p95(paint), median(render), p95(render),
+                median(compute), p95(compute));
+    }
+
+    private static double[] warm(double[] ms) {
+        double[] w = Arrays.copyOfRange(ms, Math.min(10, ms.length - 1), ms.length);
+        Arrays.sort(w);
+        return w;
+    }
+
+    private static double median(double[] ms) {
+        double[] w = warm(ms);
+        return w[w.length / 2];
+    }
+
+    private static double p95(double[] ms) {
+        double[] w = warm(ms);
+        return w[(int) (w.length * 0.95)];
     }
 
     private static <T> T onFx(java.util.concurrent.Callable<T> task) throws InterruptedException, ExecutionException {

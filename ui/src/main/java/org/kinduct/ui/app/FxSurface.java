@@ -163,7 +163,7 @@ final class FxSurface implements Surface {
         // A fresh image per call: the canvas renders later and must not see the pixels change.
         WritableImage image = new WritableImage(cols, rows);
         image.getPixelWriter().setPixels(0, 0, cols, rows, PixelFormat.getIntArgbInstance(), argb, 0, cols);
-        g.setImageSmoothing(true);
+        g.setImageSmoothing(false);
         g.drawImage(image, x, y, w, h);
     }
 

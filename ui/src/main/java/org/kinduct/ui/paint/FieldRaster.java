@@ -43,6 +43,28 @@ public record FieldRaster(double minX, double maxY, double cellM, int cols, int 
         return bzT[r * cols + c];
     }
 
+    /**
+     * Every {@code k}-th sample in both directions (cells k times larger), for drawing where fine
+     * detail is not needed; this raster itself when k ≤ 1.
+     */
+    public FieldRaster decimated(int k) {
+        if (k <= 1) {
+            return this;
+        }
+        int c2 = (cols + k - 1) / k;
+        int r2 = (rows + k - 1) / k;
+        float[] v = new float[c2 * r2];
+        for (int r = 0; r < r2; r++) {
+            for (int c = 0; c < c2; c++) {
+                v[r * c2 + c] = bzT[(r * k) * cols + c * k];
+            }
+        }
+        // Sample (r·k, c·k) sits at the centre of the new, k times larger cell (r, c) when the new
+        // grid starts half a new cell minus half an old cell before the old one.
+        double shift = (k - 1) * cellM / 2;
+        return new FieldRaster(minX - shift, maxY + shift, cellM * k, c2, r2, v, autoLimitT, revision, tS);
+    }
+
     public double centerX(int col) {
         return minX + (col + 0.5) * cellM;
     }

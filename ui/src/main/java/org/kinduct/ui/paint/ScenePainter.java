@@ -16,6 +16,7 @@ public final class ScenePainter {
     private static final double SYMBOL_SPACING_PX = 42;
     private static final double SYMBOL_MIN_FRACTION = 0.04;
     private static final int MAX_CONTOUR_LEVELS_PER_SIDE = 5;
+    private static final double CONTOUR_CELL_PX = 6;
 
     private ScenePainter() {
     }
@@ -101,14 +102,9 @@ public final class ScenePainter {
             gridLines(s, v, minor, Palette.GRID_MINOR, 1);
         }
         gridLines(s, v, major, Palette.GRID_MAJOR, 1);
-        s.stroke(Palette.AXIS);
-        s.lineWidth(1.2);
-        s.beginPath();
-        s.moveTo(v.screenX(0), 0);
-        s.lineTo(v.screenX(0), s.height());
-        s.moveTo(0, v.screenY(0));
-        s.lineTo(s.width(), v.screenY(0));
-        s.strokePath();
+        s.fill(Palette.AXIS);
+        s.fillRect(Math.round(v.screenX(0)), 0, 1, s.height());
+        s.fillRect(0, Math.round(v.screenY(0)), s.width(), 1);
         s.fill(Palette.MUTED);
         for (double x = Math.ceil(v.minX() / major) * major; x <= v.maxX(); x += major) {
             s.text(Quantities.length(snap(x, major)), v.screenX(x) + 3, 30, 10, false, Surface.Anchor.TOP_LEFT);
@@ -122,21 +118,15 @@ public final class ScenePainter {
         return Math.abs(value) < step * 1e-6 ? 0 : value;
     }
 
+    /** Axis-parallel lines as one-pixel rectangles: far cheaper than stroked paths on a software pipeline. */
     private static void gridLines(Surface s, ViewTransform v, double step, int colour, double width) {
-        s.stroke(colour);
-        s.lineWidth(width);
-        s.beginPath();
+        s.fill(colour);
         for (double x = Math.ceil(v.minX() / step) * step; x <= v.maxX(); x += step) {
-            double sx = Math.round(v.screenX(x)) + 0.5;
-            s.moveTo(sx, 0);
-            s.lineTo(sx, s.height());
+            s.fillRect(Math.round(v.screenX(x)), 0, width, s.height());
         }
         for (double y = Math.ceil(v.minY() / step) * step; y <= v.maxY(); y += step) {
-            double sy = Math.round(v.screenY(y)) + 0.5;
-            s.moveTo(0, sy);
-            s.lineTo(s.width(), sy);
+            s.fillRect(0, Math.round(v.screenY(y)), s.width(), width);
         }
-        s.strokePath();
     }
 
     private static void symbols(Surface s, ViewTransform v, FieldRaster r, double limit) {
@@ -153,9 +143,11 @@ public final class ScenePainter {
         }
     }
 
-    private static void contours(Surface s, ViewTransform v, FieldRaster r, double limit, LabelPlacer placer,
+    private static void contours(Surface s, ViewTransform v, FieldRaster fine, double limit, LabelPlacer placer,
                                  List<Runnable> labels) {
         double step = contourStep(limit);
+        // Segments of about CONTOUR_CELL_PX keep the path short; the lines are for reading levels, not for numbers.
+        FieldRaster r = fine.decimated((int) Math.round(CONTOUR_CELL_PX / (fine.cellM() * v.pxPerM())));
         s.dash();
         for (int k = -MAX_CONTOUR_LEVELS_PER_SIDE; k <= MAX_CONTOUR_LEVELS_PER_SIDE; k++) {
             if (k == 0) {
