@@ -188,6 +188,17 @@ class EditorWindowTest {
         assertEquals(saved, vm.scene());
     }
 
+    @Test
+    void autosaveKeepsUnsavedWorkAndACleanExitRemovesIt(FxRobot robot) throws Exception {
+        interact(() -> vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("unsaved", Body.FIXED,
+                List.of(Conductor.Vertex.at(0, 0), Conductor.Vertex.at(0.02, 0))))));
+        interact(window::autosave);
+        Path auto = new AppHome(home).autosave();
+        assertEquals(vm.scene(), new JsonSceneStore().read(auto), "the autosave holds the current scene");
+        interact(window::clearAutosave);
+        assertFalse(Files.exists(auto));
+    }
+
     private static void interact(Runnable r) {
         try {
             WaitForAsyncUtils.asyncFx(r).get(20, TimeUnit.SECONDS);

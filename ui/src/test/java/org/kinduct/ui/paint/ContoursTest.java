@@ -47,4 +47,17 @@ class ContoursTest {
         Contours.trace(r, 5, (x1, y1, x2, y2) -> count[0]++);
         assertEquals(0, count[0]);
     }
+
+    @Test
+    void decimatedRasterKeepsEachKeptSampleAtItsOwnPosition() {
+        FieldRaster r = linear(3, -2, 17, 11, 0.01);
+        FieldRaster d = r.decimated(3);
+        for (int row = 0; row < d.rows(); row++) {
+            for (int col = 0; col < d.cols(); col++) {
+                assertEquals(r.centerX(3 * col), d.centerX(col), POSITION_TOL);
+                assertEquals(r.centerY(3 * row), d.centerY(row), POSITION_TOL);
+                assertEquals(r.bzT()[3 * row * r.cols() + 3 * col], d.bzT()[row * d.cols() + col]);
+            }
+        }
+    }
 }
