@@ -180,7 +180,9 @@ final class EditorWindow {
                 item("Duplicate", "Shortcut+D", canvas::duplicateSelection),
                 item("Rotate 15° left", "Shortcut+R", () -> canvas.rotateSelection(ROTATE_STEP_RAD)),
                 item("Rotate 15° right", "Shortcut+Shift+R", () -> canvas.rotateSelection(-ROTATE_STEP_RAD)),
-                item("Select all", "Shortcut+A", this::selectAll));
+                item("Select all", "Shortcut+A", this::selectAll),
+                new SeparatorMenuItem(),
+                item("Add uniform background field", null, this::addBackground));
         Menu view = new Menu("View");
         view.getItems().add(item("Zoom to fit  (F)", null, canvas::zoomToFit));
         view.getItems().add(new SeparatorMenuItem());
@@ -319,6 +321,13 @@ final class EditorWindow {
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(4, 8, 4, 8));
         return bar;
+    }
+
+    private void addBackground() {
+        if (vm.apply("Add background field", org.kinduct.ui.edit.ShapeFactory::addBackground)) {
+            List<org.kinduct.scene.Source> sources = vm.scene().sources();
+            vm.select(Set.of(sources.get(sources.size() - 1).id()));
+        }
     }
 
     private void selectAll() {

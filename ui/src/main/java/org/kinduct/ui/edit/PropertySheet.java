@@ -66,14 +66,22 @@ public final class PropertySheet {
 
     private static List<Property> sceneProperties(Scene scene) {
         TimeSpan t = scene.time();
-        return List.of(
+        List<Property> p = new ArrayList<>(List.of(
                 new Property("Scene name", scene.name(), List.of(), text -> s -> s.withText(text.strip(), s.description())),
                 quantity("Start time", Dimension.TIME, t.t0S(),
                         v -> s -> s.withTime(new TimeSpan(v, s.time().t1S(), s.time().dtS()))),
                 quantity("End time", Dimension.TIME, t.t1S(),
                         v -> s -> s.withTime(new TimeSpan(s.time().t0S(), v, s.time().dtS()))),
                 quantity("Time step", Dimension.TIME, t.dtS(),
-                        v -> s -> s.withTime(new TimeSpan(s.time().t0S(), s.time().t1S(), v))));
+                        v -> s -> s.withTime(new TimeSpan(s.time().t0S(), s.time().t1S(), v)))));
+        // Uniform fields have no outline to click on, so they are edited here.
+        for (Source src : scene.sources()) {
+            if (src instanceof Source.UniformField u) {
+                p.addAll(sourceProperties(u).stream().map(q -> new Property("“" + u.id() + "”: " + q.label(), q.text(),
+                        q.options(), q.edit())).toList());
+            }
+        }
+        return p;
     }
 
     private static UnaryOperator<Scene> replace(Source next) {

@@ -25,6 +25,12 @@ public final class ShapeFactory {
     public static final double MAGNET_STANDOFF_M = 0.002;
     public static final double COIL_PLANE_Z_M = -0.002;
     public static final int COIL_TURNS = 10;
+    /**
+     * Default background: the Earth's vertical field at northern mid-latitudes, pointing down, so
+     * into a screen that looks down on a table: about −45 µT (total 25–65 µT at inclination ≈ 60°,
+     * NOAA World Magnetic Model documentation; from memory).
+     */
+    public static final double BACKGROUND_BZ_T = -45e-6;
     private static final int ROUND_LOOP_SEGMENTS = 36;
 
     private ShapeFactory() {
@@ -53,6 +59,12 @@ public final class ShapeFactory {
                     coil(id, new Source.CoilShape.Circle(pts.get(0), radius(pts))));
             case SELECT -> throw new IllegalArgumentException("the selection tool draws nothing");
         };
+    }
+
+    /** Adds a uniform background field (it has no outline to draw); edit its value in the properties. */
+    public static Scene addBackground(Scene scene) {
+        return SceneEdits.addSource(scene, new Source.UniformField(SceneEdits.uniqueId(scene, "background"),
+                BACKGROUND_BZ_T));
     }
 
     /** The outline a tool shows while drawing: as clicked, or the rectangle or circle it implies. */

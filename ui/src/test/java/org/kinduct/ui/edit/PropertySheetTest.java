@@ -114,4 +114,11 @@ class PropertySheetTest {
                 () -> find(MotionSheet.of(s, "loop"), "Keys").check(s, "0 s, 1 mm"));
         assertTrue(e.getMessage().contains("key 1"), e.getMessage());
     }
+
+    @Test
+    void backgroundFieldIsEditedWithTheScene() {
+        Scene s = ShapeFactory.addBackground(Fixtures.loopAndMagnet());
+        Scene t = set(s, PropertySheet.of(s, null), "“background”", "-30 µT");
+        assertEquals(-30e-6, ((Source.UniformField) t.source("background").orElseThrow()).bzT(), 1e-18);
+    }
 }
