@@ -23,7 +23,10 @@ import org.junit.jupiter.params.provider.ValueSource;
 class PainterIndependenceTest {
 
     private static List<Path> classes(String pkg) throws IOException, URISyntaxException {
-        Path dir = Path.of(PainterIndependenceTest.class.getResource("/org/kinduct/ui/" + pkg).toURI());
+        // The main classes' directory, not the test classes' (which share package names).
+        Path root = Path.of(org.kinduct.ui.paint.ScenePainter.class.getProtectionDomain().getCodeSource().getLocation()
+                .toURI());
+        Path dir = root.resolve("org/kinduct/ui/" + pkg);
         try (Stream<Path> files = Files.list(dir)) {
             return files.filter(p -> p.toString().endsWith(".class")).toList();
         }
