@@ -243,6 +243,19 @@ class BlockMagnetFieldTest {
     }
 
     @Test
+    void touchingMagnetFieldJumpsByHalfTheRemanenceAtTheFootprintEdge() {
+        // The side face carries a current sheet K = Br/μ0; in the plane where it ends, B_z jumps by
+        // half of μ0K (Griffiths ch. 5, boundary conditions, halved by symmetry at the sheet's end).
+        BlockMagnetField magnet = new BlockMagnetField(0, 0, 0, 0.020, 0.012, -0.005, -0.0, BR);
+        double delta = 1e-11;
+        double jump = magnet.bz(0.010 - delta, 0.001) - magnet.bz(0.010 + delta, 0.001);
+        assertEquals(BR / 2, jump, 1e-6 * BR);
+        double edge = magnet.bz(0.010, 0.001);
+        assertEquals((magnet.bz(0.010 - delta, 0.001) + magnet.bz(0.010 + delta, 0.001)) / 2, edge, 1e-6 * BR,
+                "mean on the edge");
+    }
+
+    @Test
     void fluxAndMomentsOfTouchingMagnetMatchQuadratureSplitAtTheFootprint() {
         // Stand-off 0: B_z jumps across the footprint's edges and A has logarithmic kinks there.
         // Reference: 2-D quadrature of B_z over the loop cut along the footprint lines x = ±10 mm,

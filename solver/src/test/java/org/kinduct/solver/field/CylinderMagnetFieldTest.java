@@ -134,6 +134,18 @@ class CylinderMagnetFieldTest {
     }
 
     @Test
+    void touchingMagnetFieldJumpsByHalfTheRemanenceAtTheRim() {
+        // A current sheet K makes the tangential B jump by μ0K across it (Griffiths ch. 5, boundary
+        // conditions); in the plane where the sheet ends, by symmetry half of that: μ0K/2 = Br/2.
+        CylinderMagnetField magnet = new CylinderMagnetField(0, 0, RADIUS, -0.006, -0.0, BR);
+        double delta = 1e-9 * RADIUS;
+        double jump = magnet.bz(RADIUS - delta, 0) - magnet.bz(RADIUS + delta, 0);
+        assertEquals(BR / 2, jump, 1e-6 * BR);
+        double rim = magnet.bz(RADIUS, 0);
+        assertEquals((magnet.bz(RADIUS - delta, 0) + magnet.bz(RADIUS + delta, 0)) / 2, rim, 1e-6 * BR, "mean on the rim");
+    }
+
+    @Test
     void fluxOfTouchingMagnetThroughCoaxialPolygonMatchesRadialQuadrature() {
         // Stand-off 0: B_z jumps at the rim ρ = a. Reference: Φ(b) = ∫₀^b 2πρ B_z(ρ) dρ split at
         // ρ = a, for a circle of radius b = 1.6a; the polygon's defect is removed as in the coil
