@@ -23,7 +23,7 @@ import org.kinduct.scene.Vec2;
  * </ul>
  * The two agree for any motion and deformation of the contour (Leibniz rule for moving surfaces;
  * Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §7.1.3): in static fields
- * to about 1e-9 relative (the check reported as {@code disagreement}). The motional value is
+ * to rounding (the check reported as {@code disagreement}; see Thresholds). The motional value is
  * reported. A closed loop carries I = EMF/R with R = N·perimeter·ρ(T)/A_wire + R_load
  * (ρ(T) = ρ20·[1 + α20·(T − 20 °C)], IEC 60028 for copper), and feels F = N·I·∮ dl × B =
  * N·I·∮ B_z (dy, −dx). An open loop has EMF across its gap (the closing edge from last to first
