@@ -79,6 +79,26 @@ final class DifferenceStep {
         return ((f[3] - f[0]) - 8 * (f[2] - f[1])) / (12 * h);
     }
 
+    /** One-sided slopes may differ by this fraction of the EMF scale before f counts as kinked. */
+    static final double KINK_TOLERANCE = 1e-6;
+
+    /**
+     * False when f has a kink within 2h of t (a loop edge crossing a field-patch edge, a key of a
+     * linear path): the backward and forward second-order one-sided slopes
+     * (3f₀ − 4f₋₁ + f₋₂)/(2h) and (−3f₀ + 4f₊₁ − f₊₂)/(2h) (Abramowitz &amp; Stegun 1964, eq. 25.3.4
+     * family; from memory) then differ by the jump in slope, while for smooth f they differ by
+     * only O(h²·f‴). There the derivative, and so the flux-rule EMF, is not defined to the accuracy
+     * the check needs.
+     *
+     * @param f0 f(t); {@code f} holds f at t−2h, t−h, t+h, t+2h
+     * @param slopeScale the size of slope that counts as large (an EMF scale per turn)
+     */
+    static boolean smooth(double f0, double[] f, double slopeScale, double h) {
+        double backward = (3 * f0 - 4 * f[1] + f[0]) / (2 * h);
+        double forward = (-3 * f0 + 4 * f[2] - f[3]) / (2 * h);
+        return Math.abs(forward - backward) <= KINK_TOLERANCE * Math.max(slopeScale, Math.abs(forward) + Math.abs(backward));
+    }
+
     /** The pace of the scene at {@code now}, given every conductor as placed there. */
     Pace pace(SceneIndex index, Frame now, List<PlacedConductor> conductors) {
         double shortest = Double.POSITIVE_INFINITY;

@@ -70,6 +70,7 @@ public final class ResultsTable {
             return "n/a (open wire)";
         }
         String worst = String.format(Locale.ROOT, "%.1e", r.worstDisagreement());
-        return r.worstDisagreement() <= AGREEMENT_FLAG ? "yes (worst " + worst + ")" : "CHECK: differ by " + worst;
+        String kinks = r.kinkSamples() == 0 ? "" : "; " + r.kinkSamples() + " at field-edge crossings not comparable";
+        return (r.worstDisagreement() <= AGREEMENT_FLAG ? "yes (worst " + worst : "CHECK (differ by " + worst) + kinks + ")";
     }
 }
