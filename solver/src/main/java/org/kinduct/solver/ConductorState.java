@@ -14,7 +14,9 @@ import org.kinduct.scene.Vec2;
  * @param emfFluxV −dλ/dt (NaN for wires)
  * @param emfMotionalV ∮ or ∫ (v × B − ∂A/∂t)·dl, times turns for loops
  * @param emfV the EMF reported (motional method; the flux method is its check)
- * @param disagreement |emfFlux − emfMotional| / max(|emfFlux|, |emfMotional|, floor); 0 for wires
+ * @param disagreement |emfFlux − emfMotional| / max(|emfFlux|, |emfMotional|, floor); 0 for wires;
+ *        NaN at an instant where the flux has a kink (a loop edge crossing a field-patch edge, a
+ *        key of a linear path), where −dλ/dt is not defined and so is no check
  * @param positiveEnd + terminal for wires and open loops; NONE for closed loops
  * @param currentA current along the vertex order (0 for wires and open loops)
  * @param direction current sense on screen for closed loops

@@ -138,7 +138,9 @@ final class InstantSolver {
         double scale = turns * emfScale(at);
         double threshold = TERMINAL_ABS_V + TERMINAL_REL * scale;
         double denominator = Math.max(Math.max(Math.abs(emfFlux), Math.abs(emf)), DISAGREEMENT_FLOOR * scale);
-        double disagreement = denominator > 0 ? Math.abs(emfFlux - emf) / denominator : 0;
+        double disagreement = DifferenceStep.smooth(flux, moved, DISAGREEMENT_FLOOR * scale / turns, h)
+                ? (denominator > 0 ? Math.abs(emfFlux - emf) / denominator : 0)
+                : Double.NaN;
 
         double resistance = turns * at.lengthM() * loop.wire().material().resistivityAt(loop.temperatureC())
                 / loop.wire().crossSectionM2() + loop.loadOhm();

@@ -3,6 +3,7 @@ package org.kinduct.solver;
 import java.util.List;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.field.PhysicalConstants;
 
 /**
  * What the difference step, the quadrature and the noise thresholds need to know of a source: a
@@ -16,9 +17,6 @@ import org.kinduct.scene.Vec2;
  * (Biot–Savart; Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §5.2.2).
  */
 record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT) {
-
-    /** μ0 to the precision a scale needs (CODATA 2018 differs by 5e-10 relative). */
-    private static final double MU0_SCALE = 4e-7 * Math.PI;
 
     static SourceReach of(Source source) {
         if (source instanceof Source.FieldPatch patch) {
@@ -42,11 +40,11 @@ record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT) {
         double amps = coil.turns() * (Math.abs(coil.drive().dcA()) + Math.abs(coil.drive().amplitudeA()));
         if (coil.shape() instanceof Source.CoilShape.Circle circle) {
             double length = Math.min(circle.radiusM(), plane);
-            return new SourceReach(circle.center(), circle.radiusM(), length, MU0_SCALE * amps / (2 * Math.PI * length));
+            return new SourceReach(circle.center(), circle.radiusM(), length, PhysicalConstants.MU_0 * amps / (2 * Math.PI * length));
         }
         SourceReach outline = ofOutline(((Source.CoilShape.Polygon) coil.shape()).vertices(), plane, 0);
         return new SourceReach(outline.anchor(), outline.extentM(), outline.lengthM(),
-                MU0_SCALE * amps / (2 * Math.PI * outline.lengthM()));
+                PhysicalConstants.MU_0 * amps / (2 * Math.PI * outline.lengthM()));
     }
 
     private static SourceReach ofOutline(List<Vec2> outline, double lengthCapM, double fieldT) {

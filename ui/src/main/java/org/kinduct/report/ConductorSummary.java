@@ -17,10 +17,12 @@ import org.kinduct.solver.Terminal;
  * @param directionAtPeak current sense at the peak (closed loops)
  * @param peakCurrentA current of largest magnitude (signed)
  * @param worstDisagreement largest relative disagreement between the two EMF methods
+ * @param kinkSamples samples skipped by that comparison because the flux had a kink there
  */
 public record ConductorSummary(String id, ConductorState.Kind kind, double peakEmfV, double peakTimeS,
                                double rmsEmfV, Terminal positiveEndAtPeak, Circulation directionAtPeak,
-                               double peakCurrentA, double worstDisagreement, boolean inducedFieldIncluded) {
+                               double peakCurrentA, double worstDisagreement, int kinkSamples,
+                               boolean inducedFieldIncluded) {
 
     /** One summary per conductor, in scene order. */
     public static List<ConductorSummary> of(List<Snapshot> series) {
@@ -41,6 +43,7 @@ public record ConductorSummary(String id, ConductorState.Kind kind, double peakE
         double sumSq = 0;
         double peakI = 0;
         double worst = 0;
+        int kinks = 0;
         boolean included = true;
         for (Snapshot s : series) {
             ConductorState c = s.conductors().get(index);
@@ -52,12 +55,14 @@ public record ConductorSummary(String id, ConductorState.Kind kind, double peakE
             if (Math.abs(c.currentA()) > Math.abs(peakI)) {
                 peakI = c.currentA();
             }
-            if (c.disagreement() > worst) {
+            if (Double.isNaN(c.disagreement())) {
+                kinks++;
+            } else if (c.disagreement() > worst) {
                 worst = c.disagreement();
             }
             included &= c.inducedFieldIncluded();
         }
         return new ConductorSummary(peak.id(), peak.kind(), peak.emfV(), peakT, Math.sqrt(sumSq / series.size()),
-                peak.positiveEnd(), peak.direction(), peakI, worst, included);
+                peak.positiveEnd(), peak.direction(), peakI, worst, kinks, included);
     }
 }
