@@ -58,7 +58,10 @@ final class ReadoutTable extends TableView<ConductorState> {
 
     static String agreement(ConductorState s) {
         if (s.kind() == ConductorState.Kind.WIRE) {
-            return "wire: motional only";
+            return s.inducedFieldIncluded() ? "wire: one method" : "wire: −∂A/∂t left out";
+        }
+        if (Double.isNaN(s.disagreement())) {
+            return "no check at a kink";
         }
         return s.disagreement() <= AGREEMENT_TOLERANCE ? "agree"
                 : String.format(java.util.Locale.ROOT, "DIFFER by %.2g", s.disagreement());
