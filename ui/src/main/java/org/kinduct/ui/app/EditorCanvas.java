@@ -137,7 +137,10 @@ final class EditorCanvas extends Pane {
         EditorMarks marks = drawing != null ? drawing.marks(vm.selection())
                 : new EditorMarks(vm.selection(), banding ? band() : List.of(), true, null, "");
         String note = showFrameTime ? String.format(java.util.Locale.ROOT, "paint %.1f ms", frameMs) : "";
-        return new Frame(scene, vm.timeProperty().get(), dragPreview != null ? null : vm.snapshotProperty().get(),
+        // Draw at the instant the solver's numbers are for, so overlays sit on their conductors.
+        org.kinduct.solver.Snapshot snap = dragPreview != null ? null : vm.snapshotProperty().get();
+        double t = snap != null ? snap.tS() : vm.timeProperty().get();
+        return new Frame(scene, t, snap,
                 vm.rasterProperty().get(), vm.viewProperty().get(), vm.layers(), vm.rangeProperty().get(), marks, note);
     }
 

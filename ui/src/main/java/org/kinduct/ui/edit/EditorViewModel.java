@@ -27,6 +27,7 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.field.FieldMapper;
+import org.kinduct.ui.field.LatestOnly;
 import org.kinduct.ui.field.MapRequest;
 import org.kinduct.ui.field.SceneEvaluator;
 import org.kinduct.ui.paint.ColourRange;
@@ -61,6 +62,7 @@ public final class EditorViewModel {
     private final Executor ui;
     private final UndoHistory history;
     private final FieldMapper mapper;
+    private final LatestOnly snapshotJobs;
 
     private final ReadOnlyObjectWrapper<Scene> scene = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyLongWrapper revision = new ReadOnlyLongWrapper();
@@ -91,6 +93,7 @@ public final class EditorViewModel {
         this.work = work;
         this.ui = ui;
         this.history = new UndoHistory(initial, UNDO_LIMIT);
+        this.snapshotJobs = new LatestOnly(work);
         this.mapper = new FieldMapper(evaluators, work, ui, this::acceptRaster,
                 e -> status.set("Field map failed: " + e.getMessage()));
         time.addListener((obs, old, t) -> solveNow());
@@ -225,16 +228,38 @@ public final class EditorViewModel {
         return evaluator;
     }
 
+    /** Solves the current time off the UI thread; a result for an older scene is dropped. */
     private void solveNow() {
         if (scene.get() == null) {
             return;
         }
+        SceneEvaluator ev;
         try {
-            snapshot.set(evaluator().at(time.get()));
+            ev = evaluator();
         } catch (RuntimeException e) {
             snapshot.set(null);
             status.set("Solver: " + describe(e));
+            return;
         }
+        long rev = revision.get();
+        double t = time.get();
+        snapshotJobs.submit(() -> {
+            try {
+                Snapshot result = ev.at(t);
+                ui.execute(() -> {
+                    if (revision.get() == rev) {
+                        snapshot.set(result);
+                    }
+                });
+            } catch (RuntimeException e) {
+                ui.execute(() -> {
+                    if (revision.get() == rev) {
+                        snapshot.set(null);
+                        status.set("Solver: " + describe(e));
+                    }
+                });
+            }
+        });
     }
 
     private void requestSeries() {

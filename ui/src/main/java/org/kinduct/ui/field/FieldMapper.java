@@ -5,7 +5,6 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 import java.util.concurrent.Executor;
-import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Consumer;
 import java.util.function.Function;
 import java.util.stream.IntStream;
@@ -32,19 +31,16 @@ public final class FieldMapper {
     private static final int MAX_CELLS = 1_200_000;
 
     private final Function<Scene, SceneEvaluator> evaluators;
-    private final Executor work;
+    private final LatestOnly jobs;
     private final Executor deliverOn;
     private final Consumer<FieldRaster> deliver;
     private final Consumer<RuntimeException> failure;
-    private final AtomicReference<MapRequest> waiting = new AtomicReference<>();
-    private final Object runLock = new Object();
-    private boolean running;
     private StaticCache cache;
 
     public FieldMapper(Function<Scene, SceneEvaluator> evaluators, Executor work, Executor deliverOn,
                        Consumer<FieldRaster> deliver, Consumer<RuntimeException> failure) {
         this.evaluators = Objects.requireNonNull(evaluators);
-        this.work = Objects.requireNonNull(work);
+        this.jobs = new LatestOnly(work);
         this.deliverOn = Objects.requireNonNull(deliverOn);
         this.deliver = Objects.requireNonNull(deliver);
         this.failure = Objects.requireNonNull(failure);
@@ -52,35 +48,14 @@ public final class FieldMapper {
 
     /** Asks for a map; replaces any request still waiting. */
     public void request(MapRequest r) {
-        waiting.set(r);
-        synchronized (runLock) {
-            if (running) {
-                return;
-            }
-            running = true;
-        }
-        work.execute(this::drain);
-    }
-
-    private void drain() {
-        while (true) {
-            MapRequest r = waiting.getAndSet(null);
-            if (r == null) {
-                synchronized (runLock) {
-                    if (waiting.get() == null) {
-                        running = false;
-                        return;
-                    }
-                }
-                continue;
-            }
+        jobs.submit(() -> {
             try {
                 FieldRaster raster = compute(r);
                 deliverOn.execute(() -> deliver.accept(raster));
             } catch (RuntimeException e) {
                 deliverOn.execute(() -> failure.accept(e));
             }
-        }
+        });
     }
 
     /** Computes one map on the calling thread. */

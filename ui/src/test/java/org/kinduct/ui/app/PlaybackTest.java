@@ -85,6 +85,9 @@ class PlaybackTest {
         WaitForAsyncUtils.waitForFxEvents();
         double t = vm.timeProperty().get();
         assertTrue(t > 0.1 && t < 0.5, "paused while one edge is inside: t = " + t);
+        // Snapshots are solved off the UI thread; the one for the paused time follows shortly.
+        WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS,
+                () -> vm.snapshotProperty().get() != null && vm.snapshotProperty().get().tS() == t);
 
         Snapshot expected = new SceneSolver(vm.scene()).at(t);
         ConductorState st = expected.conductor("loop").orElseThrow();
