@@ -55,6 +55,7 @@ final class EditorCanvas extends Pane {
     private boolean needsPaint = true;
     private boolean showFrameTime;
     private double frameMs;
+    private double lastFrameMs;
     private long lastNanos;
 
     // Drag state: pan, move selection, or move a vertex.
@@ -128,6 +129,7 @@ final class EditorCanvas extends Pane {
         long t0 = System.nanoTime();
         ScenePainter.draw(new FxSurface(canvas.getGraphicsContext2D(), getWidth(), getHeight()), frame());
         double ms = (System.nanoTime() - t0) * 1e-6;
+        lastFrameMs = ms;
         frameMs = frameMs == 0 ? ms : frameMs + FRAME_TIME_SMOOTHING * (ms - frameMs);
         return ms;
     }
@@ -136,7 +138,8 @@ final class EditorCanvas extends Pane {
         Scene scene = dragPreview != null ? dragPreview : vm.scene();
         EditorMarks marks = drawing != null ? drawing.marks(vm.selection())
                 : new EditorMarks(vm.selection(), banding ? band() : List.of(), true, null, "");
-        String note = showFrameTime ? String.format(java.util.Locale.ROOT, "paint %.1f ms", frameMs) : "";
+        String note = showFrameTime
+                ? String.format(java.util.Locale.ROOT, "paint: last %.1f ms, average %.1f ms", lastFrameMs, frameMs) : "";
         // Draw at the instant the solver's numbers are for, so overlays sit on their conductors.
         org.kinduct.solver.Snapshot snap = dragPreview != null ? null : vm.snapshotProperty().get();
         double t = snap != null ? snap.tS() : vm.timeProperty().get();
