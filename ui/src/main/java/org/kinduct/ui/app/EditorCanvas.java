@@ -69,7 +69,6 @@ final class EditorCanvas extends Pane {
     private boolean banding;
     private double bandX;
     private double bandY;
-    private String cursorText = "";
     private final java.util.function.Consumer<String> cursorSink;
 
     EditorCanvas(EditorViewModel vm, java.util.function.Consumer<String> cursorSink) {
@@ -150,10 +149,6 @@ final class EditorCanvas extends Pane {
     void toggleFrameTime() {
         showFrameTime = !showFrameTime;
         needsPaint = true;
-    }
-
-    double averageFrameMs() {
-        return frameMs;
     }
 
     /** Shows everything the scene holds over its whole time window. */
@@ -378,14 +373,10 @@ final class EditorCanvas extends Pane {
         Vec2 p = view().toScene(sx, sy);
         double bz = vm.bzAt(p.x(), p.y());
         String sense = bz > 0 ? " ⊙" : bz < 0 ? " ⊗" : "";
-        cursorText = "x " + org.kinduct.ui.paint.Quantities.length(p.x()) + "   y "
+        String cursorText = "x " + org.kinduct.ui.paint.Quantities.length(p.x()) + "   y "
                 + org.kinduct.ui.paint.Quantities.length(p.y()) + "   B_z "
                 + org.kinduct.ui.paint.Quantities.bz(bz) + sense;
         cursorSink.accept(cursorText);
-    }
-
-    String cursorText() {
-        return cursorText;
     }
 
     private void scrolled(ScrollEvent e) {
@@ -450,9 +441,5 @@ final class EditorCanvas extends Pane {
         }
         Vec2 c = SceneBounds.ofObjects(vm.scene(), ids, 0).center();
         vm.apply("Rotate", s -> SceneEdits.rotate(s, ids, c, angleRad));
-    }
-
-    void repaintSoon() {
-        needsPaint = true;
     }
 }

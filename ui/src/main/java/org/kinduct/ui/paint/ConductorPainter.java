@@ -69,7 +69,7 @@ final class ConductorPainter {
         s.strokePath();
     }
 
-    static void drawLenz(Surface s, ViewTransform v, Scene scene, Placement placement, Snapshot snap) {
+    static void drawLenz(Surface s, ViewTransform v, Scene scene, Snapshot snap) {
         double maxEmf = 0;
         double maxI = 0;
         for (ConductorState st : snap.conductors()) {
@@ -163,7 +163,7 @@ final class ConductorPainter {
         }
     }
 
-    static void placeCallouts(Surface s, ViewTransform v, Scene scene, Placement placement, Snapshot snap,
+    static void placeCallouts(Surface s, ViewTransform v, Scene scene, Snapshot snap,
                               LabelPlacer placer, List<Runnable> labels) {
         double lineH = ScenePainter.FONT + 3;
         for (ConductorState st : snap.conductors()) {

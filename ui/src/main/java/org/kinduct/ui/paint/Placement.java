@@ -25,14 +25,6 @@ public final class Placement {
         return new Placement(scene, tS);
     }
 
-    public Pose pose(String bodyId) {
-        return poses.get(bodyId);
-    }
-
-    public Vec2 place(String bodyId, Vec2 drawn) {
-        return poses.get(bodyId).place(drawn);
-    }
-
     public List<Vec2> place(String bodyId, List<Vec2> drawn) {
         Pose pose = poses.get(bodyId);
         List<Vec2> out = new ArrayList<>(drawn.size());
@@ -49,10 +41,5 @@ public final class Placement {
             out.add(poses.get(v.bodyOr(c.body())).place(v.at()));
         }
         return out;
-    }
-
-    /** Rotation of a body at this instant, radians. */
-    public double angle(String bodyId) {
-        return poses.get(bodyId).angleRad();
     }
 }

@@ -51,11 +51,11 @@ public final class ScenePainter {
             ConductorPainter.drawConductors(s, v, f.scene(), placement, f.marks());
         }
         if (f.shows(Layer.LENZ) && f.snapshot() != null) {
-            ConductorPainter.drawLenz(s, v, f.scene(), placement, f.snapshot());
+            ConductorPainter.drawLenz(s, v, f.scene(), f.snapshot());
         }
         List<Runnable> labels = new ArrayList<>();
         if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
-            ConductorPainter.placeCallouts(s, v, f.scene(), placement, f.snapshot(), placer, labels);
+            ConductorPainter.placeCallouts(s, v, f.scene(), f.snapshot(), placer, labels);
         }
         if (f.raster() != null && (f.shows(Layer.CONTOURS) || f.shows(Layer.SYMBOLS))) {
             if (f.shows(Layer.SYMBOLS)) {
