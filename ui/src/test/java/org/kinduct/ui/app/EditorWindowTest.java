@@ -109,6 +109,49 @@ class EditorWindowTest {
     }
 
     @Test
+    void draggingAVertexHandleOfTheSelectedLoopReshapesIt(FxRobot robot) {
+        interact(() -> {
+            vm.apply("add", s -> SceneEdits.addConductor(s, Conductor.Loop.simple("sq", Body.FIXED, List.of(
+                    Conductor.Vertex.at(0, 0), Conductor.Vertex.at(0.04, 0), Conductor.Vertex.at(0.04, 0.04),
+                    Conductor.Vertex.at(0, 0.04)), org.kinduct.ui.edit.ShapeFactory.DEFAULT_WIRE)));
+            vm.select(java.util.Set.of("sq"));
+        });
+        robot.drag(screenOf(robot, 0.04, 0.04), MouseButton.PRIMARY).dropTo(screenOf(robot, 0.06, 0.05));
+        WaitForAsyncUtils.waitForFxEvents();
+        // Grid snapping (10 mm at this zoom) puts the vertex exactly on the drop point.
+        assertEquals(new Vec2(0.06, 0.05), vm.scene().conductor("sq").orElseThrow().vertices().get(2).at());
+        assertEquals(new Vec2(0.04, 0), vm.scene().conductor("sq").orElseThrow().vertices().get(1).at());
+    }
+
+    @Test
+    void wheelZoomKeepsThePointUnderTheCursor(FxRobot robot) {
+        javafx.geometry.Point2D at = screenOf(robot, 0.03, -0.02);
+        robot.moveTo(at);
+        double before = vm.viewProperty().get().pxPerM();
+        robot.scroll(3, javafx.geometry.VerticalDirection.UP);
+        WaitForAsyncUtils.waitForFxEvents();
+        ViewTransform v = vm.viewProperty().get();
+        assertTrue(v.pxPerM() != before, "the wheel zooms");
+        javafx.geometry.Point2D local = window.canvas().screenToLocal(at);
+        assertEquals(0.03, v.sceneX(local.getX()), 2 / v.pxPerM());
+        assertEquals(-0.02, v.sceneY(local.getY()), 2 / v.pxPerM());
+    }
+
+    @Test
+    void typedLengthWhileDrawingPlacesTheNextVertex(FxRobot robot) {
+        robot.clickOn("#tool-wire");
+        robot.clickOn(screenOf(robot, 0, 0));
+        robot.moveTo(screenOf(robot, 0.05, 0));
+        robot.write("25 mm").type(KeyCode.ENTER);
+        interact(window.canvas()::requestFocus);
+        robot.type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        List<Vec2> pts = vm.scene().conductors().get(0).vertices().stream().map(Conductor.Vertex::at).toList();
+        assertEquals(2, pts.size());
+        assertTrue(pts.get(1).eq(new Vec2(0.025, 0), GEOMETRY_TOL), "typed 25 mm towards the cursor: " + pts);
+    }
+
+    @Test
     void rubberBandSelectsEverythingInsideIt(FxRobot robot) {
         interact(() -> {
             vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("a", Body.FIXED,
