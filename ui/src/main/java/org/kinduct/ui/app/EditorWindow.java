@@ -161,6 +161,7 @@ final class EditorWindow {
                 item("New scene", "Shortcut+N", this::newScene),
                 item("Open…", "Shortcut+O", this::openDialog),
                 recentMenu,
+                demoMenu(),
                 new SeparatorMenuItem(),
                 item("Save", "Shortcut+S", this::save),
                 item("Save as…", "Shortcut+Shift+S", this::saveAs),
@@ -243,6 +244,21 @@ final class EditorWindow {
                 vm.say("Colour limit: " + e.getMessage());
             }
         });
+    }
+
+    /** The demo scenes that are on the class path. */
+    private Menu demoMenu() {
+        Menu demos = new Menu("Open demo");
+        for (String name : org.kinduct.demo.Demos.names()) {
+            org.kinduct.demo.Demos.resource(name).filter(r -> EditorWindow.class.getResource(r) != null)
+                    .ifPresent(r -> demos.getItems().add(item(name.replace('-', ' '), null, () -> {
+                        if (confirmDiscard()) {
+                            openDemo(r);
+                        }
+                    })));
+        }
+        demos.setDisable(demos.getItems().isEmpty());
+        return demos;
     }
 
     private static MenuItem item(String text, String accelerator, Runnable action) {
