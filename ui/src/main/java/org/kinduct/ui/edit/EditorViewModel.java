@@ -58,11 +58,11 @@ public final class EditorViewModel {
     }
 
     private final Function<Scene, SceneEvaluator> evaluators;
-    private final Executor work;
     private final Executor ui;
     private final UndoHistory history;
     private final FieldMapper mapper;
     private final LatestOnly snapshotJobs;
+    private final LatestOnly seriesJobs;
 
     private final ReadOnlyObjectWrapper<Scene> scene = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyLongWrapper revision = new ReadOnlyLongWrapper();
@@ -90,10 +90,10 @@ public final class EditorViewModel {
 
     public EditorViewModel(Scene initial, Function<Scene, SceneEvaluator> evaluators, Executor work, Executor ui) {
         this.evaluators = evaluators;
-        this.work = work;
         this.ui = ui;
         this.history = new UndoHistory(initial, UNDO_LIMIT);
         this.snapshotJobs = new LatestOnly(work);
+        this.seriesJobs = new LatestOnly(work);
         this.mapper = new FieldMapper(evaluators, work, ui, this::acceptRaster,
                 e -> status.set("Field map failed: " + e.getMessage()));
         time.addListener((obs, old, t) -> solveNow());
@@ -274,7 +274,7 @@ public final class EditorViewModel {
         }
         TimeSpan span = s.time();
         double dt = (span.t1S() - span.t0S()) / (SERIES_SAMPLES - 1);
-        work.execute(() -> {
+        seriesJobs.submit(() -> {
             try {
                 List<Snapshot> result = ev.series(span.t0S(), span.t1S(), dt);
                 ui.execute(() -> {
