@@ -244,11 +244,19 @@ final class EditorCanvas extends Pane {
         }
         Vec2 d = view().toScene(e.getX(), e.getY()).minus(view().toScene(pressX, pressY));
         try {
+            // Edits change the drawn geometry; at t > t0 a body may have moved and turned since.
+            Placement now = Placement.of(vm.scene(), vm.timeProperty().get());
             if (vertexDrag != null) {
                 Vec2 at = snapper().snap(view().toScene(e.getX(), e.getY()), null, List.of()).point();
-                dragPreview = SceneEdits.moveVertex(vm.scene(), vertexDrag.conductorId(), vertexDrag.index(), at);
+                Conductor c = vm.scene().conductor(vertexDrag.conductorId()).orElseThrow();
+                String body = c.vertices().get(vertexDrag.index()).bodyOr(c.body());
+                dragPreview = SceneEdits.moveVertex(vm.scene(), c.id(), vertexDrag.index(), now.drawn(body, at));
             } else if (!moving.isEmpty()) {
-                dragPreview = SceneEdits.translate(vm.scene(), moving, d);
+                Scene moved = vm.scene();
+                for (String id : moving) {
+                    moved = SceneEdits.translate(moved, Set.of(id), now.drawnShift(SceneEdits.bodyOf(moved, id), d));
+                }
+                dragPreview = moved;
             }
         } catch (IllegalArgumentException ex) {
             dragPreview = null;

@@ -34,6 +34,17 @@ public final class Placement {
         return out;
     }
 
+    /** Where a point now at {@code now} on body {@code bodyId} was drawn: the inverse of {@link Pose#place}. */
+    public Vec2 drawn(String bodyId, Vec2 now) {
+        Pose p = poses.get(bodyId);
+        return p.pivot().plus(now.minus(p.pivot().plus(p.offset())).rotate(-p.angleRad()));
+    }
+
+    /** A displacement seen now, expressed in body {@code bodyId}'s drawn frame. */
+    public Vec2 drawnShift(String bodyId, Vec2 shiftNow) {
+        return shiftNow.rotate(-poses.get(bodyId).angleRad());
+    }
+
     /** A conductor's vertices where they are now; each vertex rides its own body when it names one. */
     public List<Vec2> vertices(Conductor c) {
         List<Vec2> out = new ArrayList<>(c.vertices().size());
