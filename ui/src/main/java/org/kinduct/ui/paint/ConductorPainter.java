@@ -69,7 +69,7 @@ final class ConductorPainter {
         s.strokePath();
     }
 
-    static void drawLenz(Surface s, ViewTransform v, Scene scene, Snapshot snap) {
+    static void drawLenz(Surface s, ViewTransform v, Scene scene, Snapshot snap, LabelPlacer placer) {
         double maxEmf = 0;
         double maxI = 0;
         for (ConductorState st : snap.conductors()) {
@@ -84,7 +84,7 @@ final class ConductorPainter {
             List<Vec2> pts = st.vertices();
             if (st.positiveEnd() != Terminal.NONE && maxEmf > 0) {
                 double r = 6 + 5 * Math.sqrt(Math.abs(st.emfV()) / maxEmf);
-                terminals(s, v, c, pts, st.positiveEnd() == Terminal.LAST, r);
+                terminals(s, v, c, pts, st.positiveEnd() == Terminal.LAST, r, placer);
             }
             if (c instanceof Conductor.Loop loop && !loop.open() && st.direction() != Circulation.NONE && maxI > 0) {
                 double width = 1.5 + 4.5 * Math.sqrt(Math.abs(st.currentA()) / maxI);
@@ -92,13 +92,14 @@ final class ConductorPainter {
                 Vec2 c0 = SourcePainter.centroid(pts);
                 Glyphs.fieldSymbol(s, v.screenX(c0.x()), v.screenY(c0.y()), 10, st.direction() == Circulation.CCW,
                         Palette.CURRENT);
+                placer.reserve(new LabelPlacer.Box(v.screenX(c0.x()) - 12, v.screenY(c0.y()) - 12, 24, 24));
             }
         }
     }
 
     /** + and − discs: at a wire's two ends, or either side of an open loop's gap. */
     private static void terminals(Surface s, ViewTransform v, Conductor c, List<Vec2> pts, boolean lastPositive,
-                                  double r) {
+                                  double r, LabelPlacer placer) {
         Vec2 lastEnd;
         Vec2 firstEnd;
         Vec2 lastDir;
@@ -118,11 +119,12 @@ final class ConductorPainter {
             lastDir = lastEnd.minus(pts.get(pts.size() - 2));
             firstDir = firstEnd.minus(pts.get(1));
         }
-        marker(s, v, lastEnd, lastDir, r, lastPositive);
-        marker(s, v, firstEnd, firstDir, r, !lastPositive);
+        marker(s, v, lastEnd, lastDir, r, lastPositive, placer);
+        marker(s, v, firstEnd, firstDir, r, !lastPositive, placer);
     }
 
-    private static void marker(Surface s, ViewTransform v, Vec2 at, Vec2 outward, double r, boolean positive) {
+    private static void marker(Surface s, ViewTransform v, Vec2 at, Vec2 outward, double r, boolean positive,
+                               LabelPlacer placer) {
         double dx = outward.x();
         double dy = -outward.y();
         double len = Math.hypot(dx, dy);
@@ -130,6 +132,7 @@ final class ConductorPainter {
         double x = v.screenX(at.x()) + (len > 0 ? dx / len * off : 0);
         double y = v.screenY(at.y()) + (len > 0 ? dy / len * off : 0);
         Glyphs.terminal(s, x, y, r, positive);
+        placer.reserve(new LabelPlacer.Box(x - r - 1, y - r - 1, 2 * r + 2, 2 * r + 2));
     }
 
     private static void currentArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward, double width) {
@@ -178,10 +181,6 @@ final class ConductorPainter {
             Vec2 anchor = anchor(c, pts);
             double ax = v.screenX(anchor.x());
             double ay = v.screenY(anchor.y());
-            if (c instanceof Conductor.Loop) {
-                Vec2 mid = SourcePainter.centroid(pts);
-                placer.reserve(new LabelPlacer.Box(v.screenX(mid.x()) - 12, v.screenY(mid.y()) - 12, 24, 24));
-            }
             String[] lines = calloutLines(c, st);
             double w = 0;
             for (String line : lines) {

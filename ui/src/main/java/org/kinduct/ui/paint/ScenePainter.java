@@ -51,7 +51,7 @@ public final class ScenePainter {
             ConductorPainter.drawConductors(s, v, f.scene(), placement, f.marks());
         }
         if (f.shows(Layer.LENZ) && f.snapshot() != null) {
-            ConductorPainter.drawLenz(s, v, f.scene(), f.snapshot());
+            ConductorPainter.drawLenz(s, v, f.scene(), f.snapshot(), placer);
         }
         List<Runnable> labels = new ArrayList<>();
         if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
