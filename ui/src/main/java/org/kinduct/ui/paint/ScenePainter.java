@@ -16,7 +16,7 @@ public final class ScenePainter {
     private static final double SYMBOL_SPACING_PX = 42;
     private static final double SYMBOL_MIN_FRACTION = 0.04;
     private static final int MAX_CONTOUR_LEVELS_PER_SIDE = 5;
-    private static final double CONTOUR_CELL_PX = 6;
+    private static final double CONTOUR_CELL_PX = 10;
 
     private ScenePainter() {
     }
