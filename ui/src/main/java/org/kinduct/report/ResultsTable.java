@@ -25,10 +25,11 @@ public final class ResultsTable {
         out.printf(Locale.ROOT, "Scene: %s%n", scene.name().isEmpty() ? "(unnamed)" : scene.name());
         out.printf(Locale.ROOT, "Time: %s to %s, %d samples%n%n", Units.format(t0, Dimension.TIME),
                 Units.format(t1, Dimension.TIME), series.size());
-        String fmt = "%-14s %-5s %12s %10s %12s  %-22s %12s  %s%n";
+        List<ConductorSummary> rows = ConductorSummary.of(series);
+        int idWidth = Math.max("conductor".length(), rows.stream().mapToInt(r -> r.id().length()).max().orElse(0));
+        String fmt = "%-" + idWidth + "s  %-5s %12s %10s %12s  %-26s %12s  %s%n";
         out.printf(Locale.ROOT, fmt, "conductor", "kind", "peak EMF", "at", "RMS EMF", "polarity at peak",
                 "peak current", "methods agree");
-        List<ConductorSummary> rows = ConductorSummary.of(series);
         for (ConductorSummary r : rows) {
             out.printf(Locale.ROOT, fmt, r.id(), r.kind() == ConductorState.Kind.LOOP ? "loop" : "wire",
                     Units.format(r.peakEmfV(), Dimension.VOLTAGE), Units.format(r.peakTimeS(), Dimension.TIME),
