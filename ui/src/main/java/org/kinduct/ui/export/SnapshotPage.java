@@ -6,6 +6,7 @@ import java.util.Locale;
 import org.kinduct.report.ResultsTable;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Circulation;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
@@ -38,7 +39,15 @@ final class SnapshotPage {
     private static final double COLUMN_GAP = 12;
     private static final double MIN_MAP_HEIGHT = 340;
     private static final double MAX_MAP_HEIGHT = 600;
-    private static final int MAX_DESCRIPTION_LINES = 3;
+    private static final int MAX_DESCRIPTION_LINES = 4;
+    /**
+     * Room a fitted scene leaves free in the map for the painter's overlays: its legend on the
+     * right, the time box and axis labels on top.
+     */
+    private static final double FIT_LEFT = 30;
+    private static final double FIT_RIGHT = 204;
+    private static final double FIT_TOP = 46;
+    private static final double FIT_BOTTOM = 30;
 
     private static final int PAPER = 0xFFFFFFFF;
     private static final int INK = 0xFF1E1E1E;
@@ -87,8 +96,14 @@ final class SnapshotPage {
         mapTop = MARGIN + TITLE + 8 + description.size() * LINE + LINE + 8;
         ViewChoice.Box box = ViewChoice.box(options.view(), scene, options.tS());
         double aspect = (box.y1() - box.y0()) / (box.x1() - box.x0());
-        mapHeight = Math.max(MIN_MAP_HEIGHT, Math.min(MAX_MAP_HEIGHT, Math.round(WIDTH * aspect)));
-        mapView = new ViewTransform(0, 0, 1, WIDTH, mapHeight).fitting(box.x0(), box.y0(), box.x1(), box.y1(), 0);
+        if (options.view() instanceof ViewChoice.Fit) {
+            double room = WIDTH - FIT_LEFT - FIT_RIGHT;
+            mapHeight = clampMapHeight(room * aspect + FIT_TOP + FIT_BOTTOM);
+            mapView = fitInto(box, FIT_LEFT, FIT_TOP, WIDTH - FIT_RIGHT, mapHeight - FIT_BOTTOM);
+        } else {
+            mapHeight = clampMapHeight(WIDTH * aspect);
+            mapView = new ViewTransform(0, 0, 1, WIDTH, mapHeight).fitting(box.x0(), box.y0(), box.x1(), box.y1(), 0);
+        }
         table = table(scene, snapshot, text);
         tableTop = mapTop + mapHeight + 12;
         boolean motionalOnly = false;
@@ -109,6 +124,18 @@ final class SnapshotPage {
             }
         }
         height = Math.ceil(tableTop + table.rows().size() * LINE + 10 + notes.size() * LINE + MARGIN);
+    }
+
+    private static double clampMapHeight(double h) {
+        return Math.max(MIN_MAP_HEIGHT, Math.min(MAX_MAP_HEIGHT, Math.round(h)));
+    }
+
+    /** A map view showing {@code box} as large as fits in the map region [left, right] × [top, bottom], centred. */
+    private ViewTransform fitInto(ViewChoice.Box box, double left, double top, double right, double bottom) {
+        double s = Math.min((right - left) / (box.x1() - box.x0()), (bottom - top) / (box.y1() - box.y0()));
+        double cx = (box.x0() + box.x1()) / 2 - ((left + right) / 2 - WIDTH / 2) / s;
+        double cy = (box.y0() + box.y1()) / 2 + ((top + bottom) / 2 - mapHeight / 2) / s;
+        return new ViewTransform(cx, cy, s, WIDTH, mapHeight);
     }
 
     static SnapshotPage layout(Scene scene, Snapshot snapshot, List<String> cautions, SnapshotOptions options) {
@@ -166,7 +193,7 @@ final class SnapshotPage {
         s.fill(INK);
         s.text("t = " + Quantities.time(options.tS()), MARGIN, y + LINE / 2, BODY, true, Surface.Anchor.LEFT);
         s.fill(MUTED);
-        s.text(viewText() + "  ·  " + options.date() + "  ·  Kinduct " + options.version(), WIDTH - MARGIN,
+        s.text(viewText() + " · " + options.date() + " · Kinduct " + options.version(), WIDTH - MARGIN,
                 y + LINE / 2, BODY, false, Surface.Anchor.RIGHT);
     }
 
@@ -209,7 +236,7 @@ final class SnapshotPage {
     private static Table table(Scene scene, Snapshot snap, double avail) {
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"conductor", "Φ per turn", "EMF", "methods agree", "I", "polarity / current",
-            "force |F| ∠ from +x"});
+            "force, direction"});
         boolean[] right = {false, true, true, false, true, false, false};
         for (ConductorState st : snap.conductors()) {
             Conductor c = scene.conductor(st.id()).orElseThrow();
@@ -261,9 +288,15 @@ final class SnapshotPage {
                     : st.positiveEnd() == Terminal.FIRST ? "+ at first end" + gap : "no EMF";
         }
         double f = Math.hypot(st.forceN().x(), st.forceN().y());
-        String force = closedLoop && f > 0 ? Quantities.force(f) + String.format(Locale.ROOT, " ∠ %.0f°",
-                Math.toDegrees(Math.atan2(st.forceN().y(), st.forceN().x()))) : "—";
+        String force = closedLoop && f > 0 ? Quantities.force(f) + " ∠ " + direction(st.forceN()) : "—";
         return new String[] {c.id(), flux, emf, agree, current, sense, force};
+    }
+
+    /** Direction of an in-plane vector as an angle from +x, counter-clockwise, in whole degrees (−179° … 180°). */
+    static String direction(Vec2 v) {
+        long deg = Math.round(Math.toDegrees(Math.atan2(v.y(), v.x())));
+        long d = deg == -180 ? 180 : deg;
+        return (d < 0 ? "−" + -d : Long.toString(d)) + "°";
     }
 
     /** Greedy word wrap to {@code width} units. */
