@@ -3,7 +3,6 @@ package org.kinduct.ui.export;
 import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.report.Cautions;
-import org.kinduct.report.ConductorSummary;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.solver.Snapshot;
@@ -16,19 +15,40 @@ final class CautionCheck {
 
     /**
      * {@link Cautions#MAGNETS} when a magnet's remanence reaches {@link Cautions#STRONG_MAGNET_T};
-     * {@link Cautions#VOLTAGE} when an EMF's peak exceeds the DC extra-low-voltage limit or its RMS
-     * over the series the AC one (both from IEC 61140, as {@link Cautions} cites).
+     * {@link Cautions#VOLTAGE} when a conductor's EMF exceeds the extra-low-voltage limits of
+     * IEC 61140 (as {@link Cautions} cites): for an EMF that keeps its sign, its peak against the
+     * ripple-free DC limit; for one that reverses (AC), its RMS over the series against the AC limit.
      */
     static List<String> lines(Scene scene, List<Snapshot> series) {
         List<String> out = new ArrayList<>();
         if (scene.sources().stream().anyMatch(CautionCheck::strongMagnet)) {
             out.add(Cautions.MAGNETS);
         }
-        if (ConductorSummary.of(series).stream().anyMatch(s -> Math.abs(s.peakEmfV()) > Cautions.ELV_DC_V
-                || s.rmsEmfV() > Cautions.ELV_AC_RMS_V)) {
+        if (!series.isEmpty() && overVoltage(series)) {
             out.add(Cautions.VOLTAGE);
         }
         return out;
+    }
+
+    private static boolean overVoltage(List<Snapshot> series) {
+        int conductors = series.get(0).conductors().size();
+        for (int c = 0; c < conductors; c++) {
+            double min = 0;
+            double max = 0;
+            double sumSq = 0;
+            for (Snapshot s : series) {
+                double emf = s.conductors().get(c).emfV();
+                min = Math.min(min, emf);
+                max = Math.max(max, emf);
+                sumSq += emf * emf;
+            }
+            boolean reverses = min < 0 && max > 0;
+            double rms = Math.sqrt(sumSq / series.size());
+            if (reverses ? rms > Cautions.ELV_AC_RMS_V : Math.max(max, -min) > Cautions.ELV_DC_V) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static boolean strongMagnet(Source s) {

@@ -34,9 +34,12 @@ final class SnapshotPage {
     static final double MARGIN = 16;
     static final double BODY = 12;
     private static final double TITLE = 17;
-    private static final double MIN_TABLE_FONT = 10.5;
+    /** Smallest table text: still 8 pt when the page is printed 16 cm wide. */
+    static final double MIN_TABLE_FONT = 10.6;
     private static final double LINE = 16;
-    private static final double COLUMN_GAP = 12;
+    private static final double COLUMN_GAP = 10;
+    /** Rounding room when a shrunk table is checked against the width it was shrunk to, units. */
+    private static final double FIT_SLACK = 0.5;
     private static final double MIN_MAP_HEIGHT = 340;
     private static final double MAX_MAP_HEIGHT = 600;
     private static final int MAX_DESCRIPTION_LINES = 4;
@@ -56,6 +59,8 @@ final class SnapshotPage {
     private static final int STRIPE = 0xFFF1F1EC;
     private static final int WARNING = 0xFFB00020;
 
+    /** A table cell for a quantity that does not apply to a conductor (wire flux, open-loop current). */
+    static final String NOT_APPLICABLE = "—";
     static final String SIGNS = "Signs: x right, y up; B_z > 0 out of the page (⊙), < 0 into it (⊗). EMF and"
             + " current are positive along each conductor's vertex order (loops: counter-clockwise); a wire's"
             + " EMF > 0 makes its last vertex the + end.";
@@ -232,33 +237,53 @@ final class SnapshotPage {
         }
     }
 
-    /** The results table at the snapshot time, fitted to {@code avail} units by shrinking its font if needed. */
+    /**
+     * The results table at the snapshot time. Columns that apply to no conductor are left out; a
+     * table still too wide for {@code avail} units gets a smaller font, then shortened ids.
+     */
     private static Table table(Scene scene, Snapshot snap, double avail) {
-        List<String[]> rows = new ArrayList<>();
-        rows.add(new String[] {"conductor", "Φ per turn", "EMF", "methods agree", "I", "polarity / current",
-            "force, direction"});
-        boolean[] right = {false, true, true, false, true, false, false};
+        String[] header = {"conductor", "Φ per turn", "EMF", "methods agree", "I", "polarity / sense",
+            "force, direction"};
+        boolean[] numeric = {false, true, true, false, true, false, false};
+        List<String[]> all = new ArrayList<>();
         for (ConductorState st : snap.conductors()) {
-            Conductor c = scene.conductor(st.id()).orElseThrow();
-            rows.add(row(c, st));
+            all.add(row(scene.conductor(st.id()).orElseThrow(), st));
         }
-        int n = right.length;
-        double[] width = new double[n];
-        double font = SnapshotPage.BODY;
-        for (int pass = 0; pass < 2; pass++) {
-            double total = 0;
-            for (int col = 0; col < n; col++) {
-                width[col] = 0;
-                for (int r = 0; r < rows.size(); r++) {
-                    width[col] = Math.max(width[col], TextMetrics.width(rows.get(r)[col], font, r == 0));
+        List<Integer> kept = new ArrayList<>();
+        for (int col = 0; col < header.length; col++) {
+            final int c = col;
+            if (col == 0 || all.stream().anyMatch(r -> !NOT_APPLICABLE.equals(r[c]))) {
+                kept.add(col);
+            }
+        }
+        int n = kept.size();
+        List<String[]> rows = new ArrayList<>();
+        for (int r = -1; r < all.size(); r++) {
+            String[] src = r < 0 ? header : all.get(r);
+            String[] cells = new String[n];
+            for (int i = 0; i < n; i++) {
+                cells[i] = src[kept.get(i)];
+            }
+            rows.add(cells);
+        }
+        boolean[] right = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            right[i] = numeric[kept.get(i)];
+        }
+        double gaps = COLUMN_GAP * (n - 1);
+        double font = BODY;
+        double[] width = widths(rows, font);
+        double total = sum(width) + gaps;
+        if (total > avail) {
+            font = Math.max(MIN_TABLE_FONT, font * (avail - gaps) / (total - gaps));
+            width = widths(rows, font);
+            double idRoom = avail - gaps - (sum(width) - width[0]);
+            if (width[0] > idRoom + FIT_SLACK) {
+                for (int r = 1; r < rows.size(); r++) {
+                    rows.get(r)[0] = ellipsize(rows.get(r)[0], font, idRoom);
                 }
-                total += width[col];
+                width[0] = idRoom;
             }
-            total += COLUMN_GAP * (n - 1);
-            if (total <= avail || pass == 1) {
-                break;
-            }
-            font = Math.max(MIN_TABLE_FONT, font * (avail - COLUMN_GAP * (n - 1)) / (total - COLUMN_GAP * (n - 1)));
         }
         double[] left = new double[n];
         double x = MARGIN;
@@ -269,15 +294,47 @@ final class SnapshotPage {
         return new Table(rows, left, width, right, font);
     }
 
+    /** Widest cell per column, header in bold. */
+    private static double[] widths(List<String[]> rows, double font) {
+        double[] w = new double[rows.get(0).length];
+        for (int r = 0; r < rows.size(); r++) {
+            for (int c = 0; c < w.length; c++) {
+                w[c] = Math.max(w[c], TextMetrics.width(rows.get(r)[c], font, r == 0));
+            }
+        }
+        return w;
+    }
+
+    private static double sum(double[] values) {
+        double s = 0;
+        for (double v : values) {
+            s += v;
+        }
+        return s;
+    }
+
+    /** {@code text}, cut and ended with "…" so that it fits {@code max} units. */
+    static String ellipsize(String text, double font, double max) {
+        if (TextMetrics.width(text, font, false) <= max) {
+            return text;
+        }
+        int end = text.length();
+        while (end > 1 && TextMetrics.width(text.substring(0, end) + "…", font, false) > max) {
+            end--;
+        }
+        return text.substring(0, end) + "…";
+    }
+
     private static String[] row(Conductor c, ConductorState st) {
         boolean closedLoop = c instanceof Conductor.Loop loop && !loop.open();
         boolean wire = st.kind() == ConductorState.Kind.WIRE;
-        String flux = wire ? "—" : Quantities.flux(st.fluxWb());
+        String flux = wire ? NOT_APPLICABLE : Quantities.flux(st.fluxWb());
         String emf = Quantities.voltage(st.emfV()) + (wire && !st.inducedFieldIncluded() ? " *" : "");
-        String agree = wire ? "n/a (wire)"
+        String agree = wire ? NOT_APPLICABLE
+                : st.disagreement() == 0 ? "yes"
                 : String.format(Locale.ROOT, st.disagreement() <= ResultsTable.AGREEMENT_FLAG ? "yes, %.0e"
                         : "CHECK, %.0e", st.disagreement());
-        String current = closedLoop ? Quantities.current(st.currentA()) : "—";
+        String current = closedLoop ? Quantities.current(st.currentA()) : NOT_APPLICABLE;
         String sense;
         if (closedLoop) {
             sense = st.direction() == Circulation.CCW ? "↺ counter-clockwise"
@@ -288,7 +345,7 @@ final class SnapshotPage {
                     : st.positiveEnd() == Terminal.FIRST ? "+ at first end" + gap : "no EMF";
         }
         double f = Math.hypot(st.forceN().x(), st.forceN().y());
-        String force = closedLoop && f > 0 ? Quantities.force(f) + " ∠ " + direction(st.forceN()) : "—";
+        String force = closedLoop && f > 0 ? Quantities.force(f) + " ∠ " + direction(st.forceN()) : NOT_APPLICABLE;
         return new String[] {c.id(), flux, emf, agree, current, sense, force};
     }
 

@@ -86,10 +86,12 @@ class PngExportTest {
     }
 
     @Test
-    void bodyTextIsAtLeastEightPointWhenPrintedSixteenCentimetresWide() {
-        double mmPerUnit = PRINT_WIDTH_MM / SnapshotPage.WIDTH;
-        assertTrue(SnapshotPage.BODY * mmPerUnit / MM_PER_POINT >= MIN_BODY_POINTS,
-                "body text " + SnapshotPage.BODY * mmPerUnit / MM_PER_POINT + " pt");
+    void bodyAndTableTextAreAtLeastEightPointWhenPrintedSixteenCentimetresWide() {
+        double pointsPerUnit = PRINT_WIDTH_MM / SnapshotPage.WIDTH / MM_PER_POINT;
+        assertTrue(SnapshotPage.BODY * pointsPerUnit >= MIN_BODY_POINTS,
+                "body text " + SnapshotPage.BODY * pointsPerUnit + " pt");
+        assertTrue(SnapshotPage.MIN_TABLE_FONT * pointsPerUnit >= MIN_BODY_POINTS,
+                "smallest table text " + SnapshotPage.MIN_TABLE_FONT * pointsPerUnit + " pt");
     }
 
     @Test
