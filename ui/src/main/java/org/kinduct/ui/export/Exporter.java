@@ -1,5 +1,6 @@
 package org.kinduct.ui.export;
 
+import java.awt.Color;
 import java.awt.Graphics2D;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
@@ -86,6 +87,9 @@ public final class Exporter {
                 BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
+            // The last pixel row may reach past the page's height: give it the paper colour too.
+            g.setColor(Color.WHITE);
+            g.fillRect(0, 0, img.getWidth(), img.getHeight());
             g.scale(k, k);
             p.draw(new Java2dSurface(g, SnapshotPage.WIDTH, p.height()), raster());
         } finally {

@@ -7,7 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayInputStream;
 import java.io.IOException;
-import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -100,14 +99,12 @@ class PngExportTest {
         BufferedImage actual = new Exporter(scene, ExportFixtures.options(0.08, 900, 96, new ViewChoice.Fit())).image();
         Files.createDirectories(Path.of("target"));
         ImageIO.write(actual, "png", Path.of("target", "golden-actual-rail-sled-80ms.png").toFile());
+        Path goldenFile = Path.of("src", "test", "resources", GOLDEN);
         if (Boolean.getBoolean("kinduct.golden.update")) {
-            ImageIO.write(actual, "png", Path.of("src", "test", "resources", GOLDEN).toFile());
+            ImageIO.write(actual, "png", goldenFile.toFile());
         }
-        BufferedImage golden;
-        try (InputStream in = PngExportTest.class.getResourceAsStream("/" + GOLDEN)) {
-            assertNotNull(in, GOLDEN + " missing; see this class's javadoc to create it");
-            golden = ImageIO.read(in);
-        }
+        assertTrue(Files.isReadable(goldenFile), goldenFile + " missing; see this class's javadoc to create it");
+        BufferedImage golden = ImageIO.read(goldenFile.toFile());
         assertEquals(golden.getWidth(), actual.getWidth(), "width");
         assertEquals(golden.getHeight(), actual.getHeight(), "height");
         double sum = 0;
