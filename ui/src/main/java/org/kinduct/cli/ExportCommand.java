@@ -21,9 +21,6 @@ import picocli.CommandLine.Option;
                 "The series CSV and the JSON cover the scene's own time window."})
 final class ExportCommand implements Callable<Integer> {
 
-    static final int DEFAULT_WIDTH_PX = 1800;
-    static final int DEFAULT_DPI = 300;
-
     @Mixin
     SceneInput input;
 
@@ -37,11 +34,11 @@ final class ExportCommand implements Callable<Integer> {
     Path svg;
 
     @Option(names = "--width", paramLabel = "PX", description = "Image width in pixels (default: ${DEFAULT-VALUE}).",
-            defaultValue = "" + DEFAULT_WIDTH_PX)
+            defaultValue = "" + SnapshotOptions.DEFAULT_WIDTH_PX)
     int widthPx;
 
     @Option(names = "--dpi", paramLabel = "N", description = "Resolution stored in the PNG (default: ${DEFAULT-VALUE}).",
-            defaultValue = "" + DEFAULT_DPI)
+            defaultValue = "" + SnapshotOptions.DEFAULT_DPI)
     int dpi;
 
     @Option(names = "--view", paramLabel = "fit|x0,y0,x1,y1",

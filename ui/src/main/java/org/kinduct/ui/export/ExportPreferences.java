@@ -43,8 +43,6 @@ public record ExportPreferences(Format format, int widthPx, int dpi, boolean who
         }
     }
 
-    public static final int DEFAULT_WIDTH_PX = 1800;
-    public static final int DEFAULT_DPI = 300;
     static final String FILE_NAME = "export.properties";
 
     public ExportPreferences {
@@ -54,7 +52,8 @@ public record ExportPreferences(Format format, int widthPx, int dpi, boolean who
     }
 
     public static ExportPreferences defaults() {
-        return new ExportPreferences(Format.PNG, DEFAULT_WIDTH_PX, DEFAULT_DPI, false, null);
+        return new ExportPreferences(Format.PNG, SnapshotOptions.DEFAULT_WIDTH_PX, SnapshotOptions.DEFAULT_DPI, false,
+                null);
     }
 
     /** The preferences stored in {@code home}, or the defaults for what is missing or unreadable. */

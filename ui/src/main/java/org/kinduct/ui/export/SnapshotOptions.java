@@ -19,6 +19,9 @@ import org.kinduct.ui.paint.Layer;
 public record SnapshotOptions(double tS, int widthPx, int dpi, ViewChoice view, Set<Layer> layers,
                               ColourRange range, LocalDate date, String version) {
 
+    /** Default width: 16 cm at about 280 dpi. */
+    public static final int DEFAULT_WIDTH_PX = 1800;
+    public static final int DEFAULT_DPI = 300;
     public static final int MIN_WIDTH_PX = 300;
     public static final int MAX_WIDTH_PX = 12_000;
     public static final int MIN_DPI = 30;
