@@ -3,10 +3,13 @@ package org.kinduct.ui.export;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
 import javafx.application.Platform;
+import javafx.embed.swing.SwingFXUtils;
+import javafx.scene.control.DialogPane;
+import javafx.scene.image.WritableImage;
+import javax.imageio.ImageIO;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.TextField;
 import javafx.stage.Stage;
@@ -44,7 +47,7 @@ class ExportDialogTest {
     }
 
     @Test
-    void dialogStartsFromTheRememberedChoices(FxRobot robot) throws IOException {
+    void dialogStartsFromTheRememberedChoices(FxRobot robot) throws Exception {
         new ExportPreferences(ExportPreferences.Format.SVG, 2222, 150, true, null).save(home);
 
         open();
@@ -52,6 +55,9 @@ class ExportDialogTest {
         assertEquals(ExportPreferences.Format.SVG, robot.lookup("#export-format").queryAs(ComboBox.class).getValue());
         assertEquals("2222", robot.lookup("#export-width").queryAs(TextField.class).getText());
         assertEquals("150", robot.lookup("#export-dpi").queryAs(TextField.class).getText());
+        DialogPane pane = robot.lookup("#export-dialog").queryAs(DialogPane.class);
+        WritableImage shot = WaitForAsyncUtils.asyncFx(() -> pane.snapshot(null, null)).get(10, TimeUnit.SECONDS);
+        ImageIO.write(SwingFXUtils.fromFXImage(shot, null), "png", Path.of("target", "export-dialog.png").toFile());
         robot.clickOn("Cancel");
     }
 
