@@ -1,0 +1,154 @@
+package org.kinduct.ui.app;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.function.UnaryOperator;
+import javafx.collections.SetChangeListener;
+import javafx.geometry.Insets;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.Control;
+import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.Separator;
+import javafx.scene.control.TextField;
+import javafx.scene.layout.VBox;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
+import org.kinduct.ui.edit.EditorViewModel;
+import org.kinduct.ui.edit.MotionSheet;
+import org.kinduct.ui.edit.Property;
+import org.kinduct.ui.edit.PropertySheet;
+
+/**
+ * Properties of the selection (or of the scene when nothing is selected) and the motion editor.
+ * Text fields accept values with units; a value that is not accepted stays in the field, marked,
+ * with the reason under it, and the scene is left as it was.
+ */
+final class PropertiesPanel extends ScrollPane {
+
+    private static final String INVALID_STYLE = "-fx-border-color: #b00020; -fx-border-width: 1.5;";
+
+    private final EditorViewModel vm;
+    private final VBox box = new VBox(4);
+
+    PropertiesPanel(EditorViewModel vm) {
+        this.vm = vm;
+        setId("properties");
+        setContent(box);
+        setFitToWidth(true);
+        setMinWidth(250);
+        box.setPadding(new Insets(8));
+        vm.selection().addListener((SetChangeListener<String>) c -> rebuild());
+        vm.sceneProperty().addListener(o -> rebuild());
+        rebuild();
+    }
+
+    private void rebuild() {
+        box.getChildren().clear();
+        Scene scene = vm.scene();
+        if (vm.selection().size() > 1) {
+            heading(vm.selection().size() + " objects selected");
+            note("Drag to move them together; Ctrl+D duplicates, Ctrl+R rotates, Delete removes.");
+            return;
+        }
+        String id = vm.selection().isEmpty() ? null : vm.selection().iterator().next();
+        heading(id == null ? "Scene" : describe(scene, id));
+        addAll(PropertySheet.of(scene, id));
+        if (id != null) {
+            box.getChildren().add(new Separator());
+            heading("Motion");
+            addAll(MotionSheet.of(scene, id));
+        } else {
+            note("Select an object to edit it; pick a tool above to draw one.");
+        }
+    }
+
+    private static String describe(Scene scene, String id) {
+        String kind = scene.source(id).map(s -> s instanceof Source.BlockMagnet ? "Block magnet"
+                : s instanceof Source.CylinderMagnet ? "Disc magnet"
+                : s instanceof Source.FieldPatch ? "Field patch"
+                : s instanceof Source.SourceCoil ? "Source coil" : "Uniform field")
+                .orElseGet(() -> scene.conductor(id).map(c -> c instanceof Conductor.Loop ? "Loop" : "Wire")
+                        .orElse("Object"));
+        return kind + " “" + id + "”";
+    }
+
+    private void heading(String text) {
+        Label l = new Label(text);
+        l.setStyle("-fx-font-weight: bold; -fx-font-size: 13px;");
+        l.setWrapText(true);
+        box.getChildren().add(l);
+    }
+
+    private void note(String text) {
+        Label l = new Label(text);
+        l.setWrapText(true);
+        l.setStyle("-fx-text-fill: #555555;");
+        box.getChildren().add(l);
+    }
+
+    private void addAll(List<Property> props) {
+        for (Property p : props) {
+            Label label = new Label(p.label());
+            Label error = new Label();
+            error.setId(idFor(p) + "-error");
+            error.setWrapText(true);
+            error.setStyle("-fx-text-fill: #b00020; -fx-font-size: 11px;");
+            error.setManaged(false);
+            error.setVisible(false);
+            Control control = p.isChoice() ? choice(p, error) : text(p, error);
+            control.setId(idFor(p));
+            control.setMaxWidth(Double.MAX_VALUE);
+            box.getChildren().addAll(label, control, error);
+        }
+    }
+
+    static String idFor(Property p) {
+        String slug = p.label().toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("(^-|-$)", "");
+        return "prop-" + slug;
+    }
+
+    private TextField text(Property p, Label error) {
+        TextField f = new TextField(p.text());
+        Runnable commit = () -> {
+            if (!f.getText().equals(p.text())) {
+                commit(p, f.getText(), f, error);
+            }
+        };
+        f.setOnAction(e -> commit.run());
+        f.focusedProperty().addListener((obs, was, focused) -> {
+            if (!focused) {
+                commit.run();
+            }
+        });
+        return f;
+    }
+
+    private ComboBox<String> choice(Property p, Label error) {
+        ComboBox<String> c = new ComboBox<>();
+        c.getItems().setAll(p.options());
+        c.setValue(p.text());
+        c.setOnAction(e -> {
+            if (c.getValue() != null && !c.getValue().equals(p.text())) {
+                commit(p, c.getValue(), c, error);
+            }
+        });
+        return c;
+    }
+
+    private void commit(Property p, String typed, Control control, Label error) {
+        UnaryOperator<Scene> edit;
+        try {
+            edit = p.check(vm.scene(), typed);
+        } catch (IllegalArgumentException e) {
+            control.setStyle(INVALID_STYLE);
+            error.setText(e.getMessage());
+            error.setManaged(true);
+            error.setVisible(true);
+            vm.say(p.label() + ": " + e.getMessage());
+            return;
+        }
+        vm.apply("Set " + p.label().toLowerCase(Locale.ROOT), edit);
+    }
+}

@@ -1,0 +1,85 @@
+package org.kinduct.ui.app;
+
+import java.util.function.Function;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableView;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.ui.edit.EditorViewModel;
+import org.kinduct.ui.paint.Quantities;
+
+/** One row per conductor: flux, both EMF methods and how well they agree, current, direction, force. */
+final class ReadoutTable extends TableView<ConductorState> {
+
+    /** Relative disagreement between the two EMF methods above which a row is flagged. */
+    static final double AGREEMENT_TOLERANCE = 1e-3;
+
+    private final ObservableList<ConductorState> rows = FXCollections.observableArrayList();
+
+    ReadoutTable(EditorViewModel vm) {
+        setItems(rows);
+        setId("readouts");
+        setPlaceholder(new javafx.scene.control.Label("No conductors: draw a wire or a loop"));
+        setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+        getColumns().add(column("Conductor", ConductorState::id));
+        getColumns().add(column("Flux linkage Φ·N", s -> Quantities.flux(s.linkageWb())));
+        getColumns().add(column("EMF −dΦ/dt", s -> Quantities.voltage(s.emfFluxV())));
+        getColumns().add(column("EMF ∮(v×B)·dl", s -> Quantities.voltage(s.emfMotionalV())));
+        getColumns().add(column("Agreement", ReadoutTable::agreement));
+        getColumns().add(column("Current", s -> Quantities.current(s.currentA())));
+        getColumns().add(column("Direction", ReadoutTable::direction));
+        getColumns().add(column("Force (x, y)", s -> Quantities.force(s.forceN().x()) + ", "
+                + Quantities.force(s.forceN().y())));
+        vm.snapshotProperty().addListener((obs, old, snap) -> show(snap));
+        show(vm.snapshotProperty().get());
+        getSelectionModel().selectedItemProperty().addListener((obs, old, row) -> {
+            if (row != null && !vm.selection().contains(row.id())) {
+                vm.select(java.util.Set.of(row.id()));
+            }
+        });
+    }
+
+    private void show(Snapshot snap) {
+        if (snap == null) {
+            rows.clear();
+            return;
+        }
+        if (rows.size() == snap.conductors().size()) {
+            for (int i = 0; i < rows.size(); i++) {
+                rows.set(i, snap.conductors().get(i));
+            }
+        } else {
+            rows.setAll(snap.conductors());
+        }
+    }
+
+    static String agreement(ConductorState s) {
+        if (s.kind() == ConductorState.Kind.WIRE) {
+            return "wire: motional only";
+        }
+        return s.disagreement() <= AGREEMENT_TOLERANCE ? "agree"
+                : String.format(java.util.Locale.ROOT, "DIFFER by %.2g", s.disagreement());
+    }
+
+    static String direction(ConductorState s) {
+        return switch (s.positiveEnd()) {
+            case LAST -> "+ at last vertex";
+            case FIRST -> "+ at first vertex";
+            case NONE -> switch (s.direction()) {
+                case CCW -> "↺ counter-clockwise";
+                case CW -> "↻ clockwise";
+                case NONE -> "none";
+            };
+        };
+    }
+
+    private static TableColumn<ConductorState, String> column(String title, Function<ConductorState, String> f) {
+        TableColumn<ConductorState, String> c = new TableColumn<>(title);
+        c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(f.apply(cd.getValue())));
+        c.setSortable(false);
+        return c;
+    }
+}

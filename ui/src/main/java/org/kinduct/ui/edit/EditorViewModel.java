@@ -1,0 +1,393 @@
+package org.kinduct.ui.edit;
+
+import java.nio.file.Path;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.Executor;
+import java.util.function.Function;
+import java.util.function.UnaryOperator;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.DoubleProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyBooleanWrapper;
+import javafx.beans.property.ReadOnlyLongProperty;
+import javafx.beans.property.ReadOnlyLongWrapper;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleDoubleProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableSet;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.TimeSpan;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.ui.field.FieldMapper;
+import org.kinduct.ui.field.MapRequest;
+import org.kinduct.ui.field.SceneEvaluator;
+import org.kinduct.ui.paint.ColourRange;
+import org.kinduct.ui.paint.FieldRaster;
+import org.kinduct.ui.paint.Layer;
+import org.kinduct.ui.view.ViewTransform;
+
+/**
+ * The editor's state and the only code that touches the scene and the solver: the current scene
+ * with undo history, the selection, the time, the solved snapshot, the field map and time series.
+ * Uses JavaFX observable properties but needs no running toolkit (tests drive it directly).
+ */
+public final class EditorViewModel {
+
+    /** Samples in a time plot. */
+    public static final int SERIES_SAMPLES = 241;
+    private static final int UNDO_LIMIT = 200;
+
+    /** How finely to sample the field map, screen pixels per sample. */
+    public enum MapQuality {
+        COARSE(8), MEDIUM(4), FINE(2);
+
+        final int stepPx;
+
+        MapQuality(int stepPx) {
+            this.stepPx = stepPx;
+        }
+    }
+
+    private final Function<Scene, SceneEvaluator> evaluators;
+    private final Executor work;
+    private final Executor ui;
+    private final UndoHistory history;
+    private final FieldMapper mapper;
+
+    private final ReadOnlyObjectWrapper<Scene> scene = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyLongWrapper revision = new ReadOnlyLongWrapper();
+    private final ReadOnlyObjectWrapper<Snapshot> snapshot = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyObjectWrapper<List<Snapshot>> series = new ReadOnlyObjectWrapper<>(List.of());
+    private final ReadOnlyObjectWrapper<FieldRaster> raster = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
+    private final ReadOnlyBooleanWrapper dirty = new ReadOnlyBooleanWrapper();
+    private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper();
+    private final ReadOnlyBooleanWrapper canRedo = new ReadOnlyBooleanWrapper();
+    private final DoubleProperty time = new SimpleDoubleProperty();
+    private final BooleanProperty playing = new SimpleBooleanProperty();
+    private final DoubleProperty speed = new SimpleDoubleProperty(1);
+    private final ObjectProperty<Path> file = new SimpleObjectProperty<>();
+    private final ObjectProperty<ViewTransform> view = new SimpleObjectProperty<>(ViewTransform.initial(800, 600));
+    private final ObjectProperty<ColourRange> range = new SimpleObjectProperty<>(ColourRange.automatic());
+    private final ObservableSet<Layer> layers = FXCollections.observableSet(EnumSet.complementOf(
+            EnumSet.of(Layer.SYMBOLS)));
+    private final ObservableSet<String> selection = FXCollections.observableSet();
+    private final ObjectProperty<ToolKind> tool = new SimpleObjectProperty<>(ToolKind.SELECT);
+    private final BooleanProperty snapToGrid = new SimpleBooleanProperty(true);
+    private final BooleanProperty snapAngles = new SimpleBooleanProperty(true);
+    private SceneEvaluator evaluator;
+    private long evaluatorRevision = -1;
+
+    public EditorViewModel(Scene initial, Function<Scene, SceneEvaluator> evaluators, Executor work, Executor ui) {
+        this.evaluators = evaluators;
+        this.work = work;
+        this.ui = ui;
+        this.history = new UndoHistory(initial, UNDO_LIMIT);
+        this.mapper = new FieldMapper(evaluators, work, ui, this::acceptRaster,
+                e -> status.set("Field map failed: " + e.getMessage()));
+        time.addListener((obs, old, t) -> solveNow());
+        show(initial);
+        time.set(initial.time().t0S());
+    }
+
+    // ---- editing ----
+
+    /** Applies an edit; an edit the model rejects leaves the scene as it was and says why. */
+    public boolean apply(String label, UnaryOperator<Scene> edit) {
+        Scene next;
+        try {
+            next = edit.apply(scene.get());
+        } catch (IllegalArgumentException | IllegalStateException e) {
+            status.set(label + " refused: " + e.getMessage());
+            return false;
+        }
+        if (next.equals(scene.get())) {
+            return false;
+        }
+        history.push(next, label);
+        show(next);
+        status.set(label);
+        return true;
+    }
+
+    public void undo() {
+        if (history.canUndo()) {
+            String label = history.undoLabel();
+            show(history.undo());
+            status.set("Undone: " + label);
+        }
+    }
+
+    public void redo() {
+        if (history.canRedo()) {
+            String label = history.redoLabel();
+            show(history.redo());
+            status.set("Redone: " + label);
+        }
+    }
+
+    /** Replaces the whole scene (opened file, new scene); history starts afresh. */
+    public void load(Scene newScene, Path from) {
+        load(newScene, from, false);
+    }
+
+    /** As {@link #load(Scene, Path)}; {@code unsaved} marks recovered work that still needs saving. */
+    public void load(Scene newScene, Path from, boolean unsaved) {
+        history.reset(newScene);
+        if (unsaved) {
+            history.markUnsaved();
+        }
+        file.set(from);
+        selection.clear();
+        playing.set(false);
+        show(newScene);
+        time.set(newScene.time().t0S());
+        solveNow();
+    }
+
+    public void markSaved(Path to) {
+        history.markSaved();
+        file.set(to);
+        updateFlags();
+    }
+
+    private void show(Scene s) {
+        selection.removeIf(id -> s.source(id).isEmpty() && s.conductor(id).isEmpty());
+        scene.set(s);
+        revision.set(revision.get() + 1);
+        updateFlags();
+        double t = clampTime(time.get());
+        if (t != time.get()) {
+            time.set(t);
+        }
+        solveNow();
+        requestSeries();
+        requestField(MapQuality.FINE);
+    }
+
+    private void updateFlags() {
+        dirty.set(history.isDirty());
+        canUndo.set(history.canUndo());
+        canRedo.set(history.canRedo());
+    }
+
+    // ---- time ----
+
+    /** Advances playback by {@code realSeconds} of wall-clock time times the speed, wrapping at the end. */
+    public void advance(double realSeconds) {
+        TimeSpan span = scene.get().time();
+        double t = time.get() + realSeconds * speed.get();
+        if (t > span.t1S()) {
+            t = span.t0S() + (t - span.t1S()) % (span.t1S() - span.t0S());
+        }
+        time.set(t);
+        requestField(MapQuality.MEDIUM);
+    }
+
+    /** Moves by {@code steps} of the scene's time step. */
+    public void step(int steps) {
+        time.set(clampTime(time.get() + steps * scene.get().time().dtS()));
+        requestField(MapQuality.FINE);
+    }
+
+    public void resetTime() {
+        playing.set(false);
+        time.set(scene.get().time().t0S());
+        requestField(MapQuality.FINE);
+    }
+
+    /** Sets the time, clamped to the scene's window. */
+    public void seek(double tS) {
+        time.set(clampTime(tS));
+        requestField(MapQuality.MEDIUM);
+    }
+
+    private double clampTime(double t) {
+        TimeSpan span = scene.get().time();
+        return Math.max(span.t0S(), Math.min(span.t1S(), t));
+    }
+
+    // ---- solving ----
+
+    private SceneEvaluator evaluator() {
+        if (evaluator == null || evaluatorRevision != revision.get()) {
+            evaluator = evaluators.apply(scene.get());
+            evaluatorRevision = revision.get();
+        }
+        return evaluator;
+    }
+
+    private void solveNow() {
+        if (scene.get() == null) {
+            return;
+        }
+        try {
+            snapshot.set(evaluator().at(time.get()));
+        } catch (RuntimeException e) {
+            snapshot.set(null);
+            status.set("Solver: " + describe(e));
+        }
+    }
+
+    private void requestSeries() {
+        Scene s = scene.get();
+        long rev = revision.get();
+        SceneEvaluator ev;
+        try {
+            ev = evaluator();
+        } catch (RuntimeException e) {
+            status.set("Solver: " + describe(e));
+            return;
+        }
+        TimeSpan span = s.time();
+        double dt = (span.t1S() - span.t0S()) / (SERIES_SAMPLES - 1);
+        work.execute(() -> {
+            try {
+                List<Snapshot> result = ev.series(span.t0S(), span.t1S(), dt);
+                ui.execute(() -> {
+                    if (revision.get() == rev) {
+                        series.set(result);
+                    }
+                });
+            } catch (RuntimeException e) {
+                ui.execute(() -> status.set("Time series: " + describe(e)));
+            }
+        });
+    }
+
+    /** Asks for a field map of the current view at the current time. */
+    public void requestField(MapQuality quality) {
+        ViewTransform v = view.get();
+        if (v.widthPx() < 1 || v.heightPx() < 1 || !layers.contains(Layer.HEAT_MAP)
+                && !layers.contains(Layer.CONTOURS) && !layers.contains(Layer.SYMBOLS)) {
+            return;
+        }
+        mapper.request(new MapRequest(scene.get(), revision.get(), time.get(), v, quality.stepPx));
+    }
+
+    /** Takes a finished map unless the scene changed since it was asked for. */
+    void acceptRaster(FieldRaster r) {
+        if (r.revision() == revision.get()) {
+            raster.set(r);
+        }
+    }
+
+    private static String describe(RuntimeException e) {
+        return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
+    }
+
+    /** Exact B_z at a scene point at the current time (for the cursor readout); NaN if the solver fails. */
+    public double bzAt(double x, double y) {
+        try {
+            return evaluator().fieldAt(time.get()).bz(x, y);
+        } catch (RuntimeException e) {
+            return Double.NaN;
+        }
+    }
+
+    // ---- status ----
+
+    public void say(String message) {
+        status.set(message);
+    }
+
+    // ---- properties ----
+
+    public ReadOnlyObjectProperty<Scene> sceneProperty() {
+        return scene.getReadOnlyProperty();
+    }
+
+    public Scene scene() {
+        return scene.get();
+    }
+
+    public ReadOnlyLongProperty revisionProperty() {
+        return revision.getReadOnlyProperty();
+    }
+
+    public ReadOnlyObjectProperty<Snapshot> snapshotProperty() {
+        return snapshot.getReadOnlyProperty();
+    }
+
+    public ReadOnlyObjectProperty<List<Snapshot>> seriesProperty() {
+        return series.getReadOnlyProperty();
+    }
+
+    public ReadOnlyObjectProperty<FieldRaster> rasterProperty() {
+        return raster.getReadOnlyProperty();
+    }
+
+    public ReadOnlyStringProperty statusProperty() {
+        return status.getReadOnlyProperty();
+    }
+
+    public ReadOnlyBooleanProperty dirtyProperty() {
+        return dirty.getReadOnlyProperty();
+    }
+
+    public ReadOnlyBooleanProperty canUndoProperty() {
+        return canUndo.getReadOnlyProperty();
+    }
+
+    public ReadOnlyBooleanProperty canRedoProperty() {
+        return canRedo.getReadOnlyProperty();
+    }
+
+    public DoubleProperty timeProperty() {
+        return time;
+    }
+
+    public BooleanProperty playingProperty() {
+        return playing;
+    }
+
+    public DoubleProperty speedProperty() {
+        return speed;
+    }
+
+    public ObjectProperty<Path> fileProperty() {
+        return file;
+    }
+
+    public ObjectProperty<ViewTransform> viewProperty() {
+        return view;
+    }
+
+    public ObjectProperty<ColourRange> rangeProperty() {
+        return range;
+    }
+
+    public ObservableSet<Layer> layers() {
+        return layers;
+    }
+
+    public ObjectProperty<ToolKind> toolProperty() {
+        return tool;
+    }
+
+    public BooleanProperty snapToGridProperty() {
+        return snapToGrid;
+    }
+
+    public BooleanProperty snapAnglesProperty() {
+        return snapAngles;
+    }
+
+    public ObservableSet<String> selection() {
+        return selection;
+    }
+
+    /** Selects exactly {@code ids}. */
+    public void select(Set<String> ids) {
+        selection.retainAll(ids);
+        selection.addAll(ids);
+    }
+}

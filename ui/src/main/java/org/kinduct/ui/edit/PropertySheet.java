@@ -1,0 +1,205 @@
+package org.kinduct.ui.edit;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.DoubleFunction;
+import java.util.function.UnaryOperator;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Material;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
+import org.kinduct.scene.TimeSpan;
+import org.kinduct.scene.Vec2;
+import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Units;
+
+/**
+ * The editable properties of one object (or of the scene when nothing is selected), with
+ * unit-aware text: "12 mm" and "0.5 G" are accepted wherever a length or a flux density is.
+ * Motion is edited separately by {@link MotionSheet}.
+ */
+public final class PropertySheet {
+
+    /** Significant digits shown for editing (more than for display, so values survive a round trip). */
+    static final int EDIT_DIGITS = 4;
+    static final List<String> SIDES = List.of("below the plane", "above the plane");
+    static final List<String> NORTH = List.of("north towards +z (⊙)", "north towards −z (⊗)");
+    static final List<String> MATERIALS = List.of("copper", "aluminium");
+    static final List<String> GAP = List.of("closed", "open (gap)");
+
+    private PropertySheet() {
+    }
+
+    public static List<Property> of(Scene scene, String id) {
+        if (id == null) {
+            return sceneProperties(scene);
+        }
+        return scene.source(id).map(PropertySheet::sourceProperties)
+                .or(() -> scene.conductor(id).map(PropertySheet::conductorProperties))
+                .orElse(List.of());
+    }
+
+    static Property quantity(String label, Dimension d, double si, DoubleFunction<UnaryOperator<Scene>> apply) {
+        return new Property(label, Units.format(si, d, EDIT_DIGITS), List.of(), text -> apply.apply(Units.parse(text, d)));
+    }
+
+    static Property whole(String label, int value, java.util.function.IntFunction<UnaryOperator<Scene>> apply) {
+        return new Property(label, Integer.toString(value), List.of(), text -> {
+            try {
+                return apply.apply(Integer.parseInt(text.strip()));
+            } catch (NumberFormatException e) {
+                throw new IllegalArgumentException("expected a whole number such as 10, got '" + text.strip() + "'");
+            }
+        });
+    }
+
+    static Property choice(String label, List<String> options, int current,
+                           java.util.function.IntFunction<UnaryOperator<Scene>> apply) {
+        return new Property(label, options.get(current), options, text -> {
+            int i = options.indexOf(text);
+            if (i < 0) {
+                throw new IllegalArgumentException("choose one of " + options);
+            }
+            return apply.apply(i);
+        });
+    }
+
+    private static List<Property> sceneProperties(Scene scene) {
+        TimeSpan t = scene.time();
+        return List.of(
+                new Property("Scene name", scene.name(), List.of(), text -> s -> s.withText(text.strip(), s.description())),
+                quantity("Start time", Dimension.TIME, t.t0S(),
+                        v -> s -> s.withTime(new TimeSpan(v, s.time().t1S(), s.time().dtS()))),
+                quantity("End time", Dimension.TIME, t.t1S(),
+                        v -> s -> s.withTime(new TimeSpan(s.time().t0S(), v, s.time().dtS()))),
+                quantity("Time step", Dimension.TIME, t.dtS(),
+                        v -> s -> s.withTime(new TimeSpan(s.time().t0S(), s.time().t1S(), v))));
+    }
+
+    private static UnaryOperator<Scene> replace(Source next) {
+        return s -> SceneEdits.replaceSource(s, next);
+    }
+
+    private static UnaryOperator<Scene> replace(Conductor next) {
+        return s -> SceneEdits.replaceConductor(s, next);
+    }
+
+    private static List<Property> sourceProperties(Source src) {
+        List<Property> p = new ArrayList<>();
+        if (src instanceof Source.FieldPatch f) {
+            p.add(quantity("B_z inside (+ out of screen)", Dimension.FLUX_DENSITY, f.bzT(),
+                    v -> replace(new Source.FieldPatch(f.id(), f.body(), f.outline(), v))));
+        } else if (src instanceof Source.UniformField u) {
+            p.add(quantity("B_z everywhere (+ out of screen)", Dimension.FLUX_DENSITY, u.bzT(),
+                    v -> replace(new Source.UniformField(u.id(), v))));
+        } else if (src instanceof Source.BlockMagnet m) {
+            blockProperties(m, p);
+        } else if (src instanceof Source.CylinderMagnet m) {
+            cylinderProperties(m, p);
+        } else if (src instanceof Source.SourceCoil c) {
+            coilProperties(c, p);
+        }
+        return p;
+    }
+
+    private static void blockProperties(Source.BlockMagnet m, List<Property> p) {
+        p.add(quantity("Centre x", Dimension.LENGTH, m.center().x(), v -> replace(block(m, new Vec2(v, m.center().y()),
+                m.sizeXM(), m.sizeYM(), m.heightM(), m.angleRad(), m.standoffM(), m.side(), m.remanenceT(),
+                m.magnetization()))));
+        p.add(quantity("Centre y", Dimension.LENGTH, m.center().y(), v -> replace(block(m, new Vec2(m.center().x(), v),
+                m.sizeXM(), m.sizeYM(), m.heightM(), m.angleRad(), m.standoffM(), m.side(), m.remanenceT(),
+                m.magnetization()))));
+        p.add(quantity("Size x", Dimension.LENGTH, m.sizeXM(), v -> replace(block(m, m.center(), v, m.sizeYM(),
+                m.heightM(), m.angleRad(), m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
+        p.add(quantity("Size y", Dimension.LENGTH, m.sizeYM(), v -> replace(block(m, m.center(), m.sizeXM(), v,
+                m.heightM(), m.angleRad(), m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
+        p.add(quantity("Height (z)", Dimension.LENGTH, m.heightM(), v -> replace(block(m, m.center(), m.sizeXM(),
+                m.sizeYM(), v, m.angleRad(), m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
+        p.add(quantity("Angle", Dimension.ANGLE, m.angleRad(), v -> replace(block(m, m.center(), m.sizeXM(),
+                m.sizeYM(), m.heightM(), v, m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
+        p.add(quantity("Gap to the plane", Dimension.LENGTH, m.standoffM(), v -> replace(block(m, m.center(),
+                m.sizeXM(), m.sizeYM(), m.heightM(), m.angleRad(), v, m.side(), m.remanenceT(), m.magnetization()))));
+        p.add(choice("Side", SIDES, m.side().ordinal(), i -> replace(block(m, m.center(), m.sizeXM(), m.sizeYM(),
+                m.heightM(), m.angleRad(), m.standoffM(), Source.Side.values()[i], m.remanenceT(), m.magnetization()))));
+        p.add(quantity("Remanence", Dimension.FLUX_DENSITY, m.remanenceT(), v -> replace(block(m, m.center(),
+                m.sizeXM(), m.sizeYM(), m.heightM(), m.angleRad(), m.standoffM(), m.side(), v, m.magnetization()))));
+        p.add(choice("Poles", NORTH, m.magnetization().ordinal(), i -> replace(block(m, m.center(), m.sizeXM(),
+                m.sizeYM(), m.heightM(), m.angleRad(), m.standoffM(), m.side(), m.remanenceT(),
+                Source.Magnetization.values()[i]))));
+    }
+
+    private static Source.BlockMagnet block(Source.BlockMagnet m, Vec2 c, double sx, double sy, double h, double a,
+                                            double gap, Source.Side side, double br, Source.Magnetization north) {
+        return new Source.BlockMagnet(m.id(), m.body(), c, sx, sy, h, a, gap, side, br, north);
+    }
+
+    private static void cylinderProperties(Source.CylinderMagnet m, List<Property> p) {
+        p.add(quantity("Centre x", Dimension.LENGTH, m.center().x(), v -> replace(disc(m, new Vec2(v, m.center().y()),
+                m.radiusM(), m.heightM(), m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
+        p.add(quantity("Centre y", Dimension.LENGTH, m.center().y(), v -> replace(disc(m, new Vec2(m.center().x(), v),
+                m.radiusM(), m.heightM(), m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
+        p.add(quantity("Radius", Dimension.LENGTH, m.radiusM(), v -> replace(disc(m, m.center(), v, m.heightM(),
+                m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
+        p.add(quantity("Height (z)", Dimension.LENGTH, m.heightM(), v -> replace(disc(m, m.center(), m.radiusM(), v,
+                m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
+        p.add(quantity("Gap to the plane", Dimension.LENGTH, m.standoffM(), v -> replace(disc(m, m.center(),
+                m.radiusM(), m.heightM(), v, m.side(), m.remanenceT(), m.magnetization()))));
+        p.add(choice("Side", SIDES, m.side().ordinal(), i -> replace(disc(m, m.center(), m.radiusM(), m.heightM(),
+                m.standoffM(), Source.Side.values()[i], m.remanenceT(), m.magnetization()))));
+        p.add(quantity("Remanence", Dimension.FLUX_DENSITY, m.remanenceT(), v -> replace(disc(m, m.center(),
+                m.radiusM(), m.heightM(), m.standoffM(), m.side(), v, m.magnetization()))));
+        p.add(choice("Poles", NORTH, m.magnetization().ordinal(), i -> replace(disc(m, m.center(), m.radiusM(),
+                m.heightM(), m.standoffM(), m.side(), m.remanenceT(), Source.Magnetization.values()[i]))));
+    }
+
+    private static Source.CylinderMagnet disc(Source.CylinderMagnet m, Vec2 c, double r, double h, double gap,
+                                              Source.Side side, double br, Source.Magnetization north) {
+        return new Source.CylinderMagnet(m.id(), m.body(), c, r, h, gap, side, br, north);
+    }
+
+    private static void coilProperties(Source.SourceCoil c, List<Property> p) {
+        Source.Drive d = c.drive();
+        p.add(whole("Turns", c.turns(), n -> replace(new Source.SourceCoil(c.id(), c.body(), c.shape(), n,
+                c.planeZM(), d))));
+        p.add(quantity("Plane z (− below)", Dimension.LENGTH, c.planeZM(), v -> replace(new Source.SourceCoil(c.id(),
+                c.body(), c.shape(), c.turns(), v, d))));
+        if (c.shape() instanceof Source.CoilShape.Circle circle) {
+            p.add(quantity("Radius", Dimension.LENGTH, circle.radiusM(), v -> replace(new Source.SourceCoil(c.id(),
+                    c.body(), new Source.CoilShape.Circle(circle.center(), v), c.turns(), c.planeZM(), d))));
+        }
+        p.add(quantity("DC current", Dimension.CURRENT, d.dcA(), v -> replace(coil(c, new Source.Drive(v,
+                d.amplitudeA(), d.frequencyHz(), d.phaseRad())))));
+        p.add(quantity("AC amplitude", Dimension.CURRENT, d.amplitudeA(), v -> replace(coil(c, new Source.Drive(d.dcA(),
+                v, d.frequencyHz(), d.phaseRad())))));
+        p.add(quantity("AC frequency", Dimension.FREQUENCY, d.frequencyHz(), v -> replace(coil(c,
+                new Source.Drive(d.dcA(), d.amplitudeA(), v, d.phaseRad())))));
+        p.add(quantity("AC phase", Dimension.ANGLE, d.phaseRad(), v -> replace(coil(c, new Source.Drive(d.dcA(),
+                d.amplitudeA(), d.frequencyHz(), v)))));
+    }
+
+    private static Source.SourceCoil coil(Source.SourceCoil c, Source.Drive drive) {
+        return new Source.SourceCoil(c.id(), c.body(), c.shape(), c.turns(), c.planeZM(), drive);
+    }
+
+    private static List<Property> conductorProperties(Conductor c) {
+        if (!(c instanceof Conductor.Loop l)) {
+            return List.of();
+        }
+        List<Property> p = new ArrayList<>();
+        p.add(whole("Turns", l.turns(), n -> replace(new Conductor.Loop(l.id(), l.body(), l.vertices(), n, l.wire(),
+                l.open(), l.loadOhm(), l.temperatureC()))));
+        p.add(quantity("Wire diameter", Dimension.LENGTH, l.wire().diameterM(), v -> replace(new Conductor.Loop(l.id(),
+                l.body(), l.vertices(), l.turns(), org.kinduct.scene.WireSpec.of(l.wire().material(), v), l.open(),
+                l.loadOhm(), l.temperatureC()))));
+        p.add(choice("Material", MATERIALS, l.wire().material().ordinal(), i -> replace(new Conductor.Loop(l.id(),
+                l.body(), l.vertices(), l.turns(), org.kinduct.scene.WireSpec.of(Material.values()[i],
+                l.wire().diameterM()), l.open(), l.loadOhm(), l.temperatureC()))));
+        p.add(choice("Circuit", GAP, l.open() ? 1 : 0, i -> replace(new Conductor.Loop(l.id(), l.body(), l.vertices(),
+                l.turns(), l.wire(), i == 1, l.loadOhm(), l.temperatureC()))));
+        p.add(quantity("Load resistor", Dimension.RESISTANCE, l.loadOhm(), v -> replace(new Conductor.Loop(l.id(),
+                l.body(), l.vertices(), l.turns(), l.wire(), l.open(), v, l.temperatureC()))));
+        p.add(quantity("Temperature", Dimension.TEMPERATURE, l.temperatureC(), v -> replace(new Conductor.Loop(l.id(),
+                l.body(), l.vertices(), l.turns(), l.wire(), l.open(), l.loadOhm(), v))));
+        return p;
+    }
+}

@@ -1,0 +1,59 @@
+package org.kinduct.ui.edit;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
+import org.kinduct.scene.Vec2;
+import org.kinduct.ui.paint.Placement;
+import org.kinduct.ui.paint.SourcePainter;
+
+/** The box around everything drawn in a scene at one instant, for zoom-to-fit. */
+public record SceneBounds(double minX, double minY, double maxX, double maxY) {
+
+    /** Bounds of all outlines at {@code tS}; a 0.2 m box around the origin for an empty scene. */
+    public static SceneBounds of(Scene scene, double tS) {
+        Placement placement = Placement.of(scene, tS);
+        List<Vec2> pts = new ArrayList<>();
+        for (Source s : scene.sources()) {
+            pts.addAll(SourcePainter.outline(s, placement));
+        }
+        for (Conductor c : scene.conductors()) {
+            pts.addAll(placement.vertices(c));
+        }
+        if (pts.isEmpty()) {
+            return new SceneBounds(-0.1, -0.1, 0.1, 0.1);
+        }
+        double x0 = Double.POSITIVE_INFINITY;
+        double y0 = Double.POSITIVE_INFINITY;
+        double x1 = Double.NEGATIVE_INFINITY;
+        double y1 = Double.NEGATIVE_INFINITY;
+        for (Vec2 p : pts) {
+            x0 = Math.min(x0, p.x());
+            y0 = Math.min(y0, p.y());
+            x1 = Math.max(x1, p.x());
+            y1 = Math.max(y1, p.y());
+        }
+        return new SceneBounds(x0, y0, x1, y1);
+    }
+
+    /** Bounds of the objects {@code ids} alone at {@code tS}. */
+    public static SceneBounds ofObjects(Scene scene, java.util.Set<String> ids, double tS) {
+        java.util.Set<String> others = new java.util.HashSet<>();
+        scene.sources().forEach(s -> others.add(s.id()));
+        scene.conductors().forEach(c -> others.add(c.id()));
+        others.removeAll(ids);
+        return of(SceneEdits.delete(scene, others), tS);
+    }
+
+    public Vec2 center() {
+        return new Vec2((minX + maxX) / 2, (minY + maxY) / 2);
+    }
+
+    /** This box grown to include {@code o}. */
+    public SceneBounds union(SceneBounds o) {
+        return new SceneBounds(Math.min(minX, o.minX), Math.min(minY, o.minY), Math.max(maxX, o.maxX),
+                Math.max(maxY, o.maxY));
+    }
+}

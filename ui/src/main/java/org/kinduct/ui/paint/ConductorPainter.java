@@ -1,0 +1,271 @@
+package org.kinduct.ui.paint;
+
+import java.util.List;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Circulation;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.Terminal;
+import org.kinduct.ui.view.ViewTransform;
+
+/**
+ * Conductors and what the solver says about them, drawn per Lenz's law: + and − discs at a
+ * wire's ends or an open loop's gap (size grows with |EMF|), arrows along closed loops in the
+ * current's direction (width grows with |I|), and the induced current's own field (⊙ or ⊗)
+ * inside each closed loop.
+ */
+final class ConductorPainter {
+
+    /** Fraction of the closing edge left open to show an open loop's gap. */
+    private static final double GAP_START = 0.38;
+    private static final double GAP_END = 0.62;
+    private static final double MIN_ARROW_EDGE_PX = 30;
+
+    private ConductorPainter() {
+    }
+
+    static void drawConductors(Surface s, ViewTransform v, Scene scene, Placement placement, EditorMarks marks) {
+        for (Conductor c : scene.conductors()) {
+            List<Vec2> pts = placement.vertices(c);
+            boolean selected = marks.selected().contains(c.id());
+            for (int pass = 0; pass < 2; pass++) {
+                s.stroke(pass == 0 ? (selected ? Palette.withAlpha(Palette.SELECTION, 0.55) : Palette.HALO)
+                        : Palette.INK);
+                s.lineWidth(pass == 0 ? (selected ? 9 : 5.5) : 2.5);
+                s.dash();
+                outline(s, v, c, pts);
+            }
+            if (selected) {
+                for (Vec2 p : pts) {
+                    double x = v.screenX(p.x());
+                    double y = v.screenY(p.y());
+                    s.fill(0xFFFFFFFF);
+                    s.fillRect(x - 4, y - 4, 8, 8);
+                    s.stroke(Palette.SELECTION);
+                    s.lineWidth(1.5);
+                    s.strokeRect(x - 4, y - 4, 8, 8);
+                }
+            }
+        }
+    }
+
+    private static void outline(Surface s, ViewTransform v, Conductor c, List<Vec2> pts) {
+        boolean loop = c instanceof Conductor.Loop;
+        SourcePainter.polygon(s, v, pts, loop && !((Conductor.Loop) c).open());
+        if (loop && ((Conductor.Loop) c).open()) {
+            Vec2 last = pts.get(pts.size() - 1);
+            Vec2 first = pts.get(0);
+            Vec2 g1 = lerp(last, first, GAP_START);
+            Vec2 g2 = lerp(last, first, GAP_END);
+            s.moveTo(v.screenX(last.x()), v.screenY(last.y()));
+            s.lineTo(v.screenX(g1.x()), v.screenY(g1.y()));
+            s.moveTo(v.screenX(g2.x()), v.screenY(g2.y()));
+            s.lineTo(v.screenX(first.x()), v.screenY(first.y()));
+        }
+        s.strokePath();
+    }
+
+    static void drawLenz(Surface s, ViewTransform v, Scene scene, Placement placement, Snapshot snap) {
+        double maxEmf = 0;
+        double maxI = 0;
+        for (ConductorState st : snap.conductors()) {
+            maxEmf = Math.max(maxEmf, Math.abs(st.emfV()));
+            maxI = Math.max(maxI, Math.abs(st.currentA()));
+        }
+        for (Conductor c : scene.conductors()) {
+            ConductorState st = snap.conductor(c.id()).orElse(null);
+            if (st == null) {
+                continue;
+            }
+            List<Vec2> pts = placement.vertices(c);
+            if (st.positiveEnd() != Terminal.NONE && maxEmf > 0) {
+                double r = 6 + 5 * Math.sqrt(Math.abs(st.emfV()) / maxEmf);
+                terminals(s, v, c, pts, st.positiveEnd() == Terminal.LAST, r);
+            }
+            if (c instanceof Conductor.Loop loop && !loop.open() && st.direction() != Circulation.NONE && maxI > 0) {
+                double width = 1.5 + 4.5 * Math.sqrt(Math.abs(st.currentA()) / maxI);
+                currentArrows(s, v, pts, st.currentA() > 0, width);
+                Vec2 c0 = SourcePainter.centroid(pts);
+                Glyphs.fieldSymbol(s, v.screenX(c0.x()), v.screenY(c0.y()), 10, st.direction() == Circulation.CCW,
+                        Palette.CURRENT);
+            }
+        }
+    }
+
+    /** + and − discs: at a wire's two ends, or either side of an open loop's gap. */
+    private static void terminals(Surface s, ViewTransform v, Conductor c, List<Vec2> pts, boolean lastPositive,
+                                  double r) {
+        Vec2 lastEnd;
+        Vec2 firstEnd;
+        Vec2 lastDir;
+        Vec2 firstDir;
+        if (c instanceof Conductor.Loop) {
+            Vec2 last = pts.get(pts.size() - 1);
+            Vec2 first = pts.get(0);
+            lastEnd = lerp(last, first, GAP_START);
+            firstEnd = lerp(last, first, GAP_END);
+            Vec2 across = first.minus(last);
+            Vec2 side = across.perp();
+            lastDir = side;
+            firstDir = side;
+        } else {
+            lastEnd = pts.get(pts.size() - 1);
+            firstEnd = pts.get(0);
+            lastDir = lastEnd.minus(pts.get(pts.size() - 2));
+            firstDir = firstEnd.minus(pts.get(1));
+        }
+        marker(s, v, lastEnd, lastDir, r, lastPositive);
+        marker(s, v, firstEnd, firstDir, r, !lastPositive);
+    }
+
+    private static void marker(Surface s, ViewTransform v, Vec2 at, Vec2 outward, double r, boolean positive) {
+        double dx = outward.x();
+        double dy = -outward.y();
+        double len = Math.hypot(dx, dy);
+        double off = r + 5;
+        double x = v.screenX(at.x()) + (len > 0 ? dx / len * off : 0);
+        double y = v.screenY(at.y()) + (len > 0 ? dy / len * off : 0);
+        Glyphs.terminal(s, x, y, r, positive);
+    }
+
+    private static void currentArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward, double width) {
+        int n = pts.size();
+        s.stroke(Palette.CURRENT);
+        s.fill(Palette.CURRENT);
+        s.lineWidth(width);
+        s.dash();
+        for (int i = 0; i < n; i++) {
+            Vec2 a = pts.get(forward ? i : (i + 1) % n);
+            Vec2 b = pts.get(forward ? (i + 1) % n : i);
+            double ax = v.screenX(a.x());
+            double ay = v.screenY(a.y());
+            double bx = v.screenX(b.x());
+            double by = v.screenY(b.y());
+            double len = Math.hypot(bx - ax, by - ay);
+            if (len < MIN_ARROW_EDGE_PX) {
+                continue;
+            }
+            double dx = (bx - ax) / len;
+            double dy = (by - ay) / len;
+            double head = 9 + 2 * width;
+            double half = Math.min(len * 0.25, 40);
+            double mx = (ax + bx) / 2;
+            double my = (ay + by) / 2;
+            s.beginPath();
+            s.moveTo(mx - dx * half, my - dy * half);
+            s.lineTo(mx + dx * (half - head * 0.6), my + dy * (half - head * 0.6));
+            s.strokePath();
+            Glyphs.arrowHead(s, mx + dx * half, my + dy * half, dx, dy, head);
+        }
+    }
+
+    static void placeCallouts(Surface s, ViewTransform v, Scene scene, Placement placement, Snapshot snap,
+                              LabelPlacer placer, List<Runnable> labels) {
+        double lineH = ScenePainter.FONT + 3;
+        for (Conductor c : scene.conductors()) {
+            ConductorState st = snap.conductor(c.id()).orElse(null);
+            if (st == null) {
+                continue;
+            }
+            List<Vec2> pts = placement.vertices(c);
+            Vec2 anchor = anchor(c, pts);
+            double ax = v.screenX(anchor.x());
+            double ay = v.screenY(anchor.y());
+            if (c instanceof Conductor.Loop) {
+                placer.reserve(new LabelPlacer.Box(ax - 10, ay - 10, 20, 20));
+            }
+            String[] lines = calloutLines(c, st);
+            double w = 0;
+            for (String line : lines) {
+                w = Math.max(w, s.textWidth(line, ScenePainter.FONT, false));
+            }
+            w += 12;
+            double h = lines.length * lineH + 6;
+            LabelPlacer.Box b = placer.place(ax, ay, w, h);
+            labels.add(() -> {
+                double lx = Math.max(b.x(), Math.min(b.x() + b.w(), ax));
+                double ly = Math.max(b.y(), Math.min(b.y() + b.h(), ay));
+                s.stroke(Palette.LABEL_EDGE);
+                s.lineWidth(1);
+                s.dash();
+                s.beginPath();
+                s.moveTo(lx, ly);
+                s.lineTo(ax, ay);
+                s.strokePath();
+                s.fill(Palette.LABEL_BOX);
+                s.fillRect(b.x(), b.y(), b.w(), b.h());
+                s.stroke(Palette.LABEL_EDGE);
+                s.strokeRect(b.x(), b.y(), b.w(), b.h());
+                for (int i = 0; i < lines.length; i++) {
+                    s.fill(i == 0 ? Palette.INK : Palette.MUTED);
+                    s.text(lines[i], b.x() + 6, b.y() + 3 + (i + 0.5) * lineH, ScenePainter.FONT, i == 0,
+                            Surface.Anchor.LEFT);
+                }
+            });
+        }
+    }
+
+    private static Vec2 anchor(Conductor c, List<Vec2> pts) {
+        if (c instanceof Conductor.Loop) {
+            return SourcePainter.centroid(pts);
+        }
+        int mid = (pts.size() - 1) / 2;
+        return lerp(pts.get(mid), pts.get(mid + 1), 0.5);
+    }
+
+    static String[] calloutLines(Conductor c, ConductorState st) {
+        String emf = "ε " + Quantities.voltage(Math.abs(st.emfV()));
+        if (c instanceof Conductor.Loop loop) {
+            if (loop.open()) {
+                return new String[] {c.id(), emf + " across gap", "Φ " + Quantities.flux(st.linkageWb())};
+            }
+            String sense = st.direction() == Circulation.CCW ? " ↺" : st.direction() == Circulation.CW ? " ↻" : "";
+            return new String[] {c.id(), emf, "I " + Quantities.current(Math.abs(st.currentA())) + sense};
+        }
+        String end = st.positiveEnd() == Terminal.LAST ? "+ at last end"
+                : st.positiveEnd() == Terminal.FIRST ? "+ at first end" : "no polarity";
+        return new String[] {c.id(), emf, end};
+    }
+
+    static void drawMarks(Surface s, ViewTransform v, EditorMarks marks) {
+        List<Vec2> pts = marks.preview();
+        if (!pts.isEmpty()) {
+            SourcePainter.polygon(s, v, pts, marks.previewClosed());
+            s.stroke(Palette.PREVIEW);
+            s.lineWidth(2);
+            s.dash(7, 4);
+            s.strokePath();
+            s.dash();
+            s.fill(Palette.PREVIEW);
+            for (Vec2 p : pts) {
+                s.fillOval(v.screenX(p.x()), v.screenY(p.y()), 3.5);
+            }
+        }
+        if (marks.snap() != null) {
+            double x = v.screenX(marks.snap().x());
+            double y = v.screenY(marks.snap().y());
+            s.stroke(Palette.PREVIEW);
+            s.lineWidth(1.5);
+            s.strokeOval(x, y, 6);
+            s.beginPath();
+            s.moveTo(x - 10, y);
+            s.lineTo(x + 10, y);
+            s.moveTo(x, y - 10);
+            s.lineTo(x, y + 10);
+            s.strokePath();
+            if (!marks.hint().isEmpty()) {
+                double w = s.textWidth(marks.hint(), ScenePainter.FONT, false) + 10;
+                s.fill(Palette.LABEL_BOX);
+                s.fillRect(x + 12, y + 10, w, 18);
+                s.fill(Palette.PREVIEW);
+                s.text(marks.hint(), x + 17, y + 19, ScenePainter.FONT, false, Surface.Anchor.LEFT);
+            }
+        }
+    }
+
+    private static Vec2 lerp(Vec2 a, Vec2 b, double t) {
+        return a.plus(b.minus(a).times(t));
+    }
+}

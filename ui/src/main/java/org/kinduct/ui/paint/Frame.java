@@ -1,0 +1,28 @@
+package org.kinduct.ui.paint;
+
+import java.util.EnumSet;
+import java.util.Set;
+import org.kinduct.scene.Scene;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.ui.view.ViewTransform;
+
+/**
+ * Everything one picture shows.
+ *
+ * @param snapshot solved values at {@code tS}, or null when there are none (solver error)
+ * @param raster field map, or null while none has been computed
+ * @param note small text for the top-right corner (frame time), or empty
+ */
+public record Frame(Scene scene, double tS, Snapshot snapshot, FieldRaster raster, ViewTransform view,
+                    Set<Layer> layers, ColourRange range, EditorMarks marks, String note) {
+
+    public Frame {
+        layers = layers.isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(layers);
+        marks = marks == null ? EditorMarks.none() : marks;
+        note = note == null ? "" : note;
+    }
+
+    public boolean shows(Layer layer) {
+        return layers.contains(layer);
+    }
+}

@@ -1,0 +1,44 @@
+package org.kinduct.ui.paint;
+
+import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Units;
+
+/** Short, unit-carrying text for the values the painter and the panels show ({@link Units} formatting). */
+public final class Quantities {
+
+    private Quantities() {
+    }
+
+    public static String length(double m) {
+        return show(m, Dimension.LENGTH);
+    }
+
+    public static String bz(double t) {
+        return show(t, Dimension.FLUX_DENSITY);
+    }
+
+    public static String voltage(double v) {
+        return show(v, Dimension.VOLTAGE);
+    }
+
+    public static String current(double a) {
+        return show(a, Dimension.CURRENT);
+    }
+
+    public static String flux(double wb) {
+        return show(wb, Dimension.FLUX);
+    }
+
+    public static String force(double n) {
+        return show(n, Dimension.FORCE);
+    }
+
+    public static String time(double s) {
+        return show(s, Dimension.TIME);
+    }
+
+    /** "—" for a value that does not apply (NaN), else the formatted value. */
+    private static String show(double v, Dimension d) {
+        return Double.isNaN(v) ? "—" : Units.format(v, d);
+    }
+}

@@ -1,0 +1,283 @@
+package org.kinduct.ui.paint;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.kinduct.ui.view.NiceSteps;
+import org.kinduct.ui.view.ViewTransform;
+
+/**
+ * Draws a whole {@link Frame} on a {@link Surface}: field colours, grid, contours, symbols,
+ * sources, conductors, polarity and current overlays, value labels, legend and scale bar.
+ * Stateless; the live view and every export call the same {@link #draw}.
+ */
+public final class ScenePainter {
+
+    static final double FONT = 12;
+    private static final double SYMBOL_SPACING_PX = 42;
+    private static final double SYMBOL_MIN_FRACTION = 0.04;
+    private static final int MAX_CONTOUR_LEVELS_PER_SIDE = 5;
+
+    private ScenePainter() {
+    }
+
+    public static void draw(Surface s, Frame f) {
+        ViewTransform v = f.view();
+        s.save();
+        s.clipRect(0, 0, s.width(), s.height());
+        s.fill(Palette.BACKGROUND);
+        s.fillRect(0, 0, s.width(), s.height());
+        double limit = f.range().limitFor(f.raster());
+        if (f.shows(Layer.HEAT_MAP) && f.raster() != null) {
+            heatMap(s, v, f.raster(), limit);
+        }
+        if (f.shows(Layer.GRID)) {
+            grid(s, v);
+        }
+        LabelPlacer placer = new LabelPlacer(s.width(), s.height());
+        LabelPlacer.Box legendBox = f.shows(Layer.LEGEND) ? legendBox(s) : null;
+        if (legendBox != null) {
+            placer.reserve(legendBox);
+        }
+        placer.reserve(new LabelPlacer.Box(0, 0, 170, 26));
+        if (f.shows(Layer.SCALE_BAR)) {
+            placer.reserve(new LabelPlacer.Box(8, s.height() - 44, 180, 40));
+        }
+        Placement placement = Placement.of(f.scene(), f.tS());
+        if (f.shows(Layer.SOURCES)) {
+            SourcePainter.draw(s, v, f.scene(), placement, f.marks());
+        }
+        if (f.shows(Layer.CONDUCTORS)) {
+            ConductorPainter.drawConductors(s, v, f.scene(), placement, f.marks());
+        }
+        if (f.shows(Layer.LENZ) && f.snapshot() != null) {
+            ConductorPainter.drawLenz(s, v, f.scene(), placement, f.snapshot());
+        }
+        List<Runnable> labels = new ArrayList<>();
+        if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
+            ConductorPainter.placeCallouts(s, v, f.scene(), placement, f.snapshot(), placer, labels);
+        }
+        if (f.raster() != null && (f.shows(Layer.CONTOURS) || f.shows(Layer.SYMBOLS))) {
+            if (f.shows(Layer.SYMBOLS)) {
+                symbols(s, v, f.raster(), limit);
+            }
+            if (f.shows(Layer.CONTOURS)) {
+                contours(s, v, f.raster(), limit, placer, labels);
+            }
+        }
+        ConductorPainter.drawMarks(s, v, f.marks());
+        labels.forEach(Runnable::run);
+        if (f.shows(Layer.SCALE_BAR)) {
+            scaleBar(s, v);
+        }
+        if (legendBox != null) {
+            legend(s, legendBox, limit, f.shows(Layer.CONTOURS) ? contourStep(limit) : 0, f.raster() != null);
+        }
+        header(s, f);
+        s.restore();
+    }
+
+    /** Contour spacing for a colour limit: a round value giving at most five levels per sign. */
+    public static double contourStep(double limit) {
+        return NiceSteps.atLeast(limit / MAX_CONTOUR_LEVELS_PER_SIDE);
+    }
+
+    private static void heatMap(Surface s, ViewTransform v, FieldRaster r, double limit) {
+        int[] argb = new int[r.cols() * r.rows()];
+        float[] bz = r.bzT();
+        for (int i = 0; i < argb.length; i++) {
+            argb[i] = DivergingScale.argb(bz[i], limit);
+        }
+        double x = v.screenX(r.minX());
+        double y = v.screenY(r.maxY());
+        s.image(argb, r.cols(), r.rows(), x, y, v.screenX(r.maxX()) - x, v.screenY(r.minY()) - y);
+    }
+
+    private static void grid(Surface s, ViewTransform v) {
+        double major = NiceSteps.atLeast(90 / v.pxPerM());
+        double mantissa = major / Math.pow(10, Math.floor(Math.log10(major) + 1e-9));
+        double minor = major / (Math.round(mantissa) == 2 ? 4 : 5);
+        s.dash();
+        if (minor * v.pxPerM() >= 9) {
+            gridLines(s, v, minor, Palette.GRID_MINOR, 1);
+        }
+        gridLines(s, v, major, Palette.GRID_MAJOR, 1);
+        s.stroke(Palette.AXIS);
+        s.lineWidth(1.2);
+        s.beginPath();
+        s.moveTo(v.screenX(0), 0);
+        s.lineTo(v.screenX(0), s.height());
+        s.moveTo(0, v.screenY(0));
+        s.lineTo(s.width(), v.screenY(0));
+        s.strokePath();
+        s.fill(Palette.MUTED);
+        for (double x = Math.ceil(v.minX() / major) * major; x <= v.maxX(); x += major) {
+            s.text(Quantities.length(snap(x, major)), v.screenX(x) + 3, 30, 10, false, Surface.Anchor.TOP_LEFT);
+        }
+        for (double y = Math.ceil(v.minY() / major) * major; y <= v.maxY(); y += major) {
+            s.text(Quantities.length(snap(y, major)), 4, v.screenY(y) - 2, 10, false, Surface.Anchor.BOTTOM_LEFT);
+        }
+    }
+
+    private static double snap(double value, double step) {
+        return Math.abs(value) < step * 1e-6 ? 0 : value;
+    }
+
+    private static void gridLines(Surface s, ViewTransform v, double step, int colour, double width) {
+        s.stroke(colour);
+        s.lineWidth(width);
+        s.beginPath();
+        for (double x = Math.ceil(v.minX() / step) * step; x <= v.maxX(); x += step) {
+            double sx = Math.round(v.screenX(x)) + 0.5;
+            s.moveTo(sx, 0);
+            s.lineTo(sx, s.height());
+        }
+        for (double y = Math.ceil(v.minY() / step) * step; y <= v.maxY(); y += step) {
+            double sy = Math.round(v.screenY(y)) + 0.5;
+            s.moveTo(0, sy);
+            s.lineTo(s.width(), sy);
+        }
+        s.strokePath();
+    }
+
+    private static void symbols(Surface s, ViewTransform v, FieldRaster r, double limit) {
+        double r0 = 6;
+        for (double sy = SYMBOL_SPACING_PX / 2; sy < s.height(); sy += SYMBOL_SPACING_PX) {
+            for (double sx = SYMBOL_SPACING_PX / 2; sx < s.width(); sx += SYMBOL_SPACING_PX) {
+                double b = r.sample(v.sceneX(sx), v.sceneY(sy));
+                if (!(Math.abs(b) >= SYMBOL_MIN_FRACTION * limit)) {
+                    continue;
+                }
+                double size = r0 * (0.6 + 0.4 * Math.min(1, Math.abs(b) / limit));
+                Glyphs.fieldSymbol(s, sx, sy, size, b > 0, 0xB0202020);
+            }
+        }
+    }
+
+    private static void contours(Surface s, ViewTransform v, FieldRaster r, double limit, LabelPlacer placer,
+                                 List<Runnable> labels) {
+        double step = contourStep(limit);
+        s.dash();
+        for (int k = -MAX_CONTOUR_LEVELS_PER_SIDE; k <= MAX_CONTOUR_LEVELS_PER_SIDE; k++) {
+            if (k == 0) {
+                continue;
+            }
+            double level = k * step;
+            List<double[]> segs = new ArrayList<>();
+            s.stroke(k > 0 ? 0xC0402000 : 0xC0001A40);
+            s.lineWidth(1);
+            s.beginPath();
+            Contours.trace(r, level, (x1, y1, x2, y2) -> {
+                double a = v.screenX(x1);
+                double b = v.screenY(y1);
+                double c = v.screenX(x2);
+                double d = v.screenY(y2);
+                s.moveTo(a, b);
+                s.lineTo(c, d);
+                if (segs.size() < 4000) {
+                    segs.add(new double[] {(a + c) / 2, (b + d) / 2});
+                }
+            });
+            s.strokePath();
+            labelContour(s, segs, Quantities.bz(level), placer, labels);
+        }
+    }
+
+    /** Up to two labels per level, where they collide with nothing already placed. */
+    private static void labelContour(Surface s, List<double[]> mids, String text, LabelPlacer placer,
+                                     List<Runnable> labels) {
+        double w = s.textWidth(text, 10, false) + 4;
+        double h = 13;
+        int placed = 0;
+        for (int i = 0; i < mids.size() && placed < 2; i += Math.max(1, mids.size() / 7)) {
+            double[] m = mids.get(i);
+            LabelPlacer.Box b = new LabelPlacer.Box(m[0] - w / 2, m[1] - h / 2, w, h);
+            if (b.x() < 0 || b.y() < 0 || b.x() + w > s.width() || b.y() + h > s.height() || !placer.isFree(b)) {
+                continue;
+            }
+            placer.reserve(b);
+            placed++;
+            labels.add(() -> {
+                s.fill(0xD9FFFFFF);
+                s.fillRect(b.x(), b.y(), b.w(), b.h());
+                s.fill(Palette.INK);
+                s.text(text, b.centerX(), b.centerY(), 10, false, Surface.Anchor.CENTER);
+            });
+        }
+    }
+
+    private static void scaleBar(Surface s, ViewTransform v) {
+        double len = NiceSteps.atMost(140 / v.pxPerM());
+        double px = len * v.pxPerM();
+        double x = 16;
+        double y = s.height() - 18;
+        s.fill(Palette.LABEL_BOX);
+        s.fillRect(x - 6, y - 24, Math.max(px, 60) + 12, 32);
+        s.stroke(Palette.INK);
+        s.lineWidth(2);
+        s.dash();
+        s.beginPath();
+        s.moveTo(x, y - 5);
+        s.lineTo(x, y);
+        s.lineTo(x + px, y);
+        s.lineTo(x + px, y - 5);
+        s.strokePath();
+        s.fill(Palette.INK);
+        s.text(Quantities.length(len), x + px / 2, y - 7, FONT, false, Surface.Anchor.BOTTOM_CENTER);
+    }
+
+    private static LabelPlacer.Box legendBox(Surface s) {
+        double w = 178;
+        double h = 218;
+        return new LabelPlacer.Box(s.width() - w - 10, s.height() - h - 10, w, h);
+    }
+
+    private static void legend(Surface s, LabelPlacer.Box box, double limit, double contourStep, boolean hasMap) {
+        s.fill(Palette.LABEL_BOX);
+        s.fillRect(box.x(), box.y(), box.w(), box.h());
+        s.stroke(Palette.LABEL_EDGE);
+        s.lineWidth(1);
+        s.dash();
+        s.strokeRect(box.x(), box.y(), box.w(), box.h());
+        double x = box.x() + 12;
+        double top = box.y() + 46;
+        double barH = 120;
+        s.fill(Palette.INK);
+        s.text("B_z (normal to plane)", x, box.y() + 8, FONT, true, Surface.Anchor.TOP_LEFT);
+        int n = 64;
+        int[] bar = new int[n];
+        for (int i = 0; i < n; i++) {
+            bar[i] = DivergingScale.argbAt(1 - 2.0 * i / (n - 1));
+        }
+        s.image(bar, 1, n, x, top, 16, barH);
+        s.stroke(Palette.INK);
+        s.strokeRect(x, top, 16, barH);
+        double tx = x + 24;
+        s.fill(Palette.INK);
+        s.text("+" + Quantities.bz(limit), tx, top, FONT, false, Surface.Anchor.LEFT);
+        s.text("0", tx, top + barH / 2, FONT, false, Surface.Anchor.LEFT);
+        s.text("−" + Quantities.bz(limit), tx, top + barH, FONT, false, Surface.Anchor.LEFT);
+        Glyphs.fieldSymbol(s, x + 8, top - 12, 6, true, Palette.INK);
+        s.fill(Palette.INK);
+        s.text("out of screen", x + 20, top - 12, 11, false, Surface.Anchor.LEFT);
+        Glyphs.fieldSymbol(s, x + 8, top + barH + 13, 6, false, Palette.INK);
+        s.fill(Palette.INK);
+        s.text("into screen", x + 20, top + barH + 13, 11, false, Surface.Anchor.LEFT);
+        s.fill(Palette.MUTED);
+        String foot = !hasMap ? "computing field…" : contourStep > 0 ? "contours every " + Quantities.bz(contourStep) : "";
+        s.text(foot, x, box.y() + box.h() - 8, 11, false, Surface.Anchor.BOTTOM_LEFT);
+    }
+
+    private static void header(Surface s, Frame f) {
+        s.fill(Palette.LABEL_BOX);
+        s.fillRect(6, 6, 150, 20);
+        s.fill(Palette.INK);
+        s.text("t = " + Quantities.time(f.tS()), 12, 16, FONT, true, Surface.Anchor.LEFT);
+        if (!f.note().isEmpty()) {
+            double w = s.textWidth(f.note(), FONT, false) + 12;
+            s.fill(0xE0202020);
+            s.fillRect(s.width() - w - 6, 6, w, 20);
+            s.fill(0xFFFFFFFF);
+            s.text(f.note(), s.width() - 12, 16, FONT, false, Surface.Anchor.RIGHT);
+        }
+    }
+}

@@ -1,0 +1,97 @@
+package org.kinduct.ui.field;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Executor;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
+import org.kinduct.ui.paint.FieldRaster;
+import org.kinduct.ui.view.ViewTransform;
+
+class FieldMapperTest {
+
+    private static final double FIELD_TOL = 1e-7;
+    private static final Executor SAME_THREAD = Runnable::run;
+
+    private final List<FieldRaster> delivered = new ArrayList<>();
+    private final List<RuntimeException> failures = new ArrayList<>();
+
+    @BeforeEach
+    void resetCounter() {
+        UniformOnlyEvaluator.FIELD_CALLS.set(0);
+    }
+
+    private FieldMapper mapper(Executor work) {
+        return new FieldMapper(UniformOnlyEvaluator::new, work, SAME_THREAD, delivered::add, failures::add);
+    }
+
+    private static Scene uniform(double... bz) {
+        List<Source> sources = new ArrayList<>();
+        for (int i = 0; i < bz.length; i++) {
+            sources.add(new Source.UniformField("u" + i, bz[i]));
+        }
+        return Scene.empty("u").withSources(sources);
+    }
+
+    @Test
+    void mapCoversTheViewAndHoldsTheSumOfTheSources() {
+        ViewTransform view = new ViewTransform(0.01, -0.02, 2000, 400, 300);
+        FieldRaster r = mapper(SAME_THREAD).compute(new MapRequest(uniform(0.05, -0.02), 7, 0.5, view, 4));
+        assertTrue(r.minX() <= view.minX() && r.maxX() >= view.maxX());
+        assertTrue(r.minY() <= view.minY() && r.maxY() >= view.maxY());
+        for (float v : r.bzT()) {
+            assertEquals(0.03, v, FIELD_TOL);
+        }
+        assertEquals(7, r.revision());
+        assertEquals(0.5, r.tS());
+    }
+
+    @Test
+    void staticSourcesAreEvaluatedOncePerGrid() {
+        FieldMapper m = mapper(SAME_THREAD);
+        ViewTransform view = new ViewTransform(0, 0, 1000, 200, 100);
+        Scene s = uniform(0.1);
+        for (int i = 0; i < 5; i++) {
+            m.compute(new MapRequest(s, 1, i * 0.1, view, 4));
+        }
+        assertEquals(1, UniformOnlyEvaluator.FIELD_CALLS.get(), "a still uniform field does not change with time");
+        m.compute(new MapRequest(s, 1, 0, view.zoomedAt(0, 0, 2), 4));
+        assertEquals(2, UniformOnlyEvaluator.FIELD_CALLS.get(), "a new grid needs a new evaluation");
+    }
+
+    @Test
+    void waitingRequestsCoalesceToTheNewest() {
+        List<Runnable> queue = new ArrayList<>();
+        FieldMapper m = mapper(queue::add);
+        ViewTransform view = new ViewTransform(0, 0, 1000, 100, 100);
+        for (int rev = 1; rev <= 4; rev++) {
+            m.request(new MapRequest(uniform(rev * 0.01), rev, 0, view, 10));
+        }
+        assertEquals(1, queue.size(), "one worker task drains all requests");
+        queue.get(0).run();
+        assertEquals(1, delivered.size(), "only the newest request was computed");
+        assertEquals(4, delivered.get(0).revision());
+    }
+
+    @Test
+    void failuresAreReportedNotThrown() {
+        Scene notUniform = Scene.empty("x").withSources(List.of(new Source.BlockMagnet("m", "fixed",
+                org.kinduct.scene.Vec2.ZERO, 0.01, 0.01, 0.01, 0, 0.001, Source.Side.BELOW, 1, Source.Magnetization.PLUS_Z)));
+        mapper(SAME_THREAD).request(new MapRequest(notUniform, 1, 0, new ViewTransform(0, 0, 100, 10, 10), 5));
+        assertEquals(1, failures.size());
+        assertTrue(delivered.isEmpty());
+    }
+
+    @Test
+    void autoLimitIgnoresASingleHotSpot() {
+        float[] v = new float[1000];
+        java.util.Arrays.fill(v, 0.01f);
+        v[3] = 50f;
+        assertEquals(0.01, FieldMapper.autoLimit(v), FIELD_TOL);
+    }
+}
