@@ -1,0 +1,188 @@
+package org.kinduct.solver.dynamics;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.hipparchus.ode.ODEState;
+import org.hipparchus.ode.ODEStateAndDerivative;
+import org.hipparchus.ode.OrdinaryDifferentialEquation;
+import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
+import org.hipparchus.ode.sampling.StepNormalizer;
+import org.hipparchus.ode.sampling.StepNormalizerBounds;
+import org.hipparchus.ode.sampling.StepNormalizerMode;
+import org.kinduct.scene.Checks;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Polygons;
+import org.kinduct.scene.Pose;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Circulation;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.Terminal;
+
+/**
+ * Coupled simulation of the loop circuits and the free bodies of a scene over [t0, t1].
+ *
+ * <p><b>Circuits.</b> Every closed loop k carries a current I_k obeying Faraday's law with its
+ * own and mutual inductances: d/dt(Σ_j M_kj(q)·I_j + λ_ext,k) + R_k·I_k = 0, where λ_ext,k is its
+ * linkage with the scene's sources (magnets, coils with their prescribed currents, field patches,
+ * uniform fields) and M(q) comes from {@link org.kinduct.solver.circuit.LoopInductance} for the
+ * loops where they are. The state variable is the total linkage Ψ_k = Σ_j M_kj I_j + λ_ext,k, so
+ * dΨ_k/dt = −R_k·I_k and I = M⁻¹(Ψ − λ_ext): neither dM/dt nor dλ_ext/dt is differenced
+ * (Jackson, <i>Classical Electrodynamics</i>, 3rd ed., 1999, §5.15–5.17; Griffiths,
+ * <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §7.2). Open loops and wires carry no
+ * current; source coils are current-driven. As all L → 0 the current follows the quasi-static
+ * I = EMF/R, lagging it by the time constants L/R. Small L/R makes the equations stiff: the
+ * explicit integrator then needs steps of about L/R (a 10 cm copper loop has L/R of tens of
+ * microseconds; multi-turn coils with load resistors are gentler).
+ *
+ * <p><b>Free bodies</b> ({@link org.kinduct.scene.Motion.Free}): the pivot is taken as the centre
+ * of mass; m·a = F_applied(t) + m·g − c·v + Σ springs + F_mag, and, when the inertia I_p about the
+ * pivot is positive, I_p·α = τ_mag (otherwise rotation is locked). Springs are linear (Hooke)
+ * between the pivot and a fixed anchor or another body's pivot; the reaction acts on that body.
+ * The magnetic force on a loop edge from each source is N·I·∫ dl × B (its B_z moments), its torque
+ * about the body's pivot likewise; the reaction (force and torque) acts on the source's body, so
+ * free magnets and coils are pushed back. Forces between loop currents are the gradient of ½IᵀMI
+ * at constant currents, by central differences. Edges whose ends ride different bodies (a bar
+ * sliding on rails) are contacts: their force is taken by the guide, not applied to a body.
+ * Forces between sources (magnet on magnet) are not modelled. Prescribed and free bodies mix.
+ *
+ * <p><b>Integration.</b> Hipparchus' Dormand–Prince 8(5,3) with relative tolerance {@code relTol}
+ * on every mechanical and circuit state and absolute tolerances relTol times the scene's length,
+ * time and linkage scales; steps at most the sampling interval. Samples are taken at t0 + i·dt
+ * from the integrator's dense output.
+ *
+ * <p><b>Energy audit</b> ({@link EnergyAudit}): applied, holding and drive work, Joule and damping
+ * heat and the changes of kinetic, potential and magnetic energy, integrated alongside the state.
+ */
+public final class CoupledSimulation {
+
+    /** Default relative tolerance of the integration. */
+    public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-10;
+    /** Time step for the difference quotients of prescribed motion, as a fraction of the sampling step. */
+    private static final double DIFFERENCE_STEP_FRACTION = 1e-4;
+
+    private final FieldPlacer placer;
+    private final double relTol;
+
+    public CoupledSimulation(FieldPlacer placer, double relativeTolerance) {
+        this.placer = Checks.nonNull(placer, "field placer");
+        this.relTol = Checks.positive(relativeTolerance, "relative tolerance");
+    }
+
+    /** Simulates {@code scene} from t0 to t1, sampling every dt seconds (t1 included when a whole number of steps). */
+    public Trajectory run(Scene scene, double t0S, double t1S, double dtS) {
+        Checks.nonNull(scene, "scene");
+        Checks.finite(t0S, "t0");
+        Checks.positive(dtS, "dt");
+        if (!(t1S > t0S)) {
+            throw new IllegalArgumentException("t1 must be after t0, got t0 = " + t0S + " s, t1 = " + t1S + " s");
+        }
+        double hS = DIFFERENCE_STEP_FRACTION * dtS;
+        CoupledModel model = new CoupledModel(scene, placer, hS);
+        double[] y0 = model.initialState(t0S);
+        OrdinaryDifferentialEquation equations = new OrdinaryDifferentialEquation() {
+            @Override
+            public int getDimension() {
+                return model.dimension();
+            }
+
+            @Override
+            public double[] computeDerivatives(double t, double[] y) {
+                return model.evaluate(t, y).derivative;
+            }
+        };
+        DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-12 * (t1S - t0S), dtS,
+                absoluteTolerances(model, y0, t0S, t1S), relativeTolerances(model));
+        List<double[]> states = new ArrayList<>();
+        List<Double> times = new ArrayList<>();
+        integrator.addStepHandler(new StepNormalizer(dtS, (ODEStateAndDerivative s, boolean last) -> {
+            times.add(s.getTime());
+            states.add(s.getPrimaryState().clone());
+        }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.BOTH));
+        integrator.integrate(equations, new ODEState(t0S, y0), t1S);
+
+        List<Sample> samples = new ArrayList<>(states.size());
+        for (int i = 0; i < states.size(); i++) {
+            samples.add(sample(model, times.get(i), states.get(i), hS));
+        }
+        return new Trajectory(samples, audit(model, t0S, y0, times.get(times.size() - 1), states.get(states.size() - 1)));
+    }
+
+    private static EnergyAudit audit(CoupledModel model, double t0S, double[] y0, double t1S, double[] y1) {
+        CoupledModel.Evaluation start = model.evaluate(t0S, y0);
+        CoupledModel.Evaluation end = model.evaluate(t1S, y1);
+        int a = model.auditOffset();
+        return new EnergyAudit(y1[a + CoupledModel.APPLIED], y1[a + CoupledModel.HOLDING], y1[a + CoupledModel.DRIVE],
+                y1[a + CoupledModel.JOULE], y1[a + CoupledModel.DAMPING],
+                end.kineticEnergyJ() - start.kineticEnergyJ(), end.potentialEnergyJ() - start.potentialEnergyJ(),
+                end.magneticEnergyJ() - start.magneticEnergyJ());
+    }
+
+    private Sample sample(CoupledModel model, double tS, double[] y, double hS) {
+        CoupledModel.Evaluation now = model.evaluate(tS, y);
+        Map<String, Pose> poses = new HashMap<>();
+        for (int b = 0; b < model.bodies().size(); b++) {
+            poses.put(model.bodies().get(b).id(), now.poses[b]);
+        }
+        Map<String, Double> selfL = new HashMap<>();
+        List<ConductorState> states = new ArrayList<>();
+        for (int k = 0; k < model.loops().size(); k++) {
+            Conductor.Loop loop = model.loops().get(k).loop();
+            selfL.put(loop.id(), now.inductance[k][k]);
+            states.add(loopState(model, now, k, y, hS));
+        }
+        return new Sample(tS, poses, states, selfL);
+    }
+
+    private static ConductorState loopState(CoupledModel model, CoupledModel.Evaluation now, int k, double[] y,
+                                            double hS) {
+        Conductor.Loop loop = model.loops().get(k).loop();
+        List<Vec2> vertices = model.placedVertices(k, now.poses);
+        double emf = model.externalEmf(k, now.tS, y, hS);
+        double current = now.current[k];
+        double sense = Math.signum(current) * Math.signum(Polygons.signedArea(vertices));
+        Circulation direction = sense > 0 ? Circulation.CCW : sense < 0 ? Circulation.CW : Circulation.NONE;
+        double linkage = now.externalLinkage[k];
+        return new ConductorState(loop.id(), ConductorState.Kind.LOOP, vertices, linkage / loop.turns(), linkage,
+                emf, Double.NaN, emf, 0, Terminal.NONE, current, direction, now.loopForce[k], now.resistance[k], true);
+    }
+
+    private double[] relativeTolerances(CoupledModel model) {
+        double[] rel = new double[model.dimension()];
+        java.util.Arrays.fill(rel, 0, model.auditOffset(), relTol);
+        return rel;
+    }
+
+    /**
+     * Absolute tolerances: relTol times a length scale (the loops' extent, else 1 m) for
+     * positions, its ratio to the run's duration for velocities, 1 rad and 1/duration for angles
+     * and ω, and a linkage scale (largest |λ_ext| at t0, else 1 µWb) for the loop states. The
+     * energy integrals are not error-controlled: they ride on the steps the state needs.
+     */
+    private double[] absoluteTolerances(CoupledModel model, double[] y0, double t0S, double t1S) {
+        double length = model.lengthScaleM();
+        double duration = t1S - t0S;
+        double linkage = 0;
+        int loopsAt = model.auditOffset() - model.loops().size();
+        for (int k = 0; k < model.loops().size(); k++) {
+            linkage = Math.max(linkage, Math.abs(y0[loopsAt + k]));
+        }
+        linkage = linkage > 0 ? linkage : 1e-6;
+        double[] abs = new double[model.dimension()];
+        for (int i = 0; i < loopsAt; i += CoupledModel.BODY_DOFS) {
+            abs[i] = relTol * length;
+            abs[i + 1] = relTol * length;
+            abs[i + 2] = relTol;
+            abs[i + 3] = relTol * length / duration;
+            abs[i + 4] = relTol * length / duration;
+            abs[i + 5] = relTol / duration;
+        }
+        for (int k = 0; k < model.loops().size(); k++) {
+            abs[loopsAt + k] = relTol * linkage;
+        }
+        java.util.Arrays.fill(abs, model.auditOffset(), abs.length, Double.MAX_VALUE);
+        return abs;
+    }
+}
