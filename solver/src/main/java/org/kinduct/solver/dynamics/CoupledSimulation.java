@@ -98,6 +98,9 @@ public final class CoupledSimulation {
         List<double[]> states = new ArrayList<>();
         List<Double> times = new ArrayList<>();
         integrator.addStepHandler(new StepNormalizer(dtS, (ODEStateAndDerivative s, boolean last) -> {
+            if (!times.isEmpty() && times.get(times.size() - 1) == s.getTime()) {
+                return;
+            }
             times.add(s.getTime());
             states.add(s.getPrimaryState().clone());
         }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.BOTH));
