@@ -80,15 +80,14 @@ final class LowerHalfPlaneField implements PlaneField {
 
     @Override
     public void bzMoments(double ax, double ay, double bx, double by, double[] out) {
-        double s0;
-        double s1;
-        if (ay == by) {
-            s0 = 0;
-            s1 = ay < yEdge ? 1 : 0;
-        } else {
-            double cross = Math.max(0, Math.min(1, (yEdge - ay) / (by - ay)));
-            s0 = ay < yEdge ? 0 : cross;
-            s1 = ay < yEdge ? cross : 1;
+        boolean aIn = ay < yEdge;
+        boolean bIn = by < yEdge;
+        double s0 = 0;
+        double s1 = aIn && bIn ? 1 : 0;
+        if (aIn != bIn) {
+            double cross = (yEdge - ay) / (by - ay);
+            s0 = aIn ? 0 : cross;
+            s1 = aIn ? cross : 1;
         }
         out[0] = bzT * (s1 - s0);
         out[1] = bzT * (s1 * s1 - s0 * s0) / 2;
