@@ -211,8 +211,9 @@ public sealed interface Motion
             public Spring {
                 Checks.positive(stiffnessNPerM, "spring stiffness");
                 Checks.nonNegative(restLengthM, "spring rest length");
-                if (anchor == null && otherBody == null) {
-                    throw new IllegalArgumentException("A spring needs an anchor point or another body");
+                if ((anchor == null) == (otherBody == null)) {
+                    throw new IllegalArgumentException("A spring needs an anchor point or another body, not "
+                            + (anchor == null ? "neither" : "both"));
                 }
             }
         }

@@ -1,0 +1,222 @@
+package org.kinduct.scene.io;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.channels.Channels;
+import java.nio.channels.FileChannel;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.util.List;
+import java.util.concurrent.ThreadLocalRandom;
+import org.kinduct.scene.Scene;
+
+/**
+ * Scene files on disk: UTF-8 JSON as {@link SceneJson} reads and writes it.
+ *
+ * <p>Saving is atomic where the file system allows: the text goes to a temporary file in the
+ * target's folder, is forced to disk, and is renamed over the target, so a crash or a failed
+ * write leaves either the old file or the new one, never a mix, and no temporary file. Where the
+ * file system cannot rename atomically the file is replaced by a plain move, and a warning is
+ * logged.
+ */
+public final class SceneFiles {
+
+    /** Scene files are small; anything larger is surely not one and would only exhaust memory. */
+    static final long MAX_BYTES = 64L * 1024 * 1024;
+
+    private static final System.Logger LOG = System.getLogger(SceneFiles.class.getName());
+    private static final int TEMP_NAME_ATTEMPTS = 16;
+
+    private SceneFiles() {
+    }
+
+    /** Writes the content of a file to a stream; {@link #write(Scene, Path)} uses it to stream the text. */
+    @FunctionalInterface
+    interface Content {
+        void writeTo(OutputStream out) throws IOException;
+    }
+
+    /**
+     * The scene in {@code file}; problems are reported against the file name as given.
+     *
+     * @throws IOException with the path and the reason when the file is missing, a folder,
+     *         unreadable or too large
+     * @throws SceneFormatException when the content is not a valid scene (including text that is not UTF-8)
+     */
+    public static Scene read(Path file) throws IOException, SceneFormatException {
+        String text = decode(readBytes(file), file.toString());
+        return SceneJson.read(text, file.toString());
+    }
+
+    /**
+     * Saves {@code scene} to {@code file} atomically (see the class comment).
+     *
+     * @throws IOException saying which file could not be saved and why; the previous content of
+     *         {@code file}, if any, is then unchanged and no temporary file is left behind
+     */
+    public static void write(Scene scene, Path file) throws IOException {
+        byte[] bytes = SceneJson.write(scene).getBytes(StandardCharsets.UTF_8);
+        writeAtomically(file, out -> out.write(bytes));
+    }
+
+    static void writeAtomically(Path file, Content content) throws IOException {
+        Path target = file.toAbsolutePath();
+        Path folder = target.getParent();
+        if (folder == null) {
+            throw new IOException("cannot save to " + target + ": not a file path");
+        }
+        if (Files.isDirectory(target)) {
+            throw new IOException("cannot save to " + target + ": it is a folder");
+        }
+        Path temp;
+        try {
+            temp = createTemp(folder, target.getFileName().toString());
+        } catch (IOException e) {
+            throw new IOException("cannot save to " + target + ": cannot create a file in folder " + folder
+                    + " (" + reason(e) + ")", e);
+        }
+        boolean moved = false;
+        try {
+            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE);
+                 OutputStream out = Channels.newOutputStream(channel)) {
+                content.writeTo(out);
+                out.flush();
+                channel.force(true);
+            }
+            copyPermissions(target, temp);
+            moveIntoPlace(temp, target);
+            moved = true;
+        } catch (IOException e) {
+            throw new IOException("cannot save to " + target + ": " + reason(e) + "; the file was not changed", e);
+        } finally {
+            if (!moved) {
+                deleteTemp(temp);
+            }
+        }
+        syncFolder(folder);
+    }
+
+    private static byte[] readBytes(Path file) throws IOException {
+        try {
+            if (Files.isDirectory(file)) {
+                throw new IOException(file + ": is a folder, not a scene file");
+            }
+            long size = Files.size(file);
+            if (size > MAX_BYTES) {
+                throw new IOException(file + ": too large for a scene file (" + size + " bytes; the limit is "
+                        + MAX_BYTES + ")");
+            }
+            return Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            throw new NoSuchFileException(file.toString(), null, "no such file");
+        } catch (AccessDeniedException e) {
+            throw new AccessDeniedException(file.toString(), null, "permission denied: cannot read this file");
+        } catch (FileSystemException e) {
+            throw new IOException(file + ": cannot read (" + reason(e) + ")", e);
+        }
+    }
+
+    /** Strict UTF-8; the first invalid byte becomes a problem at its line and column. */
+    private static String decode(byte[] bytes, String sourceName) throws SceneFormatException {
+        CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT);
+        ByteBuffer in = ByteBuffer.wrap(bytes);
+        CharBuffer out = CharBuffer.allocate(bytes.length);
+        CoderResult result = decoder.decode(in, out, true);
+        if (!result.isError()) {
+            result = decoder.flush(out);
+        }
+        if (result.isError()) {
+            out.flip();
+            String before = out.toString();
+            int line = 1 + (int) before.chars().filter(c -> c == '\n').count();
+            int column = before.length() - before.lastIndexOf('\n');
+            throw new SceneFormatException(sourceName, List.of(new Problem("", line, column,
+                    "not UTF-8 text: invalid byte 0x" + String.format("%02x", bytes[in.position()] & 0xff)
+                            + " at byte offset " + in.position())));
+        }
+        return out.flip().toString();
+    }
+
+    /** A new empty file next to the target, created with the folder's default permissions. */
+    private static Path createTemp(Path folder, String name) throws IOException {
+        for (int attempt = 1; ; attempt++) {
+            Path temp = folder.resolve("." + name + "." + Long.toHexString(ThreadLocalRandom.current().nextLong())
+                    + ".tmp");
+            try {
+                Files.newByteChannel(temp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE).close();
+                return temp;
+            } catch (FileAlreadyExistsException e) {
+                if (attempt == TEMP_NAME_ATTEMPTS) {
+                    throw e;
+                }
+            }
+        }
+    }
+
+    /** Saving over a file keeps its permissions (a file shared read-only stays so). */
+    private static void copyPermissions(Path from, Path to) throws IOException {
+        if (Files.exists(from) && Files.getFileStore(to).supportsFileAttributeView(PosixFileAttributeView.class)) {
+            Files.setPosixFilePermissions(to, Files.getPosixFilePermissions(from));
+        }
+    }
+
+    private static void moveIntoPlace(Path temp, Path target) throws IOException {
+        try {
+            Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        } catch (AtomicMoveNotSupportedException e) {
+            LOG.log(System.Logger.Level.WARNING, "atomic rename is not supported for {0}; replacing it with a"
+                    + " plain move, so a crash during the move could damage it", target);
+            Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
+        }
+    }
+
+    private static void deleteTemp(Path temp) {
+        try {
+            Files.deleteIfExists(temp);
+        } catch (IOException e) {
+            // The save has already failed with its own message; this one only adds the stray file.
+            LOG.log(System.Logger.Level.WARNING, "could not delete temporary file " + temp, e);
+        }
+    }
+
+    /**
+     * Forces the rename itself to disk. POSIX systems allow this on a folder opened for reading;
+     * others (Windows) refuse to open a folder, and their rename is durable on its own.
+     */
+    private static void syncFolder(Path folder) {
+        try (FileChannel dir = FileChannel.open(folder, StandardOpenOption.READ)) {
+            dir.force(true);
+        } catch (IOException e) {
+            LOG.log(System.Logger.Level.DEBUG, "folder sync not supported for " + folder, e);
+        }
+    }
+
+    private static String reason(IOException e) {
+        if (e instanceof AccessDeniedException) {
+            return "permission denied";
+        }
+        if (e instanceof NoSuchFileException) {
+            return "the folder does not exist";
+        }
+        if (e instanceof FileSystemException fse && fse.getReason() != null) {
+            return fse.getReason();
+        }
+        return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
+    }
+}

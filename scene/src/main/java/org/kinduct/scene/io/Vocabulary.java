@@ -1,0 +1,26 @@
+package org.kinduct.scene.io;
+
+import static java.util.Map.entry;
+
+import org.kinduct.scene.Material;
+import org.kinduct.scene.Motion;
+import org.kinduct.scene.Source;
+
+/** The names the file uses for the model's enumerations, shared by reader and writer. */
+final class Vocabulary {
+
+    static final Choices<Source.Side> SIDE = Choices.of(
+            entry("below", Source.Side.BELOW), entry("above", Source.Side.ABOVE));
+
+    static final Choices<Source.Magnetization> NORTH = Choices.of(
+            entry("+z", Source.Magnetization.PLUS_Z), entry("-z", Source.Magnetization.MINUS_Z));
+
+    static final Choices<Material> MATERIAL = Choices.of(
+            entry("copper", Material.COPPER), entry("aluminium", Material.ALUMINIUM));
+
+    static final Choices<Motion.Path.Blend> BLEND = Choices.of(
+            entry("linear", Motion.Path.Blend.LINEAR), entry("smooth", Motion.Path.Blend.SMOOTH));
+
+    private Vocabulary() {
+    }
+}

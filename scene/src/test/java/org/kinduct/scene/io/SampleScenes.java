@@ -1,0 +1,213 @@
+package org.kinduct.scene.io;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.SplittableRandom;
+import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Material;
+import org.kinduct.scene.Motion;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
+import org.kinduct.scene.TimeSpan;
+import org.kinduct.scene.Vec2;
+import org.kinduct.scene.WireSpec;
+
+/** Scenes for the file-format tests: one with every record variant, and random ones from a seed. */
+final class SampleScenes {
+
+    private SampleScenes() {
+    }
+
+    /** Every motion, source, coil shape, conductor, vertex form and wire form at least once. */
+    static Scene everyVariant() {
+        List<Body> bodies = List.of(
+                new Body("carriage", "Carriage", Vec2.ZERO, new Motion.Glide(new Vec2(0.5, 0))),
+                new Body("shaker", "shaker", new Vec2(0.01, 0.02), new Motion.Oscillate(2e-3, 50, Math.PI / 2, 0.1)),
+                new Body("rotor", "Rotor", new Vec2(-0.03, 0), new Motion.Spin(62.83185307179586, 0.3)),
+                new Body("sled", "Sled", Vec2.ZERO, new Motion.Accelerate(new Vec2(0.1, 0), new Vec2(0, -9.81))),
+                new Body("arm", "Arm", new Vec2(0.005, 0.005), new Motion.Path(List.of(
+                        new Motion.Path.Key(0, Vec2.ZERO, 0),
+                        new Motion.Path.Key(0.1, new Vec2(0.01, 0), 0.2),
+                        new Motion.Path.Key(0.3, new Vec2(0.01, 0.01), -0.1)), Motion.Path.Blend.SMOOTH)),
+                new Body("bar", "Bar", new Vec2(0, 0.01), new Motion.Free(0.02, 1e-6, new Vec2(0.1, 0), 0.5, 0.01,
+                        new Vec2(0, -0.196), new Vec2(0.01, 0), 5, List.of(
+                                new Motion.Free.Spring(new Vec2(0, 0.05), null, 200, 0),
+                                new Motion.Free.Spring(null, "carriage", 50, 0.01)))),
+                new Body("idle", "Idle", Vec2.ZERO, new Motion.Still()),
+                new Body("walker", "Walker", Vec2.ZERO, new Motion.Path(List.of(
+                        new Motion.Path.Key(0, Vec2.ZERO, 0),
+                        new Motion.Path.Key(1, new Vec2(0.1, 0), 0)), Motion.Path.Blend.LINEAR)));
+        List<Source> sources = List.of(
+                new Source.FieldPatch("gap", Body.FIXED, square(0, 0, 0.02), -0.08),
+                new Source.UniformField("earth", -45e-6),
+                new Source.BlockMagnet("m1", "rotor", new Vec2(0.01, 0), 10e-3, 5e-3, 3e-3, 0.2, 2e-3,
+                        Source.Side.ABOVE, 1.2, Source.Magnetization.MINUS_Z),
+                new Source.CylinderMagnet("m2", Body.FIXED, new Vec2(-0.02, 0.01), 5e-3, 3e-3, 1e-3,
+                        Source.Side.BELOW, 1.3, Source.Magnetization.PLUS_Z),
+                new Source.SourceCoil("coil1", "idle", new Source.CoilShape.Polygon(square(0.05, 0, 0.01)), 20, -3e-3,
+                        new Source.Drive(0.5, 0.1, 50, 0.3)),
+                new Source.SourceCoil("coil2", "shaker", new Source.CoilShape.Circle(new Vec2(0, -0.04), 0.02), 1,
+                        4e-3, Source.Drive.dc(1)));
+        List<Conductor> conductors = List.of(
+                new Conductor.Wire("probe", Body.FIXED, List.of(Conductor.Vertex.at(0, 0),
+                        Conductor.Vertex.at(0.01, 0.001), Conductor.Vertex.at(0.02, -0.003))),
+                new Conductor.Loop("pickup", "carriage", List.of(Conductor.Vertex.at(0, 0),
+                        new Conductor.Vertex(new Vec2(0.02, 0), "bar"), Conductor.Vertex.at(0.02, 0.01),
+                        Conductor.Vertex.at(0, 0.01)), 50, WireSpec.awg(Material.COPPER, 36), false, 100, 25),
+                new Conductor.Loop("gap-loop", "walker", List.of(Conductor.Vertex.at(0, 0),
+                        new Conductor.Vertex(new Vec2(0.01, 0), "walker"), Conductor.Vertex.at(0, 0.01)), 1,
+                        WireSpec.of(Material.ALUMINIUM, 0.2e-3), true, 0, -10),
+                new Conductor.Loop("thick", "fixed", List.of(Conductor.Vertex.at(0, 0),
+                        Conductor.Vertex.at(0.01, 0), Conductor.Vertex.at(0, 0.01)), 3,
+                        WireSpec.awg(Material.COPPER, -3), false, 0.5, 20));
+        return new Scene("Every variant", "A scene with \"quotes\", a tab\t, ünïcödé and a\nnew line.",
+                bodies, sources, conductors, new TimeSpan(0, 0.5, 1e-3));
+    }
+
+    static List<Vec2> square(double x, double y, double side) {
+        return List.of(new Vec2(x, y), new Vec2(x + side, y), new Vec2(x + side, y + side), new Vec2(x, y + side));
+    }
+
+    /** A random valid scene; numbers include awkward doubles to test that writing them is lossless. */
+    static Scene random(SplittableRandom r) {
+        List<Body> bodies = new ArrayList<>();
+        List<String> bodyIds = new ArrayList<>(List.of(Body.FIXED));
+        int nBodies = r.nextInt(4);
+        for (int i = 0; i < nBodies; i++) {
+            String id = "b" + i;
+            bodies.add(new Body(id, r.nextBoolean() ? id : "Body " + i, point(r), motion(r, bodyIds)));
+            bodyIds.add(id);
+        }
+        List<Source> sources = new ArrayList<>();
+        int nSources = r.nextInt(5);
+        for (int i = 0; i < nSources; i++) {
+            sources.add(source(r, "s" + i, pick(r, bodyIds)));
+        }
+        List<Conductor> conductors = new ArrayList<>();
+        int nConductors = r.nextInt(4);
+        for (int i = 0; i < nConductors; i++) {
+            conductors.add(conductor(r, "c" + i, bodyIds));
+        }
+        double t0 = r.nextDouble() - 0.5;
+        return new Scene(r.nextBoolean() ? "" : "scene " + r.nextInt(1000), "", bodies, sources, conductors,
+                new TimeSpan(t0, t0 + 0.01 + r.nextDouble(), 1e-3 + 1e-2 * r.nextDouble()));
+    }
+
+    private static Motion motion(SplittableRandom r, List<String> earlierBodies) {
+        switch (r.nextInt(7)) {
+            case 0:
+                return new Motion.Still();
+            case 1:
+                return new Motion.Glide(point(r));
+            case 2:
+                return new Motion.Accelerate(point(r), point(r));
+            case 3:
+                return new Motion.Oscillate(any(r), positive(r), any(r), any(r));
+            case 4:
+                return new Motion.Spin(any(r), any(r));
+            case 5: {
+                List<Motion.Path.Key> keys = new ArrayList<>();
+                double t = r.nextDouble() - 0.5;
+                for (int i = 0, n = 2 + r.nextInt(3); i < n; i++) {
+                    keys.add(new Motion.Path.Key(t, point(r), any(r)));
+                    t += 0.01 + r.nextDouble();
+                }
+                return new Motion.Path(keys, r.nextBoolean() ? Motion.Path.Blend.LINEAR : Motion.Path.Blend.SMOOTH);
+            }
+            default: {
+                List<Motion.Free.Spring> springs = new ArrayList<>();
+                for (int i = 0, n = r.nextInt(3); i < n; i++) {
+                    springs.add(r.nextBoolean()
+                            ? new Motion.Free.Spring(point(r), null, positive(r), nonNegative(r))
+                            : new Motion.Free.Spring(null, pick(r, earlierBodies), positive(r), nonNegative(r)));
+                }
+                return new Motion.Free(positive(r), nonNegative(r), point(r), any(r), nonNegative(r), point(r), point(r),
+                        nonNegative(r), springs);
+            }
+        }
+    }
+
+    private static Source source(SplittableRandom r, String id, String body) {
+        Source.Side side = r.nextBoolean() ? Source.Side.BELOW : Source.Side.ABOVE;
+        Source.Magnetization north = r.nextBoolean() ? Source.Magnetization.PLUS_Z : Source.Magnetization.MINUS_Z;
+        switch (r.nextInt(5)) {
+            case 0:
+                return new Source.FieldPatch(id, body, convex(r), any(r));
+            case 1:
+                return new Source.UniformField(id, any(r));
+            case 2:
+                return new Source.BlockMagnet(id, body, point(r), positive(r), positive(r), positive(r), any(r),
+                        nonNegative(r), side, positive(r), north);
+            case 3:
+                return new Source.CylinderMagnet(id, body, point(r), positive(r), positive(r), nonNegative(r), side,
+                        positive(r), north);
+            default: {
+                Source.CoilShape shape = r.nextBoolean() ? new Source.CoilShape.Polygon(convex(r))
+                        : new Source.CoilShape.Circle(point(r), positive(r));
+                return new Source.SourceCoil(id, body, shape, 1 + r.nextInt(100), -positive(r),
+                        new Source.Drive(any(r), any(r), nonNegative(r), any(r)));
+            }
+        }
+    }
+
+    private static Conductor conductor(SplittableRandom r, String id, List<String> bodyIds) {
+        String body = pick(r, bodyIds);
+        boolean loop = r.nextBoolean();
+        List<Conductor.Vertex> vertices = new ArrayList<>();
+        for (int i = 0, n = (loop ? 3 : 2) + r.nextInt(4); i < n; i++) {
+            vertices.add(new Conductor.Vertex(point(r), r.nextInt(4) == 0 ? pick(r, bodyIds) : null));
+        }
+        if (!loop) {
+            return new Conductor.Wire(id, body, vertices);
+        }
+        Material material = r.nextBoolean() ? Material.COPPER : Material.ALUMINIUM;
+        WireSpec wire = r.nextBoolean() ? WireSpec.awg(material, -3 + r.nextInt(60)) : WireSpec.of(material, positive(r));
+        return new Conductor.Loop(id, body, vertices, 1 + r.nextInt(1000), wire, r.nextBoolean(), nonNegative(r),
+                -273.15 + 500 * r.nextDouble());
+    }
+
+    /** A convex polygon (hence simple, with area) of 3 to 8 vertices around a random centre. */
+    private static List<Vec2> convex(SplittableRandom r) {
+        Vec2 c = new Vec2(r.nextDouble() - 0.5, r.nextDouble() - 0.5);
+        int n = 3 + r.nextInt(6);
+        List<Vec2> pts = new ArrayList<>();
+        double radius = 1e-3 + r.nextDouble();
+        for (int i = 0; i < n; i++) {
+            pts.add(c.plus(Vec2.polar(radius, 2 * Math.PI * (i + 0.5 * r.nextDouble()) / n)));
+        }
+        return pts;
+    }
+
+    private static String pick(SplittableRandom r, List<String> ids) {
+        return ids.get(r.nextInt(ids.size()));
+    }
+
+    private static Vec2 point(SplittableRandom r) {
+        return new Vec2(any(r), any(r));
+    }
+
+    private static double nonNegative(SplittableRandom r) {
+        return r.nextInt(5) == 0 ? 0 : positive(r);
+    }
+
+    private static double positive(SplittableRandom r) {
+        return Math.abs(any(r)) + Double.MIN_NORMAL;
+    }
+
+    /** Plain, tiny, huge, negative-zero and classic binary-fraction doubles. */
+    private static double any(SplittableRandom r) {
+        switch (r.nextInt(8)) {
+            case 0:
+                return 0.1 + 0.2;
+            case 1:
+                return -0.0;
+            case 2:
+                return r.nextDouble() * 1e-300;
+            case 3:
+                return Double.longBitsToDouble(r.nextLong(0x7fe0000000000000L)) * (r.nextBoolean() ? 1 : -1) * 1e-10;
+            default:
+                return (r.nextDouble() - 0.5) * Math.pow(10, r.nextInt(-6, 3));
+        }
+    }
+}
