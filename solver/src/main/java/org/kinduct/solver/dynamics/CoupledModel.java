@@ -51,6 +51,8 @@ final class CoupledModel {
     private final Source.SourceCoil[] unitCoils;
     private final List<Circuit> loops = new ArrayList<>();
     private final double[][] constantM;
+    /** Bodies that move on a prescribed path (not free, not still). */
+    private final boolean[] drivenPath;
     private final boolean anyVariableM;
     private final double spaceStepM;
     private final double timeStepS;
@@ -67,10 +69,13 @@ final class CoupledModel {
         this.timeStepS = timeStepS;
         bodies = scene.bodies();
         freeSlot = new int[bodies.size()];
+        drivenPath = new boolean[bodies.size()];
         int slot = 0;
         for (int b = 0; b < bodies.size(); b++) {
             bodyIndex.put(bodies.get(b).id(), b);
-            freeSlot[b] = bodies.get(b).motion() instanceof Motion.Free ? slot : -1;
+            Motion motion = bodies.get(b).motion();
+            freeSlot[b] = motion instanceof Motion.Free ? slot : -1;
+            drivenPath[b] = !(motion instanceof Motion.Free) && !(motion instanceof Motion.Still);
             slot += freeSlot[b] >= 0 ? BODY_DOFS : 0;
         }
         sources = scene.sources();
@@ -250,6 +255,16 @@ final class CoupledModel {
             out.add(poses[c.vertexBody()[i]].place(c.drawn()[i]));
         }
         return out;
+    }
+
+    /** True when some vertex of loop k rides a body marked in {@code marked}. */
+    private boolean rides(int k, boolean[] marked) {
+        for (int body : loops.get(k).vertexBody()) {
+            if (marked[body]) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private double entry(int k, int j, Pose[] poses) {
@@ -502,22 +517,24 @@ final class CoupledModel {
                 if (freeSlot[b] < 0) {
                     continue;
                 }
-                fx[b] += gradient(b, spaceStepM, 0, 0);
-                fy[b] += gradient(b, 0, spaceStepM, 0);
-                torque[b] += gradient(b, 0, 0, ANGLE_STEP_RAD);
+                boolean[] only = new boolean[bodies.size()];
+                only[b] = true;
+                fx[b] += gradient(b, only, spaceStepM, 0, 0);
+                fy[b] += gradient(b, only, 0, spaceStepM, 0);
+                torque[b] += gradient(b, only, 0, 0, ANGLE_STEP_RAD);
             }
             Pose[] later = poses.clone();
             Pose[] earlier = poses.clone();
             for (int b = 0; b < bodies.size(); b++) {
-                if (freeSlot[b] < 0) {
+                if (drivenPath[b]) {
                     later[b] = bodies.get(b).poseAt(tS + timeStepS);
                     earlier[b] = bodies.get(b).poseAt(tS - timeStepS);
                 }
             }
-            return -(quadratic(inductance(later), current) - quadratic(inductance(earlier), current)) / (2 * timeStepS);
+            return -energyChange(later, earlier, drivenPath) / (2 * timeStepS);
         }
 
-        private double gradient(int body, double dx, double dy, double dAngle) {
+        private double gradient(int body, boolean[] only, double dx, double dy, double dAngle) {
             Pose[] plus = poses.clone();
             Pose[] minus = poses.clone();
             Pose p = poses[body];
@@ -525,8 +542,25 @@ final class CoupledModel {
                     p.omegaRadPerS());
             minus[body] = new Pose(p.pivot(), p.offset().minus(new Vec2(dx, dy)), p.angleRad() - dAngle, p.velocity(),
                     p.omegaRadPerS());
-            double step = 2 * (dx + dy + dAngle);
-            return (quadratic(inductance(plus), current) - quadratic(inductance(minus), current)) / step;
+            return energyChange(plus, minus, only) / (2 * (dx + dy + dAngle));
+        }
+
+        /**
+         * ½·Iᵀ[M(a) − M(b)]I at the present currents, computing only the entries of loops that ride
+         * a body marked in {@code moved} (the others are the same in both).
+         */
+        private double energyChange(Pose[] a, Pose[] b, boolean[] moved) {
+            double sum = 0;
+            for (int k = 0; k < loops.size(); k++) {
+                for (int j = k; j < loops.size(); j++) {
+                    if (!Double.isNaN(constantM[k][j]) || !(rides(k, moved) || rides(j, moved))) {
+                        continue;
+                    }
+                    double change = (entry(k, j, a) - entry(k, j, b)) * current[k] * current[j];
+                    sum += k == j ? 0.5 * change : change;
+                }
+            }
+            return sum;
         }
 
         /**
