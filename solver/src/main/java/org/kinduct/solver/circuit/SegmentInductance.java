@@ -34,6 +34,9 @@ public final class SegmentInductance {
     /** Shortest straight piece accepted, in wire radii (Rosa's formula assumes l ≫ ρ). */
     public static final double MIN_LENGTH_RADII = 4;
 
+    /** Below this |sin| between coplanar filaments the closed form gives way to the quadrature. */
+    static final double PLANAR_MIN_SIN = 0.05;
+
     /** Relative accuracy of the numerical outer Neumann integral. */
     static final double REL_TOL = 1e-11;
 
@@ -56,6 +59,9 @@ public final class SegmentInductance {
             return 0;
         }
         double integral = sharedEndIntegral(a, b);
+        if (Double.isNaN(integral)) {
+            integral = coplanarIntegral(a, b);
+        }
         if (Double.isNaN(integral)) {
             integral = neumannIntegral(a, b);
         }
@@ -92,6 +98,85 @@ public final class SegmentInductance {
                     + " their mutual inductance diverges");
         }
         return 2 * (l * atanh(m / (l + n)) + m * atanh(l / (m + n)));
+    }
+
+    /**
+     * ∫∫ ds1 ds2 / r in closed form for filaments in one plane z = const, as the double difference
+     * F(s2,t2) − F(s1,t2) − F(s2,t1) + F(s1,t1) of an antiderivative with ∂²F/∂s∂t = 1/r (the
+     * route of Grover 1946 and Campbell 1915 for inclined and parallel filaments; each F is
+     * checked here against the numerical Neumann integral in the tests):
+     * <ul>
+     *   <li>lines crossing at O at angle ε, s and t measured from O, r² = s² + t² − 2st·cos ε:
+     *       F = s·ln(t − s·cos ε + r) + t·ln(s − t·cos ε + r);</li>
+     *   <li>parallel lines a distance d apart, s and t along the common direction:
+     *       F = −h(s − t), h(u) = u·asinh(u/d) − √(u² + d²), and for collinear filaments that do
+     *       not overlap h(u) = |u|·ln|u| (the dropped terms are linear in u and cancel).</li>
+     * </ul>
+     * NaN when the filaments are not in one plane, or their lines cross at an angle whose sine is
+     * below {@value #PLANAR_MIN_SIN} (the crossing lies far away and the four terms cancel
+     * badly): the quadrature takes those.
+     */
+    private static double coplanarIntegral(Filament a, Filament b) {
+        double z = a.az();
+        if (a.bz() != z || b.az() != z || b.bz() != z) {
+            return Double.NaN;
+        }
+        double la = a.length();
+        double lb = b.length();
+        double ux = (a.bx() - a.ax()) / la;
+        double uy = (a.by() - a.ay()) / la;
+        double vx = (b.bx() - b.ax()) / lb;
+        double vy = (b.by() - b.ay()) / lb;
+        double wx = b.ax() - a.ax();
+        double wy = b.ay() - a.ay();
+        double sin = ux * vy - uy * vx;
+        double cos = ux * vx + uy * vy;
+        if (Math.abs(sin) >= PLANAR_MIN_SIN) {
+            // The crossing O = a0 + σ·u = b0 + τ·v.
+            double sigma = (wx * vy - wy * vx) / sin;
+            double tau = (wx * uy - wy * ux) / sin;
+            double s1 = -sigma;
+            double s2 = la - sigma;
+            double t1 = -tau;
+            double t2 = lb - tau;
+            return inclined(s2, t2, cos, sin) - inclined(s1, t2, cos, sin) - inclined(s2, t1, cos, sin)
+                    + inclined(s1, t1, cos, sin);
+        }
+        if (sin != 0) {
+            return Double.NaN;
+        }
+        double d = Math.abs(wx * uy - wy * ux);
+        double tStart = wx * ux + wy * uy;
+        double t1 = cos > 0 ? tStart : tStart - lb;
+        double t2 = t1 + lb;
+        if (d == 0 && t1 < la && t2 > 0) {
+            throw new IllegalArgumentException("filaments overlap along a stretch; their mutual inductance diverges");
+        }
+        return -(parallel(la - t2, d) - parallel(-t2, d) - parallel(la - t1, d) + parallel(-t1, d));
+    }
+
+    /** F(s, t) for crossing lines; s·ln(…) → 0 as s → 0, and t − s·cos ε + r is formed without cancellation. */
+    private static double inclined(double s, double t, double cos, double sin) {
+        double r = Math.sqrt(s * s + t * t - 2 * s * t * cos);
+        return xLog(s, sumWithRoot(t - s * cos, r, s * sin)) + xLog(t, sumWithRoot(s - t * cos, r, t * sin));
+    }
+
+    /** q + r where r = √(q² + p²), stable when q is negative. */
+    private static double sumWithRoot(double q, double r, double p) {
+        return q >= 0 ? q + r : p * p / (r - q);
+    }
+
+    private static double xLog(double x, double y) {
+        return x == 0 ? 0 : x * Math.log(y);
+    }
+
+    private static double parallel(double u, double d) {
+        if (d == 0) {
+            return u == 0 ? 0 : Math.abs(u) * Math.log(Math.abs(u));
+        }
+        double x = Math.abs(u) / d;
+        // u·asinh(u/d) is even in u; asinh from its logarithm for x ≥ 0 has no cancellation.
+        return Math.abs(u) * Math.log(x + Math.sqrt(x * x + 1)) - Math.sqrt(u * u + d * d);
     }
 
     /** ∫_a ∫_b ds1 ds2 / r with the inner integral closed form and the outer one adaptive. */

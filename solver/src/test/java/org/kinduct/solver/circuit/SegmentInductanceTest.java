@@ -113,6 +113,23 @@ class SegmentInductanceTest {
         assertEquals(SegmentInductance.mutual(a, bOver), crossing, CONTINUITY_TOL * Math.abs(crossing));
     }
 
+    /**
+     * The closed forms for filaments in one plane against Neumann's integral by brute force
+     * (well separated) and against the general quadrature with one filament lifted 1e-9 m out of
+     * the plane (any distance; the integral is continuous in the lift).
+     */
+    @ParameterizedTest
+    @MethodSource("coplanarPairs")
+    void coplanarClosedFormsMatchTheQuadrature(long seed, Filament a, Filament b) {
+        double closed = SegmentInductance.mutual(a, b);
+        Filament lifted = new Filament(b.ax(), b.ay(), b.az() + 1e-9, b.bx(), b.by(), b.bz() + 1e-9);
+        assertEquals(SegmentInductance.mutual(a, lifted), closed, CONTINUITY_TOL * Math.abs(closed) + 1e-20,
+                "seed " + seed);
+        if (separated(a, b)) {
+            assertEquals(bruteForce(a, b), closed, BRUTE_FORCE_TOL * Math.abs(closed) + 1e-20, "seed " + seed);
+        }
+    }
+
     @ParameterizedTest
     @MethodSource("randomPairs")
     void mutualIsSymmetric(long seed, Filament a, Filament b) {
@@ -154,6 +171,36 @@ class SegmentInductanceTest {
             Filament b = randomFilament(rnd, far * dir[0], far * dir[1], far * dir[2]);
             return Arguments.of(seed, a, b);
         });
+    }
+
+    /** Random filaments in the plane z = 0.2: inclined, parallel, collinear and crossing ones. */
+    static Stream<Arguments> coplanarPairs() {
+        return IntStream.range(0, 40).mapToObj(i -> {
+            long seed = SEED * 7 + i;
+            SplittableRandom rnd = new SplittableRandom(seed);
+            double z = 0.2;
+            Filament a = Filament.inPlane(rnd.nextDouble(-0.5, 0.5), rnd.nextDouble(-0.5, 0.5),
+                    rnd.nextDouble(-0.5, 0.5), rnd.nextDouble(-0.5, 0.5), z);
+            double cx = rnd.nextDouble(-1.5, 1.5);
+            double cy = rnd.nextDouble(-1.5, 1.5);
+            double h = rnd.nextDouble(0.05, 0.5);
+            double angle;
+            switch (i % 4) {
+                case 0 -> angle = Math.atan2(a.by() - a.ay(), a.bx() - a.ax());
+                case 1 -> angle = Math.atan2(a.by() - a.ay(), a.bx() - a.ax()) + Math.PI;
+                default -> angle = rnd.nextDouble(0, 2 * Math.PI);
+            }
+            Filament b = Filament.inPlane(cx - h * Math.cos(angle), cy - h * Math.sin(angle),
+                    cx + h * Math.cos(angle), cy + h * Math.sin(angle), z);
+            return Arguments.of(seed, a, b);
+        });
+    }
+
+    /** Distance between the filaments' midpoints at least their combined length: 1/r is smooth. */
+    private static boolean separated(Filament a, Filament b) {
+        double dx = (a.ax() + a.bx() - b.ax() - b.bx()) / 2;
+        double dy = (a.ay() + a.by() - b.ay() - b.by()) / 2;
+        return Math.hypot(dx, dy) > 1.5 * (a.length() + b.length());
     }
 
     static Stream<Arguments> randomPairs() {
