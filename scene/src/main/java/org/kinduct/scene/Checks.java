@@ -3,6 +3,8 @@ package org.kinduct.scene;
 /** The validation rules the records share; messages name the rule and the value. */
 public final class Checks {
 
+    private static final java.util.regex.Pattern ID = java.util.regex.Pattern.compile("[A-Za-z0-9_.\\-]{1,64}");
+
     private Checks() {
     }
 
@@ -35,7 +37,7 @@ public final class Checks {
     }
 
     public static String id(String id, String what) {
-        if (id == null || !id.matches("[A-Za-z0-9_.\\-]{1,64}")) {
+        if (id == null || !ID.matcher(id).matches()) {
             throw new IllegalArgumentException(what + " id must be 1-64 letters, digits, '_', '-' or '.', got "
                     + (id == null ? "nothing" : "'" + id + "'"));
         }

@@ -34,10 +34,6 @@ final class Fields {
         }
     }
 
-    String path() {
-        return path;
-    }
-
     /** True when the object has {@code name}; marks it known. */
     boolean has(String name) {
         known.add(name);

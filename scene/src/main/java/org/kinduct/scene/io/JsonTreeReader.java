@@ -13,6 +13,7 @@ import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
 import java.util.List;
+import java.util.regex.Pattern;
 import org.kinduct.scene.units.Texts;
 
 /**
@@ -26,6 +27,11 @@ final class JsonTreeReader {
 
     /** Jackson quotes offending tokens at length; a line of an error report should stay readable. */
     private static final int MAX_MESSAGE = 200;
+
+    private static final Pattern SETTING_SOURCE = Pattern.compile(", from `[^`]*`");
+    private static final Pattern SETTING_HINT = Pattern.compile(": enable `[^`]*` to allow");
+    private static final Pattern COMMENT_HINT =
+            Pattern.compile("\\(not recognized as one since Feature '\\w+' not enabled for parser\\)");
 
     private static final JsonFactory FACTORY = JsonFactory.builder()
             .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_DEPTH).build())
@@ -52,8 +58,8 @@ final class JsonTreeReader {
                 return root;
             } catch (JsonProcessingException e) {
                 JsonLocation at = e.getLocation() != null ? e.getLocation() : parser.currentLocation();
-                problems.add(new Problem(path(parser.getParsingContext()), line(at), column(at),
-                        "JSON syntax: " + Texts.printable(String.valueOf(e.getOriginalMessage()), MAX_MESSAGE)));
+                problems.add(new Problem(path(parser.getParsingContext(), parser.currentToken()), line(at), column(at),
+                        "JSON syntax: " + Texts.printable(plain(e.getOriginalMessage()), MAX_MESSAGE)));
                 return null;
             }
         } catch (IOException e) {
@@ -106,8 +112,11 @@ final class JsonTreeReader {
         }
     }
 
-    /** The path of the value being parsed when a syntax error struck, in the reader's notation. */
-    private static String path(JsonStreamContext context) {
+    /**
+     * Where a syntax error struck, in the reader's path notation: inside the value of the last
+     * field name read, or else in the container after its last complete member.
+     */
+    private static String path(JsonStreamContext context, JsonToken last) {
         Deque<String> parts = new ArrayDeque<>();
         for (JsonStreamContext c = context; c != null && !c.inRoot(); c = c.getParent()) {
             if (c.inArray() && c.hasCurrentIndex()) {
@@ -116,8 +125,21 @@ final class JsonTreeReader {
                 parts.push("." + c.getCurrentName());
             }
         }
+        boolean afterCompleteMember = last != null && last != JsonToken.FIELD_NAME
+                && last != JsonToken.START_OBJECT && last != JsonToken.START_ARRAY;
+        if (afterCompleteMember && !parts.isEmpty()) {
+            parts.removeLast();
+        }
         String joined = String.join("", parts);
         return joined.startsWith(".") ? joined.substring(1) : joined;
+    }
+
+    /** Jackson's message without its hints about parser settings, which a file's author cannot change. */
+    private static String plain(String message) {
+        String m = String.valueOf(message);
+        m = SETTING_SOURCE.matcher(m).replaceAll("");
+        m = SETTING_HINT.matcher(m).replaceAll("");
+        return COMMENT_HINT.matcher(m).replaceAll("(JSON has no comments)");
     }
 
     private static int line(JsonLocation at) {

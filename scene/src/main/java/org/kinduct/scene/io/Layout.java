@@ -8,19 +8,20 @@ import java.util.Deque;
 
 /**
  * Pretty printing for scene files: two-space indents, {@code "name": value}, one member or list
- * item per line, except that short arrays the writer marks (points, sizes) stay on one line:
- * {@code [0.01, -0.002]}. Stateful: one instance per document.
+ * item per line, except that small containers the writer marks (points, sizes, vertices riding
+ * another body) stay on one line: {@code [0.01, -0.002]}. Stateful: one instance per document.
  */
 final class Layout implements PrettyPrinter {
 
     private static final String INDENT = "  ";
 
-    private final Deque<Boolean> inlineArrays = new ArrayDeque<>();
+    /** For each open container: is it on one line? */
+    private final Deque<Boolean> inline = new ArrayDeque<>();
     private boolean inlineNext;
     private int depth;
 
-    /** Keeps the next array on one line (and everything inside it). */
-    void inlineNextArray() {
+    /** Keeps the next object or array on one line, with everything inside it. */
+    void inlineNext() {
         inlineNext = true;
     }
 
@@ -31,13 +32,12 @@ final class Layout implements PrettyPrinter {
 
     @Override
     public void writeStartObject(JsonGenerator g) throws IOException {
-        g.writeRaw('{');
-        depth++;
+        open(g, '{');
     }
 
     @Override
     public void beforeObjectEntries(JsonGenerator g) throws IOException {
-        newLine(g);
+        first(g);
     }
 
     @Override
@@ -47,40 +47,52 @@ final class Layout implements PrettyPrinter {
 
     @Override
     public void writeObjectEntrySeparator(JsonGenerator g) throws IOException {
-        g.writeRaw(',');
-        newLine(g);
+        next(g);
     }
 
     @Override
     public void writeEndObject(JsonGenerator g, int nrOfEntries) throws IOException {
-        depth--;
-        if (nrOfEntries > 0) {
-            newLine(g);
-        }
-        g.writeRaw('}');
+        close(g, '}', nrOfEntries);
     }
 
     @Override
     public void writeStartArray(JsonGenerator g) throws IOException {
-        boolean inline = inlineNext || Boolean.TRUE.equals(inlineArrays.peek());
-        inlineNext = false;
-        inlineArrays.push(inline);
-        if (!inline) {
-            depth++;
-        }
-        g.writeRaw('[');
+        open(g, '[');
     }
 
     @Override
     public void beforeArrayValues(JsonGenerator g) throws IOException {
-        if (!inlineArrays.getFirst()) {
-            newLine(g);
-        }
+        first(g);
     }
 
     @Override
     public void writeArrayValueSeparator(JsonGenerator g) throws IOException {
-        if (inlineArrays.getFirst()) {
+        next(g);
+    }
+
+    @Override
+    public void writeEndArray(JsonGenerator g, int nrOfValues) throws IOException {
+        close(g, ']', nrOfValues);
+    }
+
+    private void open(JsonGenerator g, char bracket) throws IOException {
+        boolean one = inlineNext || Boolean.TRUE.equals(inline.peek());
+        inlineNext = false;
+        inline.push(one);
+        if (!one) {
+            depth++;
+        }
+        g.writeRaw(bracket);
+    }
+
+    private void first(JsonGenerator g) throws IOException {
+        if (!inline.getFirst()) {
+            newLine(g);
+        }
+    }
+
+    private void next(JsonGenerator g) throws IOException {
+        if (inline.getFirst()) {
             g.writeRaw(", ");
         } else {
             g.writeRaw(',');
@@ -88,15 +100,14 @@ final class Layout implements PrettyPrinter {
         }
     }
 
-    @Override
-    public void writeEndArray(JsonGenerator g, int nrOfValues) throws IOException {
-        if (!inlineArrays.pop()) {
+    private void close(JsonGenerator g, char bracket, int count) throws IOException {
+        if (!inline.pop()) {
             depth--;
-            if (nrOfValues > 0) {
+            if (count > 0) {
                 newLine(g);
             }
         }
-        g.writeRaw(']');
+        g.writeRaw(bracket);
     }
 
     private void newLine(JsonGenerator g) throws IOException {

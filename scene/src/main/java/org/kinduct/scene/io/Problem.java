@@ -1,5 +1,6 @@
 package org.kinduct.scene.io;
 
+import java.io.Serializable;
 import org.kinduct.scene.Checks;
 
 /**
@@ -11,7 +12,7 @@ import org.kinduct.scene.Checks;
  * @param column 1-based column, counted in characters
  * @param message what is wrong and, where it helps, what was expected
  */
-public record Problem(String path, int line, int column, String message) {
+public record Problem(String path, int line, int column, String message) implements Serializable {
 
     public Problem {
         Checks.nonNull(path, "path");

@@ -2,8 +2,10 @@ package org.kinduct.scene.io;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.function.Supplier;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Checks;
@@ -108,16 +110,16 @@ final class ReadContext {
         };
     }
 
-    /** A fixed number of quantities of {@code d}, e.g. {@code [x size, y size, height]}. */
-    Conv<double[]> quantities(Dimension d, String layout) {
+    /** A fixed list of quantities of {@code d}, one per name, e.g. {@code [x size, y size, height]}. */
+    Conv<double[]> quantities(Dimension d, String... names) {
         Conv<Double> one = quantity(d);
         return (path, node) -> {
-            if (!(node instanceof Json.Arr arr) || arr.items().size() != layout.split(",").length) {
-                problem(path, node, "expected [" + layout + "], each " + d.noun() + " such as '" + d.example()
-                        + "', got " + node.describe());
+            if (!(node instanceof Json.Arr arr) || arr.items().size() != names.length) {
+                problem(path, node, "expected [" + String.join(", ", names) + "], each " + d.noun() + " such as '"
+                        + d.example() + "', got " + node.describe());
                 return null;
             }
-            double[] values = new double[arr.items().size()];
+            double[] values = new double[names.length];
             boolean ok = true;
             for (int i = 0; i < values.length; i++) {
                 Double v = one.read(item(path, i), arr.items().get(i));
@@ -244,14 +246,16 @@ final class ReadContext {
 
     /** Reports ids used twice and references to bodies that do not exist. */
     void checkReferences() {
-        Map<String, Ref> bodies = new LinkedHashMap<>();
-        bodies.put(Body.FIXED, null);
-        reportDuplicates(bodyDeclarations, bodies, "body id");
+        Map<String, Ref> declaredBodies = new LinkedHashMap<>();
+        reportDuplicates(bodyDeclarations, declaredBodies, "body id");
         reportDuplicates(objectDeclarations, new LinkedHashMap<>(), "id");
+        Set<String> bodies = new LinkedHashSet<>();
+        bodies.add(Body.FIXED);
+        bodies.addAll(declaredBodies.keySet());
         for (Ref r : bodyReferences) {
-            if (!bodies.containsKey(r.id())) {
-                problem(r.path(), r.at(), "unknown body '" + r.id() + "'" + Suggestions.hint(r.id(), bodies.keySet())
-                        + "; the bodies are " + String.join(", ", bodies.keySet()));
+            if (!bodies.contains(r.id())) {
+                problem(r.path(), r.at(), "unknown body '" + r.id() + "'" + Suggestions.hint(r.id(), bodies)
+                        + "; the bodies are " + String.join(", ", bodies));
             }
         }
     }

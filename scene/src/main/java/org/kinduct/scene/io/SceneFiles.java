@@ -69,12 +69,20 @@ public final class SceneFiles {
      *         {@code file}, if any, is then unchanged and no temporary file is left behind
      */
     public static void write(Scene scene, Path file) throws IOException {
-        byte[] bytes = SceneJson.write(scene).getBytes(StandardCharsets.UTF_8);
+        writeAtomically(file, SceneJson.write(scene).getBytes(StandardCharsets.UTF_8));
+    }
+
+    /**
+     * Writes {@code bytes} to {@code file} with the same atomic replace as {@link #write(Scene, Path)};
+     * exports and result files use it so a failed write never leaves a partial file.
+     */
+    public static void writeAtomically(Path file, byte[] bytes) throws IOException {
         writeAtomically(file, out -> out.write(bytes));
     }
 
     static void writeAtomically(Path file, Content content) throws IOException {
-        Path target = file.toAbsolutePath();
+        // Saving through a link updates the file it points to and keeps the link.
+        Path target = Files.isSymbolicLink(file) && Files.exists(file) ? file.toRealPath() : file.toAbsolutePath();
         Path folder = target.getParent();
         if (folder == null) {
             throw new IOException("cannot save to " + target + ": not a file path");
@@ -143,9 +151,10 @@ public final class SceneFiles {
         }
         if (result.isError()) {
             out.flip();
-            String before = out.toString();
-            int line = 1 + (int) before.chars().filter(c -> c == '\n').count();
-            int column = before.length() - before.lastIndexOf('\n');
+            // Lines end at \r\n, \r or \n, as the JSON parser counts them for other problems.
+            String[] lines = out.toString().split("\r\n|\r|\n", -1);
+            int line = lines.length;
+            int column = lines[lines.length - 1].length() + 1;
             throw new SceneFormatException(sourceName, List.of(new Problem("", line, column,
                     "not UTF-8 text: invalid byte 0x" + String.format("%02x", bytes[in.position()] & 0xff)
                             + " at byte offset " + in.position())));

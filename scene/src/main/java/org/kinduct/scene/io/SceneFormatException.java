@@ -12,7 +12,7 @@ public class SceneFormatException extends Exception {
     private static final long serialVersionUID = 1L;
 
     private final String sourceName;
-    private final transient List<Problem> problems;
+    private final List<Problem> problems;
 
     public SceneFormatException(String sourceName, List<Problem> problems) {
         super(describe(sourceName, problems));

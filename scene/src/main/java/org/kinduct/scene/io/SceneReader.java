@@ -225,7 +225,7 @@ final class SceneReader {
         String id = f.req("id", ctx.objectDeclaration("Source"));
         String body = f.opt("body", ctx.bodyReference(), Body.FIXED);
         Vec2 center = f.req("center", ctx.point(LENGTH));
-        double[] size = f.req("size", ctx.quantities(LENGTH, "x size, y size, height"));
+        double[] size = f.req("size", ctx.quantities(LENGTH, "x size", "y size", "height"));
         Double angle = f.opt("angle", ctx.quantity(ANGLE), 0.0);
         Double standoff = f.req("standoff", ctx.quantity(LENGTH));
         Source.Side side = f.opt("side", ctx.choice(Vocabulary.SIDE), Source.Side.BELOW);

@@ -163,7 +163,7 @@ final class SceneWriter {
             idAndBody(m.id(), m.body());
             point("center", m.center());
             g.writeFieldName("size");
-            layout.inlineNextArray();
+            layout.inlineNext();
             g.writeArray(new double[] {m.sizeXM(), m.sizeYM(), m.heightM()}, 0, 3);
             g.writeNumberField("angle", m.angleRad());
             magnetPlacement(m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
@@ -218,6 +218,7 @@ final class SceneWriter {
             if (v.body() == null) {
                 point(v.at());
             } else {
+                layout.inlineNext();
                 g.writeStartObject();
                 point("at", v.at());
                 g.writeStringField("body", v.body());
@@ -269,7 +270,7 @@ final class SceneWriter {
     }
 
     private void point(Vec2 p) throws IOException {
-        layout.inlineNextArray();
+        layout.inlineNext();
         g.writeStartArray();
         g.writeNumber(p.x());
         g.writeNumber(p.y());

@@ -74,14 +74,21 @@ public final class Unit {
         return spellings;
     }
 
-    /** {@code value} in this unit, converted to SI. */
+    /** {@code value} (finite) in this unit, converted to SI. */
     public double toSi(double value) {
-        return toSi(new BigDecimal(value)).doubleValue();
+        return toSi(new BigDecimal(finite(value))).doubleValue();
     }
 
-    /** {@code si} converted to this unit. */
+    /** {@code si} (finite) converted to this unit. */
     public double fromSi(double si) {
-        return fromSi(new BigDecimal(si)).doubleValue();
+        return fromSi(new BigDecimal(finite(si))).doubleValue();
+    }
+
+    private static double finite(double v) {
+        if (!Double.isFinite(v)) {
+            throw new IllegalArgumentException("only finite values convert between units, got " + v);
+        }
+        return v;
     }
 
     BigDecimal toSi(BigDecimal value) {

@@ -20,7 +20,7 @@ import org.kinduct.scene.Source;
 class SceneJsonRoundTripTest {
 
     private static final long FIRST_SEED = 20_261_201L;
-    private static final int RANDOM_SCENES = 300;
+    private static final int RANDOM_SCENES = 200;
 
     @Test
     void everyRecordVariantSurvivesWriteThenRead() throws SceneFormatException {

@@ -1,0 +1,56 @@
+package org.kinduct.scene.io;
+
+import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Optional;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.EnumSource;
+import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Unit;
+
+/** Keeps docs/scene-format.md true: its example reads, and its unit table lists every accepted unit. */
+class SceneFormatDocumentTest {
+
+    /** Surefire runs in the module folder; the document sits in the project's docs folder. */
+    private static final Path DOCUMENT = Path.of("..", "docs", "scene-format.md");
+
+    private static String text;
+
+    @BeforeAll
+    static void readDocument() throws IOException {
+        text = Files.readString(DOCUMENT, StandardCharsets.UTF_8);
+    }
+
+    @Test
+    void exampleIsAValidScene() {
+        int start = text.indexOf("```json\n") + "```json\n".length();
+        String example = text.substring(start, text.indexOf("```", start));
+
+        assertDoesNotThrow(() -> SceneJson.read(example, "scene-format.md example"));
+    }
+
+    @ParameterizedTest
+    @EnumSource(value = Dimension.class, mode = EnumSource.Mode.EXCLUDE, names = "DIMENSIONLESS")
+    void unitTableListsEveryAcceptedSpelling(Dimension d) {
+        String label = d.noun().replaceFirst("^an? ", "");
+        Optional<String> row = text.lines().filter(l -> l.startsWith("| " + label + " |")).findFirst();
+        assertTrue(row.isPresent(), "no table row for " + label);
+        List<String> listed = Arrays.asList(row.get().split("\\|")[3].replaceAll("\\([^)]*\\)", "").split(","));
+        for (Unit u : d.units()) {
+            for (String spelling : u.spellings()) {
+                boolean asciiMicro = spelling.startsWith("u") && u.spellings().contains("µ" + spelling.substring(1));
+                assertTrue(asciiMicro || listed.stream().anyMatch(s -> s.strip().equals(spelling)),
+                        label + " row lacks '" + spelling + "': " + row.get());
+            }
+        }
+    }
+}

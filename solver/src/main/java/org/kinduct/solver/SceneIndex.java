@@ -1,0 +1,118 @@
+package org.kinduct.solver;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Pose;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.field.PlaneField;
+
+/**
+ * The scene's bodies, sources and conductor vertices resolved to array indices once, so that
+ * each instant only looks up poses by index.
+ */
+final class SceneIndex {
+
+    private final Scene scene;
+    private final String[] bodyIds;
+    private final int[] sourceBody;
+    private final SourceReach[] reach;
+    private final int[][] vertexBody;
+    private final Vec2[][] drawn;
+
+    SceneIndex(Scene scene) {
+        this.scene = scene;
+        List<Body> bodies = scene.bodies();
+        bodyIds = new String[bodies.size()];
+        Map<String, Integer> index = new HashMap<>();
+        for (int b = 0; b < bodyIds.length; b++) {
+            bodyIds[b] = bodies.get(b).id();
+            index.put(bodyIds[b], b);
+        }
+        List<Source> sources = scene.sources();
+        sourceBody = new int[sources.size()];
+        reach = new SourceReach[sources.size()];
+        for (int s = 0; s < sourceBody.length; s++) {
+            sourceBody[s] = index.get(sources.get(s).body());
+            reach[s] = SourceReach.of(sources.get(s));
+        }
+        List<Conductor> conductors = scene.conductors();
+        vertexBody = new int[conductors.size()][];
+        drawn = new Vec2[conductors.size()][];
+        for (int c = 0; c < vertexBody.length; c++) {
+            Conductor conductor = conductors.get(c);
+            List<Conductor.Vertex> vertices = conductor.vertices();
+            vertexBody[c] = new int[vertices.size()];
+            drawn[c] = new Vec2[vertices.size()];
+            for (int i = 0; i < vertices.size(); i++) {
+                vertexBody[c][i] = index.get(vertices.get(i).bodyOr(conductor.body()));
+                drawn[c][i] = vertices.get(i).at();
+            }
+        }
+    }
+
+    Scene scene() {
+        return scene;
+    }
+
+    int sourceCount() {
+        return sourceBody.length;
+    }
+
+    /** Sum of the sources' field scales, tesla: a bound on |B_z| up to a modest factor. */
+    double fieldScaleT() {
+        double sum = 0;
+        for (SourceReach r : reach) {
+            sum += r.fieldT();
+        }
+        return sum;
+    }
+
+    /** The source's reach. */
+    SourceReach reach(int source) {
+        return reach[source];
+    }
+
+    int sourceBody(int source) {
+        return sourceBody[source];
+    }
+
+    int vertexCount(int conductor) {
+        return drawn[conductor].length;
+    }
+
+    Frame frame(Kinematics kinematics, double tS) {
+        Pose[] poses = new Pose[bodyIds.length];
+        for (int b = 0; b < poses.length; b++) {
+            poses[b] = kinematics.poseAt(bodyIds[b], tS);
+        }
+        List<Source> sources = scene.sources();
+        PlaneField[] fields = new PlaneField[sources.size()];
+        for (int s = 0; s < fields.length; s++) {
+            fields[s] = SourceFields.place(sources.get(s), poses[sourceBody[s]], tS);
+        }
+        return new Frame(tS, poses, fields);
+    }
+
+    /** Writes conductor {@code c}'s vertices at {@code frame} into xs, ys. */
+    void place(int c, Frame frame, double[] xs, double[] ys) {
+        for (int i = 0; i < xs.length; i++) {
+            Vec2 p = frame.pose(vertexBody[c][i]).place(drawn[c][i]);
+            xs[i] = p.x();
+            ys[i] = p.y();
+        }
+    }
+
+    /** Writes the velocities of conductor {@code c}'s vertices, now at xs, ys, into vx, vy. */
+    void velocities(int c, Frame frame, double[] xs, double[] ys, double[] vx, double[] vy) {
+        for (int i = 0; i < xs.length; i++) {
+            Vec2 v = frame.pose(vertexBody[c][i]).velocityAt(new Vec2(xs[i], ys[i]));
+            vx[i] = v.x();
+            vy[i] = v.y();
+        }
+    }
+}

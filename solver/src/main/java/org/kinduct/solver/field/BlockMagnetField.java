@@ -1,0 +1,160 @@
+package org.kinduct.solver.field;
+
+import org.kinduct.scene.Checks;
+
+/**
+ * A rectangular block magnet, uniformly and rigidly magnetized along +z (negative remanence:
+ * along −z), recoil permeability 1, sizes a × b in its own frame, rotated by {@code angleRad}
+ * about its centre (cx, cy), occupying zLow ≤ z ≤ zHigh on one side of the drawing plane.
+ *
+ * <p>B_z, surface-charge model (R. Engel-Herbert &amp; T. Hesjedal, J. Appl. Phys. 97, 074504,
+ * 2005; E. P. Furlani, <i>Permanent Magnet and Electromechanical Devices</i>, Academic Press,
+ * 2001): with the magnet over x1 &lt; x &lt; x2, y1 &lt; y &lt; y2, z1 &lt; z &lt; z2 in its own frame,
+ * B_z = (Br/4π) Σ_{i,j,k ∈ {1,2}} (−1)^{i+j+k} atan[(x − x_i)(y − y_j) / ((z − z_k) R_ijk)],
+ * R_ijk = √((x − x_i)² + (y − y_j)² + (z − z_k)²) (1-based indices). A face lying in the plane
+ * (stand-off 0) is evaluated as the limit from outside the magnet, where B = μ0H and B_z is
+ * continuous through the face; exactly on a footprint edge that face's terms take the mean
+ * of the two sides.
+ *
+ * <p>A: the magnetization M = Br/μ0 ẑ is equivalent to a surface current K = M × n̂ = Br/μ0
+ * circulating counter-clockwise round the four side faces (Furlani 2001, §3; Griffiths ch. 6).
+ * Each side face is a ribbon of straight filaments (Griffiths ch. 5:
+ * A = (μ0 I/4π) û [asinh(t_b/d) − asinh(t_a/d)]) stacked over the height, integrated in closed
+ * form: ∫ asinh(t/√(c² + z²)) dz = G(t, c, z) with
+ * G = z·asinh(t/√(c² + z²)) + t·asinh(z/√(c² + t²)) − c·atan(t z/(c R)), R = √(c² + t² + z²)
+ * (by parts, then ∫ dz/((c² + z²)√(z² + c² + t²)), Gradshteyn &amp; Ryzhik 2.284 — derived here and
+ * checked against numerical quadrature in the tests).
+ *
+ * <p>Accuracy: a few ulp relative for B_z near the magnet; the closed-form A sums terms of size
+ * ~ (size)·log(distance) whose sum falls like 1/distance², so far away it keeps about
+ * 16 − 2·log10(distance/size) digits (1e-10 relative at 1000 sizes). On a footprint edge with
+ * stand-off 0, B_z is discontinuous and A has a logarithmic kink; both stay finite.
+ */
+public final class BlockMagnetField extends CurrentSourceField {
+
+    private final double cx;
+    private final double cy;
+    private final double cos;
+    private final double sin;
+    private final double halfX;
+    private final double halfY;
+    private final double zLowM;
+    private final double zHighM;
+    /** z − z1 and z − z2 at the field plane z = 0, as signed zeros on the outside when 0. */
+    private final double dzBottom;
+    private final double dzTop;
+    private final double brOver4Pi;
+
+    /**
+     * @param cx centre x, metres
+     * @param cy centre y, metres
+     * @param angleRad rotation of the magnet's own x axis from +x, counter-clockwise
+     * @param sizeXM edge along the magnet's own x axis, metres
+     * @param sizeYM edge along its own y axis, metres
+     * @param zLowM bottom face z, metres
+     * @param zHighM top face z, metres; the magnet must not cross z = 0
+     * @param signedRemanenceT remanence Br, tesla; positive when magnetized along +z
+     */
+    public BlockMagnetField(double cx, double cy, double angleRad, double sizeXM, double sizeYM,
+                            double zLowM, double zHighM, double signedRemanenceT) {
+        this.cx = Checks.finite(cx, "magnet centre x");
+        this.cy = Checks.finite(cy, "magnet centre y");
+        Checks.finite(angleRad, "magnet angle");
+        this.cos = Math.cos(angleRad);
+        this.sin = Math.sin(angleRad);
+        this.halfX = Checks.positive(sizeXM, "magnet size x") / 2;
+        this.halfY = Checks.positive(sizeYM, "magnet size y") / 2;
+        requireOffPlane(zLowM, zHighM);
+        this.zLowM = zLowM;
+        this.zHighM = zHighM;
+        // The outside of the bottom face is below it (z − z1 → 0⁻), of the top face above (→ 0⁺).
+        this.dzBottom = zLowM == 0 ? -0.0 : -zLowM;
+        this.dzTop = zHighM == 0 ? 0.0 : -zHighM;
+        this.brOver4Pi = Checks.finite(signedRemanenceT, "remanence") / (4 * Math.PI);
+    }
+
+    @Override
+    public double bz(double x, double y) {
+        double dx = x - cx;
+        double dy = y - cy;
+        double u = cos * dx + sin * dy;
+        double v = -sin * dx + cos * dy;
+        double x1 = u + halfX;
+        double x2 = u - halfX;
+        double y1 = v + halfY;
+        double y2 = v - halfY;
+        double sum = -corner(x1, y1, dzBottom) + corner(x2, y1, dzBottom) + corner(x1, y2, dzBottom)
+                - corner(x2, y2, dzBottom)
+                + corner(x1, y1, dzTop) - corner(x2, y1, dzTop) - corner(x1, y2, dzTop) + corner(x2, y2, dzTop);
+        return brOver4Pi * sum;
+    }
+
+    /** atan[X·Y/(Z·R)]; Z = ±0 gives ±π/2·sign(XY), and XY = 0 gives 0 (mean of both sides). */
+    private static double corner(double dx, double dy, double dz) {
+        double n = dx * dy;
+        if (n == 0) {
+            return 0;
+        }
+        return Math.atan(n / (dz * Math.sqrt(dx * dx + dy * dy + dz * dz)));
+    }
+
+    @Override
+    public void potential(double x, double y, double[] out) {
+        double dx = x - cx;
+        double dy = y - cy;
+        double u = cos * dx + sin * dy;
+        double v = -sin * dx + cos * dy;
+        // Ribbons along the magnet's x: +x at y = −b/2, −x at y = +b/2; along y: +y at x = +a/2, −y at x = −a/2.
+        double tx1 = -halfX - u;
+        double tx2 = halfX - u;
+        double ty1 = -halfY - v;
+        double ty2 = halfY - v;
+        double au = brOver4Pi * (ribbon(tx1, tx2, Math.abs(v + halfY)) - ribbon(tx1, tx2, Math.abs(v - halfY)));
+        double av = brOver4Pi * (ribbon(ty1, ty2, Math.abs(u - halfX)) - ribbon(ty1, ty2, Math.abs(u + halfX)));
+        out[0] = cos * au - sin * av;
+        out[1] = sin * au + cos * av;
+    }
+
+    /**
+     * ∫_{zLow}^{zHigh} [asinh(t2/√(c² + z²)) − asinh(t1/√(c² + z²))] dz for t1 &lt; t2: the potential
+     * of a unit ribbon running from t1 to t2 along its line, c ≥ 0 the in-plane distance to that line.
+     */
+    static double ribbon(double t1, double t2, double c, double zLow, double zHigh) {
+        double rho1 = Math.sqrt(c * c + t1 * t1);
+        double rho2 = Math.sqrt(c * c + t2 * t2);
+        return slice(t1, t2, c, rho1, rho2, zHigh) - slice(t1, t2, c, rho1, rho2, zLow);
+    }
+
+    private double ribbon(double t1, double t2, double c) {
+        return ribbon(t1, t2, c, zLowM, zHighM);
+    }
+
+    /**
+     * G(t2, c, z) − G(t1, c, z), G the antiderivative in the class documentation, in forms free of
+     * cancellation: the z·asinh difference as one log ({@link StraightFilament#asinhDifference}),
+     * the t·asinh(z/ρ) terms through log1p. ρ_i = √(c² + t_i²). G(t, c, 0) = 0.
+     */
+    private static double slice(double t1, double t2, double c, double rho1, double rho2, double z) {
+        if (z == 0) {
+            return 0;
+        }
+        double z2 = z * z;
+        double r1 = Math.sqrt(rho1 * rho1 + z2);
+        double r2 = Math.sqrt(rho2 * rho2 + z2);
+        double g = z * StraightFilament.asinhDifference(t2, t1, r2, r1, c * c + z2, t2 - t1)
+                + weightedAsinh(t2, z, r2, rho2) - weightedAsinh(t1, z, r1, rho1);
+        if (c != 0) {
+            g -= c * (Math.atan(t2 * z / (c * r2)) - Math.atan(t1 * z / (c * r1)));
+        }
+        return g;
+    }
+
+    /** t·asinh(z/ρ) with r = √(ρ² + z²), as t·sign(z)·log1p((|z| + z²/(r + ρ))/ρ); 0 for t = 0. */
+    private static double weightedAsinh(double t, double z, double r, double rho) {
+        if (t == 0) {
+            return 0;
+        }
+        double az = Math.abs(z);
+        return t * Math.copySign(Math.log1p((az + az * az / (r + rho)) / rho), z);
+    }
+}

@@ -1,0 +1,66 @@
+package org.kinduct.cli;
+
+import java.lang.reflect.InvocationTargetException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.kinduct.demo.Demos;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Parameters;
+
+/** Opens the editor. JavaFX is loaded by name here only, so headless commands never load it. */
+@Command(name = "gui", mixinStandardHelpOptions = true, description = "Open the editor on FILE or on a demo scene.")
+final class GuiCommand implements Callable<Integer> {
+
+    private static final String LAUNCHER = "org.kinduct.ui.app.GuiLauncher";
+    private static volatile boolean started;
+
+    @Parameters(arity = "0..1", paramLabel = "FILE", description = "Scene file to open.")
+    Path file;
+
+    @Override
+    public Integer call() {
+        return open(file, null);
+    }
+
+    static boolean guiStarted() {
+        return started;
+    }
+
+    /** Opens {@code file}, or demo {@code demoName}, or the default demo when both are null. */
+    static int open(Path file, String demoName) {
+        if (file != null && !Files.isReadable(file)) {
+            throw new BadInputException("cannot read scene file " + file);
+        }
+        if (!displayAvailable()) {
+            System.err.println("kinduct: no display found for the editor; headless, try"
+                    + " './kinduct solve FILE' (results) or './kinduct demo' (list demo scenes).");
+            return KinductMain.BAD_INPUT;
+        }
+        String demo = file != null ? null : Demos.resource(demoName != null ? demoName : Demos.defaultName())
+                .orElseThrow(() -> new BadInputException("no demo named '" + demoName + "'"));
+        try {
+            started = true;
+            Class.forName(LAUNCHER).getMethod("open", Path.class, String.class).invoke(null, file, demo);
+            return KinductMain.OK;
+        } catch (InvocationTargetException e) {
+            throw new IllegalStateException("the editor failed to start: " + e.getCause(), e.getCause());
+        } catch (ReflectiveOperationException e) {
+            throw new IllegalStateException("the editor is missing from this build", e);
+        }
+    }
+
+    /** On Linux and other X11/Wayland systems a display is announced in the environment. */
+    private static boolean displayAvailable() {
+        String os = System.getProperty("os.name", "").toLowerCase(Locale.ROOT);
+        if (os.contains("win") || os.contains("mac")) {
+            return true;
+        }
+        return notBlank(System.getenv("DISPLAY")) || notBlank(System.getenv("WAYLAND_DISPLAY"));
+    }
+
+    private static boolean notBlank(String s) {
+        return s != null && !s.isBlank();
+    }
+}

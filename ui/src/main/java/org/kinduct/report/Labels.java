@@ -1,0 +1,29 @@
+package org.kinduct.report;
+
+import org.kinduct.solver.Circulation;
+import org.kinduct.solver.Terminal;
+
+/** The words every output uses for terminals and current sense. */
+public final class Labels {
+
+    private Labels() {
+    }
+
+    /** {@code first}, {@code last} or {@code none}: which vertex is the + end. */
+    public static String terminal(Terminal t) {
+        return switch (t) {
+            case FIRST -> "first";
+            case LAST -> "last";
+            case NONE -> "none";
+        };
+    }
+
+    /** {@code cw}, {@code ccw} or {@code none}, as seen on screen. */
+    public static String circulation(Circulation c) {
+        return switch (c) {
+            case CW -> "cw";
+            case CCW -> "ccw";
+            case NONE -> "none";
+        };
+    }
+}
