@@ -3,6 +3,7 @@ package org.kinduct.solver.circuit;
 import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.field.CircularFilament;
 
 /**
  * Self- and mutual inductance of polygon loops of round wire in the drawing plane z = 0, and
@@ -30,7 +31,7 @@ import org.kinduct.scene.Vec2;
  *
  * <p><b>Source coils</b> (filaments, no radius, at z ≠ 0): M = N_loop·N_coil·(flux of the coil
  * through the loop per ampere) = N·N_c·∮_loop A·dl. Polygon coils use the filament sums; circular
- * coils the closed-form potential of a circular filament ({@link CircularFilament}) integrated
+ * coils the closed-form potential of a circular filament ({@link CircularFilament#aPhi}, Jackson eq. 5.37) integrated
  * along the loop sides by adaptive Gauss–Legendre. Accurate to about 1e-9 relative while the
  * coil's plane is not much closer to the loop than 1e-3 of the loop size.
  */
@@ -101,12 +102,15 @@ public final class LoopInductance {
         for (int i = 0; i < n; i++) {
             Vec2 p = loop.get(i).minus(center);
             Vec2 d = loop.get((i + 1) % n).minus(loop.get(i));
-            // A = (A_φ/ρ)·(ẑ × r), so A·dl = (A_φ/ρ)·(x·dy − y·dx) with r along the side.
+            // A = (A_φ/ρ)·(ẑ × r), so A·dl = (A_φ/ρ)·(x·dy − y·dx) with r along the side; a side
+            // on a line through the axis (cross = 0) links nothing and would put ρ = 0 at a node.
             double cross = p.cross(d);
+            if (cross == 0) {
+                continue;
+            }
             flux += cross * AdaptiveGauss.integrate(s -> {
-                double x = p.x() + s * d.x();
-                double y = p.y() + s * d.y();
-                return CircularFilament.aPhiOverRho(radiusM, Math.hypot(x, y), coilZM);
+                double rho = Math.hypot(p.x() + s * d.x(), p.y() + s * d.y());
+                return CircularFilament.aPhi(radiusM, coilZM, 1, rho) / rho;
             }, 0, 1, REL_TOL, 0);
         }
         return (double) turns * coilTurns * flux;

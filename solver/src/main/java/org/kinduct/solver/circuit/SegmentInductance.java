@@ -1,5 +1,8 @@
 package org.kinduct.solver.circuit;
 
+import static org.kinduct.solver.field.PhysicalConstants.MU_0;
+import static org.kinduct.solver.field.PhysicalConstants.MU_0_OVER_4PI;
+
 /**
  * Inductance of straight conductors at low frequency (μr = 1).
  *
@@ -28,9 +31,6 @@ package org.kinduct.solver.circuit;
  */
 public final class SegmentInductance {
 
-    /** μ0, N/A² (CODATA 2018, NIST); measured, not exactly 4π·1e-7. */
-    public static final double MU0 = 1.25663706212e-6;
-
     /** Shortest straight piece accepted, in wire radii (Rosa's formula assumes l ≫ ρ). */
     public static final double MIN_LENGTH_RADII = 4;
 
@@ -49,7 +49,7 @@ public final class SegmentInductance {
             throw new IllegalArgumentException("a straight wire piece must be at least " + MIN_LENGTH_RADII
                     + " wire radii long for Rosa's formula, got length " + lengthM + " m, radius " + radiusM + " m");
         }
-        return MU0 * lengthM / (2 * Math.PI) * (Math.log(2 * lengthM / radiusM) - 0.75);
+        return MU_0 * lengthM / (2 * Math.PI) * (Math.log(2 * lengthM / radiusM) - 0.75);
     }
 
     /** Neumann mutual inductance of two straight filaments, henries (symmetric in its arguments). */
@@ -65,7 +65,7 @@ public final class SegmentInductance {
         if (Double.isNaN(integral)) {
             integral = neumannIntegral(a, b);
         }
-        return MU0 / (4 * Math.PI) * cos * integral;
+        return MU_0_OVER_4PI * cos * integral;
     }
 
     /**

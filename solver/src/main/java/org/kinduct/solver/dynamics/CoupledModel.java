@@ -15,6 +15,7 @@ import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Kinematics;
 import org.kinduct.solver.circuit.LoopInductance;
 import org.kinduct.solver.field.PlaneField;
 
@@ -179,26 +180,25 @@ final class CoupledModel {
     }
 
     /**
-     * −dλ_ext,k/dt, the EMF the sources induce in loop k, by the five-point central difference
-     * [−f(t+2h) + 8f(t+h) − 8f(t−h) + f(t−2h)]/(12h) (Abramowitz &amp; Stegun, <i>Handbook of
-     * Mathematical Functions</i>, 1964, eq. 25.3.6), free bodies carried along their velocities.
+     * Body poses near t for state y: prescribed bodies on their paths, free bodies carried along
+     * their velocities at t (exact to first order, which is what the quasi-static solver's
+     * difference quotients at t need).
      */
-    double externalEmf(int k, double tS, double[] y, double hS) {
-        double[] f = new double[4];
-        int[] offsets = {-2, -1, 1, 2};
-        for (int i = 0; i < 4; i++) {
-            double dt = offsets[i] * hS;
-            Pose[] moved = poses(tS + dt, y);
-            for (int b = 0; b < moved.length; b++) {
-                if (freeSlot[b] >= 0) {
-                    Pose p = moved[b];
-                    moved[b] = new Pose(p.pivot(), p.offset().plus(p.velocity().times(dt)),
-                            p.angleRad() + p.omegaRadPerS() * dt, p.velocity(), p.omegaRadPerS());
-                }
+    Kinematics kinematicsAround(double tS, double[] y) {
+        Pose[] now = poses(tS, y);
+        return (bodyId, t) -> {
+            Integer b = bodyIndex.get(bodyId);
+            if (b == null) {
+                throw new IllegalArgumentException("no body '" + bodyId + "'");
             }
-            f[i] = externalLinkage(k, moved, fields(tS + dt, moved));
-        }
-        return -(-f[3] + 8 * f[2] - 8 * f[1] + f[0]) / (12 * hS);
+            if (freeSlot[b] < 0) {
+                return bodies.get(b).poseAt(t);
+            }
+            Pose p = now[b];
+            double dt = t - tS;
+            return new Pose(p.pivot(), p.offset().plus(p.velocity().times(dt)), p.angleRad() + p.omegaRadPerS() * dt,
+                    p.velocity(), p.omegaRadPerS());
+        };
     }
 
     /** Every body's pose at t for state y. */

@@ -12,14 +12,15 @@ import org.hipparchus.ode.sampling.StepNormalizer;
 import org.hipparchus.ode.sampling.StepNormalizerBounds;
 import org.hipparchus.ode.sampling.StepNormalizerMode;
 import org.kinduct.scene.Checks;
-import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Circulation;
 import org.kinduct.solver.ConductorState;
-import org.kinduct.solver.Terminal;
+import org.kinduct.solver.SceneSolver;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.SourceFields;
 
 /**
  * Coupled simulation of the loop circuits and the free bodies of a scene over [t0, t1].
@@ -29,10 +30,11 @@ import org.kinduct.solver.Terminal;
  * linkage with the scene's sources (magnets, coils with their prescribed currents, field patches,
  * uniform fields) and M(q) comes from {@link org.kinduct.solver.circuit.LoopInductance} for the
  * loops where they are. The state variable is the total linkage Ψ_k = Σ_j M_kj I_j + λ_ext,k, so
- * dΨ_k/dt = −R_k·I_k and I = M⁻¹(Ψ − λ_ext): neither dM/dt nor dλ_ext/dt is differenced
- * (Jackson, <i>Classical Electrodynamics</i>, 3rd ed., 1999, §5.15–5.17; Griffiths,
- * <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §7.2). Open loops and wires carry no
- * current; source coils are current-driven. As all L → 0 the current follows the quasi-static
+ * dΨ_k/dt = −R_k·I_k and I = M⁻¹(Ψ − λ_ext): neither dM/dt nor dλ_ext/dt is differenced, and the
+ * right-hand side stays continuous where a loop enters a field patch (the flux has only a kink
+ * there, while the EMF jumps) (Jackson, <i>Classical Electrodynamics</i>, 3rd ed., 1999,
+ * §5.15–5.17; Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §7.2). Open
+ * loops and wires carry no current; source coils are current-driven. As all L → 0 the current follows the quasi-static
  * I = EMF/R, lagging it by the time constants L/R. Small L/R makes the equations stiff: the
  * explicit integrator then needs steps of about L/R (a 10 cm copper loop has L/R of tens of
  * microseconds; multi-turn coils with load resistors are gentler).
@@ -50,7 +52,10 @@ import org.kinduct.solver.Terminal;
  *
  * <p><b>Integration.</b> Hipparchus' Dormand–Prince 8(5,3) with relative tolerance {@code relTol}
  * on every mechanical and circuit state and absolute tolerances relTol times the scene's length,
- * time and linkage scales; steps at most the sampling interval. Samples are taken at t0 + i·dt
+ * time scales, and on each loop's Ψ_k an absolute tolerance only, relTol·L_kk·{@value #CURRENT_SCALE_A} A:
+ * Ψ_k is dominated by the external linkage, and a tolerance relative to it would leave the
+ * current I = M⁻¹(Ψ − λ_ext) with an error of relTol·|λ_ext|/L. Steps at most the sampling
+ * interval. Samples are taken at t0 + i·dt
  * from the integrator's dense output.
  *
  * <p><b>Energy audit</b> ({@link EnergyAudit}): applied, holding and drive work, Joule and damping
@@ -60,19 +65,31 @@ public final class CoupledSimulation {
 
     /** Default relative tolerance of the integration. */
     public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-10;
+    /** Current scale for the absolute tolerance of the loop states, amperes. */
+    private static final double CURRENT_SCALE_A = 1e-3;
     /** Time step for the difference quotients of prescribed motion, as a fraction of the sampling step. */
     private static final double DIFFERENCE_STEP_FRACTION = 1e-4;
 
     private final FieldPlacer placer;
     private final double relTol;
 
+    /** Simulates {@code scene} with the scene's own sources and the default tolerance; see {@link #simulate}. */
+    public static Trajectory run(Scene scene, double t0S, double t1S, double dtS) {
+        return new CoupledSimulation(SourceFields::place, DEFAULT_RELATIVE_TOLERANCE).simulate(scene, t0S, t1S, dtS);
+    }
+
+    /**
+     * @param placer how a source's field is evaluated ({@link SourceFields#place} for the real
+     *        sources; tests may substitute an exactly known field)
+     * @param relativeTolerance relative tolerance of the integration, e.g. {@value #DEFAULT_RELATIVE_TOLERANCE}
+     */
     public CoupledSimulation(FieldPlacer placer, double relativeTolerance) {
         this.placer = Checks.nonNull(placer, "field placer");
         this.relTol = Checks.positive(relativeTolerance, "relative tolerance");
     }
 
     /** Simulates {@code scene} from t0 to t1, sampling every dt seconds (t1 included when a whole number of steps). */
-    public Trajectory run(Scene scene, double t0S, double t1S, double dtS) {
+    public Trajectory simulate(Scene scene, double t0S, double t1S, double dtS) {
         Checks.nonNull(scene, "scene");
         Checks.finite(t0S, "t0");
         Checks.positive(dtS, "dt");
@@ -108,7 +125,7 @@ public final class CoupledSimulation {
 
         List<Sample> samples = new ArrayList<>(states.size());
         for (int i = 0; i < states.size(); i++) {
-            samples.add(sample(model, times.get(i), states.get(i), hS));
+            samples.add(sample(model, times.get(i), states.get(i)));
         }
         return new Trajectory(samples, audit(model, t0S, y0, times.get(times.size() - 1), states.get(states.size() - 1)));
     }
@@ -123,56 +140,59 @@ public final class CoupledSimulation {
                 end.magneticEnergyJ() - start.magneticEnergyJ());
     }
 
-    private Sample sample(CoupledModel model, double tS, double[] y, double hS) {
+    /**
+     * The sample at t: poses from the state, conductor states from the quasi-static solver run on
+     * the integrated motion (EMF by both methods, flux, resistance, wires and open loops as
+     * there), with each closed loop's current, sense and force replaced by the coupled ones.
+     */
+    private static Sample sample(CoupledModel model, double tS, double[] y) {
         CoupledModel.Evaluation now = model.evaluate(tS, y);
         Map<String, Pose> poses = new HashMap<>();
         for (int b = 0; b < model.bodies().size(); b++) {
             poses.put(model.bodies().get(b).id(), now.poses[b]);
         }
+        Map<String, Integer> loopIndex = new HashMap<>();
         Map<String, Double> selfL = new HashMap<>();
-        List<ConductorState> states = new ArrayList<>();
         for (int k = 0; k < model.loops().size(); k++) {
-            Conductor.Loop loop = model.loops().get(k).loop();
-            selfL.put(loop.id(), now.inductance[k][k]);
-            states.add(loopState(model, now, k, y, hS));
+            String id = model.loops().get(k).loop().id();
+            loopIndex.put(id, k);
+            selfL.put(id, now.inductance[k][k]);
+        }
+        Snapshot quasiStatic = new SceneSolver(model.scene(), model.kinematicsAround(tS, y)).at(tS);
+        List<ConductorState> states = new ArrayList<>();
+        for (ConductorState c : quasiStatic.conductors()) {
+            Integer k = loopIndex.get(c.id());
+            states.add(k == null ? c : coupled(c, now.current[k], now.loopForce[k]));
         }
         return new Sample(tS, poses, states, selfL);
     }
 
-    private static ConductorState loopState(CoupledModel model, CoupledModel.Evaluation now, int k, double[] y,
-                                            double hS) {
-        Conductor.Loop loop = model.loops().get(k).loop();
-        List<Vec2> vertices = model.placedVertices(k, now.poses);
-        double emf = model.externalEmf(k, now.tS, y, hS);
-        double current = now.current[k];
-        double sense = Math.signum(current) * Math.signum(Polygons.signedArea(vertices));
+    private static ConductorState coupled(ConductorState c, double currentA, Vec2 forceN) {
+        double sense = Math.signum(currentA) * Math.signum(Polygons.signedArea(c.vertices()));
         Circulation direction = sense > 0 ? Circulation.CCW : sense < 0 ? Circulation.CW : Circulation.NONE;
-        double linkage = now.externalLinkage[k];
-        return new ConductorState(loop.id(), ConductorState.Kind.LOOP, vertices, linkage / loop.turns(), linkage,
-                emf, Double.NaN, emf, 0, Terminal.NONE, current, direction, now.loopForce[k], now.resistance[k], true);
+        return new ConductorState(c.id(), c.kind(), c.vertices(), c.fluxWb(), c.linkageWb(), c.emfFluxV(),
+                c.emfMotionalV(), c.emfV(), c.disagreement(), c.positiveEnd(), currentA, direction, forceN,
+                c.resistanceOhm(), c.inducedFieldIncluded());
     }
 
     private double[] relativeTolerances(CoupledModel model) {
         double[] rel = new double[model.dimension()];
-        java.util.Arrays.fill(rel, 0, model.auditOffset(), relTol);
+        // Body states only: the loop states get an absolute tolerance, the energy integrals none.
+        java.util.Arrays.fill(rel, 0, model.auditOffset() - model.loops().size(), relTol);
         return rel;
     }
 
     /**
      * Absolute tolerances: relTol times a length scale (the loops' extent, else 1 m) for
      * positions, its ratio to the run's duration for velocities, 1 rad and 1/duration for angles
-     * and ω, and a linkage scale (largest |λ_ext| at t0, else 1 µWb) for the loop states. The
-     * energy integrals are not error-controlled: they ride on the steps the state needs.
+     * and ω, and L_kk·{@value #CURRENT_SCALE_A} A for loop k's Ψ. The energy integrals are not
+     * error-controlled: they ride on the steps the state needs.
      */
     private double[] absoluteTolerances(CoupledModel model, double[] y0, double t0S, double t1S) {
         double length = model.lengthScaleM();
         double duration = t1S - t0S;
-        double linkage = 0;
         int loopsAt = model.auditOffset() - model.loops().size();
-        for (int k = 0; k < model.loops().size(); k++) {
-            linkage = Math.max(linkage, Math.abs(y0[loopsAt + k]));
-        }
-        linkage = linkage > 0 ? linkage : 1e-6;
+        double[][] inductance = model.evaluate(t0S, y0).inductance;
         double[] abs = new double[model.dimension()];
         for (int i = 0; i < loopsAt; i += CoupledModel.BODY_DOFS) {
             abs[i] = relTol * length;
@@ -183,7 +203,7 @@ public final class CoupledSimulation {
             abs[i + 5] = relTol / duration;
         }
         for (int k = 0; k < model.loops().size(); k++) {
-            abs[loopsAt + k] = relTol * linkage;
+            abs[loopsAt + k] = relTol * inductance[k][k] * CURRENT_SCALE_A;
         }
         java.util.Arrays.fill(abs, model.auditOffset(), abs.length, Double.MAX_VALUE);
         return abs;

@@ -18,7 +18,8 @@ import org.kinduct.scene.Vec2;
 
 class LoopInductanceTest {
 
-    private static final double MU0 = SegmentInductance.MU0;
+    /** CODATA 2018 (NIST). */
+    private static final double MU0 = 1.25663706212e-6;
     private static final double QUADRATURE_TOL = 1e-9;
     /** A 512-gon stands in for a circle: its perimeter and area differ from the circle's by ~1e-5. */
     private static final double POLYGON_AS_CIRCLE_TOL = 1e-4;

@@ -17,7 +17,8 @@ import org.junit.jupiter.params.provider.ValueSource;
 
 class SegmentInductanceTest {
 
-    private static final double MU0 = SegmentInductance.MU0;
+    /** CODATA 2018 (NIST). */
+    private static final double MU0 = 1.25663706212e-6;
     /** The code's quadrature is asked for 1e-11; leave headroom for the reference's own error. */
     private static final double QUADRATURE_TOL = 1e-9;
     /** Brute-force product Gauss–Legendre reference on well-separated filaments. */

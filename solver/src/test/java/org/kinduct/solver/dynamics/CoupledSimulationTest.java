@@ -14,13 +14,14 @@ import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.scene.WireSpec;
+import org.kinduct.solver.SceneSolver;
+import org.kinduct.solver.SourceFields;
 import org.kinduct.solver.circuit.LoopInductance;
 
 class CoupledSimulationTest {
 
-    /** The field region: B_z = B below y = 0, as in the textbook falling-loop problem. */
+    /** The field region: B_z = B below y = 0 (a field patch far wider than the loops), as in the textbook falling-loop problem. */
     private static final double B = 0.5;
-    private static final FieldPlacer REGION_BELOW_AXIS = (source, pose, t) -> new LowerHalfPlaneField(0, B);
     /** Copper, IEC 60028: ρ20 = 1/58 Ω·mm²/m. */
     private static final double RHO_COPPER = 1.0 / 58 * 1e-6;
     private static final double WIRE_D = 0.5e-3;
@@ -29,12 +30,12 @@ class CoupledSimulationTest {
     /** Leaves room for the (ω0·L/R)² detuning the textbook model ignores and the transient's remains. */
     private static final double HARVESTER_TOL = 2e-3;
     /**
-     * The current is (Ψ − λ_ext)/L, a small difference of two large linkages when L/R is short, so
-     * the integrator's dense output carries more relative noise in it than in the motion.
+     * The current is (Ψ − λ_ext)/L, a difference of two linkages far larger than L·I when L/R is
+     * short; the integrator holds Ψ to relTol·L·1 mA, which leaves about 1e-7 of I.
      */
-    private static final double STIFF_CURRENT_TOL = 1e-4;
+    private static final double STIFF_CURRENT_TOL = 1e-6;
 
-    private final CoupledSimulation simulation = new CoupledSimulation(REGION_BELOW_AXIS, 1e-10);
+    private final CoupledSimulation simulation = new CoupledSimulation(SourceFields::place, 1e-10);
 
     /**
      * A loop of width w pushed at constant speed v into a field region: EMF = N·B·w·v from the
@@ -59,7 +60,7 @@ class CoupledSimulationTest {
         double r = turns * 2 * (w + h) * RHO_COPPER / (Math.PI * WIRE_D * WIRE_D / 4) + load;
         double l = LoopInductance.self(outline, WIRE_D / 2, turns);
         double tau = l / r;
-        Trajectory run = simulation.run(scene, 0, 6 * tau, tau / 4);
+        Trajectory run = simulation.simulate(scene, 0, 6 * tau, tau / 4);
 
         for (Sample s : run.samples()) {
             double expected = -turns * B * w * v / r * (1 - Math.exp(-s.tS() / tau));
@@ -93,7 +94,7 @@ class CoupledSimulationTest {
         double k = turns * B * w;
         double vTerminal = m * g * r / (k * k);
         double tauMech = m * r / (k * k);
-        Trajectory run = simulation.run(scene, 0, 5 * tauMech, tauMech / 10);
+        Trajectory run = simulation.simulate(scene, 0, 5 * tauMech, tauMech / 10);
 
         // x = (v, I): x' = A x + (g, 0), A = [[0, −k/m], [k/L, −R/L]]; x(0) = 0.
         double trace = -r / l;
@@ -118,6 +119,33 @@ class CoupledSimulationTest {
         assertEquals(vTerminal, last, 0.01 * vTerminal);
     }
 
+    /**
+     * With L/R far shorter than the motion's time scale the coupled current is the quasi-static
+     * I = EMF/R of the scene solver, once the start-up transient e^{−t/τ} has died away
+     * (the L → 0 limit of L·dI/dt + R·I = EMF).
+     */
+    @Test
+    void shortTimeConstantReducesToTheQuasiStaticCurrent() {
+        double w = 0.05;
+        Conductor.Loop loop = new Conductor.Loop("coil", "cart", vertices(rectangle(w, w)), 20,
+                WireSpec.of(Material.COPPER, WIRE_D), false, 100, 20);
+        Body cart = new Body("cart", null, new Vec2(0, 0), new Motion.Glide(new Vec2(0.3, -1)));
+        Scene scene = scene(cart, loop);
+        double tau = LoopInductance.self(rectangle(w, w), WIRE_D / 2, 20) / 100;
+        assertTrue(tau < 1e-6, "τ = " + tau);
+
+        SceneSolver quasiStatic = new SceneSolver(scene);
+        Trajectory run = simulation.simulate(scene, 0, 0.04, 0.002);
+        for (Sample s : run.samples()) {
+            if (s.tS() < 50 * tau) {
+                continue;
+            }
+            double expected = quasiStatic.at(s.tS()).conductor("coil").orElseThrow().currentA();
+            assertEquals(expected, s.conductor("coil").currentA(), STIFF_CURRENT_TOL * Math.abs(expected) + 1e-15,
+                    "t = " + s.tS());
+        }
+    }
+
     /** Energy conservation (work = heat + stored) for a loop coasting into the region and braking. */
     @Test
     void energyAuditBalancesForABrakingLoop() {
@@ -127,7 +155,7 @@ class CoupledSimulationTest {
                 WireSpec.of(Material.COPPER, WIRE_D), false, 1, 20);
         Motion.Free free = new Motion.Free(0.01, 0, new Vec2(0, -0.5), 0, 0, Vec2.ZERO, Vec2.ZERO, 0, List.of());
         Scene scene = scene(new Body("puck", null, new Vec2(w / 2, h / 2), free), loop);
-        Trajectory run = simulation.run(scene, 0, 0.3, 0.01);
+        Trajectory run = simulation.simulate(scene, 0, 0.3, 0.01);
         EnergyAudit audit = run.audit();
         assertTrue(audit.jouleJ() > 0.5 * 0.5 * 0.01 * 0.25, "little braking: " + audit);
         assertEquals(0, audit.residualJ(), AUDIT_TOL * audit.jouleJ(), audit.toString());
@@ -165,7 +193,7 @@ class CoupledSimulationTest {
         double settle = 16 * m / (c + ce);
         double period = 1 / f0;
         int perPeriod = 64;
-        Trajectory run = simulation.run(scene, 0, settle + 4 * period, period / perPeriod);
+        Trajectory run = simulation.simulate(scene, 0, settle + 4 * period, period / perPeriod);
 
         // RMS over the last four whole periods: exact for a sinusoid sampled uniformly.
         List<Sample> samples = run.samples();
@@ -183,7 +211,8 @@ class CoupledSimulationTest {
     }
 
     private static Scene scene(Body body, Conductor.Loop loop) {
-        return new Scene("test", "", List.of(body), List.of(new Source.UniformField("region", B)), List.of(loop),
+        return new Scene("test", "", List.of(body), List.of(new Source.FieldPatch("region", Body.FIXED,
+                List.of(new Vec2(-10, -10), new Vec2(10, -10), new Vec2(10, 0), new Vec2(-10, 0)), B)), List.of(loop),
                 new TimeSpan(0, 1, 0.01));
     }
 

@@ -14,6 +14,7 @@ import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.scene.WireSpec;
+import org.kinduct.solver.SourceFields;
 
 /**
  * Conservation laws that tie the force, torque and reaction terms to the circuit equations:
@@ -30,11 +31,7 @@ class FreeBodyCouplingTest {
     private static final double DIFFERENCED_AUDIT_TOL = 1e-4;
     private static final double MOMENTUM_TOL = 1e-8;
 
-    /** The region below the source body's pivot height carries B_z = B (translation only). */
-    private static final FieldPlacer REGION_RIDES_ITS_BODY =
-            (source, pose, t) -> new LowerHalfPlaneField(pose.place(pose.pivot()).y(), B);
-
-    private final CoupledSimulation simulation = new CoupledSimulation(REGION_RIDES_ITS_BODY, 1e-10);
+    private final CoupledSimulation simulation = new CoupledSimulation(SourceFields::place, 1e-10);
 
     /**
      * A loop spinning about its centre, off the region's edge but across it (a chord through the
@@ -48,7 +45,7 @@ class FreeBodyCouplingTest {
         Motion.Free free = new Motion.Free(0.05, 2e-4, Vec2.ZERO, 20, 0, Vec2.ZERO, Vec2.ZERO, 0,
                 List.of(new Motion.Free.Spring(new Vec2(0, 0.03), null, 1000, 0)));
         Scene scene = scene(List.of(new Body("rotor", null, new Vec2(0, 0.03), free)), "fixed", loop);
-        Trajectory run = simulation.run(scene, 0, 0.5, 0.01);
+        Trajectory run = simulation.simulate(scene, 0, 0.5, 0.01);
         EnergyAudit audit = run.audit();
         double spin = 0.5 * 2e-4 * 20 * 20;
         assertTrue(audit.jouleJ() > 0.05 * spin, "hardly braked: " + audit);
@@ -67,7 +64,7 @@ class FreeBodyCouplingTest {
         Motion.Free magnet = new Motion.Free(0.05, 0, new Vec2(0, 0.1), 0, 0, Vec2.ZERO, Vec2.ZERO, 0, List.of());
         Scene scene = scene(List.of(new Body("puck", null, new Vec2(0, 0.06), puck),
                 new Body("magnet", null, new Vec2(0, 0), magnet)), "magnet", shiftedLoop(loop, 0, 0.06));
-        Trajectory run = simulation.run(scene, 0, 0.3, 0.01);
+        Trajectory run = simulation.simulate(scene, 0, 0.3, 0.01);
         double p0 = 0.02 * -0.4 + 0.05 * 0.1;
         for (Sample s : run.samples()) {
             double p = 0.02 * s.pose("puck").velocity().y() + 0.05 * s.pose("magnet").velocity().y();
@@ -93,10 +90,9 @@ class FreeBodyCouplingTest {
         Motion.Free sled = new Motion.Free(0.01, 0, Vec2.ZERO, 0, 0, Vec2.ZERO, Vec2.ZERO, 0,
                 List.of(new Motion.Free.Spring(new Vec2(0.12, 0.2), null, 50, 0.1)));
         Scene scene = new Scene("pair", "", List.of(cart, new Body("sled", null, new Vec2(0.12, 0.1), sled)),
-                List.of(new Source.UniformField("region", B)), List.of(shiftedLoop(driven, 0, 0.06), follower),
+                List.of(regionSource(Body.FIXED)), List.of(shiftedLoop(driven, 0, 0.06), follower),
                 new TimeSpan(0, 1, 0.01));
-        CoupledSimulation fixedRegion = new CoupledSimulation((source, pose, t) -> new LowerHalfPlaneField(0, B), 1e-10);
-        Trajectory run = fixedRegion.run(scene, 0, 0.2, 0.005);
+        Trajectory run = simulation.simulate(scene, 0, 0.2, 0.005);
         EnergyAudit audit = run.audit();
         assertTrue(audit.holdingJ() > 0, audit.toString());
         assertTrue(Math.abs(run.samples().get(run.samples().size() - 1).conductor("follower").currentA()) > 0,
@@ -108,10 +104,10 @@ class FreeBodyCouplingTest {
         return new Scene("test", "", bodies, List.of(regionSource(regionBody)), List.of(loop), new TimeSpan(0, 1, 0.01));
     }
 
-    /** The source the placer turns into the region; only its body matters here. */
+    /** B_z = B below y = 0 of the body's frame, far wider than the loops. */
     private static Source regionSource(String body) {
         return new Source.FieldPatch("region", body,
-                List.of(new Vec2(-1, -1), new Vec2(1, -1), new Vec2(1, 0), new Vec2(-1, 0)), B);
+                List.of(new Vec2(-10, -10), new Vec2(10, -10), new Vec2(10, 0), new Vec2(-10, 0)), B);
     }
 
     private static List<Vec2> square(double side) {
