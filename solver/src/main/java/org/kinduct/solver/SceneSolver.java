@@ -23,7 +23,7 @@ import org.kinduct.scene.Vec2;
  * </ul>
  * The two agree for any motion and deformation of the contour (Leibniz rule for moving surfaces;
  * Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §7.1.3): in static fields
- * to about 1e-9 relative (the check reported as {@code disagreement}). The motional value is
+ * to rounding (the check reported as {@code disagreement}; see Thresholds). The motional value is
  * reported. A closed loop carries I = EMF/R with R = N·perimeter·ρ(T)/A_wire + R_load
  * (ρ(T) = ρ20·[1 + α20·(T − 20 °C)], IEC 60028 for copper), and feels F = N·I·∮ dl × B =
  * N·I·∮ B_z (dy, −dx). An open loop has EMF across its gap (the closing edge from last to first
@@ -33,7 +33,10 @@ import org.kinduct.scene.Vec2;
  * second term from the difference in time of the line integral of A over the wire held where it
  * is, for magnets and coils that move or are driven by AC ({@link PotentialIntegral}). A moving
  * field patch has no physical potential, so its induced field is left out and the state says so
- * ({@code inducedFieldIncluded = false}).
+ * ({@code inducedFieldIncluded = false}). Unlike a loop's, an open wire's EMF depends on the
+ * frame: a wire moving past a still magnet and a magnet moving past a still wire differ by
+ * u·A at the two ends (u the relative velocity), since ∇(u·A) = (u·∇)A + u × B; it is the EMF
+ * along the wire itself, in the frame of the scene.
  *
  * <p><b>Thresholds.</b> Each conductor has an EMF scale N·B·L²/T: the sources' field scales summed
  * (B), its length (L) and the scene's time scale T ({@link DifferenceStep}). It bounds the EMF the

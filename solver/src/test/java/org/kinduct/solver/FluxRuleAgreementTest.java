@@ -19,7 +19,7 @@ import org.kinduct.scene.Vec2;
 /**
  * The flux rule −dλ/dt and the motional EMF ∮ (v × B)·dl are one law for a contour moving or
  * deforming in a static field (Leibniz rule for moving surfaces; Griffiths, <i>Introduction to
- * Electrodynamics</i>, 4th ed., 2013, §7.1.3 and Problem 7.63's general proof of the flux rule).
+ * Electrodynamics</i>, 4th ed., 2013, §7.1.3, where the flux rule is derived for moving loops).
  * The solver computes them independently — a difference of exact polygon fluxes against exact
  * line integrals of B_z — so their agreement checks both.
  */

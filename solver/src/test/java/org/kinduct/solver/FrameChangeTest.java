@@ -22,7 +22,7 @@ import org.kinduct.scene.Vec2;
  * moving through still sources (all motional EMF, ∮ v × B·dl) sees the same EMF as the sources
  * moving the opposite way past the still loop (all transformer EMF, −∮ ∂A/∂t·dl = −∂Φ/∂t). This is
  * Faraday's observation that only relative motion counts, the starting point of special relativity
- * (Einstein, "Zur Elektrodynamik bewegter Körper", Ann. Phys. 17, 1905, §1 opening paragraph;
+ * (Einstein, "Zur Elektrodynamik bewegter Körper", Ann. Phys. 17, 1905, introduction;
  * Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §7.1.3). It exercises the
  * transformer term against the independent motional integral.
  */

@@ -18,7 +18,7 @@ import org.kinduct.scene.WireSpec;
  * A bar sliding on fixed rails closes a loop whose two right-hand vertices ride the bar. Checks
  * against the textbook slider: EMF = B·w·v, current against the flux change (Lenz), force
  * F = I·w·B opposing the motion (Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013,
- * §7.1.3, Fig. 7.10; common practice). Copper ρ20 = 1/58 Ω·mm²/m (IEC 60028).
+ * §7.1.3; common practice). Copper ρ20 = 1/58 Ω·mm²/m (IEC 60028).
  */
 class SliderOnRailsTest {
 

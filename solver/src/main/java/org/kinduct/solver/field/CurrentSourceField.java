@@ -17,7 +17,13 @@ abstract sealed class CurrentSourceField implements PlaneField
         return true;
     }
 
-    /** ∮ A·dl around the polygon; accuracy as delivered by {@link EdgeQuadrature#STANDARD}. */
+    /**
+     * ∮ A·dl around the polygon by {@link EdgeQuadrature#STANDARD}: estimated relative error below
+     * 1e-10 (or 1e-13 of Σ|∫A·dl| over the edges when the flux cancels) within its budget of
+     * 20 000 potential evaluations; a typical 4-edge loop takes 92–500, a loop whose edges run along
+     * the footprint of a magnet touching the plane a few thousand. If the budget runs out the
+     * best estimate is returned; call {@link EdgeQuadrature} directly to see its error estimate.
+     */
     @Override
     public final double flux(double[] xs, double[] ys) {
         requirePolygon(xs, ys, "a flux polygon");

@@ -7,8 +7,8 @@ import java.util.Arrays;
  *
  * <p><b>Flux.</b> Fan-triangulating a closed polygon from its first vertex writes its winding
  * number as a signed sum of triangle indicators, w(x) = Σ s_i·1[T_i](x) almost everywhere, for
- * self-crossing polygons too (Meister's shoelace decomposition; see Preparata &amp; Shamos,
- * <i>Computational Geometry</i>, 1985, §1.3). With the patch as ±(its own fan) this gives
+ * self-crossing polygons too (the signed-triangle form of the shoelace formula; O'Rourke,
+ * <i>Computational Geometry in C</i>, 2nd ed., 1998, §1.3). With the patch as ±(its own fan) this gives
  * Φ = B·σ_P·Σ_e Σ_q s_e·s_q·area(T_e ∩ T_q), where σ_P is the patch's orientation. Each
  * triangle–triangle overlap is convex and is clipped with Sutherland–Hodgman (Sutherland &amp;
  * Hodgman, "Reentrant polygon clipping", Comm. ACM 17(1), 1974), which is exact for convex

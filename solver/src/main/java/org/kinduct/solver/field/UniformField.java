@@ -4,8 +4,8 @@ package org.kinduct.solver.field;
  * B_z the same everywhere in the plane.
  *
  * <p>Flux through a closed polygon is B·(shoelace signed area), which is the winding-weighted
- * area ∬ w dA for any polygon, self-crossing or not (Green's theorem; e.g. Preparata &amp; Shamos,
- * <i>Computational Geometry</i>, 1985, §1.3). The area is taken about the polygon's first vertex
+ * area ∬ w dA for any polygon, self-crossing or not (Green's theorem; O'Rourke, <i>Computational
+ * Geometry in C</i>, 2nd ed., 1998, §1.3). The area is taken about the polygon's first vertex
  * so that a small loop far from the origin loses no digits. The potential A = ½B(−y, x) has
  * curl B_z, but a uniform field is an idealization whose induced electric field depends on where
  * its change is centred, so {@link #hasPhysicalPotential()} is false. Exact to rounding.

@@ -16,6 +16,11 @@ class BlockMagnetFieldTest {
     private static final double BR = 1.2;
     private static final double ULP_LEVEL = 1e-13;
     private static final double QUADRATURE_LEVEL = 1e-10;
+    /** The ribbon's closed form and its reference are both differences of four parts of this accuracy. */
+    private static final double RIBBON_LEVEL = 1e-12;
+    /** A 1e-12 m stand-off moves B_z by ~Br·(1e-12 m / 1 mm)·log: far below this. */
+    private static final double STANDOFF_LIMIT_LEVEL = 1e-7;
+    private static final double JUMP_LEVEL = 1e-6;
 
     /** A magnet 20 × 12 × 5 mm, below the plane at stand-off s, rotated by angle about (cx, cy). */
     private static BlockMagnetField below(double cx, double cy, double angle, double standoff) {
@@ -135,7 +140,7 @@ class BlockMagnetFieldTest {
             magnitude += Math.abs(parts[i]);
         }
         double expected = parts[0] - parts[1] - parts[2] + parts[3];
-        assertEquals(expected, BlockMagnetField.ribbon(t1, t2, c, zLow, zHigh), 1e-12 * magnitude + 1e-18,
+        assertEquals(expected, BlockMagnetField.ribbon(t1, t2, c, zLow, zHigh), RIBBON_LEVEL * magnitude + 1e-18,
                 "seed " + seed);
     }
 
@@ -235,11 +240,24 @@ class BlockMagnetFieldTest {
             double[] an = new double[2];
             touching.potential(x, y, at);
             near.potential(x, y, an);
-            assertEquals(near.bz(x, y), touching.bz(x, y), 1e-7 * BR, "seed " + seed + " side " + z);
-            assertEquals(an[0], at[0], 1e-9 * BR * 0.01, "seed " + seed + " side " + z);
-            assertEquals(an[1], at[1], 1e-9 * BR * 0.01, "seed " + seed + " side " + z);
+            assertEquals(near.bz(x, y), touching.bz(x, y), STANDOFF_LIMIT_LEVEL * BR, "seed " + seed + " side " + z);
+            assertEquals(an[0], at[0], STANDOFF_LIMIT_LEVEL * BR * 0.01, "seed " + seed + " side " + z);
+            assertEquals(an[1], at[1], STANDOFF_LIMIT_LEVEL * BR * 0.01, "seed " + seed + " side " + z);
             assertTrue(Double.isFinite(touching.bz(0.01, 0.0)), "footprint edge stays finite");
         }
+    }
+
+    @Test
+    void touchingMagnetFieldJumpsByHalfTheRemanenceAtTheFootprintEdge() {
+        // The side face carries a current sheet K = Br/μ0; in the plane where it ends, B_z jumps by
+        // half of μ0K (Griffiths ch. 5, boundary conditions, halved by symmetry at the sheet's end).
+        BlockMagnetField magnet = new BlockMagnetField(0, 0, 0, 0.020, 0.012, -0.005, -0.0, BR);
+        double delta = 1e-11;
+        double jump = magnet.bz(0.010 - delta, 0.001) - magnet.bz(0.010 + delta, 0.001);
+        assertEquals(BR / 2, jump, JUMP_LEVEL * BR);
+        double edge = magnet.bz(0.010, 0.001);
+        assertEquals((magnet.bz(0.010 - delta, 0.001) + magnet.bz(0.010 + delta, 0.001)) / 2, edge, JUMP_LEVEL * BR,
+                "mean on the edge");
     }
 
     @Test

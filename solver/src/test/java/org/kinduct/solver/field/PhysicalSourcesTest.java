@@ -43,7 +43,8 @@ class PhysicalSourcesTest {
     @ParameterizedTest
     @MethodSource("sources")
     void posedFieldIsTheDrawnFieldSeenFromTheMovedFrame(Source source) {
-        SplittableRandom r = new SplittableRandom(SEED);
+        long seed = SEED;
+        SplittableRandom r = new SplittableRandom(seed);
         Vec2 pivot = Vec2.of(0.005, -0.002);
         double t = 0.0123;
         for (int c = 0; c < 10; c++) {
@@ -56,15 +57,15 @@ class PhysicalSourcesTest {
             // with g⁻¹p = pivot + R(−θ)(p − pivot − offset).
             Vec2 back = pivot.plus(p.minus(pivot).minus(pose.offset()).rotate(-pose.angleRad()));
             double bz = drawn.bz(back.x(), back.y());
-            assertEquals(bz, posed.bz(p.x(), p.y()), ULP_LEVEL * Math.abs(bz) + 1e-18, "case " + c);
+            assertEquals(bz, posed.bz(p.x(), p.y()), ULP_LEVEL * Math.abs(bz) + 1e-18, "seed " + seed + " case " + c);
             double[] aDrawn = new double[2];
             double[] aPosed = new double[2];
             drawn.potential(back.x(), back.y(), aDrawn);
             posed.potential(p.x(), p.y(), aPosed);
             Vec2 turned = Vec2.of(aDrawn[0], aDrawn[1]).rotate(pose.angleRad());
             double scale = Math.hypot(aDrawn[0], aDrawn[1]);
-            assertEquals(turned.x(), aPosed[0], ULP_LEVEL * scale, "case " + c);
-            assertEquals(turned.y(), aPosed[1], ULP_LEVEL * scale, "case " + c);
+            assertEquals(turned.x(), aPosed[0], ULP_LEVEL * scale, "seed " + seed + " case " + c);
+            assertEquals(turned.y(), aPosed[1], ULP_LEVEL * scale, "seed " + seed + " case " + c);
         }
     }
 
