@@ -88,7 +88,10 @@ public final class CoupledSimulation {
         this.relTol = Checks.positive(relativeTolerance, "relative tolerance");
     }
 
-    /** Simulates {@code scene} from t0 to t1, sampling every dt seconds (t1 included when a whole number of steps). */
+    /**
+     * Simulates {@code scene} from t0 to t1, sampling at t0 + i·dt up to t1 (t1 itself when it is
+     * on that grid); the energy audit covers the whole of [t0, t1].
+     */
     public Trajectory simulate(Scene scene, double t0S, double t1S, double dtS) {
         Checks.nonNull(scene, "scene");
         Checks.finite(t0S, "t0");
@@ -114,20 +117,17 @@ public final class CoupledSimulation {
                 absoluteTolerances(model, y0, t0S, t1S), relativeTolerances(model));
         List<double[]> states = new ArrayList<>();
         List<Double> times = new ArrayList<>();
-        integrator.addStepHandler(new StepNormalizer(dtS, (ODEStateAndDerivative s, boolean last) -> {
-            if (!times.isEmpty() && times.get(times.size() - 1) == s.getTime()) {
-                return;
-            }
+        integrator.addStepHandler(new StepNormalizer(dtS, (ODEStateAndDerivative s, boolean isLast) -> {
             times.add(s.getTime());
             states.add(s.getPrimaryState().clone());
-        }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.BOTH));
-        integrator.integrate(equations, new ODEState(t0S, y0), t1S);
+        }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.FIRST));
+        ODEStateAndDerivative last = integrator.integrate(equations, new ODEState(t0S, y0), t1S);
 
         List<Sample> samples = new ArrayList<>(states.size());
         for (int i = 0; i < states.size(); i++) {
             samples.add(sample(model, times.get(i), states.get(i)));
         }
-        return new Trajectory(samples, audit(model, t0S, y0, times.get(times.size() - 1), states.get(states.size() - 1)));
+        return new Trajectory(samples, audit(model, t0S, y0, last.getTime(), last.getPrimaryState()));
     }
 
     private static EnergyAudit audit(CoupledModel model, double t0S, double[] y0, double t1S, double[] y1) {
