@@ -16,6 +16,7 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Kinematics;
+import org.kinduct.solver.SourceFields;
 import org.kinduct.solver.circuit.LoopInductance;
 import org.kinduct.solver.field.PlaneField;
 
@@ -42,7 +43,6 @@ final class CoupledModel {
     private static final double ANGLE_STEP_RAD = 1e-5;
 
     private final Scene scene;
-    private final FieldPlacer placer;
     private final List<Body> bodies;
     private final Map<String, Integer> bodyIndex = new HashMap<>();
     /** State offset of each body's dofs, −1 for prescribed bodies. */
@@ -64,9 +64,8 @@ final class CoupledModel {
     record Circuit(Conductor.Loop loop, int[] vertexBody, Vec2[] drawn, double wireRadiusM, int rigidBody) {
     }
 
-    CoupledModel(Scene scene, FieldPlacer placer, double timeStepS) {
+    CoupledModel(Scene scene, double timeStepS) {
         this.scene = scene;
-        this.placer = placer;
         this.timeStepS = timeStepS;
         bodies = scene.bodies();
         freeSlot = new int[bodies.size()];
@@ -216,7 +215,7 @@ final class CoupledModel {
     PlaneField[] fields(double tS, Pose[] poses) {
         PlaneField[] fields = new PlaneField[sources.size()];
         for (int s = 0; s < fields.length; s++) {
-            fields[s] = placer.place(sources.get(s), poses[sourceBody[s]], tS);
+            fields[s] = SourceFields.place(sources.get(s), poses[sourceBody[s]], tS);
         }
         return fields;
     }
@@ -574,7 +573,7 @@ final class CoupledModel {
                     continue;
                 }
                 double rate = ((Source.SourceCoil) sources.get(s)).drive().rateAt(tS);
-                PlaneField unit = placer.place(unitCoils[s], poses[sourceBody[s]], tS);
+                PlaneField unit = SourceFields.place(unitCoils[s], poses[sourceBody[s]], tS);
                 for (int k = 0; k < loops.size(); k++) {
                     power -= current[k] * loops.get(k).loop().turns() * unit.flux(xs[k], ys[k]) * rate;
                 }

@@ -15,7 +15,6 @@ import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.scene.WireSpec;
 import org.kinduct.solver.SceneSolver;
-import org.kinduct.solver.SourceFields;
 import org.kinduct.solver.circuit.LoopInductance;
 
 class CoupledSimulationTest {
@@ -35,7 +34,7 @@ class CoupledSimulationTest {
      */
     private static final double STIFF_CURRENT_TOL = 1e-6;
 
-    private final CoupledSimulation simulation = new CoupledSimulation(SourceFields::place, 1e-10);
+    private final CoupledSimulation simulation = new CoupledSimulation(1e-10);
 
     /**
      * A loop of width w pushed at constant speed v into a field region: EMF = N·B·w·v from the

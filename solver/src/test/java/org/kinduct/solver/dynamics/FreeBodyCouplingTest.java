@@ -14,7 +14,6 @@ import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.scene.WireSpec;
-import org.kinduct.solver.SourceFields;
 
 /**
  * Conservation laws that tie the force, torque and reaction terms to the circuit equations:
@@ -31,7 +30,7 @@ class FreeBodyCouplingTest {
     private static final double DIFFERENCED_AUDIT_TOL = 1e-4;
     private static final double MOMENTUM_TOL = 1e-8;
 
-    private final CoupledSimulation simulation = new CoupledSimulation(SourceFields::place, 1e-10);
+    private final CoupledSimulation simulation = new CoupledSimulation(1e-10);
 
     /**
      * A loop spinning about its centre, off the region's edge but across it (a chord through the

@@ -14,7 +14,6 @@ import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.scene.WireSpec;
-import org.kinduct.solver.SourceFields;
 import org.kinduct.solver.circuit.LoopInductance;
 
 /** Coupling to the physical sources: a driven coil (transformer) and a free magnet. */
@@ -30,7 +29,7 @@ class SourceCouplingTest {
      */
     private static final double PHASOR_TOL = 1e-5;
 
-    private final CoupledSimulation simulation = new CoupledSimulation(SourceFields::place, 1e-10);
+    private final CoupledSimulation simulation = new CoupledSimulation(1e-10);
 
     /**
      * A loop under an AC coil is a transformer secondary: in steady state
