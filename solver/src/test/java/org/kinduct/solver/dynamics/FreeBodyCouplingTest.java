@@ -29,6 +29,7 @@ class FreeBodyCouplingTest {
     /** Loop–loop forces come from central differences of M: their audit is looser. */
     private static final double DIFFERENCED_AUDIT_TOL = 1e-4;
     private static final double MOMENTUM_TOL = 1e-8;
+    private static final double NEWTON_TOL = 1e-8;
 
     private final CoupledSimulation simulation = new CoupledSimulation(1e-10);
 
@@ -97,6 +98,36 @@ class FreeBodyCouplingTest {
         assertTrue(Math.abs(run.samples().get(run.samples().size() - 1).conductor("follower").currentA()) > 0,
                 "no induced current in the follower");
         assertEquals(0, audit.residualJ(), DIFFERENCED_AUDIT_TOL * audit.holdingJ(), audit.toString());
+    }
+
+    /**
+     * Two bodies joined by a spring, one pushed by a constant force, under gravity: internal
+     * spring forces cancel, so the centre of mass moves as x = ½·(F + M·g)/M·t² (Newton's second
+     * law for a system of particles; e.g. Goldstein, <i>Classical Mechanics</i>, 3rd ed., §1.2),
+     * and the work of the push is the kinetic energy plus the spring's and gravity's.
+     */
+    @Test
+    void springPairMovesItsCentreOfMassByNewtonAndConservesEnergy() {
+        double m1 = 0.3;
+        double m2 = 0.7;
+        Vec2 push = new Vec2(0.4, 0.1);
+        Vec2 g = new Vec2(0, -9.81);
+        Motion.Free first = new Motion.Free(m1, 0, Vec2.ZERO, 0, 0, push, Vec2.ZERO, 0,
+                List.of(new Motion.Free.Spring(null, "second", 40, 0.05)));
+        Motion.Free second = new Motion.Free(m2, 0, Vec2.ZERO, 0, 0, Vec2.ZERO, Vec2.ZERO, 0, List.of());
+        Scene scene = new Scene("pair", "", List.of(new Body("first", null, new Vec2(0, 0), first),
+                new Body("second", null, new Vec2(0.1, 0), second)), List.of(), List.of(), new TimeSpan(0, 1, 0.01))
+                .withGravity(g);
+        Trajectory run = simulation.simulate(scene, 0, 1, 0.05);
+        double total = m1 + m2;
+        Vec2 accel = push.plus(g.times(total)).times(1 / total);
+        for (Sample s : run.samples()) {
+            Vec2 centre = s.pose("first").offset().times(m1).plus(s.pose("second").offset().times(m2)).times(1 / total);
+            Vec2 expected = accel.times(0.5 * s.tS() * s.tS());
+            assertTrue(centre.eq(expected, NEWTON_TOL), "t = " + s.tS() + ": " + centre + " vs " + expected);
+        }
+        EnergyAudit audit = run.audit();
+        assertEquals(0, audit.residualJ(), AUDIT_TOL * Math.abs(audit.deltaKineticJ()), audit.toString());
     }
 
     private static Scene scene(List<Body> bodies, String regionBody, Conductor.Loop loop) {
