@@ -37,6 +37,12 @@ public final class SegmentInductance {
     /** Below this |sin| between coplanar filaments the closed form gives way to the quadrature. */
     static final double PLANAR_MIN_SIN = 0.05;
 
+    /**
+     * Filaments whose directions differ by rounding only (|sin| below this) are taken as
+     * parallel; the error is of that relative order.
+     */
+    static final double PARALLEL_SIN = 1e-12;
+
     /** Relative accuracy of the numerical outer Neumann integral. */
     static final double REL_TOL = 1e-11;
 
@@ -113,7 +119,7 @@ public final class SegmentInductance {
      *       not overlap h(u) = |u|·ln|u| (the dropped terms are linear in u and cancel).</li>
      * </ul>
      * NaN when the filaments are not in one plane, or their lines cross at an angle whose sine is
-     * below {@value #PLANAR_MIN_SIN} (the crossing lies far away and the four terms cancel
+     * between {@value #PARALLEL_SIN} and {@value #PLANAR_MIN_SIN} (the crossing lies far away and the four terms cancel
      * badly): the quadrature takes those.
      */
     private static double coplanarIntegral(Filament a, Filament b) {
@@ -142,7 +148,7 @@ public final class SegmentInductance {
             return inclined(s2, t2, cos, sin) - inclined(s1, t2, cos, sin) - inclined(s2, t1, cos, sin)
                     + inclined(s1, t1, cos, sin);
         }
-        if (sin != 0) {
+        if (Math.abs(sin) > PARALLEL_SIN) {
             return Double.NaN;
         }
         double d = Math.abs(wx * uy - wy * ux);

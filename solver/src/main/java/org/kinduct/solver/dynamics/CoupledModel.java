@@ -520,7 +520,10 @@ final class CoupledModel {
                 only[b] = true;
                 fx[b] += gradient(b, only, spaceStepM, 0, 0);
                 fy[b] += gradient(b, only, 0, spaceStepM, 0);
-                torque[b] += gradient(b, only, 0, 0, ANGLE_STEP_RAD);
+                // A body without inertia does not turn: no torque needed.
+                if (((Motion.Free) bodies.get(b).motion()).inertiaKgM2() > 0) {
+                    torque[b] += gradient(b, only, 0, 0, ANGLE_STEP_RAD);
+                }
             }
             Pose[] later = poses.clone();
             Pose[] earlier = poses.clone();
