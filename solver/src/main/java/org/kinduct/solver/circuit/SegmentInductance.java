@@ -23,7 +23,10 @@ import static org.kinduct.solver.field.PhysicalConstants.MU_0_OVER_4PI;
  * log singularity sits at an interval end. Filaments sharing an end use Grover's closed form for
  * filaments meeting at a point (Grover 1946, "filaments meeting at a point"):
  * M = (μ0/2π)·cos ε·[l·atanh(m/(l + n)) + m·atanh(l/(m + n))], l, m the lengths, n the distance
- * between the free ends, ε the angle between the current directions.
+ * between the free ends, ε the angle between the current directions. Filaments in one plane
+ * z = const (all loop–loop pairs) use closed forms of the double integral for inclined and
+ * parallel lines (see {@code coplanarIntegral}), except at crossing angles with sine between
+ * {@value #PARALLEL_SIN} and {@value #PLANAR_MIN_SIN}, where the quadrature is better conditioned.
  *
  * <p>Any relative position in space works (same plane, parallel planes). Not trusted — and
  * refused — when the filaments overlap along a stretch (collinear and overlapping, or folded
