@@ -10,7 +10,6 @@ import org.hipparchus.linear.CholeskyDecomposition;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Motion;
-import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -102,7 +101,7 @@ final class CoupledModel {
                     rigid &= vb[i] == vb[0];
                 }
                 loops.add(new Circuit(loop, vb, drawn, loop.wire().diameterM() / 2, rigid ? vb[0] : -1));
-                smallest = Math.min(smallest, Math.sqrt(Math.abs(Polygons.signedArea(List.of(drawn)))));
+                smallest = Math.min(smallest, extent(drawn));
             }
         }
         spaceStepM = SPACE_STEP_FRACTION * (smallest < Double.POSITIVE_INFINITY ? smallest : 1);
@@ -169,13 +168,20 @@ final class CoupledModel {
     double lengthScaleM() {
         double size = 0;
         for (Circuit c : loops) {
-            for (Vec2 p : c.drawn()) {
-                for (Vec2 q : c.drawn()) {
-                    size = Math.max(size, p.minus(q).length());
-                }
-            }
+            size = Math.max(size, extent(c.drawn()));
         }
         return size > 0 ? size : 1;
+    }
+
+    /** The largest distance between two of the points, metres (positive for a valid loop). */
+    private static double extent(Vec2[] points) {
+        double size = 0;
+        for (Vec2 p : points) {
+            for (Vec2 q : points) {
+                size = Math.max(size, p.minus(q).length());
+            }
+        }
+        return size;
     }
 
     /**
