@@ -148,12 +148,22 @@ public final class LoopInductance {
             tooClose = Math.max(pointToFilament(shorter.ax(), shorter.ay(), shorter.az(), longer),
                     pointToFilament(shorter.bx(), shorter.by(), shorter.bz(), longer)) < clearanceM;
         } else {
-            tooClose = distance(f, g) < clearanceM && sin < MIN_CROSSING_SIN;
+            tooClose = sin < MIN_CROSSING_SIN && !boxesApart(f, g, clearanceM) && distance(f, g) < clearanceM;
         }
         if (tooClose) {
             throw new IllegalArgumentException(whatF + " and " + whatG + " run closer than the wire radii allow ("
                     + clearanceM + " m); the filament model does not hold there");
         }
+    }
+
+    /** True when the filaments' bounding boxes are more than {@code gapM} apart along x, y or z (a cheap early out). */
+    private static boolean boxesApart(Filament f, Filament g, double gapM) {
+        return Math.min(f.ax(), f.bx()) - Math.max(g.ax(), g.bx()) > gapM
+                || Math.min(g.ax(), g.bx()) - Math.max(f.ax(), f.bx()) > gapM
+                || Math.min(f.ay(), f.by()) - Math.max(g.ay(), g.by()) > gapM
+                || Math.min(g.ay(), g.by()) - Math.max(f.ay(), f.by()) > gapM
+                || Math.min(f.az(), f.bz()) - Math.max(g.az(), g.bz()) > gapM
+                || Math.min(g.az(), g.bz()) - Math.max(f.az(), f.bz()) > gapM;
     }
 
     private static double distance(Filament f, Filament g) {
