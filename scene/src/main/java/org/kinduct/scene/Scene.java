@@ -14,9 +14,12 @@ import java.util.Set;
  *
  * <p>Sign conventions (used throughout Kinduct): SI units; x right, y up, z out of the screen;
  * B_z &gt; 0 points out of the screen; loops are positive counter-clockwise (normal +z).
+ *
+ * @param gravity gravitational acceleration in the drawing plane, m/s² (zero when the plane is
+ *        horizontal; e.g. (0, −9.81) for a vertical plane with y up); acts on free bodies only
  */
 public record Scene(String name, String description, List<Body> bodies, List<Source> sources,
-                    List<Conductor> conductors, TimeSpan time) {
+                    List<Conductor> conductors, TimeSpan time, Vec2 gravity) {
 
     /** File format name written in every scene file. */
     public static final String FORMAT = "kinduct-scene";
@@ -30,7 +33,14 @@ public record Scene(String name, String description, List<Body> bodies, List<Sou
         sources = List.copyOf(Checks.nonNull(sources, "sources"));
         conductors = List.copyOf(Checks.nonNull(conductors, "conductors"));
         Checks.nonNull(time, "time");
+        gravity = gravity == null ? Vec2.ZERO : gravity;
         checkReferences(bodies, sources, conductors);
+    }
+
+    /** A scene without gravity in its plane (a horizontal drawing plane). */
+    public Scene(String name, String description, List<Body> bodies, List<Source> sources,
+                 List<Conductor> conductors, TimeSpan time) {
+        this(name, description, bodies, sources, conductors, time, Vec2.ZERO);
     }
 
     public static Scene empty(String name) {
@@ -56,23 +66,27 @@ public record Scene(String name, String description, List<Body> bodies, List<Sou
     }
 
     public Scene withSources(List<Source> newSources) {
-        return new Scene(name, description, bodies, newSources, conductors, time);
+        return new Scene(name, description, bodies, newSources, conductors, time, gravity);
     }
 
     public Scene withConductors(List<Conductor> newConductors) {
-        return new Scene(name, description, bodies, sources, newConductors, time);
+        return new Scene(name, description, bodies, sources, newConductors, time, gravity);
     }
 
     public Scene withBodies(List<Body> newBodies) {
-        return new Scene(name, description, newBodies, sources, conductors, time);
+        return new Scene(name, description, newBodies, sources, conductors, time, gravity);
     }
 
     public Scene withTime(TimeSpan newTime) {
-        return new Scene(name, description, bodies, sources, conductors, newTime);
+        return new Scene(name, description, bodies, sources, conductors, newTime, gravity);
     }
 
     public Scene withText(String newName, String newDescription) {
-        return new Scene(newName, newDescription, bodies, sources, conductors, time);
+        return new Scene(newName, newDescription, bodies, sources, conductors, time, gravity);
+    }
+
+    public Scene withGravity(Vec2 newGravity) {
+        return new Scene(name, description, bodies, sources, conductors, time, newGravity);
     }
 
     private static List<Body> withFixedFrame(List<Body> given) {

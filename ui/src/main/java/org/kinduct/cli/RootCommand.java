@@ -8,7 +8,7 @@ import picocli.CommandLine.Parameters;
 @Command(name = "kinduct", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = {"Induced EMF, current and braking for conductors moving in magnetic fields.",
                 "Without a subcommand, opens the editor on FILE or on the first demo scene."},
-        subcommands = {SolveCommand.class, DemoCommand.class, GuiCommand.class})
+        subcommands = {SolveCommand.class, ExportCommand.class, DemoCommand.class, GuiCommand.class})
 final class RootCommand implements Callable<Integer> {
 
     @Parameters(arity = "0..1", paramLabel = "FILE", description = "Scene file to open in the editor.")

@@ -43,6 +43,7 @@ import javafx.util.Duration;
 import org.kinduct.scene.Scene;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.ToolKind;
+import org.kinduct.ui.export.ExportDialog;
 import org.kinduct.ui.paint.Layer;
 import org.kinduct.ui.paint.Quantities;
 
@@ -165,6 +166,7 @@ final class EditorWindow {
                 new SeparatorMenuItem(),
                 item("Save", "Shortcut+S", this::save),
                 item("Save as…", "Shortcut+Shift+S", this::saveAs),
+                item("Export…", "Shortcut+E", () -> ExportDialog.show(stage, vm, home.dir())),
                 new SeparatorMenuItem(),
                 item("Quit", "Shortcut+Q", () -> {
                     if (confirmDiscard()) {

@@ -1,0 +1,216 @@
+package org.kinduct.solver.dynamics;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.hipparchus.ode.ODEState;
+import org.hipparchus.ode.ODEStateAndDerivative;
+import org.hipparchus.ode.OrdinaryDifferentialEquation;
+import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
+import org.hipparchus.ode.sampling.StepNormalizer;
+import org.hipparchus.ode.sampling.StepNormalizerBounds;
+import org.hipparchus.ode.sampling.StepNormalizerMode;
+import org.kinduct.scene.Checks;
+import org.kinduct.scene.Polygons;
+import org.kinduct.scene.Pose;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Circulation;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.SceneSolver;
+import org.kinduct.solver.Snapshot;
+
+/**
+ * Coupled simulation of the loop circuits and the free bodies of a scene over [t0, t1].
+ *
+ * <p><b>Use.</b> {@code Trajectory run = CoupledSimulation.run(scene, t0, t1, dt);} gives
+ * {@link Trajectory#samples()} at t0 + i·dt, each a {@link Sample} with every body's
+ * {@link org.kinduct.scene.Pose} (free bodies as integrated), every conductor's
+ * {@link ConductorState} (flux, EMF by both methods and resistance as the quasi-static solver
+ * reports them along the integrated motion; current, sense and force of closed loops from the
+ * coupled circuit equations) and the self-inductance of every closed loop; and
+ * {@link Trajectory#audit()}, the {@link EnergyAudit} of the whole run. Bad input (a loop whose
+ * wires overlap, sides shorter than four wire radii) throws {@link IllegalArgumentException}.
+ *
+ * <p><b>Circuits.</b> Every closed loop k carries a current I_k obeying Faraday's law with its
+ * own and mutual inductances: d/dt(Σ_j M_kj(q)·I_j + λ_ext,k) + R_k·I_k = 0, where λ_ext,k is its
+ * linkage with the scene's sources (magnets, coils with their prescribed currents, field patches,
+ * uniform fields) and M(q) comes from {@link org.kinduct.solver.circuit.LoopInductance} for the
+ * loops where they are. The state variable is the total linkage Ψ_k = Σ_j M_kj I_j + λ_ext,k, so
+ * dΨ_k/dt = −R_k·I_k and I = M⁻¹(Ψ − λ_ext): neither dM/dt nor dλ_ext/dt is differenced, and the
+ * right-hand side stays continuous where a loop enters a field patch (the flux has a kink there,
+ * the EMF a jump) (Jackson, <i>Classical Electrodynamics</i>, 3rd ed., 1999, §5.15–5.17;
+ * Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §7.2). Open loops and wires
+ * carry no current; source coils are current-driven. As all L → 0 the current follows the
+ * quasi-static I = EMF/R, lagging it by the time constants L/R. Small L/R makes the equations
+ * stiff: the explicit integrator then needs steps of a few L/R (a single-turn 10 cm copper loop
+ * has L/R of tens of microseconds; multi-turn coils with load resistors are gentler).
+ *
+ * <p><b>Free bodies</b> ({@link org.kinduct.scene.Motion.Free}): the pivot is taken as the centre
+ * of mass; m·a = F_applied(t) + m·g − c·v + Σ springs + F_mag, and, when the inertia I_p about the
+ * pivot is positive, I_p·α = τ_mag (otherwise rotation is locked; there is no rotational
+ * damping). g is {@link Scene#gravity()}. Springs are linear (Hooke) between the pivot and a fixed
+ * anchor or another body's pivot; the reaction acts on that body. The magnetic force on a loop
+ * edge from each source is N·I·∫ dl × B (from its B_z moments), its torque about the body's pivot
+ * likewise; the reaction (force and torque) acts on the source's body, so free magnets and coils
+ * are pushed back. Forces between loop currents are the gradient of ½IᵀMI at constant currents,
+ * by central differences. Edges whose ends ride different bodies (a bar sliding on rails) are
+ * contacts: their force is taken by the guide, not applied to a body. Forces between sources
+ * (magnet on magnet) are not modelled. Prescribed and free bodies mix.
+ *
+ * <p><b>Integration.</b> Hipparchus' Dormand–Prince 8(5,3), steps at most dt, relative tolerance
+ * relTol on the body states with absolute tolerances relTol times the loops' size (and its ratio
+ * to the run's duration for speeds); on each loop's Ψ_k an absolute tolerance only,
+ * relTol·L_kk·{@value #CURRENT_SCALE_A} A, because Ψ_k is dominated by the external linkage and a
+ * tolerance relative to it would leave I with an error of relTol·|λ_ext|/L. Samples come from the
+ * integrator's dense output; currents are then good to about 1e-7 relative at the default
+ * tolerance, positions and speeds to about 1e-9.
+ *
+ * <p><b>Energy audit</b> ({@link EnergyAudit}): applied, holding and drive work, Joule and damping
+ * heat, integrated alongside the state, and the changes of kinetic, potential and magnetic
+ * energy; its residual is about 1e-9 of the heat where loop–loop forces play no part, 1e-4 where
+ * they do (their differences).
+ */
+public final class CoupledSimulation {
+
+    /** Default relative tolerance of the integration. */
+    public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-10;
+    /** Current scale for the absolute tolerance of the loop states, amperes. */
+    private static final double CURRENT_SCALE_A = 1e-3;
+    /** Time step for the difference quotients of prescribed motion, as a fraction of the sampling step. */
+    private static final double DIFFERENCE_STEP_FRACTION = 1e-4;
+
+    private final double relTol;
+
+    /** Simulates {@code scene} at the default tolerance; see {@link #simulate}. */
+    public static Trajectory run(Scene scene, double t0S, double t1S, double dtS) {
+        return new CoupledSimulation(DEFAULT_RELATIVE_TOLERANCE).simulate(scene, t0S, t1S, dtS);
+    }
+
+    /** @param relativeTolerance relative tolerance of the integration, e.g. {@value #DEFAULT_RELATIVE_TOLERANCE} */
+    public CoupledSimulation(double relativeTolerance) {
+        this.relTol = Checks.positive(relativeTolerance, "relative tolerance");
+    }
+
+    /**
+     * Simulates {@code scene} from t0 to t1, sampling at t0 + i·dt up to t1 (t1 itself when it is
+     * on that grid); the energy audit covers the whole of [t0, t1].
+     */
+    public Trajectory simulate(Scene scene, double t0S, double t1S, double dtS) {
+        Checks.nonNull(scene, "scene");
+        Checks.finite(t0S, "t0");
+        Checks.positive(dtS, "dt");
+        if (!(t1S > t0S)) {
+            throw new IllegalArgumentException("t1 must be after t0, got t0 = " + t0S + " s, t1 = " + t1S + " s");
+        }
+        double hS = DIFFERENCE_STEP_FRACTION * dtS;
+        CoupledModel model = new CoupledModel(scene, hS);
+        double[] y0 = model.initialState(t0S);
+        OrdinaryDifferentialEquation equations = new OrdinaryDifferentialEquation() {
+            @Override
+            public int getDimension() {
+                return model.dimension();
+            }
+
+            @Override
+            public double[] computeDerivatives(double t, double[] y) {
+                return model.evaluate(t, y).derivative;
+            }
+        };
+        DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-12 * (t1S - t0S), dtS,
+                absoluteTolerances(model, y0, t0S, t1S), relativeTolerances(model));
+        List<double[]> states = new ArrayList<>();
+        List<Double> times = new ArrayList<>();
+        integrator.addStepHandler(new StepNormalizer(dtS, (ODEStateAndDerivative s, boolean isLast) -> {
+            times.add(s.getTime());
+            states.add(s.getPrimaryState().clone());
+        }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.FIRST));
+        ODEStateAndDerivative last = integrator.integrate(equations, new ODEState(t0S, y0), t1S);
+
+        List<Sample> samples = new ArrayList<>(states.size());
+        for (int i = 0; i < states.size(); i++) {
+            samples.add(sample(model, times.get(i), states.get(i)));
+        }
+        return new Trajectory(samples, audit(model, t0S, y0, last.getTime(), last.getPrimaryState()));
+    }
+
+    private static EnergyAudit audit(CoupledModel model, double t0S, double[] y0, double t1S, double[] y1) {
+        CoupledModel.Evaluation start = model.evaluate(t0S, y0);
+        CoupledModel.Evaluation end = model.evaluate(t1S, y1);
+        int a = model.auditOffset();
+        return new EnergyAudit(y1[a + CoupledModel.APPLIED], y1[a + CoupledModel.HOLDING], y1[a + CoupledModel.DRIVE],
+                y1[a + CoupledModel.JOULE], y1[a + CoupledModel.DAMPING],
+                end.kineticEnergyJ() - start.kineticEnergyJ(), end.potentialEnergyJ() - start.potentialEnergyJ(),
+                end.magneticEnergyJ() - start.magneticEnergyJ());
+    }
+
+    /**
+     * The sample at t: poses from the state, conductor states from the quasi-static solver run on
+     * the integrated motion (EMF by both methods, flux, resistance, wires and open loops as
+     * there), with each closed loop's current, sense and force replaced by the coupled ones.
+     */
+    private static Sample sample(CoupledModel model, double tS, double[] y) {
+        CoupledModel.Evaluation now = model.evaluate(tS, y);
+        Map<String, Pose> poses = new HashMap<>();
+        for (int b = 0; b < model.bodies().size(); b++) {
+            poses.put(model.bodies().get(b).id(), now.poses[b]);
+        }
+        Map<String, Integer> loopIndex = new HashMap<>();
+        Map<String, Double> selfL = new HashMap<>();
+        for (int k = 0; k < model.loops().size(); k++) {
+            String id = model.loops().get(k).loop().id();
+            loopIndex.put(id, k);
+            selfL.put(id, now.inductance[k][k]);
+        }
+        Snapshot quasiStatic = new SceneSolver(model.scene(), model.kinematicsAround(tS, y)).at(tS);
+        List<ConductorState> states = new ArrayList<>();
+        for (ConductorState c : quasiStatic.conductors()) {
+            Integer k = loopIndex.get(c.id());
+            states.add(k == null ? c : coupled(c, now.current[k], now.loopForce[k]));
+        }
+        return new Sample(tS, poses, states, selfL);
+    }
+
+    private static ConductorState coupled(ConductorState c, double currentA, Vec2 forceN) {
+        double sense = Math.signum(currentA) * Math.signum(Polygons.signedArea(c.vertices()));
+        Circulation direction = sense > 0 ? Circulation.CCW : sense < 0 ? Circulation.CW : Circulation.NONE;
+        return new ConductorState(c.id(), c.kind(), c.vertices(), c.fluxWb(), c.linkageWb(), c.emfFluxV(),
+                c.emfMotionalV(), c.emfV(), c.disagreement(), c.positiveEnd(), currentA, direction, forceN,
+                c.resistanceOhm(), c.inducedFieldIncluded());
+    }
+
+    private double[] relativeTolerances(CoupledModel model) {
+        double[] rel = new double[model.dimension()];
+        // Body states only: the loop states get an absolute tolerance, the energy integrals none.
+        java.util.Arrays.fill(rel, 0, model.auditOffset() - model.loops().size(), relTol);
+        return rel;
+    }
+
+    /**
+     * Absolute tolerances: relTol times a length scale (the loops' extent, else 1 m) for
+     * positions, its ratio to the run's duration for velocities, 1 rad and 1/duration for angles
+     * and ω, and L_kk·{@value #CURRENT_SCALE_A} A for loop k's Ψ. The energy integrals are not
+     * error-controlled: they ride on the steps the state needs.
+     */
+    private double[] absoluteTolerances(CoupledModel model, double[] y0, double t0S, double t1S) {
+        double length = model.lengthScaleM();
+        double duration = t1S - t0S;
+        int loopsAt = model.auditOffset() - model.loops().size();
+        double[][] inductance = model.evaluate(t0S, y0).inductance;
+        double[] abs = new double[model.dimension()];
+        for (int i = 0; i < loopsAt; i += CoupledModel.BODY_DOFS) {
+            abs[i] = relTol * length;
+            abs[i + 1] = relTol * length;
+            abs[i + 2] = relTol;
+            abs[i + 3] = relTol * length / duration;
+            abs[i + 4] = relTol * length / duration;
+            abs[i + 5] = relTol / duration;
+        }
+        for (int k = 0; k < model.loops().size(); k++) {
+            abs[loopsAt + k] = relTol * inductance[k][k] * CURRENT_SCALE_A;
+        }
+        java.util.Arrays.fill(abs, model.auditOffset(), abs.length, Double.MAX_VALUE);
+        return abs;
+    }
+}
