@@ -16,7 +16,7 @@ public final class ScenePainter {
     private static final double SYMBOL_SPACING_PX = 42;
     private static final double SYMBOL_MIN_FRACTION = 0.04;
     private static final int MAX_CONTOUR_LEVELS_PER_SIDE = 5;
-    private static final double CONTOUR_CELL_PX = 10;
+    private static final double CONTOUR_CELL_PX = 4;
 
     private ScenePainter() {
     }
@@ -158,15 +158,15 @@ public final class ScenePainter {
             s.stroke(k > 0 ? 0xC0402000 : 0xC0001A40);
             s.lineWidth(1);
             s.beginPath();
-            Contours.trace(r, level, (x1, y1, x2, y2) -> {
-                double a = v.screenX(x1);
-                double b = v.screenY(y1);
-                double c = v.screenX(x2);
-                double d = v.screenY(y2);
-                s.moveTo(a, b);
-                s.lineTo(c, d);
-                if (segs.size() < 4000) {
-                    segs.add(new double[] {(a + c) / 2, (b + d) / 2});
+            Contours.lines(r, level, (xs, ys, n) -> {
+                s.moveTo(v.screenX(xs[0]), v.screenY(ys[0]));
+                for (int i = 1; i < n; i++) {
+                    double a = v.screenX(xs[i]);
+                    double b = v.screenY(ys[i]);
+                    s.lineTo(a, b);
+                    if (segs.size() < 4000) {
+                        segs.add(new double[] {(a + v.screenX(xs[i - 1])) / 2, (b + v.screenY(ys[i - 1])) / 2});
+                    }
                 }
             });
             s.strokePath();

@@ -60,4 +60,42 @@ class ContoursTest {
             }
         }
     }
+
+    @Test
+    void closedContourOfARadialFieldIsJoinedIntoOneClosedLine() {
+        // B_z = x² + y² has circles as contours; the level r² = 0.04 is a circle of radius 0.2 m.
+        int n = 60;
+        float[] v = new float[n * n];
+        FieldRaster r = new FieldRaster(-0.3, 0.3, 0.01, n, n, v, 0, 0, 0);
+        for (int row = 0; row < n; row++) {
+            for (int col = 0; col < n; col++) {
+                v[row * n + col] = (float) (Math.pow(r.centerX(col), 2) + Math.pow(r.centerY(row), 2));
+            }
+        }
+        int[] segments = {0};
+        Contours.trace(r, 0.04, (x1, y1, x2, y2) -> segments[0]++);
+        List<double[][]> lines = new ArrayList<>();
+        Contours.lines(r, 0.04, (xs, ys, k) -> lines.add(new double[][] {
+            java.util.Arrays.copyOf(xs, k), java.util.Arrays.copyOf(ys, k)}));
+        assertEquals(1, lines.size(), "one circle, one line");
+        double[] xs = lines.get(0)[0];
+        double[] ys = lines.get(0)[1];
+        assertEquals(segments[0] + 1, xs.length, "every segment once, first point repeated at the end");
+        assertEquals(xs[0], xs[xs.length - 1]);
+        assertEquals(ys[0], ys[ys.length - 1]);
+        for (int k = 0; k < xs.length; k++) {
+            // Linear interpolation of r² on a 10 mm grid stays within a millimetre of the circle.
+            assertEquals(0.2, Math.hypot(xs[k], ys[k]), 1e-3);
+        }
+    }
+
+    @Test
+    void openContoursEndAtTheRasterBorder() {
+        FieldRaster r = linear(1, 1, 30, 20, 0.02);
+        List<Integer> sizes = new ArrayList<>();
+        int[] segments = {0};
+        Contours.trace(r, 0.1, (x1, y1, x2, y2) -> segments[0]++);
+        Contours.lines(r, 0.1, (xs, ys, k) -> sizes.add(k));
+        assertEquals(List.of(segments[0] + 1), sizes, "a straight isoline is a single open line");
+    }
 }
