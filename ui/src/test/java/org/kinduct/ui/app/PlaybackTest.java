@@ -78,7 +78,7 @@ class PlaybackTest {
 
     @Test
     void playingShowsTheSolverValuesAndTheInducedFieldOpposingTheChange(FxRobot robot) throws Exception {
-        interact(() -> vm.speedProperty().set(0.25));
+        interact(() -> vm.speedProperty().set(0.1));
         robot.clickOn("#play");
         WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, () -> vm.timeProperty().get() > 0.2);
         robot.clickOn("#play");
