@@ -188,6 +188,14 @@ final class EditorCanvas extends Pane {
         for (Conductor c : vm.scene().conductors()) {
             c.vertices().forEach(v -> pts.add(v.at()));
         }
+        for (org.kinduct.scene.Source src : vm.scene().sources()) {
+            if (src instanceof org.kinduct.scene.Source.FieldPatch p) {
+                pts.addAll(p.outline());
+            } else if (src instanceof org.kinduct.scene.Source.SourceCoil coil
+                    && coil.shape() instanceof org.kinduct.scene.Source.CoilShape.Polygon poly) {
+                pts.addAll(poly.vertices());
+            }
+        }
         if (drawing != null) {
             pts.addAll(drawing.points());
         }
