@@ -34,8 +34,9 @@ final class GuiCommand implements Callable<Integer> {
             throw new BadInputException("cannot read scene file " + file);
         }
         if (!displayAvailable()) {
-            System.err.println("kinduct: no display found for the editor; headless, try"
-                    + " './kinduct solve FILE' (results) or './kinduct demo' (list demo scenes).");
+            System.err.println("kinduct: no display found for the editor; without one, try"
+                    + " './kinduct solve --demo " + Demos.defaultName() + "' (results) or"
+                    + " './kinduct export --demo " + Demos.defaultName() + " --png snapshot.png' (annotated picture).");
             return KinductMain.BAD_INPUT;
         }
         String demo = file != null ? null : Demos.resource(demoName != null ? demoName : Demos.defaultName())
