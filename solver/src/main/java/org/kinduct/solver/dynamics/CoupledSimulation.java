@@ -50,7 +50,7 @@ import org.kinduct.solver.Snapshot;
  * takes I_k = EMF_k/R_k, with EMF_k = N_k·(motional EMF of the moving edges, from the same edge
  * sums as the forces, + transformer EMF of moving or alternating sources at the loop held
  * still), and {@link CircuitModel#AUTO} (the default) picks the inductive model only when the
- * largest L/R exceeds a fiftieth of the sampling step — see there for why.
+ * largest L/R exceeds a tenth of the sampling step — see there for why.
  *
  * <p><b>Free bodies</b> ({@link org.kinduct.scene.Motion.Free}): the pivot is taken as the centre
  * of mass; m·a = F_applied(t) + m·g − c·v + Σ springs + F_mag, and, when the inertia I_p about the

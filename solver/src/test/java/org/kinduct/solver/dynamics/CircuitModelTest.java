@@ -127,7 +127,7 @@ class CircuitModelTest {
         assertEquals(0, audit.residualJ(), AUDIT_TOL * audit.jouleJ(), audit.toString());
     }
 
-    /** AUTO takes the inductive model only when the largest L/R exceeds a fiftieth of the sampling step. */
+    /** AUTO takes the inductive model only when the largest L/R exceeds the stated fraction of the sampling step. */
     @Test
     void autoChoosesByTheTimeConstantAgainstTheSamplingStep() {
         int turns = 20;
@@ -135,8 +135,10 @@ class CircuitModelTest {
         double tau = LoopInductance.self(rectangle(0, FRAME_H), WIRE_D / 2, turns) / resistance(turns, 1, FRAME_H);
         CoupledSimulation auto = new CoupledSimulation(1e-10, CircuitModel.AUTO);
 
-        Trajectory fine = auto.simulate(scene, 0, 50 * tau, 10 * tau);
-        Trajectory coarse = auto.simulate(scene, 0, 500 * tau, 100 * tau);
+        double bound = CircuitModel.AUTO_STEP_FRACTION_DENOMINATOR * tau; // the step at which τ = dt / denominator
+
+        Trajectory fine = auto.simulate(scene, 0, 2 * bound, bound / 2);
+        Trajectory coarse = auto.simulate(scene, 0, 8 * bound, 2 * bound);
 
         assertEquals(CircuitModel.INDUCTIVE, fine.circuitModel());
         assertEquals(CircuitModel.QUASI_STATIC, coarse.circuitModel());
