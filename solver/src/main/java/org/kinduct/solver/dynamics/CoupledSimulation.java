@@ -88,6 +88,8 @@ public final class CoupledSimulation {
     private static final double CURRENT_SCALE_A = 1e-3;
     /** Time step for the difference quotients of prescribed motion, as a fraction of the sampling step. */
     private static final double DIFFERENCE_STEP_FRACTION = 1e-4;
+    /** Times within this fraction of a step of a grid point count as on it (rounding of t0 + i·dt). */
+    private static final double GRID_SLACK = 1e-9;
 
     private final double relTol;
     private final CircuitModel circuitModel;
@@ -140,10 +142,16 @@ public final class CoupledSimulation {
                 absoluteTolerances(model, y0, t0S, t1S), relativeTolerances(model));
         List<double[]> states = new ArrayList<>();
         List<Double> times = new ArrayList<>();
+        // BOTH adds t1 itself; it is kept only when it is on the grid and not a rounding twin of the last grid point.
         integrator.addStepHandler(new StepNormalizer(dtS, (ODEStateAndDerivative s, boolean isLast) -> {
-            times.add(s.getTime());
-            states.add(s.getPrimaryState().clone());
-        }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.FIRST));
+            double t = s.getTime();
+            double offGrid = Math.abs((t - t0S) / dtS - Math.rint((t - t0S) / dtS));
+            boolean twin = !times.isEmpty() && t - times.get(times.size() - 1) < GRID_SLACK * dtS;
+            if (offGrid < GRID_SLACK && !twin) {
+                times.add(t);
+                states.add(s.getPrimaryState().clone());
+            }
+        }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.BOTH));
         ODEStateAndDerivative last = integrator.integrate(equations, new ODEState(t0S, y0), t1S);
 
         List<Sample> samples = new ArrayList<>(states.size());

@@ -144,6 +144,21 @@ class CircuitModelTest {
         assertEquals(CircuitModel.QUASI_STATIC, coarse.circuitModel());
     }
 
+    /** Samples sit at t0 + i·dt up to t1, t1 included when it is on that grid despite rounding. */
+    @Test
+    void samplesCoverTheWindowIncludingAnEndOnTheGrid() {
+        Scene scene = fallingLoop(20, 1, 0.01, 9.81);
+        CoupledSimulation quasiStatic = new CoupledSimulation(1e-10, CircuitModel.QUASI_STATIC);
+
+        List<Sample> onGrid = quasiStatic.simulate(scene, 0, 0.03, 0.001).samples();
+        List<Sample> offGrid = quasiStatic.simulate(scene, 0, 0.0305, 0.001).samples();
+
+        assertEquals(31, onGrid.size());
+        assertEquals(0.03, onGrid.get(30).tS(), 1e-15);
+        assertEquals(31, offGrid.size());
+        assertEquals(0.03, offGrid.get(30).tS(), 1e-15);
+    }
+
     private static Scene fallingLoop(int turns, double load, double m, double g) {
         Conductor.Loop loop = new Conductor.Loop("coil", "frame", vertices(rectangle(0, FRAME_H)), turns,
                 WireSpec.of(Material.COPPER, WIRE_D), false, load, 20);
