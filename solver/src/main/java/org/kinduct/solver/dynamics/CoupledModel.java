@@ -14,6 +14,7 @@ import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.EdgeSums;
 import org.kinduct.solver.Kinematics;
 import org.kinduct.solver.SourceFields;
 import org.kinduct.solver.circuit.LoopInductance;
@@ -554,11 +555,11 @@ final class CoupledModel {
         }
 
         /**
-         * Per ampere-turn: forces and torques on loop k's edges from each source,
-         * F = M0·(d_y, −d_x) and τ = −[((a − p)·d)·M0 + (d·d)·M1] about the edge body's pivot p,
-         * with the reaction (−F, and the opposite torque about the source body's pivot) on the
-         * source's body; and the motional EMF per turn with every vertex moving with its body
-         * (the core solver's per-edge formulas, Griffiths §5.1.3 and §7.1.3). Edges whose ends ride
+         * Per ampere-turn: forces and torques on loop k's edges from each source, the torque about
+         * the edge body's pivot, with the reaction (−F, and the opposite torque about the source
+         * body's pivot) on the source's body; and the motional EMF per turn with every vertex
+         * moving with its body ({@link EdgeSums}' per-edge formulas, Griffiths, <i>Introduction to
+         * Electrodynamics</i>, 4th ed., 2013, §5.1.3 and §7.1.3). Edges whose ends ride
          * different bodies are sliding contacts: their force is taken up by whatever guides them
          * and applied to neither body.
          */
@@ -579,17 +580,15 @@ final class CoupledModel {
                 Vec2 vb = poses[body2].velocityAt(new Vec2(xs[e2], ys[e2]));
                 for (int s = 0; s < fields.length; s++) {
                     fields[s].bzMoments(xs[e], ys[e], xs[e2], ys[e2], moments);
-                    totals.motionalV += (dx * va.y() - dy * va.x()) * moments[0]
-                            + (dx * (vb.y() - va.y()) - dy * (vb.x() - va.x())) * moments[1];
-                    double fX = moments[0] * dy;
-                    double fY = -moments[0] * dx;
+                    totals.motionalV += EdgeSums.motional(dx, dy, va.x(), va.y(), vb.x(), vb.y(), moments);
+                    double fX = EdgeSums.forceXPerAmpere(dy, moments);
+                    double fY = EdgeSums.forceYPerAmpere(dx, moments);
                     totals.totalX += fX;
                     totals.totalY += fY;
                     if (contact) {
                         continue;
                     }
-                    double t = -(((xs[e] - p.x()) * dx + (ys[e] - p.y()) * dy) * moments[0]
-                            + (dx * dx + dy * dy) * moments[1]);
+                    double t = EdgeSums.torquePerAmpere(xs[e] - p.x(), ys[e] - p.y(), dx, dy, moments);
                     totals.fx[body] += fX;
                     totals.fy[body] += fY;
                     totals.torque[body] += t;
