@@ -23,13 +23,12 @@ import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.circuit.LoopInductance;
 import org.kinduct.solver.dynamics.CircuitModel;
-import org.kinduct.solver.dynamics.CoupledSimulation;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 /**
  * {@code kinduct solve}: flux, both EMF methods, current, inductance and force per conductor over
- * time. A time window is a coupled run ({@link CoupledSimulation}): free bodies move, loop currents
+ * time. A time window is a coupled run ({@link SolveResults#run}): free bodies move, loop currents
  * include their inductance (or not, by {@code --circuit}), and an energy audit closes it. {@code --at}
  * is one quasi-static instant, for scenes without free bodies (a free body's state at t needs the
  * run from t0).
@@ -119,8 +118,7 @@ final class SolveCommand implements Callable<Integer> {
             throw new BadInputException("time window: " + e.getMessage());
         }
         try {
-            return SolveResults.of(scene, new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE,
-                    circuit.model).simulate(scene, from, to, step));
+            return SolveResults.run(scene, from, to, step, circuit.model);
         } catch (IllegalArgumentException e) {
             throw new BadInputException(e.getMessage());
         }

@@ -25,11 +25,6 @@ public final class ResultsJson {
     private ResultsJson() {
     }
 
-    /** Quasi-static instants: no inductances, bodies or audit. */
-    public static void write(Scene scene, List<Snapshot> series, Writer out) throws IOException {
-        write(scene, SolveResults.instants(series), out);
-    }
-
     public static void write(Scene scene, SolveResults results, Writer out) throws IOException {
         try (JsonGenerator g = new JsonFactory().createGenerator(out)) {
             g.useDefaultPrettyPrinter();

@@ -10,6 +10,7 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.CircuitModel;
+import org.kinduct.solver.dynamics.CoupledSimulation;
 import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.dynamics.Sample;
 import org.kinduct.solver.dynamics.Trajectory;
@@ -50,9 +51,13 @@ public record SolveResults(List<Snapshot> series, List<Map<String, Double>> self
                 null, null);
     }
 
-    /** Quasi-static instants without inductances (wherever only conductor states are known). */
-    public static SolveResults instants(List<Snapshot> series) {
-        return instants(series, series.stream().map(s -> Map.<String, Double>of()).toList());
+    /**
+     * The coupled run of {@code scene} over [t0, t1] sampled every dt, at the default tolerance, as
+     * {@code kinduct solve} does it for a time window.
+     */
+    public static SolveResults run(Scene scene, double t0S, double t1S, double dtS, CircuitModel model) {
+        return of(scene, new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE, model)
+                .simulate(scene, t0S, t1S, dtS));
     }
 
     /** A coupled run of {@code scene}. */
