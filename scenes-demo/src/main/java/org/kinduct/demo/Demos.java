@@ -20,6 +20,7 @@ public final class Demos {
     private static final List<String> NAMES = List.of(
             "carriage-pickup",
             "pcb-harvester",
+            "frame-brake",
             "flow-electrodes",
             "gradiometer",
             "spinning-coil-generator",

@@ -1,5 +1,6 @@
 package org.kinduct.report;
 
+import org.kinduct.solver.dynamics.CircuitModel;
 import org.kinduct.solver.Circulation;
 import org.kinduct.solver.Terminal;
 
@@ -24,6 +25,15 @@ public final class Labels {
             case CW -> "cw";
             case CCW -> "ccw";
             case NONE -> "none";
+        };
+    }
+
+    /** {@code inductive} or {@code quasi-static}, as {@code kinduct solve --circuit} spells them. */
+    public static String circuitModel(CircuitModel m) {
+        return switch (m) {
+            case INDUCTIVE -> "inductive";
+            case QUASI_STATIC -> "quasi-static";
+            case AUTO -> "auto";
         };
     }
 }

@@ -10,26 +10,29 @@ import org.kinduct.solver.Snapshot;
 /**
  * Long-form CSV of a time series: one row per conductor per time, the same quantities and
  * names as {@link ResultsJson}, units in the header. Empty cells where a quantity does not apply.
+ * Free bodies and the energy audit are in the JSON and the table only.
  */
 public final class ResultsCsv {
 
     static final String HEADER = "t_s,id,kind,flux_Wb,linkage_Wb,emf_flux_V,emf_motional_V,emf_V,disagreement,"
-            + "positive_end,current_A,direction,force_x_N,force_y_N";
+            + "positive_end,current_A,direction,force_x_N,force_y_N,inductance_H";
 
     private ResultsCsv() {
     }
 
-    public static void write(List<Snapshot> series, Writer out) throws IOException {
+    public static void write(SolveResults results, Writer out) throws IOException {
         out.write(HEADER);
         out.write('\n');
-        for (Snapshot s : series) {
+        List<Snapshot> series = results.series();
+        for (int i = 0; i < series.size(); i++) {
+            Snapshot s = series.get(i);
             for (ConductorState c : s.conductors()) {
                 boolean loop = c.kind() == ConductorState.Kind.LOOP;
                 out.write(String.join(",", num(s.tS()), c.id(), loop ? "loop" : "wire", num(c.fluxWb()),
                         num(c.linkageWb()), num(c.emfFluxV()), num(c.emfMotionalV()), num(c.emfV()),
                         num(c.disagreement()), Labels.terminal(c.positiveEnd()), num(c.currentA()),
                         loop ? Labels.circulation(c.direction()) : "none", num(c.forceN().x()),
-                        num(c.forceN().y())));
+                        num(c.forceN().y()), num(results.inductanceH(i, c.id()))));
                 out.write('\n');
             }
         }

@@ -6,11 +6,14 @@ import java.io.IOException;
 import java.io.Writer;
 import java.util.List;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.dynamics.EnergyAudit;
 
 /**
- * Machine-readable results: one object per conductor per time under {@code samples}; schema in
+ * Machine-readable results: one object per conductor per time under {@code samples}, one per
+ * free body per time under {@code bodies}, and the run's {@code energy_audit}; schema in
  * README.md ("Results JSON"). Shared by {@code kinduct solve --format json} and the export.
  */
 public final class ResultsJson {
@@ -22,25 +25,77 @@ public final class ResultsJson {
     private ResultsJson() {
     }
 
-    public static void write(Scene scene, List<Snapshot> series, Writer out) throws IOException {
+    public static void write(Scene scene, SolveResults results, Writer out) throws IOException {
         try (JsonGenerator g = new JsonFactory().createGenerator(out)) {
             g.useDefaultPrettyPrinter();
             g.writeStartObject();
             g.writeStringField("format", FORMAT);
             g.writeNumberField("version", VERSION);
             g.writeStringField("scene", scene.name());
+            if (results.circuitModel() == null) {
+                g.writeNullField("circuit_model");
+            } else {
+                g.writeStringField("circuit_model", Labels.circuitModel(results.circuitModel()));
+            }
             g.writeArrayFieldStart("samples");
-            for (Snapshot s : series) {
-                for (ConductorState c : s.conductors()) {
-                    writeSample(g, s.tS(), c);
+            List<Snapshot> series = results.series();
+            for (int i = 0; i < series.size(); i++) {
+                for (ConductorState c : series.get(i).conductors()) {
+                    writeSample(g, series.get(i).tS(), c, results.inductanceH(i, c.id()));
                 }
             }
             g.writeEndArray();
+            g.writeArrayFieldStart("bodies");
+            for (int i = 0; i < series.size(); i++) {
+                for (SolveResults.BodyState b : results.freeBodies().get(i)) {
+                    writeBody(g, series.get(i).tS(), b);
+                }
+            }
+            g.writeEndArray();
+            writeAudit(g, results.audit());
             g.writeEndObject();
         }
     }
 
-    private static void writeSample(JsonGenerator g, double tS, ConductorState c) throws IOException {
+    private static void writeBody(JsonGenerator g, double tS, SolveResults.BodyState b) throws IOException {
+        g.writeStartObject();
+        g.writeNumberField("t", tS);
+        g.writeStringField("id", b.id());
+        pair(g, "position_m", b.positionM());
+        g.writeNumberField("angle_rad", b.angleRad());
+        pair(g, "velocity_mps", b.velocityMps());
+        g.writeNumberField("omega_radps", b.omegaRadPerS());
+        g.writeEndObject();
+    }
+
+    private static void writeAudit(JsonGenerator g, EnergyAudit a) throws IOException {
+        if (a == null) {
+            g.writeNullField("energy_audit");
+            return;
+        }
+        g.writeObjectFieldStart("energy_audit");
+        g.writeNumberField("work_J", a.suppliedJ());
+        g.writeNumberField("applied_J", a.appliedJ());
+        g.writeNumberField("holding_J", a.holdingJ());
+        g.writeNumberField("drive_J", a.driveJ());
+        g.writeNumberField("joule_J", a.jouleJ());
+        g.writeNumberField("damping_J", a.dampingJ());
+        g.writeNumberField("delta_kinetic_J", a.deltaKineticJ());
+        g.writeNumberField("delta_potential_J", a.deltaPotentialJ());
+        g.writeNumberField("delta_magnetic_J", a.deltaMagneticJ());
+        g.writeNumberField("residual_J", a.residualJ());
+        g.writeEndObject();
+    }
+
+    private static void pair(JsonGenerator g, String name, Vec2 v) throws IOException {
+        g.writeArrayFieldStart(name);
+        g.writeNumber(v.x());
+        g.writeNumber(v.y());
+        g.writeEndArray();
+    }
+
+    private static void writeSample(JsonGenerator g, double tS, ConductorState c, double inductanceH)
+            throws IOException {
         boolean loop = c.kind() == ConductorState.Kind.LOOP;
         g.writeStartObject();
         g.writeNumberField("t", tS);
@@ -60,6 +115,7 @@ public final class ResultsJson {
         g.writeNumber(c.forceN().y());
         g.writeEndArray();
         number(g, "resistance_Ohm", c.resistanceOhm());
+        number(g, "inductance_H", inductanceH);
         g.writeBooleanField("induced_e_included", c.inducedFieldIncluded());
         g.writeEndObject();
     }

@@ -9,6 +9,7 @@ import org.kinduct.scene.units.Units;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.Terminal;
+import org.kinduct.solver.dynamics.EnergyAudit;
 
 /** The readable per-conductor summary printed by {@code kinduct solve} by default. */
 public final class ResultsTable {
@@ -19,25 +20,30 @@ public final class ResultsTable {
     private ResultsTable() {
     }
 
-    public static void write(Scene scene, List<Snapshot> series, PrintWriter out) {
+    public static void write(Scene scene, SolveResults results, PrintWriter out) {
+        List<Snapshot> series = results.series();
         double t0 = series.get(0).tS();
         double t1 = series.get(series.size() - 1).tS();
         out.printf(Locale.ROOT, "Scene: %s%n", scene.name().isEmpty() ? "(unnamed)" : scene.name());
-        out.printf(Locale.ROOT, "Time: %s to %s, %d samples%n%n", Units.format(t0, Dimension.TIME),
-                Units.format(t1, Dimension.TIME), series.size());
+        out.printf(Locale.ROOT, "Time: %s to %s, %d samples%s%n%n", Units.format(t0, Dimension.TIME),
+                Units.format(t1, Dimension.TIME), series.size(), results.circuitModel() == null ? ""
+                        : " (coupled run, " + Labels.circuitModel(results.circuitModel()) + " circuits)");
         List<ConductorSummary> rows = ConductorSummary.of(series);
         int idWidth = Math.max("conductor".length(), rows.stream().mapToInt(r -> r.id().length()).max().orElse(0));
-        String fmt = "%-" + idWidth + "s  %-5s %12s %10s %12s  %-26s %12s  %s%n";
+        String fmt = "%-" + idWidth + "s  %-5s %12s %10s %12s  %-26s %12s %11s  %s%n";
         out.printf(Locale.ROOT, fmt, "conductor", "kind", "peak EMF", "at", "RMS EMF", "polarity at peak",
-                "peak current", "methods agree");
+                "peak current", "L", "methods agree");
         for (ConductorSummary r : rows) {
+            double l = results.inductanceH(0, r.id());
             out.printf(Locale.ROOT, fmt, r.id(), r.kind() == ConductorState.Kind.LOOP ? "loop" : "wire",
                     Units.format(r.peakEmfV(), Dimension.VOLTAGE), Units.format(r.peakTimeS(), Dimension.TIME),
                     Units.format(r.rmsEmfV(), Dimension.VOLTAGE), polarity(r),
                     r.kind() == ConductorState.Kind.LOOP ? Units.format(r.peakCurrentA(), Dimension.CURRENT) : "-",
-                    agreement(r));
+                    Double.isNaN(l) ? "-" : Units.format(l, Dimension.INDUCTANCE), agreement(r));
         }
         out.println();
+        writeBodies(results, out);
+        writeAudit(results.audit(), out);
         out.println("Signs: EMF and current are positive along each conductor's vertex order; for a wire,"
                 + " EMF > 0 means its last vertex is the + end.");
         if (rows.stream().anyMatch(r -> !r.inducedFieldIncluded())) {
@@ -47,6 +53,39 @@ public final class ResultsTable {
         if (rows.stream().anyMatch(r -> Math.abs(r.peakEmfV()) > Cautions.ELV_DC_V)) {
             out.println(Cautions.VOLTAGE);
         }
+    }
+
+    /** The final speed of each free body. */
+    private static void writeBodies(SolveResults results, PrintWriter out) {
+        if (!results.hasFreeBodies()) {
+            return;
+        }
+        List<SolveResults.BodyState> last = results.freeBodies().get(results.freeBodies().size() - 1);
+        for (SolveResults.BodyState b : last) {
+            out.printf(Locale.ROOT, "Free body %s at the end: speed %s, velocity (%s, %s), ω %s%n", b.id(),
+                    Units.format(b.velocityMps().length(), Dimension.VELOCITY),
+                    Units.format(b.velocityMps().x(), Dimension.VELOCITY),
+                    Units.format(b.velocityMps().y(), Dimension.VELOCITY),
+                    Units.format(b.omegaRadPerS(), Dimension.ANGULAR_SPEED));
+        }
+        out.println();
+    }
+
+    /** Where the energy went, and what the balance leaves over. */
+    private static void writeAudit(EnergyAudit a, PrintWriter out) {
+        if (a == null) {
+            return;
+        }
+        out.printf(Locale.ROOT, "Energy: work in %s = Joule heat %s + damping heat %s + kinetic %s + potential %s"
+                + " + magnetic %s%n", energy(a.suppliedJ()), energy(a.jouleJ()), energy(a.dampingJ()),
+                energy(a.deltaKineticJ()), energy(a.deltaPotentialJ()), energy(a.deltaMagneticJ()));
+        double scale = Math.max(Math.abs(a.suppliedJ()), a.jouleJ() + a.dampingJ());
+        out.printf(Locale.ROOT, "Energy residual: %s (%.1e of the energy turned over)%n%n", energy(a.residualJ()),
+                scale > 0 ? Math.abs(a.residualJ()) / scale : 0.0);
+    }
+
+    private static String energy(double joules) {
+        return Units.format(joules, Dimension.ENERGY);
     }
 
     private static String polarity(ConductorSummary r) {

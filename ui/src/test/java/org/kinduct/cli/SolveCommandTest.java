@@ -1,7 +1,8 @@
 package org.kinduct.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.core.JsonFactory;
@@ -13,122 +14,199 @@ import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.HashMap;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * {@code kinduct solve} as a user runs it: results in each format, the + end and current sense
- * by the textbook cases, and exit code 1 with a located message for bad input.
+ * {@code kinduct solve} on a loop falling into a field region: the coupled run through the
+ * command line, its JSON schema, and physics a reader can check by hand — the terminal speed
+ * v_t = m·g·R/(N·B·w)² (Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013,
+ * Problem 7.11 setting) and the energy balance.
  */
 class SolveCommandTest {
+
+    private static final double B = 0.5;
+    private static final double W = 0.05;
+    private static final double H = 1.0;
+    private static final int TURNS = 50;
+    private static final double LOAD = 0.1;
+    private static final double MASS = 0.01;
+    private static final double G = 9.81;
+    private static final double WIRE_D = 0.5e-3;
+    /** Copper, IEC 60028: ρ20 = 1/58 Ω·mm²/m. */
+    private static final double RHO_COPPER = 1.0 / 58 * 1e-6;
+    /** After ten mechanical time constants e^{−10} of the approach is left. */
+    private static final double TERMINAL_TOL = 1e-3;
+    private static final double AUDIT_TOL = 1e-6;
 
     @TempDir
     Path dir;
 
-    private record Result(int code, String out, String err) {
-    }
+    private static final String SCENE = """
+            {"format": "kinduct-scene", "version": 1, "name": "falling frame",
+             "time": {"t0": 0, "t1": "0.6 s", "dt": "6 ms"},
+             "gravity": [0, "-9.81 m/s^2"],
+             "bodies": [{"id": "frame", "pivot": [0.025, 0.5], "motion": {"kind": "free", "mass": "10 g"}}],
+             "sources": [{"kind": "field-patch", "id": "gap", "bz": "0.5 T",
+               "outline": [[-10, -10], [10, -10], [10, 0], [-10, 0]]}],
+             "conductors": [
+               {"kind": "loop", "id": "coil", "body": "frame", "vertices": [[0, 0], [0.05, 0], [0.05, 1], [0, 1]],
+                "turns": 50, "wire": {"material": "copper", "diameter": "0.5 mm"}, "load": "0.1 ohm"},
+               {"kind": "wire", "id": "probe", "vertices": [[-0.1, -0.1], [-0.1, 0.1]]}]}
+            """;
 
     private static Result run(String... args) {
-        PrintStream out = System.out;
         PrintStream err = System.err;
-        ByteArrayOutputStream o = new ByteArrayOutputStream();
-        ByteArrayOutputStream e = new ByteArrayOutputStream();
-        System.setOut(new PrintStream(o, true, StandardCharsets.UTF_8));
-        System.setErr(new PrintStream(e, true, StandardCharsets.UTF_8));
+        ByteArrayOutputStream captured = new ByteArrayOutputStream();
+        System.setErr(new PrintStream(captured, true, StandardCharsets.UTF_8));
         try {
             int code = KinductMain.run(args);
-            return new Result(code, o.toString(StandardCharsets.UTF_8), e.toString(StandardCharsets.UTF_8));
+            return new Result(code, captured.toString(StandardCharsets.UTF_8));
         } finally {
-            System.setOut(out);
             System.setErr(err);
         }
     }
 
-    @Test
-    void tableNamesThePositiveEndOfTheSenseTrace() {
-        Result r = run("solve", "--demo", "drive-sense-wire");
-        assertEquals(KinductMain.OK, r.code(), r.err());
-        // 0.35 T · 20 mm · 2π·20 Hz·8 mm = 7.04 mV, upper (last) end + while moving right (Griffiths ch. 7).
-        assertTrue(r.out().contains("7.04 mV"), r.out());
-        assertTrue(r.out().contains("+ at last vertex"), r.out());
+    private record Result(int code, String err) {
     }
 
     @Test
-    void jsonHasOneSampleObjectPerConductorPerTimeWithTheDocumentedKeys() throws IOException {
+    void fallingFrameReachesTheTerminalSpeedAndTheAuditBalancesInTheJson() throws IOException {
+        Path scene = Files.writeString(dir.resolve("fall.json"), SCENE);
         Path out = dir.resolve("r.json");
-        Result r = run("solve", "--demo", "rail-sled", "--t0", "50 ms", "--t1", "60 ms", "--dt", "5 ms",
-                "--format", "json", "--out", out.toString());
+
+        Result r = run("solve", scene.toString(), "--format", "json", "--out", out.toString());
+
         assertEquals(KinductMain.OK, r.code(), r.err());
-        Map<String, Object> first = firstSample(Files.readString(out));
-        for (String key : new String[] {"t", "id", "kind", "flux_Wb", "linkage_Wb", "emf_flux_V", "emf_motional_V",
-                "emf_V", "positive_end", "current_A", "direction", "force_N"}) {
-            assertTrue(first.containsKey(key), "sample lacks " + key + ": " + first.keySet());
-        }
-        assertEquals("rail-circuit", first.get("id"));
-        assertEquals("loop", first.get("kind"));
-        assertEquals("cw", first.get("direction"), "flux out of the board grows: current clockwise (Lenz)");
-        // EMF = −B·w·v along the counter-clockwise vertex order (Griffiths ch. 7).
-        assertEquals(-0.5 * 0.020 * 0.5, (Double) first.get("emf_V"), 1e-12);
-        assertEquals((Double) first.get("emf_V"), (Double) first.get("emf_flux_V"), 1e-9);
-    }
+        Map<?, ?> json = (Map<?, ?>) read(Files.readString(out));
+        double resistance = TURNS * 2 * (W + H) * RHO_COPPER / (Math.PI * WIRE_D * WIRE_D / 4) + LOAD;
+        double vTerminal = MASS * G * resistance / Math.pow(TURNS * B * W, 2);
+        List<?> bodies = (List<?>) json.get("bodies");
+        Map<?, ?> last = (Map<?, ?>) bodies.get(bodies.size() - 1);
+        assertEquals("frame", last.get("id"));
+        double vy = ((Number) ((List<?>) last.get("velocity_mps")).get(1)).doubleValue();
+        assertEquals(-vTerminal, vy, TERMINAL_TOL * vTerminal);
+        assertEquals(2, ((List<?>) last.get("position_m")).size());
+        assertNotNull(last.get("angle_rad"));
+        assertNotNull(last.get("omega_radps"));
 
-    @Test
-    void csvHeaderCarriesUnits() {
-        Result r = run("solve", "--demo", "flow-electrodes", "--format", "csv", "--at", "5 ms");
-        assertEquals(KinductMain.OK, r.code(), r.err());
-        String header = r.out().lines().findFirst().orElseThrow();
-        assertTrue(header.startsWith("t_s,id,kind,flux_Wb"), header);
-        assertTrue(r.out().lines().skip(1).findFirst().orElseThrow().contains(",last,"), r.out());
-    }
+        Map<?, ?> audit = (Map<?, ?>) json.get("energy_audit");
+        double joule = number(audit, "joule_J");
+        double lostPotential = -number(audit, "delta_potential_J");
+        assertTrue(joule > 0.5 * lostPotential, "most of the fall ends as heat: " + audit);
+        assertEquals(0, number(audit, "residual_J"), AUDIT_TOL * joule, audit.toString());
+        assertEquals(number(audit, "work_J"), number(audit, "joule_J") + number(audit, "damping_J")
+                + number(audit, "delta_kinetic_J") + number(audit, "delta_potential_J")
+                + number(audit, "delta_magnetic_J") + number(audit, "residual_J"), AUDIT_TOL * joule);
+        assertTrue(List.of("inductive", "quasi-static").contains(json.get("circuit_model")), json.toString());
 
-    @Test
-    void malformedSceneFileExitsOneNamingLineAndPath() throws IOException {
-        Path bad = dir.resolve("bad.json");
-        Files.writeString(bad, "{\"format\": \"kinduct-scene\", \"version\": 1,\n"
-                + " \"conductors\": [{\"kind\": \"wire\", \"id\": \"w\", \"vertices\": [[0, 0], [\"3 mT\", 0]]}]}\n");
-        Result r = run("solve", bad.toString());
-        assertEquals(KinductMain.BAD_INPUT, r.code());
-        assertTrue(r.err().contains("bad.json:2:"), r.err());
-        assertTrue(r.err().contains("conductors[0].vertices[1]"), r.err());
-        assertTrue(r.out().isEmpty(), "no results on bad input");
-    }
-
-    @Test
-    void badTimeUnitAndMissingFileExitOne() {
-        Result unit = run("solve", "--demo", "rail-sled", "--dt", "3 mT");
-        assertEquals(KinductMain.BAD_INPUT, unit.code());
-        assertTrue(unit.err().contains("--dt"), unit.err());
-        Result missing = run("solve", dir.resolve("nowhere.json").toString());
-        assertEquals(KinductMain.BAD_INPUT, missing.code());
-        assertFalse(missing.err().isBlank());
-    }
-
-    /** The first object of {@code samples}, scalar values only (numbers as Double, strings, null). */
-    private static Map<String, Object> firstSample(String json) throws IOException {
-        try (JsonParser p = new JsonFactory().createParser(json)) {
-            while (p.nextToken() != null) {
-                if (p.currentToken() == JsonToken.FIELD_NAME && "samples".equals(p.currentName())) {
-                    p.nextToken();
-                    p.nextToken();
-                    Map<String, Object> sample = new HashMap<>();
-                    while (p.nextToken() == JsonToken.FIELD_NAME) {
-                        String name = p.currentName();
-                        JsonToken value = p.nextToken();
-                        if (value == JsonToken.START_ARRAY || value == JsonToken.START_OBJECT) {
-                            p.skipChildren();
-                            sample.put(name, "(structure)");
-                        } else if (value.isNumeric()) {
-                            sample.put(name, p.getDoubleValue());
-                        } else {
-                            sample.put(name, value == JsonToken.VALUE_NULL ? null : p.getText());
-                        }
-                    }
-                    return sample;
-                }
+        for (Object o : (List<?>) json.get("samples")) {
+            Map<?, ?> sample = (Map<?, ?>) o;
+            if ("probe".equals(sample.get("id"))) {
+                assertNull(sample.get("inductance_H"), "a wire has no inductance entry");
+            } else {
+                assertTrue(number(sample, "inductance_H") > 0, sample.toString());
             }
         }
-        throw new AssertionError("no samples in " + json);
+    }
+
+    @Test
+    void bothCircuitModelsCanBeChosenAndTheTableShowsTheAudit() throws IOException {
+        Path scene = Files.writeString(dir.resolve("fall.json"), SCENE);
+        for (String model : List.of("inductive", "quasi-static")) {
+            Path out = dir.resolve(model + ".txt");
+
+            Result r = run("solve", scene.toString(), "--circuit", model, "--out", out.toString());
+
+            assertEquals(KinductMain.OK, r.code(), r.err());
+            String table = Files.readString(out);
+            assertTrue(table.contains("(coupled run, " + model + " circuits)"), table);
+            assertTrue(table.contains("Free body frame at the end: speed"), table);
+            assertTrue(table.contains("Energy residual:"), table);
+        }
+    }
+
+    @Test
+    void anInstantOfASceneWithAFreeBodyIsRefused() throws IOException {
+        Path scene = Files.writeString(dir.resolve("fall.json"), SCENE);
+
+        Result r = run("solve", scene.toString(), "--at", "0.1 s");
+
+        assertEquals(1, r.code());
+        assertTrue(r.err().contains("free body"), r.err());
+    }
+
+    @Test
+    void anUnknownCircuitModelIsRefused() throws IOException {
+        Path scene = Files.writeString(dir.resolve("fall.json"), SCENE);
+
+        Result r = run("solve", scene.toString(), "--circuit", "stiff");
+
+        assertTrue(r.code() != KinductMain.OK, r.err());
+        assertTrue(r.err().contains("auto, inductive, quasi-static"), r.err());
+    }
+
+    @Test
+    void csvCarriesTheInductanceColumn() throws IOException {
+        Path scene = Files.writeString(dir.resolve("fall.json"), SCENE);
+        Path out = dir.resolve("r.csv");
+
+        Result r = run("solve", scene.toString(), "--format", "csv", "--t1", "12 ms", "--out", out.toString());
+
+        assertEquals(KinductMain.OK, r.code(), r.err());
+        List<String> lines = Files.readAllLines(out);
+        assertTrue(lines.get(0).endsWith(",inductance_H"), lines.get(0));
+        assertTrue(lines.stream().filter(l -> l.contains(",probe,")).allMatch(l -> l.endsWith(",")), "wire: empty cell");
+    }
+
+    private static double number(Map<?, ?> object, String key) {
+        return ((Number) object.get(key)).doubleValue();
+    }
+
+    /** A JSON document as maps, lists, strings, numbers, booleans and nulls. */
+    private static Object read(String text) throws IOException {
+        try (JsonParser p = new JsonFactory().createParser(text)) {
+            p.nextToken();
+            return value(p);
+        }
+    }
+
+    private static Object value(JsonParser p) throws IOException {
+        JsonToken t = p.currentToken();
+        switch (t) {
+            case START_OBJECT -> {
+                Map<String, Object> map = new LinkedHashMap<>();
+                while (p.nextToken() == JsonToken.FIELD_NAME) {
+                    String name = p.currentName();
+                    p.nextToken();
+                    map.put(name, value(p));
+                }
+                return map;
+            }
+            case START_ARRAY -> {
+                List<Object> list = new ArrayList<>();
+                while (p.nextToken() != JsonToken.END_ARRAY) {
+                    list.add(value(p));
+                }
+                return list;
+            }
+            case VALUE_STRING -> {
+                return p.getText();
+            }
+            case VALUE_NUMBER_INT, VALUE_NUMBER_FLOAT -> {
+                return p.getDoubleValue();
+            }
+            case VALUE_TRUE, VALUE_FALSE -> {
+                return p.getBooleanValue();
+            }
+            case VALUE_NULL -> {
+                return null;
+            }
+            default -> throw new IOException("unexpected " + t);
+        }
     }
 }

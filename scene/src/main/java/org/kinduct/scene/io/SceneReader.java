@@ -89,11 +89,12 @@ final class SceneReader {
         String name = f.opt("name", ctx.text(), "");
         String description = f.opt("description", ctx.text(), "");
         TimeSpan time = f.opt("time", this::time, DEFAULT_TIME);
+        Vec2 gravity = f.opt("gravity", ctx.point(ACCELERATION), Vec2.ZERO);
         List<Body> bodyList = f.opt("bodies", ctx.list(this::body), List.of());
         List<Source> sourceList = f.opt("sources", ctx.list(kinded(sources, "a source")), List.of());
         List<Conductor> conductorList = f.opt("conductors", ctx.list(kinded(conductors, "a conductor")), List.of());
         ctx.checkReferences();
-        return f.build(() -> new Scene(name, description, bodyList, sourceList, conductorList, time));
+        return f.build(() -> new Scene(name, description, bodyList, sourceList, conductorList, time, gravity));
     }
 
     private TimeSpan time(String path, Json node) {

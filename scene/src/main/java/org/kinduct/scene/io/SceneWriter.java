@@ -53,6 +53,7 @@ final class SceneWriter {
         g.writeNumberField("t1", s.time().t1S());
         g.writeNumberField("dt", s.time().dtS());
         g.writeEndObject();
+        point("gravity", s.gravity());
         g.writeArrayFieldStart("bodies");
         for (Body b : s.bodies()) {
             if (!Body.FIXED.equals(b.id())) { // the fixed frame is implicit in every scene

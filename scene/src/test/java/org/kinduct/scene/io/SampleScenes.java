@@ -62,7 +62,7 @@ final class SampleScenes {
                         Conductor.Vertex.at(0.01, 0), Conductor.Vertex.at(0, 0.01)), 3,
                         WireSpec.awg(Material.COPPER, -3), false, 0.5, 20));
         return new Scene("Every variant", "A scene with \"quotes\", a tab\t, ünïcödé and a\nnew line.",
-                bodies, sources, conductors, new TimeSpan(0, 0.5, 1e-3));
+                bodies, sources, conductors, new TimeSpan(0, 0.5, 1e-3), new Vec2(0, -9.81));
     }
 
     static List<Vec2> square(double x, double y, double side) {
@@ -91,7 +91,8 @@ final class SampleScenes {
         }
         double t0 = r.nextDouble() - 0.5;
         return new Scene(r.nextBoolean() ? "" : "scene " + r.nextInt(1000), "", bodies, sources, conductors,
-                new TimeSpan(t0, t0 + 0.01 + r.nextDouble(), 1e-3 + 1e-2 * r.nextDouble()));
+                new TimeSpan(t0, t0 + 0.01 + r.nextDouble(), 1e-3 + 1e-2 * r.nextDouble()),
+                r.nextBoolean() ? Vec2.ZERO : point(r));
     }
 
     private static Motion motion(SplittableRandom r, List<String> earlierBodies) {

@@ -46,7 +46,7 @@ class SceneJsonFuzzTest {
 
     /** Names from the file format, so random trees reach deep into the reader. */
     private static final String[] NAMES = {
-        "format", "version", "name", "description", "time", "t0", "t1", "dt", "bodies", "id", "pivot", "motion",
+        "format", "version", "name", "description", "time", "gravity", "t0", "t1", "dt", "bodies", "id", "pivot", "motion",
         "kind", "velocity", "initialVelocity", "acceleration", "amplitude", "frequency", "direction", "phase",
         "omega", "startAngle", "blend", "keys", "t", "offset", "angle", "mass", "inertia", "initialOmega",
         "damping", "force", "forceAmplitude", "forceFrequency", "springs", "anchor", "body", "stiffness",

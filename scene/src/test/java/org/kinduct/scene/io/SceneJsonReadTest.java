@@ -72,6 +72,16 @@ class SceneJsonReadTest {
     }
 
     @Test
+    void gravityReadsInAccelerationUnits() throws SceneFormatException {
+        // Standard gravity 9.80665 m/s² (SI Brochure, 9th ed., 2019), in two accepted spellings.
+        Scene vertical = SceneJson.read("{\"format\": \"kinduct-scene\", \"version\": 1,"
+                + " \"gravity\": [\"1.5 m/s2\", \"-9.80665 m/s^2\"]}", "gravity.json");
+
+        assertClose(1.5, vertical.gravity().x(), "gravity x");
+        assertClose(-9.80665, vertical.gravity().y(), "gravity y");
+    }
+
+    @Test
     void freeBodyQuantitiesConvertToSi() {
         Motion.Free bar = (Motion.Free) motion("bar");
         assertEquals(0.02, bar.massKg());
@@ -92,6 +102,7 @@ class SceneJsonReadTest {
         assertEquals(0, scene.time().t0S());
         assertEquals(0.5, scene.time().t1S());
         assertEquals(0.001, scene.time().dtS());
+        assertEquals(Vec2.ZERO, scene.gravity());
         Body parked = scene.body("parked").orElseThrow();
         assertEquals(new Body("parked", "parked", Vec2.ZERO, new Motion.Still()), parked);
         assertEquals(0, ((Motion.Spin) motion("rotor")).startAngleRad());

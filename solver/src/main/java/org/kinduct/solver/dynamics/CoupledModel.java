@@ -14,6 +14,7 @@ import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.EdgeSums;
 import org.kinduct.solver.Kinematics;
 import org.kinduct.solver.SourceFields;
 import org.kinduct.solver.circuit.LoopInductance;
@@ -23,9 +24,10 @@ import org.kinduct.solver.field.PlaneField;
  * The scene resolved to indices, and the coupled equations' right-hand side; the physics is
  * stated in {@link CoupledSimulation}.
  *
- * <p>State layout: per free body (x, y, θ, vx, vy, ω) of its pivot offset and angle; per closed
- * loop its total linkage Ψ_k = Σ_j M_kj I_j + λ_ext,k; then the running energy integrals
- * (applied, holding, drive, Joule, damping).
+ * <p>State layout: per free body (x, y, θ, vx, vy, ω) of its pivot offset and angle; for the
+ * {@link CircuitModel#INDUCTIVE} model per closed loop its total linkage
+ * Ψ_k = Σ_j M_kj I_j + λ_ext,k (the {@link CircuitModel#QUASI_STATIC} model has no circuit
+ * states); then the running energy integrals (applied, holding, drive, Joule, damping).
  */
 final class CoupledModel {
 
@@ -54,6 +56,9 @@ final class CoupledModel {
     /** Bodies that move on a prescribed path (not free, not still). */
     private final boolean[] drivenPath;
     private final boolean anyVariableM;
+    /** True when some source moves or has an AC drive, so a loop held still sees a changing flux. */
+    private final boolean sourcesVary;
+    private final CircuitModel circuitModel;
     private final double spaceStepM;
     private final double timeStepS;
     private final int loopOffset;
@@ -63,7 +68,11 @@ final class CoupledModel {
     record Circuit(Conductor.Loop loop, int[] vertexBody, Vec2[] drawn, double wireRadiusM, int rigidBody) {
     }
 
-    CoupledModel(Scene scene, double timeStepS) {
+    /**
+     * @param timeStepS time step of the difference quotients of prescribed motion, seconds
+     * @param requested the circuit model; AUTO is resolved against {@code samplingStepS}
+     */
+    CoupledModel(Scene scene, double timeStepS, CircuitModel requested, double samplingStepS) {
         this.scene = scene;
         this.timeStepS = timeStepS;
         bodies = scene.bodies();
@@ -80,14 +89,18 @@ final class CoupledModel {
         sources = scene.sources();
         sourceBody = new int[sources.size()];
         unitCoils = new Source.SourceCoil[sources.size()];
+        boolean varying = false;
         for (int s = 0; s < sources.size(); s++) {
             sourceBody[s] = bodyIndex.get(sources.get(s).body());
+            varying |= !(bodies.get(sourceBody[s]).motion() instanceof Motion.Still);
             if (sources.get(s) instanceof Source.SourceCoil coil && coil.drive().amplitudeA() != 0
                     && coil.drive().frequencyHz() > 0) {
                 unitCoils[s] = new Source.SourceCoil(coil.id(), coil.body(), coil.shape(), coil.turns(),
                         coil.planeZM(), Source.Drive.dc(1));
+                varying = true;
             }
         }
+        sourcesVary = varying;
         double smallest = Double.POSITIVE_INFINITY;
         for (Conductor c : scene.conductors()) {
             if (c instanceof Conductor.Loop loop && !loop.open()) {
@@ -105,8 +118,6 @@ final class CoupledModel {
             }
         }
         spaceStepM = SPACE_STEP_FRACTION * (smallest < Double.POSITIVE_INFINITY ? smallest : 1);
-        loopOffset = slot;
-        auditOffset = slot + loops.size();
         int n = loops.size();
         constantM = new double[n][n];
         boolean variable = false;
@@ -123,6 +134,34 @@ final class CoupledModel {
             }
         }
         anyVariableM = variable;
+        circuitModel = requested.resolve(largestTimeConstantS(drawnPoses), samplingStepS);
+        loopOffset = slot;
+        auditOffset = slot + (inductive() ? n : 0);
+    }
+
+    /** The largest L_kk/R_k of the closed loops at these poses, seconds; 0 without loops. */
+    private double largestTimeConstantS(Pose[] poses) {
+        double largest = 0;
+        for (int k = 0; k < loops.size(); k++) {
+            double[][] xy = place(k, poses);
+            double l = Double.isNaN(constantM[k][k]) ? entry(k, k, poses) : constantM[k][k];
+            largest = Math.max(largest, l / resistance(loops.get(k).loop(), xy[0], xy[1]));
+        }
+        return largest;
+    }
+
+    /** The circuit model this run uses (never AUTO). */
+    CircuitModel circuitModel() {
+        return circuitModel;
+    }
+
+    private boolean inductive() {
+        return circuitModel == CircuitModel.INDUCTIVE;
+    }
+
+    /** Offset of the loops' Ψ states; there are {@code auditOffset() − loopOffset()} of them. */
+    int loopOffset() {
+        return loopOffset;
     }
 
     int dimension() {
@@ -158,7 +197,7 @@ final class CoupledModel {
         }
         Pose[] poses = poses(t0S, y);
         PlaneField[] fields = fields(t0S, poses);
-        for (int k = 0; k < loops.size(); k++) {
+        for (int k = 0; k < auditOffset - loopOffset; k++) {
             y[loopOffset + k] = externalLinkage(k, poses, fields);
         }
         return y;
@@ -196,14 +235,28 @@ final class CoupledModel {
             if (b == null) {
                 throw new IllegalArgumentException("no body '" + bodyId + "'");
             }
-            if (freeSlot[b] < 0) {
-                return bodies.get(b).poseAt(t);
-            }
-            Pose p = now[b];
-            double dt = t - tS;
-            return new Pose(p.pivot(), p.offset().plus(p.velocity().times(dt)), p.angleRad() + p.omegaRadPerS() * dt,
-                    p.velocity(), p.omegaRadPerS());
+            return poseAround(b, now, tS, t);
         };
+    }
+
+    /** Body b at time t near tS: on its path if prescribed, carried along its velocity if free. */
+    private Pose poseAround(int b, Pose[] now, double tS, double t) {
+        if (freeSlot[b] < 0) {
+            return bodies.get(b).poseAt(t);
+        }
+        Pose p = now[b];
+        double dt = t - tS;
+        return new Pose(p.pivot(), p.offset().plus(p.velocity().times(dt)), p.angleRad() + p.omegaRadPerS() * dt,
+                p.velocity(), p.omegaRadPerS());
+    }
+
+    /** The sources' fields at t, their bodies carried from their poses at tS ({@link #poseAround}). */
+    private PlaneField[] fieldsAround(Pose[] now, double tS, double t) {
+        PlaneField[] fields = new PlaneField[sources.size()];
+        for (int s = 0; s < fields.length; s++) {
+            fields[s] = SourceFields.place(sources.get(s), poseAround(sourceBody[s], now, tS, t), t);
+        }
+        return fields;
     }
 
     /** Every body's pose at t for state y. */
@@ -311,6 +364,7 @@ final class CoupledModel {
         final double tS;
         final Pose[] poses;
         final double[] externalLinkage;
+        /** The inductance matrix, henries; null for the quasi-static model, which does not need it. */
         final double[][] inductance;
         final double[] current;
         final double[] resistance;
@@ -341,18 +395,31 @@ final class CoupledModel {
                 externalLinkage[k] = loops.get(k).loop().turns() * flux;
                 resistance[k] = resistance(loops.get(k).loop(), xs[k], ys[k]);
             }
-            inductance = inductance(poses);
-            current = solve(inductance, y, externalLinkage);
-
             int nb = bodies.size();
             fx = new double[nb];
             fy = new double[nb];
             torque = new double[nb];
+            EdgeTotals[] perAmpereTurn = new EdgeTotals[n];
+            for (int k = 0; k < n; k++) {
+                perAmpereTurn[k] = edgeTotals(k, xs[k], ys[k], fields);
+            }
+            if (inductive()) {
+                inductance = inductance(poses);
+                current = solve(inductance, y, externalLinkage);
+            } else {
+                inductance = null;
+                current = new double[n];
+                for (int k = 0; k < n; k++) {
+                    double emf = loops.get(k).loop().turns()
+                            * (perAmpereTurn[k].motionalV + transformerEmfPerTurn(xs[k], ys[k]));
+                    current[k] = emf / resistance[k];
+                }
+            }
             loopForce = new Vec2[n];
             for (int k = 0; k < n; k++) {
-                loopForce[k] = sourceForces(k, xs[k], ys[k], fields);
+                loopForce[k] = perAmpereTurn[k].applyTo(loops.get(k).loop().turns() * current[k], fx, fy, torque);
             }
-            double looploopHolding = anyVariableM && n > 1 ? loopLoopForces() : 0;
+            double looploopHolding = inductive() && anyVariableM && n > 1 ? loopLoopForces() : 0;
 
             derivative = new double[dimension()];
             double applied = 0;
@@ -401,7 +468,9 @@ final class CoupledModel {
             }
             double joule = 0;
             for (int k = 0; k < n; k++) {
-                derivative[loopOffset + k] = -resistance[k] * current[k];
+                if (inductive()) {
+                    derivative[loopOffset + k] = -resistance[k] * current[k];
+                }
                 joule += resistance[k] * current[k] * current[k];
             }
             derivative[auditOffset + APPLIED] = applied;
@@ -411,9 +480,30 @@ final class CoupledModel {
             derivative[auditOffset + DAMPING] = damping;
         }
 
-        /** ½·IᵀMI, joules. */
+        /** ½·IᵀMI, joules; none in the quasi-static model, whose inductances are taken as zero. */
         double magneticEnergyJ() {
-            return quadratic(inductance, current);
+            return inductive() ? quadratic(inductance, current) : 0;
+        }
+
+        /**
+         * The EMF per turn that changing sources induce in a loop held where it is, −∂Φ/∂t at
+         * fixed points (the transformer EMF −∮ ∂A/∂t·dl; Griffiths, <i>Introduction to
+         * Electrodynamics</i>, 4th ed., 2013, §7.1.3), by a central difference over the
+         * prescribed-motion step; zero when no source moves or alternates.
+         */
+        private double transformerEmfPerTurn(double[] xs, double[] ys) {
+            if (!sourcesVary) {
+                return 0;
+            }
+            double before = 0;
+            double after = 0;
+            for (PlaneField field : fieldsAround(poses, tS, tS - timeStepS)) {
+                before += field.flux(xs, ys);
+            }
+            for (PlaneField field : fieldsAround(poses, tS, tS + timeStepS)) {
+                after += field.flux(xs, ys);
+            }
+            return -(after - before) / (2 * timeStepS);
         }
 
         /** Kinetic energy of the free bodies, ½mv² + ½Iω² (pivot at the centre of mass), joules. */
@@ -465,49 +555,51 @@ final class CoupledModel {
         }
 
         /**
-         * Forces and torques on loop k's edges from each source, F = N·I·∫ dl × B = N·I·M0·(d_y, −d_x)
-         * and τ = −N·I·[((a − p)·d)·M0 + (d·d)·M1] about the edge body's pivot p (Griffiths,
-         * <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §5.1.3), with the reaction
-         * (−F, and the opposite torque about the source body's pivot) on the source's body.
-         * Edges whose ends ride different bodies are sliding contacts: their force is taken up by
-         * whatever guides them and applied to neither body.
+         * Per ampere-turn: forces and torques on loop k's edges from each source, the torque about
+         * the edge body's pivot, with the reaction (−F, and the opposite torque about the source
+         * body's pivot) on the source's body; and the motional EMF per turn with every vertex
+         * moving with its body ({@link EdgeSums}' per-edge formulas, Griffiths, <i>Introduction to
+         * Electrodynamics</i>, 4th ed., 2013, §5.1.3 and §7.1.3). Edges whose ends ride
+         * different bodies are sliding contacts: their force is taken up by whatever guides them
+         * and applied to neither body.
          */
-        private Vec2 sourceForces(int k, double[] xs, double[] ys, PlaneField[] fields) {
+        private EdgeTotals edgeTotals(int k, double[] xs, double[] ys, PlaneField[] fields) {
             Circuit c = loops.get(k);
-            double ni = c.loop().turns() * current[k];
+            EdgeTotals totals = new EdgeTotals(bodies.size());
             int n = xs.length;
             double[] moments = new double[2];
-            double totalX = 0;
-            double totalY = 0;
             for (int e = 0; e < n; e++) {
                 int e2 = (e + 1) % n;
                 double dx = xs[e2] - xs[e];
                 double dy = ys[e2] - ys[e];
                 int body = c.vertexBody()[e];
-                boolean contact = body != c.vertexBody()[e2];
+                int body2 = c.vertexBody()[e2];
+                boolean contact = body != body2;
                 Vec2 p = poses[body].pivot().plus(poses[body].offset());
+                Vec2 va = poses[body].velocityAt(new Vec2(xs[e], ys[e]));
+                Vec2 vb = poses[body2].velocityAt(new Vec2(xs[e2], ys[e2]));
                 for (int s = 0; s < fields.length; s++) {
                     fields[s].bzMoments(xs[e], ys[e], xs[e2], ys[e2], moments);
-                    double fX = ni * moments[0] * dy;
-                    double fY = -ni * moments[0] * dx;
-                    totalX += fX;
-                    totalY += fY;
+                    totals.motionalV += EdgeSums.motional(dx, dy, va.x(), va.y(), vb.x(), vb.y(), moments);
+                    double fX = EdgeSums.forceXPerAmpere(dy, moments);
+                    double fY = EdgeSums.forceYPerAmpere(dx, moments);
+                    totals.totalX += fX;
+                    totals.totalY += fY;
                     if (contact) {
                         continue;
                     }
-                    double t = -ni * (((xs[e] - p.x()) * dx + (ys[e] - p.y()) * dy) * moments[0]
-                            + (dx * dx + dy * dy) * moments[1]);
-                    fx[body] += fX;
-                    fy[body] += fY;
-                    torque[body] += t;
+                    double t = EdgeSums.torquePerAmpere(xs[e] - p.x(), ys[e] - p.y(), dx, dy, moments);
+                    totals.fx[body] += fX;
+                    totals.fy[body] += fY;
+                    totals.torque[body] += t;
                     int sb = sourceBody[s];
                     Vec2 q = poses[sb].pivot().plus(poses[sb].offset());
-                    fx[sb] -= fX;
-                    fy[sb] -= fY;
-                    torque[sb] -= t + ((p.x() - q.x()) * fY - (p.y() - q.y()) * fX);
+                    totals.fx[sb] -= fX;
+                    totals.fy[sb] -= fY;
+                    totals.torque[sb] -= t + ((p.x() - q.x()) * fY - (p.y() - q.y()) * fX);
                 }
             }
-            return new Vec2(totalX, totalY);
+            return totals;
         }
 
         /**
@@ -588,6 +680,35 @@ final class CoupledModel {
                 }
             }
             return power;
+        }
+    }
+
+    /**
+     * One loop's edge sums per ampere-turn: the motional EMF per turn, the force on the whole
+     * loop, and the forces and torques on each body (loop edges and source reactions).
+     */
+    private static final class EdgeTotals {
+        double motionalV;
+        double totalX;
+        double totalY;
+        final double[] fx;
+        final double[] fy;
+        final double[] torque;
+
+        EdgeTotals(int bodyCount) {
+            fx = new double[bodyCount];
+            fy = new double[bodyCount];
+            torque = new double[bodyCount];
+        }
+
+        /** Adds these sums times N·I to the bodies' forces and torques; returns the loop's force, N. */
+        Vec2 applyTo(double ampereTurns, double[] bodyFx, double[] bodyFy, double[] bodyTorque) {
+            for (int b = 0; b < fx.length; b++) {
+                bodyFx[b] += ampereTurns * fx[b];
+                bodyFy[b] += ampereTurns * fy[b];
+                bodyTorque[b] += ampereTurns * torque[b];
+            }
+            return new Vec2(ampereTurns * totalX, ampereTurns * totalY);
         }
     }
 

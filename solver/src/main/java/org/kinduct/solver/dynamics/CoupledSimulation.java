@@ -45,7 +45,12 @@ import org.kinduct.solver.Snapshot;
  * carry no current; source coils are current-driven. As all L → 0 the current follows the
  * quasi-static I = EMF/R, lagging it by the time constants L/R. Small L/R makes the equations
  * stiff: the explicit integrator then needs steps of a few L/R (a single-turn 10 cm copper loop
- * has L/R of tens of microseconds; multi-turn coils with load resistors are gentler).
+ * has L/R of tens of microseconds; a 200-turn pickup into 10 kΩ about 0.1 µs). That is what
+ * {@link CircuitModel} is for: {@link CircuitModel#QUASI_STATIC} drops the circuit states and
+ * takes I_k = EMF_k/R_k, with EMF_k = N_k·(motional EMF of the moving edges, from the same edge
+ * sums as the forces, + transformer EMF of moving or alternating sources at the loop held
+ * still), and {@link CircuitModel#AUTO} (the default) picks the inductive model only when the
+ * largest L/R exceeds a tenth of the sampling step — see there for why.
  *
  * <p><b>Free bodies</b> ({@link org.kinduct.scene.Motion.Free}): the pivot is taken as the centre
  * of mass; m·a = F_applied(t) + m·g − c·v + Σ springs + F_mag, and, when the inertia I_p about the
@@ -70,7 +75,10 @@ import org.kinduct.solver.Snapshot;
  * <p><b>Energy audit</b> ({@link EnergyAudit}): applied, holding and drive work, Joule and damping
  * heat, integrated alongside the state, and the changes of kinetic, potential and magnetic
  * energy; its residual is about 1e-9 of the heat where loop–loop forces play no part, 1e-4 where
- * they do (their differences).
+ * they do (their differences). In the quasi-static model there is no magnetic energy and no
+ * loop–loop force, and the Joule heat equals the mechanical work the braking forces take out
+ * (exactly, for loops riding one body each over still sources: I·EMF_motional = −F·v edge by
+ * edge); a transformer EMF from moving sources is a central difference, good to about 1e-8.
  */
 public final class CoupledSimulation {
 
@@ -80,17 +88,29 @@ public final class CoupledSimulation {
     private static final double CURRENT_SCALE_A = 1e-3;
     /** Time step for the difference quotients of prescribed motion, as a fraction of the sampling step. */
     private static final double DIFFERENCE_STEP_FRACTION = 1e-4;
+    /** Times within this fraction of a step of a grid point count as on it (rounding of t0 + i·dt). */
+    private static final double GRID_SLACK = 1e-9;
 
     private final double relTol;
+    private final CircuitModel circuitModel;
 
-    /** Simulates {@code scene} at the default tolerance; see {@link #simulate}. */
+    /** Simulates {@code scene} at the default tolerance with the AUTO circuit model; see {@link #simulate}. */
     public static Trajectory run(Scene scene, double t0S, double t1S, double dtS) {
         return new CoupledSimulation(DEFAULT_RELATIVE_TOLERANCE).simulate(scene, t0S, t1S, dtS);
     }
 
     /** @param relativeTolerance relative tolerance of the integration, e.g. {@value #DEFAULT_RELATIVE_TOLERANCE} */
     public CoupledSimulation(double relativeTolerance) {
+        this(relativeTolerance, CircuitModel.AUTO);
+    }
+
+    /**
+     * @param relativeTolerance relative tolerance of the integration, e.g. {@value #DEFAULT_RELATIVE_TOLERANCE}
+     * @param circuitModel how loop currents are computed
+     */
+    public CoupledSimulation(double relativeTolerance, CircuitModel circuitModel) {
         this.relTol = Checks.positive(relativeTolerance, "relative tolerance");
+        this.circuitModel = Checks.nonNull(circuitModel, "circuit model");
     }
 
     /**
@@ -105,7 +125,7 @@ public final class CoupledSimulation {
             throw new IllegalArgumentException("t1 must be after t0, got t0 = " + t0S + " s, t1 = " + t1S + " s");
         }
         double hS = DIFFERENCE_STEP_FRACTION * dtS;
-        CoupledModel model = new CoupledModel(scene, hS);
+        CoupledModel model = new CoupledModel(scene, hS, circuitModel, dtS);
         double[] y0 = model.initialState(t0S);
         OrdinaryDifferentialEquation equations = new OrdinaryDifferentialEquation() {
             @Override
@@ -122,17 +142,24 @@ public final class CoupledSimulation {
                 absoluteTolerances(model, y0, t0S, t1S), relativeTolerances(model));
         List<double[]> states = new ArrayList<>();
         List<Double> times = new ArrayList<>();
+        // BOTH adds t1 itself; it is kept only when it is on the grid and not a rounding twin of the last grid point.
         integrator.addStepHandler(new StepNormalizer(dtS, (ODEStateAndDerivative s, boolean isLast) -> {
-            times.add(s.getTime());
-            states.add(s.getPrimaryState().clone());
-        }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.FIRST));
+            double t = s.getTime();
+            double offGrid = Math.abs((t - t0S) / dtS - Math.rint((t - t0S) / dtS));
+            boolean twin = !times.isEmpty() && t - times.get(times.size() - 1) < GRID_SLACK * dtS;
+            if (offGrid < GRID_SLACK && !twin) {
+                times.add(t);
+                states.add(s.getPrimaryState().clone());
+            }
+        }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.BOTH));
         ODEStateAndDerivative last = integrator.integrate(equations, new ODEState(t0S, y0), t1S);
 
         List<Sample> samples = new ArrayList<>(states.size());
         for (int i = 0; i < states.size(); i++) {
             samples.add(sample(model, times.get(i), states.get(i)));
         }
-        return new Trajectory(samples, audit(model, t0S, y0, last.getTime(), last.getPrimaryState()));
+        return new Trajectory(samples, audit(model, t0S, y0, last.getTime(), last.getPrimaryState()),
+                model.circuitModel());
     }
 
     private static EnergyAudit audit(CoupledModel model, double t0S, double[] y0, double t1S, double[] y1) {
@@ -158,10 +185,11 @@ public final class CoupledSimulation {
         }
         Map<String, Integer> loopIndex = new HashMap<>();
         Map<String, Double> selfL = new HashMap<>();
+        double[][] inductance = model.inductance(now.poses);
         for (int k = 0; k < model.loops().size(); k++) {
             String id = model.loops().get(k).loop().id();
             loopIndex.put(id, k);
-            selfL.put(id, now.inductance[k][k]);
+            selfL.put(id, inductance[k][k]);
         }
         Snapshot quasiStatic = new SceneSolver(model.scene(), model.kinematicsAround(tS, y)).at(tS);
         List<ConductorState> states = new ArrayList<>();
@@ -183,7 +211,7 @@ public final class CoupledSimulation {
     private double[] relativeTolerances(CoupledModel model) {
         double[] rel = new double[model.dimension()];
         // Body states only: the loop states get an absolute tolerance, the energy integrals none.
-        java.util.Arrays.fill(rel, 0, model.auditOffset() - model.loops().size(), relTol);
+        java.util.Arrays.fill(rel, 0, model.loopOffset(), relTol);
         return rel;
     }
 
@@ -196,8 +224,8 @@ public final class CoupledSimulation {
     private double[] absoluteTolerances(CoupledModel model, double[] y0, double t0S, double t1S) {
         double length = model.lengthScaleM();
         double duration = t1S - t0S;
-        int loopsAt = model.auditOffset() - model.loops().size();
-        double[][] inductance = model.evaluate(t0S, y0).inductance;
+        int loopsAt = model.loopOffset();
+        double[][] inductance = model.inductance(model.poses(t0S, y0));
         double[] abs = new double[model.dimension()];
         for (int i = 0; i < loopsAt; i += CoupledModel.BODY_DOFS) {
             abs[i] = relTol * length;
@@ -207,7 +235,7 @@ public final class CoupledSimulation {
             abs[i + 4] = relTol * length / duration;
             abs[i + 5] = relTol / duration;
         }
-        for (int k = 0; k < model.loops().size(); k++) {
+        for (int k = 0; k < model.auditOffset() - loopsAt; k++) {
             abs[loopsAt + k] = relTol * inductance[k][k] * CURRENT_SCALE_A;
         }
         java.util.Arrays.fill(abs, model.auditOffset(), abs.length, Double.MAX_VALUE);

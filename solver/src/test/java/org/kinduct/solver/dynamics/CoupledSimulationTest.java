@@ -34,7 +34,7 @@ class CoupledSimulationTest {
      */
     private static final double STIFF_CURRENT_TOL = 1e-6;
 
-    private final CoupledSimulation simulation = new CoupledSimulation(1e-10);
+    private final CoupledSimulation simulation = new CoupledSimulation(1e-10, CircuitModel.INDUCTIVE);
 
     /**
      * A loop of width w pushed at constant speed v into a field region: EMF = N·B·w·v from the

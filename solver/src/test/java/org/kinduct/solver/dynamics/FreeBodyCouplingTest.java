@@ -31,7 +31,7 @@ class FreeBodyCouplingTest {
     private static final double MOMENTUM_TOL = 1e-8;
     private static final double NEWTON_TOL = 1e-8;
 
-    private final CoupledSimulation simulation = new CoupledSimulation(1e-10);
+    private final CoupledSimulation simulation = new CoupledSimulation(1e-10, CircuitModel.INDUCTIVE);
 
     /**
      * A loop spinning about its centre, off the region's edge but across it (a chord through the

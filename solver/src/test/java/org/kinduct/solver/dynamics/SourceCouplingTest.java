@@ -29,7 +29,7 @@ class SourceCouplingTest {
      */
     private static final double PHASOR_TOL = 1e-5;
 
-    private final CoupledSimulation simulation = new CoupledSimulation(1e-10);
+    private final CoupledSimulation simulation = new CoupledSimulation(1e-10, CircuitModel.INDUCTIVE);
 
     /**
      * A loop under an AC coil is a transformer secondary: in steady state

@@ -6,10 +6,13 @@ import java.io.UncheckedIOException;
 import java.util.List;
 import java.util.function.ToDoubleFunction;
 import org.kinduct.report.ResultsJson;
+import org.kinduct.report.SolveResults;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.TimeSpan;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.SceneField;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.dynamics.CircuitModel;
 
 /**
  * The exported data as text: the time series in wide CSV form, the B_z map of a view as CSV, and
@@ -84,11 +87,15 @@ public final class DataFiles {
         return out.toString();
     }
 
-    /** The same document as {@code kinduct solve --format json}. */
-    public static String resultsJson(Scene scene, List<Snapshot> series) {
+    /**
+     * The same document as {@code kinduct solve --format json}: the coupled run over the scene's
+     * own time window (free bodies move, loop currents with the automatic circuit model).
+     */
+    public static String resultsJson(Scene scene) {
+        TimeSpan span = scene.time();
         StringWriter w = new StringWriter();
         try {
-            ResultsJson.write(scene, series, w);
+            ResultsJson.write(scene, SolveResults.run(scene, span.t0S(), span.t1S(), span.dtS(), CircuitModel.AUTO), w);
         } catch (IOException e) {
             throw new UncheckedIOException("writing to memory failed", e);
         }

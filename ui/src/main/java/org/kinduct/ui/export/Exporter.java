@@ -69,7 +69,7 @@ public final class Exporter {
             write(targets.fieldCsv(), fieldCsv().getBytes(StandardCharsets.UTF_8), written);
         }
         if (targets.json() != null) {
-            write(targets.json(), DataFiles.resultsJson(scene, series()).getBytes(StandardCharsets.UTF_8), written);
+            write(targets.json(), DataFiles.resultsJson(scene).getBytes(StandardCharsets.UTF_8), written);
         }
         return written;
     }

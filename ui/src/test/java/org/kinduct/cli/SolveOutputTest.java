@@ -1,0 +1,134 @@
+package org.kinduct.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * {@code kinduct solve} as a user runs it: results in each format, the + end and current sense
+ * by the textbook cases, and exit code 1 with a located message for bad input.
+ */
+class SolveOutputTest {
+
+    @TempDir
+    Path dir;
+
+    private record Result(int code, String out, String err) {
+    }
+
+    private static Result run(String... args) {
+        PrintStream out = System.out;
+        PrintStream err = System.err;
+        ByteArrayOutputStream o = new ByteArrayOutputStream();
+        ByteArrayOutputStream e = new ByteArrayOutputStream();
+        System.setOut(new PrintStream(o, true, StandardCharsets.UTF_8));
+        System.setErr(new PrintStream(e, true, StandardCharsets.UTF_8));
+        try {
+            int code = KinductMain.run(args);
+            return new Result(code, o.toString(StandardCharsets.UTF_8), e.toString(StandardCharsets.UTF_8));
+        } finally {
+            System.setOut(out);
+            System.setErr(err);
+        }
+    }
+
+    @Test
+    void tableNamesThePositiveEndOfTheSenseTrace() {
+        Result r = run("solve", "--demo", "drive-sense-wire");
+        assertEquals(KinductMain.OK, r.code(), r.err());
+        // 0.35 T · 20 mm · 2π·20 Hz·8 mm = 7.04 mV, upper (last) end + while moving right (Griffiths ch. 7).
+        assertTrue(r.out().contains("7.04 mV"), r.out());
+        assertTrue(r.out().contains("+ at last vertex"), r.out());
+    }
+
+    @Test
+    void jsonHasOneSampleObjectPerConductorPerTimeWithTheDocumentedKeys() throws IOException {
+        Path out = dir.resolve("r.json");
+        Result r = run("solve", "--demo", "rail-sled", "--t0", "50 ms", "--t1", "60 ms", "--dt", "5 ms",
+                "--format", "json", "--out", out.toString());
+        assertEquals(KinductMain.OK, r.code(), r.err());
+        Map<String, Object> first = firstSample(Files.readString(out));
+        for (String key : new String[] {"t", "id", "kind", "flux_Wb", "linkage_Wb", "emf_flux_V", "emf_motional_V",
+                "emf_V", "positive_end", "current_A", "direction", "force_N"}) {
+            assertTrue(first.containsKey(key), "sample lacks " + key + ": " + first.keySet());
+        }
+        assertEquals("rail-circuit", first.get("id"));
+        assertEquals("loop", first.get("kind"));
+        assertEquals("cw", first.get("direction"), "flux out of the board grows: current clockwise (Lenz)");
+        // EMF = −B·w·v along the counter-clockwise vertex order (Griffiths ch. 7).
+        assertEquals(-0.5 * 0.020 * 0.5, (Double) first.get("emf_V"), 1e-12);
+        assertEquals((Double) first.get("emf_V"), (Double) first.get("emf_flux_V"), 1e-9);
+    }
+
+    @Test
+    void csvHeaderCarriesUnits() {
+        Result r = run("solve", "--demo", "flow-electrodes", "--format", "csv", "--at", "5 ms");
+        assertEquals(KinductMain.OK, r.code(), r.err());
+        String header = r.out().lines().findFirst().orElseThrow();
+        assertTrue(header.startsWith("t_s,id,kind,flux_Wb"), header);
+        assertTrue(r.out().lines().skip(1).findFirst().orElseThrow().contains(",last,"), r.out());
+    }
+
+    @Test
+    void malformedSceneFileExitsOneNamingLineAndPath() throws IOException {
+        Path bad = dir.resolve("bad.json");
+        Files.writeString(bad, "{\"format\": \"kinduct-scene\", \"version\": 1,\n"
+                + " \"conductors\": [{\"kind\": \"wire\", \"id\": \"w\", \"vertices\": [[0, 0], [\"3 mT\", 0]]}]}\n");
+        Result r = run("solve", bad.toString());
+        assertEquals(KinductMain.BAD_INPUT, r.code());
+        assertTrue(r.err().contains("bad.json:2:"), r.err());
+        assertTrue(r.err().contains("conductors[0].vertices[1]"), r.err());
+        assertTrue(r.out().isEmpty(), "no results on bad input");
+    }
+
+    @Test
+    void badTimeUnitAndMissingFileExitOne() {
+        Result unit = run("solve", "--demo", "rail-sled", "--dt", "3 mT");
+        assertEquals(KinductMain.BAD_INPUT, unit.code());
+        assertTrue(unit.err().contains("--dt"), unit.err());
+        Result missing = run("solve", dir.resolve("nowhere.json").toString());
+        assertEquals(KinductMain.BAD_INPUT, missing.code());
+        assertFalse(missing.err().isBlank());
+    }
+
+    /** The first object of {@code samples}, scalar values only (numbers as Double, strings, null). */
+    private static Map<String, Object> firstSample(String json) throws IOException {
+        try (JsonParser p = new JsonFactory().createParser(json)) {
+            while (p.nextToken() != null) {
+                if (p.currentToken() == JsonToken.FIELD_NAME && "samples".equals(p.currentName())) {
+                    p.nextToken();
+                    p.nextToken();
+                    Map<String, Object> sample = new HashMap<>();
+                    while (p.nextToken() == JsonToken.FIELD_NAME) {
+                        String name = p.currentName();
+                        JsonToken value = p.nextToken();
+                        if (value == JsonToken.START_ARRAY || value == JsonToken.START_OBJECT) {
+                            p.skipChildren();
+                            sample.put(name, "(structure)");
+                        } else if (value.isNumeric()) {
+                            sample.put(name, p.getDoubleValue());
+                        } else {
+                            sample.put(name, value == JsonToken.VALUE_NULL ? null : p.getText());
+                        }
+                    }
+                    return sample;
+                }
+            }
+        }
+        throw new AssertionError("no samples in " + json);
+    }
+}
