@@ -63,6 +63,7 @@ final class EditorWindow {
     private final Label statusLabel = new Label();
     private final Menu recentMenu = new Menu("Recent files");
     private final TextField entry = new TextField();
+    private DemoBrowser demoBrowser;
 
     EditorWindow(Stage stage, EditorViewModel vm, SceneStore store, AppHome home) {
         this.stage = stage;
@@ -75,7 +76,7 @@ final class EditorWindow {
         statusLabel.textProperty().bind(vm.statusProperty());
         cursorLabel.setId("cursor-readout");
 
-        VBox top = new VBox(menuBar(), toolBar());
+        VBox top = new VBox(menuBar(), toolBar(), new DescriptionStrip(vm));
         root.setTop(top);
 
         entry.setId("numeric-entry");
@@ -162,7 +163,7 @@ final class EditorWindow {
                 item("New scene", "Shortcut+N", this::newScene),
                 item("Open…", "Shortcut+O", this::openDialog),
                 recentMenu,
-                demoMenu(),
+                item("Open demo…", null, this::browseDemos),
                 new SeparatorMenuItem(),
                 item("Save", "Shortcut+S", this::save),
                 item("Save as…", "Shortcut+Shift+S", this::saveAs),
@@ -248,19 +249,16 @@ final class EditorWindow {
         });
     }
 
-    /** The demo scenes that are on the class path. */
-    private Menu demoMenu() {
-        Menu demos = new Menu("Open demo");
-        for (String name : org.kinduct.demo.Demos.names()) {
-            org.kinduct.demo.Demos.resource(name).filter(r -> EditorWindow.class.getResource(r) != null)
-                    .ifPresent(r -> demos.getItems().add(item(name.replace('-', ' '), null, () -> {
-                        if (confirmDiscard()) {
-                            openDemo(r);
-                        }
-                    })));
+    /** File ▸ Open demo…: the browser, made once so its thumbnails render only once. */
+    private void browseDemos() {
+        if (demoBrowser == null) {
+            demoBrowser = new DemoBrowser();
         }
-        demos.setDisable(demos.getItems().isEmpty());
-        return demos;
+        demoBrowser.choose(stage).flatMap(e -> org.kinduct.demo.Demos.resource(e.name())).ifPresent(r -> {
+            if (confirmDiscard()) {
+                openDemo(r);
+            }
+        });
     }
 
     private static MenuItem item(String text, String accelerator, Runnable action) {
