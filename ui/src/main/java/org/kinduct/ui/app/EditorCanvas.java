@@ -143,7 +143,8 @@ final class EditorCanvas extends Pane {
         org.kinduct.solver.Snapshot snap = dragPreview != null ? null : vm.snapshotProperty().get();
         double t = snap != null ? snap.tS() : vm.timeProperty().get();
         return new Frame(scene, t, snap,
-                vm.rasterProperty().get(), vm.viewProperty().get(), vm.layers(), vm.rangeProperty().get(), marks, note);
+                vm.rasterProperty().get(), vm.viewProperty().get(), vm.layers(), vm.rangeProperty().get(), marks, note,
+                dragPreview != null ? java.util.Map.of() : vm.posesProperty().get());
     }
 
     void toggleFrameTime() {

@@ -43,7 +43,7 @@ public final class ScenePainter {
         if (f.shows(Layer.SCALE_BAR)) {
             placer.reserve(new LabelPlacer.Box(8, s.height() - 44, 180, 40));
         }
-        Placement placement = Placement.of(f.scene(), f.tS());
+        Placement placement = Placement.of(f.scene(), f.tS(), f.poses());
         if (f.shows(Layer.SOURCES)) {
             SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer);
         }
