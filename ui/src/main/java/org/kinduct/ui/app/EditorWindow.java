@@ -110,14 +110,17 @@ final class EditorWindow {
         SplitPane.setResizableWithParent(properties, false);
 
         TimePlot plot = new TimePlot(vm);
-        ComboBox<TimePlot.Quantity> plotWhat = new ComboBox<>();
-        plotWhat.getItems().setAll(TimePlot.Quantity.values());
-        plotWhat.setValue(TimePlot.Quantity.EMF);
+        ComboBox<org.kinduct.ui.edit.PlotSeries.Quantity> plotWhat = new ComboBox<>();
+        plotWhat.setId("plot-quantity");
+        plotWhat.getItems().setAll(org.kinduct.ui.edit.PlotSeries.Quantity.values());
+        plotWhat.setValue(org.kinduct.ui.edit.PlotSeries.Quantity.EMF);
         plotWhat.setOnAction(e -> plot.setQuantity(plotWhat.getValue()));
         VBox plotBox = new VBox(2, plotWhat, plot);
         VBox.setVgrow(plot, Priority.ALWAYS);
         ReadoutTable table = new ReadoutTable(vm);
-        SplitPane lower = new SplitPane(plotBox, table);
+        VBox tableBox = new VBox(2, table, energyLine());
+        VBox.setVgrow(table, Priority.ALWAYS);
+        SplitPane lower = new SplitPane(plotBox, tableBox);
         lower.setDividerPositions(0.42);
         lower.setPrefHeight(200);
 
@@ -333,10 +336,32 @@ final class EditorWindow {
         time.textProperty().bind(Bindings.createStringBinding(
                 () -> "t = " + Quantities.time(vm.timeProperty().get()) + " of " + Quantities.time(vm.scene().time().t1S()),
                 vm.timeProperty(), vm.sceneProperty()));
-        HBox bar = new HBox(8, play, back, fwd, reset, new Label("speed ×"), speed, scrubber, time);
+        javafx.scene.control.ProgressIndicator simulating = new javafx.scene.control.ProgressIndicator();
+        simulating.setId("simulating");
+        simulating.setPrefSize(18, 18);
+        simulating.setTooltip(new Tooltip("Simulating the free bodies; the last result is shown meanwhile"));
+        simulating.visibleProperty().bind(vm.simulatingProperty());
+        simulating.managedProperty().bind(vm.simulatingProperty());
+        HBox bar = new HBox(8, play, back, fwd, reset, new Label("speed ×"), speed, scrubber, simulating, time);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(4, 8, 4, 8));
         return bar;
+    }
+
+    /** The energy audit of a simulated run, under the readout table; hidden for prescribed motion. */
+    private Label energyLine() {
+        Label line = new Label();
+        line.setId("energy-audit");
+        line.setWrapText(true);
+        line.setPadding(new Insets(2, 6, 2, 6));
+        Runnable update = () -> {
+            line.setText(vm.auditProperty().get().map(org.kinduct.ui.edit.EnergyText::of).orElse(""));
+            line.setVisible(vm.auditProperty().get().isPresent());
+            line.setManaged(line.isVisible());
+        };
+        vm.auditProperty().addListener(o -> update.run());
+        update.run();
+        return line;
     }
 
     private void addBackground() {

@@ -77,6 +77,7 @@ public final class EditorViewModel {
     private final ReadOnlyObjectWrapper<Map<String, Pose>> poses = new ReadOnlyObjectWrapper<>(Map.of());
     private final ReadOnlyObjectWrapper<Optional<EnergyAudit>> audit = new ReadOnlyObjectWrapper<>(Optional.empty());
     private final ReadOnlyBooleanWrapper simulating = new ReadOnlyBooleanWrapper();
+    private final ReadOnlyObjectWrapper<List<Map<String, Pose>>> poseSeries = new ReadOnlyObjectWrapper<>(List.of());
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
     private final ReadOnlyBooleanWrapper dirty = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper();
@@ -297,10 +298,13 @@ public final class EditorViewModel {
                 long started = System.nanoTime();
                 List<Snapshot> result = ev.series(span.t0S(), span.t1S(), dt);
                 Optional<EnergyAudit> energy = ev.audit();
+                List<Map<String, Pose>> placed = simulated
+                        ? result.stream().map(sn -> ev.posesAt(sn.tS())).toList() : List.of();
                 double seconds = (System.nanoTime() - started) * 1e-9;
                 ui.execute(() -> {
                     if (revision.get() == rev) {
                         series.set(result);
+                        poseSeries.set(placed);
                         audit.set(energy);
                         if (simulated) {
                             simulating.set(false);
@@ -380,6 +384,11 @@ public final class EditorViewModel {
     /** Integrated poses of the free bodies at the shown time; empty when every body follows a prescribed motion. */
     public ReadOnlyObjectProperty<Map<String, Pose>> posesProperty() {
         return poses.getReadOnlyProperty();
+    }
+
+    /** Simulated poses at the times of {@link #seriesProperty()}; empty when no body is simulated. */
+    public ReadOnlyObjectProperty<List<Map<String, Pose>>> poseSeriesProperty() {
+        return poseSeries.getReadOnlyProperty();
     }
 
     /** The energy audit of the simulated run, when the scene has free bodies. */
