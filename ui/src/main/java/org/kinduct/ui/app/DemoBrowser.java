@@ -31,6 +31,7 @@ final class DemoBrowser {
 
     static final int THUMB_W = 176;
     static final int THUMB_H = 110;
+    private static final double SUMMARY_W = 470;
 
     /** Renders thumbnails one at a time so the editor's own solving keeps the other core. */
     private static final ExecutorService RENDERER = Executors.newSingleThreadExecutor(r -> {
@@ -94,7 +95,8 @@ final class DemoBrowser {
             VBox text = new VBox(4, title, summary);
             HBox.setHgrow(text, Priority.ALWAYS);
             text.setMaxWidth(Double.MAX_VALUE);
-            summary.setMaxWidth(480);
+            summary.setPrefWidth(SUMMARY_W);
+            summary.setMaxWidth(SUMMARY_W);
             javafx.scene.layout.StackPane frame = new javafx.scene.layout.StackPane(image);
             frame.setMinSize(THUMB_W, THUMB_H);
             frame.setMaxSize(THUMB_W, THUMB_H);

@@ -13,6 +13,8 @@ final class DescriptionStrip extends TitledPane {
         Label text = new Label();
         text.setId("scene-description");
         text.setWrapText(true);
+        text.setMaxWidth(Double.MAX_VALUE);
+        text.setPadding(new javafx.geometry.Insets(2, 8, 2, 8));
         setContent(text);
         setAnimated(false);
         Runnable update = () -> {

@@ -353,6 +353,7 @@ final class EditorWindow {
         Label line = new Label();
         line.setId("energy-audit");
         line.setWrapText(true);
+        line.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
         line.setPadding(new Insets(2, 6, 2, 6));
         Runnable update = () -> {
             line.setText(vm.auditProperty().get().map(org.kinduct.ui.edit.EnergyText::of).orElse(""));

@@ -74,7 +74,7 @@ public final class PropertySheet {
                         v -> s -> s.withTime(new TimeSpan(s.time().t0S(), v, s.time().dtS()))),
                 quantity("Time step", Dimension.TIME, t.dtS(),
                         v -> s -> s.withTime(new TimeSpan(s.time().t0S(), s.time().t1S(), v))),
-                MotionSheet.vector("Gravity in the plane (acts on free bodies)", Dimension.ACCELERATION,
+                MotionSheet.vector("Gravity on free bodies", Dimension.ACCELERATION,
                         scene.gravity(), g -> s -> s.withGravity(g))));
         // Uniform fields have no outline to click on, so they are edited here.
         for (Source src : scene.sources()) {
