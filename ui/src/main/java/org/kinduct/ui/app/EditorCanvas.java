@@ -143,7 +143,8 @@ final class EditorCanvas extends Pane {
         org.kinduct.solver.Snapshot snap = dragPreview != null ? null : vm.snapshotProperty().get();
         double t = snap != null ? snap.tS() : vm.timeProperty().get();
         return new Frame(scene, t, snap,
-                vm.rasterProperty().get(), vm.viewProperty().get(), vm.layers(), vm.rangeProperty().get(), marks, note);
+                vm.rasterProperty().get(), vm.viewProperty().get(), vm.layers(), vm.rangeProperty().get(), marks, note,
+                dragPreview != null ? java.util.Map.of() : vm.posesProperty().get());
     }
 
     void toggleFrameTime() {
@@ -211,7 +212,7 @@ final class EditorCanvas extends Pane {
         if (panning || e.getButton() != MouseButton.PRIMARY || drawing != null) {
             return;
         }
-        Placement placement = Placement.of(vm.scene(), vm.timeProperty().get());
+        Placement placement = Placement.of(vm.scene(), vm.timeProperty().get(), vm.posesProperty().get());
         vertexDrag = Picker.vertex(vm.scene(), placement, view(), e.getX(), e.getY(), vm.selection()).orElse(null);
         if (vertexDrag != null) {
             return;
@@ -253,7 +254,7 @@ final class EditorCanvas extends Pane {
         Vec2 d = view().toScene(e.getX(), e.getY()).minus(view().toScene(pressX, pressY));
         try {
             // Edits change the drawn geometry; at t > t0 a body may have moved and turned since.
-            Placement now = Placement.of(vm.scene(), vm.timeProperty().get());
+            Placement now = Placement.of(vm.scene(), vm.timeProperty().get(), vm.posesProperty().get());
             if (vertexDrag != null) {
                 Vec2 at = snapper().snap(view().toScene(e.getX(), e.getY()), null, List.of()).point();
                 Conductor c = vm.scene().conductor(vertexDrag.conductorId()).orElseThrow();

@@ -63,6 +63,7 @@ final class EditorWindow {
     private final Label statusLabel = new Label();
     private final Menu recentMenu = new Menu("Recent files");
     private final TextField entry = new TextField();
+    private DemoBrowser demoBrowser;
 
     EditorWindow(Stage stage, EditorViewModel vm, SceneStore store, AppHome home) {
         this.stage = stage;
@@ -75,7 +76,7 @@ final class EditorWindow {
         statusLabel.textProperty().bind(vm.statusProperty());
         cursorLabel.setId("cursor-readout");
 
-        VBox top = new VBox(menuBar(), toolBar());
+        VBox top = new VBox(menuBar(), toolBar(), new DescriptionStrip(vm));
         root.setTop(top);
 
         entry.setId("numeric-entry");
@@ -109,14 +110,17 @@ final class EditorWindow {
         SplitPane.setResizableWithParent(properties, false);
 
         TimePlot plot = new TimePlot(vm);
-        ComboBox<TimePlot.Quantity> plotWhat = new ComboBox<>();
-        plotWhat.getItems().setAll(TimePlot.Quantity.values());
-        plotWhat.setValue(TimePlot.Quantity.EMF);
+        ComboBox<org.kinduct.ui.edit.PlotSeries.Quantity> plotWhat = new ComboBox<>();
+        plotWhat.setId("plot-quantity");
+        plotWhat.getItems().setAll(org.kinduct.ui.edit.PlotSeries.Quantity.values());
+        plotWhat.setValue(org.kinduct.ui.edit.PlotSeries.Quantity.EMF);
         plotWhat.setOnAction(e -> plot.setQuantity(plotWhat.getValue()));
         VBox plotBox = new VBox(2, plotWhat, plot);
         VBox.setVgrow(plot, Priority.ALWAYS);
         ReadoutTable table = new ReadoutTable(vm);
-        SplitPane lower = new SplitPane(plotBox, table);
+        VBox tableBox = new VBox(2, table, energyLine());
+        VBox.setVgrow(table, Priority.ALWAYS);
+        SplitPane lower = new SplitPane(plotBox, tableBox);
         lower.setDividerPositions(0.42);
         lower.setPrefHeight(200);
 
@@ -162,7 +166,7 @@ final class EditorWindow {
                 item("New scene", "Shortcut+N", this::newScene),
                 item("Open…", "Shortcut+O", this::openDialog),
                 recentMenu,
-                demoMenu(),
+                item("Open demo…", null, this::browseDemos),
                 new SeparatorMenuItem(),
                 item("Save", "Shortcut+S", this::save),
                 item("Save as…", "Shortcut+Shift+S", this::saveAs),
@@ -248,19 +252,16 @@ final class EditorWindow {
         });
     }
 
-    /** The demo scenes that are on the class path. */
-    private Menu demoMenu() {
-        Menu demos = new Menu("Open demo");
-        for (String name : org.kinduct.demo.Demos.names()) {
-            org.kinduct.demo.Demos.resource(name).filter(r -> EditorWindow.class.getResource(r) != null)
-                    .ifPresent(r -> demos.getItems().add(item(name.replace('-', ' '), null, () -> {
-                        if (confirmDiscard()) {
-                            openDemo(r);
-                        }
-                    })));
+    /** File ▸ Open demo…: the browser, made once so its thumbnails render only once. */
+    private void browseDemos() {
+        if (demoBrowser == null) {
+            demoBrowser = new DemoBrowser();
         }
-        demos.setDisable(demos.getItems().isEmpty());
-        return demos;
+        demoBrowser.choose(stage).flatMap(e -> org.kinduct.demo.Demos.resource(e.name())).ifPresent(r -> {
+            if (confirmDiscard()) {
+                openDemo(r);
+            }
+        });
     }
 
     private static MenuItem item(String text, String accelerator, Runnable action) {
@@ -335,10 +336,33 @@ final class EditorWindow {
         time.textProperty().bind(Bindings.createStringBinding(
                 () -> "t = " + Quantities.time(vm.timeProperty().get()) + " of " + Quantities.time(vm.scene().time().t1S()),
                 vm.timeProperty(), vm.sceneProperty()));
-        HBox bar = new HBox(8, play, back, fwd, reset, new Label("speed ×"), speed, scrubber, time);
+        javafx.scene.control.ProgressIndicator simulating = new javafx.scene.control.ProgressIndicator();
+        simulating.setId("simulating");
+        simulating.setPrefSize(18, 18);
+        simulating.setTooltip(new Tooltip("Simulating the free bodies; the last result is shown meanwhile"));
+        simulating.visibleProperty().bind(vm.simulatingProperty());
+        simulating.managedProperty().bind(vm.simulatingProperty());
+        HBox bar = new HBox(8, play, back, fwd, reset, new Label("speed ×"), speed, scrubber, simulating, time);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(4, 8, 4, 8));
         return bar;
+    }
+
+    /** The energy audit of a simulated run, under the readout table; hidden for prescribed motion. */
+    private Label energyLine() {
+        Label line = new Label();
+        line.setId("energy-audit");
+        line.setWrapText(true);
+        line.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+        line.setPadding(new Insets(2, 6, 2, 6));
+        Runnable update = () -> {
+            line.setText(vm.auditProperty().get().map(org.kinduct.ui.edit.EnergyText::of).orElse(""));
+            line.setVisible(vm.auditProperty().get().isPresent());
+            line.setManaged(line.isVisible());
+        };
+        vm.auditProperty().addListener(o -> update.run());
+        update.run();
+        return line;
     }
 
     private void addBackground() {

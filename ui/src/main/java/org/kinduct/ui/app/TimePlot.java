@@ -1,46 +1,23 @@
 package org.kinduct.ui.app;
 
-import java.util.ArrayList;
 import java.util.List;
-import java.util.function.ToDoubleFunction;
 import javafx.scene.canvas.Canvas;
 import javafx.scene.canvas.GraphicsContext;
 import javafx.scene.layout.Pane;
 import javafx.scene.paint.Color;
 import javafx.scene.text.Font;
 import javafx.scene.text.TextAlignment;
-import org.kinduct.solver.ConductorState;
-import org.kinduct.solver.Snapshot;
+import org.kinduct.scene.units.Units;
 import org.kinduct.ui.edit.EditorViewModel;
+import org.kinduct.ui.edit.PlotSeries;
 import org.kinduct.ui.paint.Quantities;
 
 /**
- * EMF, current or flux linkage of the selected conductors (all when none is selected) over the
- * scene's time window, with a cursor at the current time; clicking seeks.
+ * A conductor quantity (EMF, current, flux linkage, force) or a body quantity (position, speed)
+ * over the scene's time window, lines chosen by {@link PlotSeries}, with a cursor at the current
+ * time; clicking seeks.
  */
 final class TimePlot extends Pane {
-
-    /** Which quantity is plotted. */
-    enum Quantity {
-        EMF("EMF", ConductorState::emfV, Quantities::voltage),
-        CURRENT("Current", ConductorState::currentA, Quantities::current),
-        FLUX("Flux linkage", ConductorState::linkageWb, Quantities::flux);
-
-        final String label;
-        final ToDoubleFunction<ConductorState> value;
-        final java.util.function.DoubleFunction<String> format;
-
-        Quantity(String label, ToDoubleFunction<ConductorState> value, java.util.function.DoubleFunction<String> format) {
-            this.label = label;
-            this.value = value;
-            this.format = format;
-        }
-
-        @Override
-        public String toString() {
-            return label;
-        }
-    }
 
     private static final Color[] LINE_COLOURS = {
         Color.web("#1b6ca8"), Color.web("#c65d00"), Color.web("#4b1d8f"), Color.web("#2f7d32"), Color.web("#8a1c3c")};
@@ -49,7 +26,7 @@ final class TimePlot extends Pane {
 
     private final EditorViewModel vm;
     private final Canvas canvas = new Canvas();
-    private Quantity quantity = Quantity.EMF;
+    private PlotSeries.Quantity quantity = PlotSeries.Quantity.EMF;
 
     TimePlot(EditorViewModel vm) {
         this.vm = vm;
@@ -61,6 +38,7 @@ final class TimePlot extends Pane {
         widthProperty().addListener(o -> draw());
         heightProperty().addListener(o -> draw());
         vm.seriesProperty().addListener(o -> draw());
+        vm.poseSeriesProperty().addListener(o -> draw());
         vm.sceneProperty().addListener(o -> draw());
         vm.timeProperty().addListener(o -> draw());
         vm.selection().addListener((javafx.collections.SetChangeListener<String>) c -> draw());
@@ -68,7 +46,7 @@ final class TimePlot extends Pane {
         setOnMouseDragged(e -> seek(e.getX()));
     }
 
-    void setQuantity(Quantity q) {
+    void setQuantity(PlotSeries.Quantity q) {
         quantity = q;
         draw();
     }
@@ -88,8 +66,8 @@ final class TimePlot extends Pane {
         double h = getHeight();
         g.setFill(Color.web("#fbfbf8"));
         g.fillRect(0, 0, w, h);
-        List<Snapshot> series = vm.seriesProperty().get();
-        List<String> ids = plotted(series);
+        List<PlotSeries.Line> lines = PlotSeries.lines(vm.scene(), vm.seriesProperty().get(),
+                vm.poseSeriesProperty().get(), vm.selection(), quantity);
         double t0 = vm.scene().time().t0S();
         double t1 = vm.scene().time().t1S();
         double pw = w - LEFT - 10;
@@ -98,10 +76,10 @@ final class TimePlot extends Pane {
             return;
         }
         double max = 0;
-        for (Snapshot s : series) {
-            for (ConductorState c : s.conductors()) {
-                if (ids.contains(c.id()) && Double.isFinite(quantity.value.applyAsDouble(c))) {
-                    max = Math.max(max, Math.abs(quantity.value.applyAsDouble(c)));
+        for (PlotSeries.Line line : lines) {
+            for (double v : line.values()) {
+                if (Double.isFinite(v)) {
+                    max = Math.max(max, Math.abs(v));
                 }
             }
         }
@@ -115,28 +93,28 @@ final class TimePlot extends Pane {
         g.setFill(Color.web("#333333"));
         g.setFont(Font.font("DejaVu Sans", 11));
         g.setTextAlign(TextAlignment.RIGHT);
-        g.fillText(max > 0 ? "+" + quantity.format.apply(lim) : "", LEFT - 4, top + 10);
+        g.fillText(max > 0 ? "+" + Units.format(lim, quantity.dimension) : "", LEFT - 4, top + 10);
         g.fillText("0", LEFT - 4, top + ph / 2 + 4);
-        g.fillText(max > 0 ? "−" + quantity.format.apply(lim) : "", LEFT - 4, top + ph);
+        g.fillText(max > 0 ? "−" + Units.format(lim, quantity.dimension) : "", LEFT - 4, top + ph);
         g.setTextAlign(TextAlignment.LEFT);
-        g.fillText(quantity.label + (ids.isEmpty() ? " — no conductors" : ""), LEFT, 13);
+        g.fillText(quantity + (lines.isEmpty() ? quantity.ofBodies() ? " — no moving bodies" : " — no conductors" : ""),
+                LEFT, 13);
         g.fillText(Quantities.time(t0), LEFT, h - 5);
         g.setTextAlign(TextAlignment.RIGHT);
         g.fillText(Quantities.time(t1), LEFT + pw, h - 5);
-        for (int k = 0; k < ids.size(); k++) {
-            String id = ids.get(k);
+        for (int k = 0; k < lines.size(); k++) {
+            PlotSeries.Line line = lines.get(k);
             Color col = LINE_COLOURS[k % LINE_COLOURS.length];
             g.setStroke(col);
             g.setLineWidth(1.6);
             g.beginPath();
             boolean started = false;
-            for (Snapshot s : series) {
-                ConductorState c = s.conductor(id).orElse(null);
-                double v = c == null ? Double.NaN : quantity.value.applyAsDouble(c);
+            for (int i = 0; i < line.tS().length; i++) {
+                double v = line.values()[i];
                 if (!Double.isFinite(v)) {
                     continue;
                 }
-                double x = LEFT + (s.tS() - t0) / (t1 - t0) * pw;
+                double x = LEFT + (line.tS()[i] - t0) / (t1 - t0) * pw;
                 double y = top + ph / 2 - v / lim * ph / 2;
                 if (started) {
                     g.lineTo(x, y);
@@ -148,24 +126,11 @@ final class TimePlot extends Pane {
             g.stroke();
             g.setFill(col);
             g.setTextAlign(TextAlignment.RIGHT);
-            g.fillText(id, LEFT + pw - 4, top + 12 + 13 * k);
+            g.fillText(line.id(), LEFT + pw - 4, top + 12 + 13 * k);
         }
         double tx = LEFT + (vm.timeProperty().get() - t0) / (t1 - t0) * pw;
         g.setStroke(Color.web("#d6007a"));
         g.setLineWidth(1.5);
         g.strokeLine(tx, top, tx, top + ph);
-    }
-
-    private List<String> plotted(List<Snapshot> series) {
-        List<String> ids = new ArrayList<>();
-        if (series.isEmpty()) {
-            return ids;
-        }
-        for (ConductorState c : series.get(0).conductors()) {
-            if (vm.selection().isEmpty() || vm.selection().contains(c.id())) {
-                ids.add(c.id());
-            }
-        }
-        return ids;
     }
 }

@@ -3,6 +3,8 @@ package org.kinduct.ui.edit;
 import java.nio.file.Path;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Executor;
 import java.util.function.Function;
@@ -23,13 +25,16 @@ import javafx.beans.property.SimpleDoubleProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableSet;
+import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.ui.field.FieldMapper;
 import org.kinduct.ui.field.LatestOnly;
 import org.kinduct.ui.field.MapRequest;
 import org.kinduct.ui.field.SceneEvaluator;
+import org.kinduct.ui.field.TrajectoryEvaluator;
 import org.kinduct.ui.paint.ColourRange;
 import org.kinduct.ui.paint.FieldRaster;
 import org.kinduct.ui.paint.Layer;
@@ -69,6 +74,10 @@ public final class EditorViewModel {
     private final ReadOnlyObjectWrapper<Snapshot> snapshot = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyObjectWrapper<List<Snapshot>> series = new ReadOnlyObjectWrapper<>(List.of());
     private final ReadOnlyObjectWrapper<FieldRaster> raster = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyObjectWrapper<Map<String, Pose>> poses = new ReadOnlyObjectWrapper<>(Map.of());
+    private final ReadOnlyObjectWrapper<Optional<EnergyAudit>> audit = new ReadOnlyObjectWrapper<>(Optional.empty());
+    private final ReadOnlyBooleanWrapper simulating = new ReadOnlyBooleanWrapper();
+    private final ReadOnlyObjectWrapper<List<Map<String, Pose>>> poseSeries = new ReadOnlyObjectWrapper<>(List.of());
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
     private final ReadOnlyBooleanWrapper dirty = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper();
@@ -246,9 +255,11 @@ public final class EditorViewModel {
         snapshotJobs.submit(() -> {
             try {
                 Snapshot result = ev.at(t);
+                Map<String, Pose> placed = ev.posesAt(result.tS());
                 ui.execute(() -> {
                     if (revision.get() == rev) {
                         snapshot.set(result);
+                        poses.set(placed);
                     }
                 });
             } catch (RuntimeException e) {
@@ -274,16 +285,40 @@ public final class EditorViewModel {
         }
         TimeSpan span = s.time();
         double dt = (span.t1S() - span.t0S()) / (SERIES_SAMPLES - 1);
+        // A simulated scene keeps showing the last good run until the new one is done.
+        boolean simulated = TrajectoryEvaluator.needsSimulation(s);
+        simulating.set(simulated);
+        if (simulated) {
+            status.set("Simulating the free bodies…");
+        } else {
+            audit.set(Optional.empty());
+        }
         seriesJobs.submit(() -> {
             try {
+                long started = System.nanoTime();
                 List<Snapshot> result = ev.series(span.t0S(), span.t1S(), dt);
+                Optional<EnergyAudit> energy = ev.audit();
+                List<Map<String, Pose>> placed = simulated
+                        ? result.stream().map(sn -> ev.posesAt(sn.tS())).toList() : List.of();
+                double seconds = (System.nanoTime() - started) * 1e-9;
                 ui.execute(() -> {
                     if (revision.get() == rev) {
                         series.set(result);
+                        poseSeries.set(placed);
+                        audit.set(energy);
+                        if (simulated) {
+                            simulating.set(false);
+                            status.set(String.format(java.util.Locale.ROOT, "Free bodies simulated (%.1f s)", seconds));
+                        }
                     }
                 });
             } catch (RuntimeException e) {
-                ui.execute(() -> status.set("Time series: " + describe(e)));
+                ui.execute(() -> {
+                    if (revision.get() == rev) {
+                        simulating.set(false);
+                    }
+                    status.set((simulated ? "Simulation: " : "Time series: ") + describe(e));
+                });
             }
         });
     }
@@ -344,6 +379,26 @@ public final class EditorViewModel {
 
     public ReadOnlyObjectProperty<List<Snapshot>> seriesProperty() {
         return series.getReadOnlyProperty();
+    }
+
+    /** Integrated poses of the free bodies at the shown time; empty when every body follows a prescribed motion. */
+    public ReadOnlyObjectProperty<Map<String, Pose>> posesProperty() {
+        return poses.getReadOnlyProperty();
+    }
+
+    /** Simulated poses at the times of {@link #seriesProperty()}; empty when no body is simulated. */
+    public ReadOnlyObjectProperty<List<Map<String, Pose>>> poseSeriesProperty() {
+        return poseSeries.getReadOnlyProperty();
+    }
+
+    /** The energy audit of the simulated run, when the scene has free bodies. */
+    public ReadOnlyObjectProperty<Optional<EnergyAudit>> auditProperty() {
+        return audit.getReadOnlyProperty();
+    }
+
+    /** True while a simulation of the current scene is running (the last good result is shown meanwhile). */
+    public ReadOnlyBooleanProperty simulatingProperty() {
+        return simulating.getReadOnlyProperty();
     }
 
     public ReadOnlyObjectProperty<FieldRaster> rasterProperty() {

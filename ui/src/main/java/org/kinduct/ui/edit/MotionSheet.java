@@ -18,9 +18,9 @@ import org.kinduct.scene.units.Units;
  */
 public final class MotionSheet {
 
-    /** The prescribed motions, in menu order. */
-    public static final List<String> KINDS = List.of("still", "glide", "accelerate", "oscillate", "spin", "path keys");
-    static final String FREE = "free (forces; edit in the file)";
+    /** The motions, in menu order: prescribed ones, then free (moved by forces, simulated). */
+    public static final List<String> KINDS = List.of("still", "glide", "accelerate", "oscillate", "spin", "path keys",
+            "free (forces)");
     static final List<String> BLENDS = List.of("linear", "smooth");
 
     private MotionSheet() {
@@ -32,10 +32,6 @@ public final class MotionSheet {
         Vec2 pivot = Body.FIXED.equals(body.id())
                 ? SceneBounds.ofObjects(scene, Set.of(objectId), 0).center() : body.pivot();
         List<Property> p = new ArrayList<>();
-        if (m instanceof Motion.Free) {
-            p.add(new Property("Motion", FREE, List.of(FREE), text -> s -> s));
-            return p;
-        }
         p.add(new Property("Motion", kindOf(m), KINDS, text -> {
             int i = KINDS.indexOf(text);
             if (i < 0) {
@@ -64,6 +60,8 @@ public final class MotionSheet {
                     v -> set(objectId, new Motion.Spin(v, sp.startAngleRad()), pivot)));
             p.add(PropertySheet.quantity("Start angle", Dimension.ANGLE, sp.startAngleRad(),
                     v -> set(objectId, new Motion.Spin(sp.omegaRadPerS(), v), pivot)));
+        } else if (m instanceof Motion.Free free) {
+            p.addAll(FreeMotionSheet.of(free, f -> set(objectId, f, pivot)));
         } else if (m instanceof Motion.Path path) {
             p.add(new Property("Keys: t, x, y, angle; …", keysText(path), List.of(),
                     text -> set(objectId, new Motion.Path(parseKeys(text), path.blend()), pivot)));
@@ -91,6 +89,8 @@ public final class MotionSheet {
             return KINDS.get(4);
         } else if (m instanceof Motion.Path) {
             return KINDS.get(5);
+        } else if (m instanceof Motion.Free) {
+            return KINDS.get(6);
         }
         return KINDS.get(0);
     }
@@ -105,6 +105,7 @@ public final class MotionSheet {
             case 4 -> new Motion.Spin(2 * Math.PI / span, 0);
             case 5 -> new Motion.Path(List.of(new Motion.Path.Key(s.time().t0S(), Vec2.ZERO, 0),
                     new Motion.Path.Key(s.time().t1S(), new Vec2(0.05, 0), 0)), Motion.Path.Blend.SMOOTH);
+            case 6 -> FreeMotionSheet.initial();
             default -> new Motion.Still();
         };
     }

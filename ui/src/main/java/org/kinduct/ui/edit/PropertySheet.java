@@ -73,7 +73,9 @@ public final class PropertySheet {
                 quantity("End time", Dimension.TIME, t.t1S(),
                         v -> s -> s.withTime(new TimeSpan(s.time().t0S(), v, s.time().dtS()))),
                 quantity("Time step", Dimension.TIME, t.dtS(),
-                        v -> s -> s.withTime(new TimeSpan(s.time().t0S(), s.time().t1S(), v)))));
+                        v -> s -> s.withTime(new TimeSpan(s.time().t0S(), s.time().t1S(), v))),
+                MotionSheet.vector("Gravity on free bodies", Dimension.ACCELERATION,
+                        scene.gravity(), g -> s -> s.withGravity(g))));
         // Uniform fields have no outline to click on, so they are edited here.
         for (Source src : scene.sources()) {
             if (src instanceof Source.UniformField u) {

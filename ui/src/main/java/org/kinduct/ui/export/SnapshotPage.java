@@ -13,6 +13,7 @@ import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.Terminal;
 import org.kinduct.ui.paint.EditorMarks;
 import org.kinduct.ui.paint.FieldRaster;
+import org.kinduct.ui.paint.Layer;
 import org.kinduct.ui.paint.Frame;
 import org.kinduct.ui.paint.Quantities;
 import org.kinduct.ui.paint.ScenePainter;
@@ -44,8 +45,8 @@ final class SnapshotPage {
     private static final double MAX_MAP_HEIGHT = 600;
     private static final int MAX_DESCRIPTION_LINES = 4;
     /**
-     * Room a fitted scene leaves free in the map for the painter's overlays: its legend on the
-     * right, the time box and axis labels on top.
+     * Room a fitted scene (or a chosen box, when the legend is shown) leaves free in the map for
+     * the painter's overlays: its legend on the right, the time box and axis labels on top.
      */
     private static final double FIT_LEFT = 30;
     private static final double FIT_RIGHT = 204;
@@ -101,7 +102,8 @@ final class SnapshotPage {
         mapTop = MARGIN + TITLE + 8 + description.size() * LINE + LINE + 8;
         ViewChoice.Box box = ViewChoice.box(options.view(), scene, options.tS());
         double aspect = (box.y1() - box.y0()) / (box.x1() - box.x0());
-        if (options.view() instanceof ViewChoice.Fit) {
+        // A chosen box is shown whole but, like a fitted scene, clear of the legend when there is one.
+        if (options.view() instanceof ViewChoice.Fit || options.layers().contains(Layer.LEGEND)) {
             double room = WIDTH - FIT_LEFT - FIT_RIGHT;
             mapHeight = clampMapHeight(room * aspect + FIT_TOP + FIT_BOTTOM);
             mapView = fitInto(box, FIT_LEFT, FIT_TOP, WIDTH - FIT_RIGHT, mapHeight - FIT_BOTTOM);

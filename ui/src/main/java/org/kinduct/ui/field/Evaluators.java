@@ -1,6 +1,7 @@
 package org.kinduct.ui.field;
 
 import java.util.List;
+import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Function;
 import org.kinduct.scene.Scene;
 import org.kinduct.solver.SceneField;
@@ -13,9 +14,17 @@ public final class Evaluators {
     private Evaluators() {
     }
 
-    /** A solver per scene; {@link SceneSolver} is immutable, so the evaluator may be shared by threads. */
+    /**
+     * A solver per scene; {@link SceneSolver} is immutable, so the evaluator may be shared by threads.
+     * A scene with free bodies gets a {@link TrajectoryEvaluator}; the last one made is handed out
+     * again for an equal scene, so the view model and the field map share one simulation.
+     */
     public static Function<Scene, SceneEvaluator> solver() {
+        AtomicReference<TrajectoryEvaluator> last = new AtomicReference<>();
         return scene -> {
+            if (TrajectoryEvaluator.needsSimulation(scene)) {
+                return last.updateAndGet(e -> e != null && e.scene().equals(scene) ? e : new TrajectoryEvaluator(scene));
+            }
             SceneSolver solver = new SceneSolver(scene);
             return new SceneEvaluator() {
                 @Override

@@ -1,6 +1,10 @@
 package org.kinduct.ui.field;
 
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.kinduct.scene.Pose;
+import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.Snapshot;
 
 /** What the editor asks of the solver for one scene. */
@@ -14,6 +18,16 @@ public interface SceneEvaluator {
 
     /** The total B_z in the drawing plane at {@code tS}. */
     BzField fieldAt(double tS);
+
+    /** Poses of the bodies that are not placed by their prescribed motion (free bodies) at {@code tS}; empty if none. */
+    default Map<String, Pose> posesAt(double tS) {
+        return Map.of();
+    }
+
+    /** Where the energy of the simulated run went, for scenes whose motion is simulated. */
+    default Optional<EnergyAudit> audit() {
+        return Optional.empty();
+    }
 
     /** B_z at a point of the plane, tesla; implementations must allow calls from several threads. */
     @FunctionalInterface

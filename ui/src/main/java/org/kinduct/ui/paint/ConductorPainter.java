@@ -22,6 +22,9 @@ final class ConductorPainter {
     private static final double GAP_START = 0.38;
     private static final double GAP_END = 0.62;
     private static final double MIN_ARROW_EDGE_PX = 30;
+    /** A loop this many pixels across (its smaller side) or more gets full-size current arrows. */
+    private static final double FULL_ARROW_LOOP_PX = 160;
+    private static final double MIN_ARROW_SCALE = 0.4;
     /** Conductors smaller than this on screen keep labels off themselves. */
     private static final double SMALL_PX = 160;
 
@@ -88,7 +91,7 @@ final class ConductorPainter {
             }
             if (c instanceof Conductor.Loop loop && !loop.open() && st.direction() != Circulation.NONE && maxI > 0) {
                 double width = 1.5 + 4.5 * Math.sqrt(Math.abs(st.currentA()) / maxI);
-                currentArrows(s, v, pts, st.currentA() > 0, width);
+                currentArrows(s, v, pts, st.currentA() > 0, width, arrowScale(v, pts));
                 Vec2 c0 = SourcePainter.centroid(pts);
                 Glyphs.fieldSymbol(s, v.screenX(c0.x()), v.screenY(c0.y()), 10, st.direction() == Circulation.CCW,
                         Palette.CURRENT);
@@ -135,11 +138,32 @@ final class ConductorPainter {
         placer.reserve(new LabelPlacer.Box(x - r - 1, y - r - 1, 2 * r + 2, 2 * r + 2));
     }
 
-    private static void currentArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward, double width) {
+    /**
+     * Shrinks the current arrows of a loop that is small on screen, so they do not swamp it: full
+     * size from {@value #FULL_ARROW_LOOP_PX} px across (the loop's smaller side), down to
+     * {@value #MIN_ARROW_SCALE} of it.
+     */
+    static double arrowScale(ViewTransform v, List<Vec2> pts) {
+        double minX = Double.POSITIVE_INFINITY;
+        double maxX = Double.NEGATIVE_INFINITY;
+        double minY = Double.POSITIVE_INFINITY;
+        double maxY = Double.NEGATIVE_INFINITY;
+        for (Vec2 p : pts) {
+            minX = Math.min(minX, p.x());
+            maxX = Math.max(maxX, p.x());
+            minY = Math.min(minY, p.y());
+            maxY = Math.max(maxY, p.y());
+        }
+        double acrossPx = Math.min(maxX - minX, maxY - minY) * v.pxPerM();
+        return Math.max(MIN_ARROW_SCALE, Math.min(1, acrossPx / FULL_ARROW_LOOP_PX));
+    }
+
+    private static void currentArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward, double width,
+                                      double scale) {
         int n = pts.size();
         s.stroke(Palette.CURRENT);
         s.fill(Palette.CURRENT);
-        s.lineWidth(width);
+        s.lineWidth(width * scale);
         s.dash();
         for (int i = 0; i < n; i++) {
             Vec2 a = pts.get(forward ? i : (i + 1) % n);
@@ -154,7 +178,7 @@ final class ConductorPainter {
             }
             double dx = (bx - ax) / len;
             double dy = (by - ay) / len;
-            double head = 9 + 2 * width;
+            double head = (9 + 2 * width) * scale;
             double half = Math.min(len * 0.25, 40);
             double mx = (ax + bx) / 2;
             double my = (ay + by) / 2;

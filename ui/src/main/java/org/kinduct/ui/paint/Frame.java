@@ -1,7 +1,9 @@
 package org.kinduct.ui.paint;
 
 import java.util.EnumSet;
+import java.util.Map;
 import java.util.Set;
+import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.view.ViewTransform;
@@ -12,14 +14,23 @@ import org.kinduct.ui.view.ViewTransform;
  * @param snapshot solved values at {@code tS}, or null when there are none (solver error)
  * @param raster field map, or null while none has been computed
  * @param note small text for the top-right corner (frame time), or empty
+ * @param poses integrated poses of the bodies at {@code tS} (free bodies); empty to place every
+ *        body by its prescribed motion
  */
 public record Frame(Scene scene, double tS, Snapshot snapshot, FieldRaster raster, ViewTransform view,
-                    Set<Layer> layers, ColourRange range, EditorMarks marks, String note) {
+                    Set<Layer> layers, ColourRange range, EditorMarks marks, String note, Map<String, Pose> poses) {
 
     public Frame {
         layers = layers.isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(layers);
         marks = marks == null ? EditorMarks.none() : marks;
         note = note == null ? "" : note;
+        poses = poses == null ? Map.of() : Map.copyOf(poses);
+    }
+
+    /** A frame whose bodies all follow their prescribed motion. */
+    public Frame(Scene scene, double tS, Snapshot snapshot, FieldRaster raster, ViewTransform view,
+                 Set<Layer> layers, ColourRange range, EditorMarks marks, String note) {
+        this(scene, tS, snapshot, raster, view, layers, range, marks, note, Map.of());
     }
 
     public boolean shows(Layer layer) {

@@ -15,14 +15,20 @@ public final class Placement {
 
     private final Map<String, Pose> poses = new HashMap<>();
 
-    private Placement(Scene scene, double tS) {
+    private Placement(Scene scene, double tS, Map<String, Pose> integrated) {
         for (Body b : scene.bodies()) {
-            poses.put(b.id(), b.poseAt(tS));
+            Pose given = integrated.get(b.id());
+            poses.put(b.id(), given != null ? given : b.poseAt(tS));
         }
     }
 
     public static Placement of(Scene scene, double tS) {
-        return new Placement(scene, tS);
+        return new Placement(scene, tS, Map.of());
+    }
+
+    /** Bodies named in {@code integrated} (free bodies, as simulated) there, the others by their prescribed motion. */
+    public static Placement of(Scene scene, double tS, Map<String, Pose> integrated) {
+        return new Placement(scene, tS, integrated);
     }
 
     public List<Vec2> place(String bodyId, List<Vec2> drawn) {

@@ -17,6 +17,15 @@ public final class ScenePainter {
     private static final double SYMBOL_MIN_FRACTION = 0.04;
     private static final int MAX_CONTOUR_LEVELS_PER_SIDE = 5;
     private static final double CONTOUR_CELL_PX = 4;
+    /** A contour label needs this much room from the lines of other levels. */
+    private static final double CONTOUR_CLEAR_PX = 16;
+    /**
+     * Axis and contour label size: 11 units print at 8.3 pt when an export page (600 units) is
+     * placed 16 cm wide (1 pt = 0.3528 mm), the smallest size we allow in print.
+     */
+    static final double LABEL_FONT = 11;
+    /** The "t = …" box in the top-left corner; axis labels keep out of it. */
+    private static final LabelPlacer.Box HEADER = new LabelPlacer.Box(6, 6, 150, 20);
 
     private ScenePainter() {
     }
@@ -39,11 +48,11 @@ public final class ScenePainter {
         if (legendBox != null) {
             placer.reserve(legendBox);
         }
-        placer.reserve(new LabelPlacer.Box(0, 0, 170, 26));
+        placer.reserve(new LabelPlacer.Box(0, 0, HEADER.x() + HEADER.w() + 14, HEADER.y() + HEADER.h()));
         if (f.shows(Layer.SCALE_BAR)) {
             placer.reserve(new LabelPlacer.Box(8, s.height() - 44, 180, 40));
         }
-        Placement placement = Placement.of(f.scene(), f.tS());
+        Placement placement = Placement.of(f.scene(), f.tS(), f.poses());
         if (f.shows(Layer.SOURCES)) {
             SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer);
         }
@@ -107,10 +116,19 @@ public final class ScenePainter {
         s.fillRect(0, Math.round(v.screenY(0)), s.width(), 1);
         s.fill(Palette.MUTED);
         for (double x = Math.ceil(v.minX() / major) * major; x <= v.maxX(); x += major) {
-            s.text(Quantities.length(snap(x, major)), v.screenX(x) + 3, 30, 10, false, Surface.Anchor.TOP_LEFT);
+            axisLabel(s, Quantities.length(snap(x, major)), v.screenX(x) + 3, 30, false);
         }
         for (double y = Math.ceil(v.minY() / major) * major; y <= v.maxY(); y += major) {
-            s.text(Quantities.length(snap(y, major)), 4, v.screenY(y) - 2, 10, false, Surface.Anchor.BOTTOM_LEFT);
+            axisLabel(s, Quantities.length(snap(y, major)), 4, v.screenY(y) - 2, true);
+        }
+    }
+
+    /** An axis label with its top-left (or bottom-left) corner at (x, y), left out where the "t = …" box is. */
+    private static void axisLabel(Surface s, String text, double x, double y, boolean bottom) {
+        double top = bottom ? y - LABEL_FONT - 2 : y;
+        LabelPlacer.Box box = new LabelPlacer.Box(x, top, s.textWidth(text, LABEL_FONT, false), LABEL_FONT + 2);
+        if (!box.overlaps(HEADER, 2)) {
+            s.text(text, x, y, LABEL_FONT, false, bottom ? Surface.Anchor.BOTTOM_LEFT : Surface.Anchor.TOP_LEFT);
         }
     }
 
@@ -149,6 +167,8 @@ public final class ScenePainter {
         // Segments of about CONTOUR_CELL_PX keep the path short; the lines are for reading levels, not for numbers.
         FieldRaster r = fine.decimated((int) Math.round(CONTOUR_CELL_PX / (fine.cellM() * v.pxPerM())));
         s.dash();
+        List<List<double[]>> mids = new ArrayList<>();
+        List<String> texts = new ArrayList<>();
         for (int k = -MAX_CONTOUR_LEVELS_PER_SIDE; k <= MAX_CONTOUR_LEVELS_PER_SIDE; k++) {
             if (k == 0) {
                 continue;
@@ -170,20 +190,30 @@ public final class ScenePainter {
                 }
             });
             s.strokePath();
-            labelContour(s, segs, Quantities.bz(level), placer, labels);
+            mids.add(segs);
+            texts.add(Quantities.bz(level));
+        }
+        for (int i = 0; i < mids.size(); i++) {
+            labelContour(s, mids, i, texts.get(i), placer, labels);
         }
     }
 
-    /** Up to two labels per level, where they collide with nothing already placed. */
-    private static void labelContour(Surface s, List<double[]> mids, String text, LabelPlacer placer,
-                                     List<Runnable> labels) {
-        double w = s.textWidth(text, 10, false) + 4;
-        double h = 13;
+    /**
+     * Up to two labels for level {@code level}, where they collide with nothing already placed and
+     * no other level passes close by: where levels crowd (the edge of an ideal field patch, the rim
+     * of a magnet) a label could not say which line it names.
+     */
+    private static void labelContour(Surface s, List<List<double[]>> mids, int level, String text,
+                                     LabelPlacer placer, List<Runnable> labels) {
+        List<double[]> own = mids.get(level);
+        double w = s.textWidth(text, LABEL_FONT, false) + 4;
+        double h = LABEL_FONT + 3;
         int placed = 0;
-        for (int i = 0; i < mids.size() && placed < 2; i += Math.max(1, mids.size() / 7)) {
-            double[] m = mids.get(i);
+        for (int i = 0; i < own.size() && placed < 2; i += Math.max(1, own.size() / 7)) {
+            double[] m = own.get(i);
             LabelPlacer.Box b = new LabelPlacer.Box(m[0] - w / 2, m[1] - h / 2, w, h);
-            if (b.x() < 0 || b.y() < 0 || b.x() + w > s.width() || b.y() + h > s.height() || !placer.isFree(b)) {
+            if (b.x() < 0 || b.y() < 0 || b.x() + w > s.width() || b.y() + h > s.height() || !placer.isFree(b)
+                    || crowded(mids, level, m)) {
                 continue;
             }
             placer.reserve(b);
@@ -192,9 +222,27 @@ public final class ScenePainter {
                 s.fill(0xD9FFFFFF);
                 s.fillRect(b.x(), b.y(), b.w(), b.h());
                 s.fill(Palette.INK);
-                s.text(text, b.centerX(), b.centerY(), 10, false, Surface.Anchor.CENTER);
+                s.text(text, b.centerX(), b.centerY(), LABEL_FONT, false, Surface.Anchor.CENTER);
             });
         }
+    }
+
+    /** True when a line of another level passes within {@value #CONTOUR_CLEAR_PX} px of the point. */
+    private static boolean crowded(List<List<double[]>> mids, int level, double[] at) {
+        double r2 = CONTOUR_CLEAR_PX * CONTOUR_CLEAR_PX;
+        for (int j = 0; j < mids.size(); j++) {
+            if (j == level) {
+                continue;
+            }
+            for (double[] p : mids.get(j)) {
+                double dx = p[0] - at[0];
+                double dy = p[1] - at[1];
+                if (dx * dx + dy * dy < r2) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 
     private static void scaleBar(Surface s, ViewTransform v) {
@@ -261,7 +309,7 @@ public final class ScenePainter {
 
     private static void header(Surface s, Frame f) {
         s.fill(Palette.LABEL_BOX);
-        s.fillRect(6, 6, 150, 20);
+        s.fillRect(HEADER.x(), HEADER.y(), HEADER.w(), HEADER.h());
         s.fill(Palette.INK);
         s.text("t = " + Quantities.time(f.tS()), 12, 16, FONT, true, Surface.Anchor.LEFT);
         if (!f.note().isEmpty()) {

@@ -1,0 +1,109 @@
+package org.kinduct.ui.edit;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.function.ToDoubleFunction;
+import org.kinduct.scene.Body;
+import org.kinduct.scene.Pose;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.units.Dimension;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.Snapshot;
+
+/**
+ * The lines of the time plot: a conductor quantity for the selected conductors (all when none is
+ * selected), or a body quantity for the bodies the selected objects ride (all moving bodies when
+ * none is selected). Free bodies are read from the simulated poses, the others from their motion.
+ */
+public final class PlotSeries {
+
+    /** What the time plot shows. */
+    public enum Quantity {
+        EMF("EMF", Dimension.VOLTAGE, ConductorState::emfV, null),
+        CURRENT("Current", Dimension.CURRENT, ConductorState::currentA, null),
+        FLUX("Flux linkage", Dimension.FLUX, ConductorState::linkageWb, null),
+        FORCE_X("Force on conductor, x", Dimension.FORCE, c -> c.forceN().x(), null),
+        FORCE_Y("Force on conductor, y", Dimension.FORCE, c -> c.forceN().y(), null),
+        POSITION_X("Body position x", Dimension.LENGTH, null, p -> p.pivot().x() + p.offset().x()),
+        POSITION_Y("Body position y", Dimension.LENGTH, null, p -> p.pivot().y() + p.offset().y()),
+        SPEED("Body speed", Dimension.VELOCITY, null, p -> p.velocity().length());
+
+        private final String label;
+        public final Dimension dimension;
+        private final ToDoubleFunction<ConductorState> ofConductor;
+        private final ToDoubleFunction<Pose> ofBody;
+
+        Quantity(String label, Dimension dimension, ToDoubleFunction<ConductorState> ofConductor,
+                 ToDoubleFunction<Pose> ofBody) {
+            this.label = label;
+            this.dimension = dimension;
+            this.ofConductor = ofConductor;
+            this.ofBody = ofBody;
+        }
+
+        public boolean ofBodies() {
+            return ofBody != null;
+        }
+
+        @Override
+        public String toString() {
+            return label;
+        }
+    }
+
+    /** One plotted line: whose, and its values at the sample times. */
+    public record Line(String id, double[] tS, double[] values) {
+    }
+
+    private PlotSeries() {
+    }
+
+    /**
+     * @param poses the simulated poses at each snapshot's time (same length as {@code series}), or
+     *        empty when no body is simulated
+     */
+    public static List<Line> lines(Scene scene, List<Snapshot> series, List<Map<String, Pose>> poses,
+                                   Set<String> selection, Quantity q) {
+        List<Line> lines = new ArrayList<>();
+        if (series.isEmpty()) {
+            return lines;
+        }
+        double[] t = series.stream().mapToDouble(Snapshot::tS).toArray();
+        if (!q.ofBodies()) {
+            for (ConductorState first : series.get(0).conductors()) {
+                if (selection.isEmpty() || selection.contains(first.id())) {
+                    double[] v = new double[t.length];
+                    for (int i = 0; i < t.length; i++) {
+                        v[i] = series.get(i).conductor(first.id()).map(q.ofConductor::applyAsDouble).orElse(Double.NaN);
+                    }
+                    lines.add(new Line(first.id(), t, v));
+                }
+            }
+            return lines;
+        }
+        for (String bodyId : bodies(scene, selection)) {
+            Body body = scene.body(bodyId).orElseThrow();
+            double[] v = new double[t.length];
+            for (int i = 0; i < t.length; i++) {
+                Pose p = i < poses.size() ? poses.get(i).get(bodyId) : null;
+                v[i] = q.ofBody.applyAsDouble(p != null ? p : body.poseAt(t[i]));
+            }
+            lines.add(new Line(body.name().isEmpty() ? bodyId : body.name(), t, v));
+        }
+        return lines;
+    }
+
+    private static Set<String> bodies(Scene scene, Set<String> selection) {
+        Set<String> ids = new LinkedHashSet<>();
+        if (selection.isEmpty()) {
+            scene.bodies().stream().map(Body::id).filter(id -> !Body.FIXED.equals(id)).forEach(ids::add);
+        } else {
+            selection.stream().filter(id -> scene.source(id).isPresent() || scene.conductor(id).isPresent())
+                    .map(id -> SceneEdits.bodyOf(scene, id)).filter(id -> !Body.FIXED.equals(id)).forEach(ids::add);
+        }
+        return ids;
+    }
+}

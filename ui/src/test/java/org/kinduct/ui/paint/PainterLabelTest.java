@@ -1,0 +1,102 @@
+package org.kinduct.ui.paint;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.lang.reflect.Proxy;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.function.DoubleBinaryOperator;
+import org.junit.jupiter.api.Test;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
+import org.kinduct.ui.view.ViewTransform;
+
+/** Where the painter puts contour and axis labels, and how big it draws current arrows. */
+class PainterLabelTest {
+
+    private static final double W = 800;
+    private static final double H = 600;
+    private static final ViewTransform VIEW = new ViewTransform(0, 0, 2000, W, H);
+    private static final double CELL_M = 0.0005;
+
+    /** One drawn text: its string, anchor point and size. */
+    private record Text(String text, double x, double y, double size) {
+    }
+
+    /** Draws a frame on a surface that only records its texts (widths estimated at 0.6 em per character). */
+    private static List<Text> texts(FieldRaster raster, EnumSet<Layer> layers) {
+        List<Text> out = new ArrayList<>();
+        Surface s = (Surface) Proxy.newProxyInstance(Surface.class.getClassLoader(), new Class<?>[] {Surface.class},
+                (proxy, method, args) -> switch (method.getName()) {
+                    case "width" -> W;
+                    case "height" -> H;
+                    case "textWidth" -> 0.6 * (double) args[1] * ((String) args[0]).length();
+                    case "text" -> {
+                        out.add(new Text((String) args[0], (double) args[1], (double) args[2], (double) args[3]));
+                        yield null;
+                    }
+                    default -> null;
+                });
+        ScenePainter.draw(s, new Frame(Scene.empty("t"), 0, null, raster, VIEW, layers, ColourRange.automatic(),
+                EditorMarks.none(), ""));
+        return out;
+    }
+
+    private static FieldRaster raster(DoubleBinaryOperator bz) {
+        int cols = (int) (W / (VIEW.pxPerM() * CELL_M));
+        int rows = (int) (H / (VIEW.pxPerM() * CELL_M));
+        float[] v = new float[cols * rows];
+        for (int r = 0; r < rows; r++) {
+            for (int c = 0; c < cols; c++) {
+                v[r * cols + c] = (float) bz.applyAsDouble(VIEW.minX() + (c + 0.5) * CELL_M,
+                        VIEW.maxY() - (r + 0.5) * CELL_M);
+            }
+        }
+        return new FieldRaster(VIEW.minX(), VIEW.maxY(), CELL_M, cols, rows, v, 0.5, 0, 0);
+    }
+
+    private static List<Text> contourLabels(List<Text> all) {
+        return all.stream().filter(t -> t.text().endsWith("mT")).toList();
+    }
+
+    @Test
+    void anIdealPatchEdgeWhereEveryLevelCrowdsGetsNoContourLabels() {
+        // 0.5 T inside a 100 mm × 80 mm patch, nothing outside: the levels 100…400 mT all run along its edge.
+        FieldRaster step = raster((x, y) -> Math.abs(x) < 0.05 && Math.abs(y) < 0.04 ? 0.5 : 0);
+        assertTrue(contourLabels(texts(step, EnumSet.of(Layer.CONTOURS))).isEmpty());
+    }
+
+    @Test
+    void wellSpacedLevelsAreStillLabelled() {
+        // A gentle ramp, 0.5 T over the view's width: the levels lie 80 px apart.
+        FieldRaster ramp = raster((x, y) -> x / 0.2 * 0.5);
+        assertFalse(contourLabels(texts(ramp, EnumSet.of(Layer.CONTOURS))).isEmpty());
+    }
+
+    @Test
+    void axisAndContourLabelsAreLargeEnoughForPrintAndKeepOutOfTheTimeBox() {
+        FieldRaster ramp = raster((x, y) -> x / 0.2 * 0.5);
+        List<Text> all = texts(ramp, EnumSet.of(Layer.CONTOURS, Layer.GRID));
+        List<Text> labels = all.stream().filter(t -> t.text().endsWith("m") || t.text().endsWith("mT")).toList();
+        assertFalse(labels.isEmpty());
+        for (Text t : labels) {
+            // 11 units on a 600-unit page printed 16 cm wide: 11 × 160 / 600 mm = 2.93 mm = 8.3 pt ≥ 8 pt
+            // (1 pt = 0.3528 mm, common practice in typesetting).
+            assertTrue(t.size() * 160.0 / 600 / 0.3528 >= 8, t.toString());
+            boolean inTimeBox = t.x() < 156 && t.y() < 26 + 2 && t.y() > 6 - t.size();
+            assertFalse(inTimeBox, t + " is under the time box");
+        }
+    }
+
+    @Test
+    void currentArrowsShrinkOnLoopsThatAreSmallOnScreen() {
+        List<Vec2> square10mm = List.of(new Vec2(0, 0), new Vec2(0.01, 0), new Vec2(0.01, 0.01), new Vec2(0, 0.01));
+        // 10 mm at 2000 px/m is 20 px across: the smallest arrows.
+        assertEquals(0.4, ConductorPainter.arrowScale(VIEW, square10mm), 1e-12);
+        assertEquals(1, ConductorPainter.arrowScale(new ViewTransform(0, 0, 40_000, W, H), square10mm), 1e-12);
+        assertEquals(0.75, ConductorPainter.arrowScale(new ViewTransform(0, 0, 12_000, W, H), square10mm), 1e-12);
+    }
+}
