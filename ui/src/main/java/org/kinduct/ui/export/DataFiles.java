@@ -10,7 +10,7 @@ import org.kinduct.report.SolveResults;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.solver.ConductorState;
-import org.kinduct.solver.SceneField;
+import org.kinduct.ui.field.SceneEvaluator;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.CircuitModel;
 
@@ -72,7 +72,7 @@ public final class DataFiles {
      * B_z at the centres of a {@link #FIELD_COLUMNS}-wide grid of square cells over {@code box},
      * evaluated exactly (not taken from the display raster); rows from bottom to top, x fastest.
      */
-    public static String fieldCsv(SceneField field, ViewChoice.Box box) {
+    public static String fieldCsv(SceneEvaluator.BzField field, ViewChoice.Box box) {
         double cell = (box.x1() - box.x0()) / FIELD_COLUMNS;
         int rows = Math.max(1, (int) Math.round((box.y1() - box.y0()) / cell));
         double cellY = (box.y1() - box.y0()) / rows;

@@ -11,8 +11,9 @@ import java.util.List;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.io.SceneFiles;
-import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.ui.field.Evaluators;
+import org.kinduct.ui.field.SceneEvaluator;
 import org.kinduct.ui.field.FieldMapper;
 import org.kinduct.ui.field.MapRequest;
 import org.kinduct.ui.paint.FieldRaster;
@@ -41,7 +42,8 @@ public final class Exporter {
 
     private final Scene scene;
     private final SnapshotOptions options;
-    private final SceneSolver solver;
+    /** The editor's evaluator: instant solves, or the coupled run for scenes with free bodies. */
+    private final SceneEvaluator evaluator;
     private Snapshot snapshot;
     private List<Snapshot> series;
     private SnapshotPage page;
@@ -50,7 +52,7 @@ public final class Exporter {
     public Exporter(Scene scene, SnapshotOptions options) {
         this.scene = scene;
         this.options = options;
-        this.solver = new SceneSolver(scene);
+        this.evaluator = Evaluators.solver().apply(scene);
     }
 
     /** Writes every target atomically; a target that fails is left as it was. Returns the files written. */
@@ -115,13 +117,13 @@ public final class Exporter {
     /** B_z over the box the snapshot's map shows, exactly evaluated. */
     public String fieldCsv() {
         ViewTransform v = page().mapView();
-        return DataFiles.fieldCsv(solver.fieldAt(options.tS()), new ViewChoice.Box(v.minX(), v.minY(), v.maxX(),
+        return DataFiles.fieldCsv(evaluator.fieldAt(options.tS()), new ViewChoice.Box(v.minX(), v.minY(), v.maxX(),
                 v.maxY()));
     }
 
     public Snapshot snapshot() {
         if (snapshot == null) {
-            snapshot = solver.at(options.tS());
+            snapshot = evaluator.at(options.tS());
         }
         return snapshot;
     }
@@ -130,7 +132,7 @@ public final class Exporter {
     public List<Snapshot> series() {
         if (series == null) {
             TimeSpan span = scene.time();
-            series = solver.series(span.t0S(), span.t1S(), span.dtS());
+            series = evaluator.series(span.t0S(), span.t1S(), span.dtS());
         }
         return series;
     }
@@ -139,7 +141,8 @@ public final class Exporter {
         if (page == null) {
             List<Snapshot> checked = new ArrayList<>(series());
             checked.add(snapshot());
-            page = SnapshotPage.layout(scene, snapshot(), CautionCheck.lines(scene, checked), options);
+            page = SnapshotPage.layout(scene, snapshot(), evaluator.posesAt(options.tS()),
+                    CautionCheck.lines(scene, checked), options);
         }
         return page;
     }

@@ -3,8 +3,10 @@ package org.kinduct.ui.export;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import org.kinduct.report.ResultsTable;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Circulation;
@@ -70,6 +72,7 @@ final class SnapshotPage {
 
     private final Scene scene;
     private final Snapshot snapshot;
+    private final Map<String, Pose> poses;
     private final SnapshotOptions options;
     private final ViewTransform mapView;
     private final List<String> description;
@@ -88,7 +91,9 @@ final class SnapshotPage {
     private record Table(List<String[]> rows, double[] left, double[] width, boolean[] right, double font) {
     }
 
-    private SnapshotPage(Scene scene, Snapshot snapshot, List<String> cautions, SnapshotOptions options) {
+    private SnapshotPage(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> cautions,
+                         SnapshotOptions options) {
+        this.poses = Map.copyOf(poses);
         this.scene = scene;
         this.snapshot = snapshot;
         this.options = options;
@@ -146,7 +151,13 @@ final class SnapshotPage {
     }
 
     static SnapshotPage layout(Scene scene, Snapshot snapshot, List<String> cautions, SnapshotOptions options) {
-        return new SnapshotPage(scene, snapshot, cautions, options);
+        return layout(scene, snapshot, Map.of(), cautions, options);
+    }
+
+    /** A page whose free bodies are drawn at their simulated {@code poses} (body id → pose at the snapshot's time). */
+    static SnapshotPage layout(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> cautions,
+                               SnapshotOptions options) {
+        return new SnapshotPage(scene, snapshot, poses, cautions, options);
     }
 
     double height() {
@@ -171,7 +182,7 @@ final class SnapshotPage {
         s.save();
         s.translate(0, mapTop);
         ScenePainter.draw(new Viewport(s, WIDTH, mapHeight), new Frame(scene, options.tS(), snapshot, raster, mapView,
-                options.layers(), options.range(), EditorMarks.none(), ""));
+                options.layers(), options.range(), EditorMarks.none(), "", poses));
         s.restore();
         s.stroke(RULE);
         s.lineWidth(1);

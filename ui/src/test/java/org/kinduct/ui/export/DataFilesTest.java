@@ -81,7 +81,7 @@ class DataFilesTest {
         ViewChoice.Box box = new ViewChoice.Box(-0.05, -0.1, 0.25, 0.2);
         SceneField field = new SceneSolver(scene).fieldAt(t);
 
-        List<String> lines = DataFiles.fieldCsv(field, box).lines().toList();
+        List<String> lines = DataFiles.fieldCsv(field::bz, box).lines().toList();
 
         assertEquals("x_m,y_m,Bz_T", lines.get(0));
         assertEquals(DataFiles.FIELD_COLUMNS * DataFiles.FIELD_COLUMNS + 1, lines.size(), "square cells on a square box");
