@@ -19,7 +19,7 @@ final class DemoCommand implements Callable<Integer> {
         if (name == null) {
             for (String n : Demos.names()) {
                 Scene s = Demos.load(n);
-                System.out.printf("%-22s %s%n", n, s.name());
+                System.out.printf("%-24s %s%n", n, s.name());
             }
             System.out.println();
             System.out.println("Open one with: kinduct demo NAME    Results without a display: kinduct solve --demo NAME");
