@@ -12,6 +12,7 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.io.SceneFiles;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.ui.edit.EnergyText;
 import org.kinduct.ui.field.Evaluators;
 import org.kinduct.ui.field.SceneEvaluator;
 import org.kinduct.ui.field.FieldMapper;
@@ -142,7 +143,7 @@ public final class Exporter {
             List<Snapshot> checked = new ArrayList<>(series());
             checked.add(snapshot());
             page = SnapshotPage.layout(scene, snapshot(), evaluator.posesAt(options.tS()),
-                    CautionCheck.lines(scene, checked), options);
+                    evaluator.audit().map(EnergyText::of).stream().toList(), CautionCheck.lines(scene, checked), options);
         }
         return page;
     }

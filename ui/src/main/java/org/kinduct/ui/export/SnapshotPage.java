@@ -91,7 +91,8 @@ final class SnapshotPage {
     private record Table(List<String[]> rows, double[] left, double[] width, boolean[] right, double font) {
     }
 
-    private SnapshotPage(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> cautions,
+    private SnapshotPage(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> remarks,
+                         List<String> cautions,
                          SnapshotOptions options) {
         this.poses = Map.copyOf(poses);
         this.scene = scene;
@@ -130,6 +131,11 @@ final class SnapshotPage {
                 notes.add(new Note(line, MUTED, false));
             }
         }
+        for (String remark : remarks) {
+            for (String line : wrap(remark, BODY, false, text)) {
+                notes.add(new Note(line, MUTED, false));
+            }
+        }
         for (String caution : cautions) {
             for (String line : wrap(caution, BODY, true, text)) {
                 notes.add(new Note(line, WARNING, true));
@@ -151,13 +157,16 @@ final class SnapshotPage {
     }
 
     static SnapshotPage layout(Scene scene, Snapshot snapshot, List<String> cautions, SnapshotOptions options) {
-        return layout(scene, snapshot, Map.of(), cautions, options);
+        return layout(scene, snapshot, Map.of(), List.of(), cautions, options);
     }
 
-    /** A page whose free bodies are drawn at their simulated {@code poses} (body id → pose at the snapshot's time). */
-    static SnapshotPage layout(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> cautions,
-                               SnapshotOptions options) {
-        return new SnapshotPage(scene, snapshot, poses, cautions, options);
+    /**
+     * A page whose free bodies are drawn at their simulated {@code poses} (body id → pose at the
+     * snapshot's time), with {@code remarks} (e.g. the run's energy audit) under the sign conventions.
+     */
+    static SnapshotPage layout(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> remarks,
+                               List<String> cautions, SnapshotOptions options) {
+        return new SnapshotPage(scene, snapshot, poses, remarks, cautions, options);
     }
 
     double height() {

@@ -1,6 +1,7 @@
 package org.kinduct.ui.export;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.time.LocalDate;
 import org.junit.jupiter.api.Test;
@@ -12,7 +13,7 @@ import org.kinduct.solver.dynamics.Sample;
 
 /**
  * A snapshot of a scene with a free body shows the body where the coupled run has it, with the
- * run's current — not the drawn pose with a quasi-static current.
+ * run's current — not the drawn pose with a quasi-static current — and the run's energy audit.
  */
 class FreeBodyExportTest {
 
@@ -32,5 +33,7 @@ class FreeBodyExportTest {
 
         assertEquals(expected.currentA(), drawn.currentA(), SAME * Math.abs(expected.currentA()));
         assertEquals(expected.vertices().get(0).y(), drawn.vertices().get(0).y(), SAME);
+        String svg = export.svg();
+        assertTrue(svg.contains("Energy over the run") && svg.contains("residual"), "energy audit on the page");
     }
 }
