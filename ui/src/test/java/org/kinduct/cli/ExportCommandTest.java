@@ -5,14 +5,12 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.image.BufferedImage;
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import javax.imageio.ImageIO;
 import javax.xml.parsers.DocumentBuilderFactory;
 import org.junit.jupiter.api.Test;
+import org.kinduct.cli.CliRun.Result;
 import org.junit.jupiter.api.io.TempDir;
 
 /** {@code kinduct export} through {@link KinductMain#run}: files written, and exit 1 with a message on bad input. */
@@ -21,21 +19,7 @@ class ExportCommandTest {
     @TempDir
     Path dir;
 
-    /** Runs the command line and returns its exit code with what it printed to standard error. */
-    private static Result run(String... args) {
-        PrintStream err = System.err;
-        ByteArrayOutputStream captured = new ByteArrayOutputStream();
-        System.setErr(new PrintStream(captured, true, StandardCharsets.UTF_8));
-        try {
-            int code = KinductMain.run(args);
-            return new Result(code, captured.toString(StandardCharsets.UTF_8));
-        } finally {
-            System.setErr(err);
-        }
-    }
 
-    private record Result(int code, String err) {
-    }
 
     @Test
     void exportWritesEveryAskedFileForADemo() throws Exception {
@@ -45,7 +29,7 @@ class ExportCommandTest {
         Path map = dir.resolve("map.csv");
         Path json = dir.resolve("r.json");
 
-        Result r = run("export", "--demo", "rail-sled", "--at", "80 ms", "--png", png.toString(), "--svg",
+        Result r = CliRun.run("export", "--demo", "rail-sled", "--at", "80 ms", "--png", png.toString(), "--svg",
                 svg.toString(), "--width", "640", "--dpi", "150", "--csv", csv.toString(), "--field-csv",
                 map.toString(), "--json", json.toString(), "--view", "-10 cm, -6 cm, 10 cm, 6 cm");
 
@@ -61,7 +45,7 @@ class ExportCommandTest {
 
     @Test
     void exportWithoutAnyOutputIsBadInput() {
-        Result r = run("export", "--demo", "rail-sled");
+        Result r = CliRun.run("export", "--demo", "rail-sled");
 
         assertEquals(KinductMain.BAD_INPUT, r.code());
         assertTrue(r.err().contains("nothing to export"), r.err());
@@ -71,7 +55,7 @@ class ExportCommandTest {
     void malformedViewIsBadInputAndWritesNothing() {
         Path png = dir.resolve("s.png");
 
-        Result r = run("export", "--demo", "rail-sled", "--png", png.toString(), "--view", "1 cm,2 cm,3 cm");
+        Result r = CliRun.run("export", "--demo", "rail-sled", "--png", png.toString(), "--view", "1 cm,2 cm,3 cm");
 
         assertEquals(KinductMain.BAD_INPUT, r.code());
         assertTrue(r.err().contains("--view"), r.err());
@@ -80,7 +64,7 @@ class ExportCommandTest {
 
     @Test
     void invertedViewBoxIsBadInput() {
-        Result r = run("export", "--demo", "rail-sled", "--png", dir.resolve("s.png").toString(), "--view",
+        Result r = CliRun.run("export", "--demo", "rail-sled", "--png", dir.resolve("s.png").toString(), "--view",
                 "5 cm,0,1 cm,3 cm");
 
         assertEquals(KinductMain.BAD_INPUT, r.code());
@@ -89,7 +73,7 @@ class ExportCommandTest {
 
     @Test
     void widthOutOfRangeIsBadInput() {
-        Result r = run("export", "--demo", "rail-sled", "--png", dir.resolve("s.png").toString(), "--width", "10");
+        Result r = CliRun.run("export", "--demo", "rail-sled", "--png", dir.resolve("s.png").toString(), "--width", "10");
 
         assertEquals(KinductMain.BAD_INPUT, r.code());
         assertTrue(r.err().contains("width"), r.err());
@@ -99,7 +83,7 @@ class ExportCommandTest {
     void unwritableTargetIsBadInputWithTheReason() throws Exception {
         Path blocker = Files.writeString(dir.resolve("plain-file"), "");
 
-        Result r = run("export", "--demo", "rail-sled", "--json", blocker.resolve("r.json").toString());
+        Result r = CliRun.run("export", "--demo", "rail-sled", "--json", blocker.resolve("r.json").toString());
 
         assertEquals(KinductMain.BAD_INPUT, r.code());
         assertTrue(r.err().contains("cannot save"), r.err());

@@ -8,10 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -19,6 +16,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
+import org.kinduct.cli.CliRun.Result;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
@@ -59,27 +57,14 @@ class SolveCommandTest {
                {"kind": "wire", "id": "probe", "vertices": [[-0.1, -0.1], [-0.1, 0.1]]}]}
             """;
 
-    private static Result run(String... args) {
-        PrintStream err = System.err;
-        ByteArrayOutputStream captured = new ByteArrayOutputStream();
-        System.setErr(new PrintStream(captured, true, StandardCharsets.UTF_8));
-        try {
-            int code = KinductMain.run(args);
-            return new Result(code, captured.toString(StandardCharsets.UTF_8));
-        } finally {
-            System.setErr(err);
-        }
-    }
 
-    private record Result(int code, String err) {
-    }
 
     @Test
     void fallingFrameReachesTheTerminalSpeedAndTheAuditBalancesInTheJson() throws IOException {
         Path scene = Files.writeString(dir.resolve("fall.json"), SCENE);
         Path out = dir.resolve("r.json");
 
-        Result r = run("solve", scene.toString(), "--format", "json", "--out", out.toString());
+        Result r = CliRun.run("solve", scene.toString(), "--format", "json", "--out", out.toString());
 
         assertEquals(KinductMain.OK, r.code(), r.err());
         Map<?, ?> json = (Map<?, ?>) read(Files.readString(out));
@@ -120,7 +105,7 @@ class SolveCommandTest {
         for (String model : List.of("inductive", "quasi-static")) {
             Path out = dir.resolve(model + ".txt");
 
-            Result r = run("solve", scene.toString(), "--circuit", model, "--out", out.toString());
+            Result r = CliRun.run("solve", scene.toString(), "--circuit", model, "--out", out.toString());
 
             assertEquals(KinductMain.OK, r.code(), r.err());
             String table = Files.readString(out);
@@ -134,7 +119,7 @@ class SolveCommandTest {
     void anInstantOfASceneWithAFreeBodyIsRefused() throws IOException {
         Path scene = Files.writeString(dir.resolve("fall.json"), SCENE);
 
-        Result r = run("solve", scene.toString(), "--at", "0.1 s");
+        Result r = CliRun.run("solve", scene.toString(), "--at", "0.1 s");
 
         assertEquals(1, r.code());
         assertTrue(r.err().contains("free body"), r.err());
@@ -144,7 +129,7 @@ class SolveCommandTest {
     void anUnknownCircuitModelIsRefused() throws IOException {
         Path scene = Files.writeString(dir.resolve("fall.json"), SCENE);
 
-        Result r = run("solve", scene.toString(), "--circuit", "stiff");
+        Result r = CliRun.run("solve", scene.toString(), "--circuit", "stiff");
 
         assertTrue(r.code() != KinductMain.OK, r.err());
         assertTrue(r.err().contains("auto, inductive, quasi-static"), r.err());
@@ -155,7 +140,7 @@ class SolveCommandTest {
         Path scene = Files.writeString(dir.resolve("fall.json"), SCENE);
         Path out = dir.resolve("r.csv");
 
-        Result r = run("solve", scene.toString(), "--format", "csv", "--t1", "12 ms", "--out", out.toString());
+        Result r = CliRun.run("solve", scene.toString(), "--format", "csv", "--t1", "12 ms", "--out", out.toString());
 
         assertEquals(KinductMain.OK, r.code(), r.err());
         List<String> lines = Files.readAllLines(out);

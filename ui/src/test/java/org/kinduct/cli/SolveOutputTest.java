@@ -7,15 +7,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
+import org.kinduct.cli.CliRun.Result;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
@@ -27,28 +25,11 @@ class SolveOutputTest {
     @TempDir
     Path dir;
 
-    private record Result(int code, String out, String err) {
-    }
 
-    private static Result run(String... args) {
-        PrintStream out = System.out;
-        PrintStream err = System.err;
-        ByteArrayOutputStream o = new ByteArrayOutputStream();
-        ByteArrayOutputStream e = new ByteArrayOutputStream();
-        System.setOut(new PrintStream(o, true, StandardCharsets.UTF_8));
-        System.setErr(new PrintStream(e, true, StandardCharsets.UTF_8));
-        try {
-            int code = KinductMain.run(args);
-            return new Result(code, o.toString(StandardCharsets.UTF_8), e.toString(StandardCharsets.UTF_8));
-        } finally {
-            System.setOut(out);
-            System.setErr(err);
-        }
-    }
 
     @Test
     void tableNamesThePositiveEndOfTheSenseTrace() {
-        Result r = run("solve", "--demo", "drive-sense-wire");
+        Result r = CliRun.run("solve", "--demo", "drive-sense-wire");
         assertEquals(KinductMain.OK, r.code(), r.err());
         // 0.35 T · 20 mm · 2π·20 Hz·8 mm = 7.04 mV, upper (last) end + while moving right (Griffiths ch. 7).
         assertTrue(r.out().contains("7.04 mV"), r.out());
@@ -58,7 +39,7 @@ class SolveOutputTest {
     @Test
     void jsonHasOneSampleObjectPerConductorPerTimeWithTheDocumentedKeys() throws IOException {
         Path out = dir.resolve("r.json");
-        Result r = run("solve", "--demo", "rail-sled", "--t0", "50 ms", "--t1", "60 ms", "--dt", "5 ms",
+        Result r = CliRun.run("solve", "--demo", "rail-sled", "--t0", "50 ms", "--t1", "60 ms", "--dt", "5 ms",
                 "--format", "json", "--out", out.toString());
         assertEquals(KinductMain.OK, r.code(), r.err());
         Map<String, Object> first = firstSample(Files.readString(out));
@@ -76,7 +57,7 @@ class SolveOutputTest {
 
     @Test
     void csvHeaderCarriesUnits() {
-        Result r = run("solve", "--demo", "flow-electrodes", "--format", "csv", "--at", "5 ms");
+        Result r = CliRun.run("solve", "--demo", "flow-electrodes", "--format", "csv", "--at", "5 ms");
         assertEquals(KinductMain.OK, r.code(), r.err());
         String header = r.out().lines().findFirst().orElseThrow();
         assertTrue(header.startsWith("t_s,id,kind,flux_Wb"), header);
@@ -88,7 +69,7 @@ class SolveOutputTest {
         Path bad = dir.resolve("bad.json");
         Files.writeString(bad, "{\"format\": \"kinduct-scene\", \"version\": 1,\n"
                 + " \"conductors\": [{\"kind\": \"wire\", \"id\": \"w\", \"vertices\": [[0, 0], [\"3 mT\", 0]]}]}\n");
-        Result r = run("solve", bad.toString());
+        Result r = CliRun.run("solve", bad.toString());
         assertEquals(KinductMain.BAD_INPUT, r.code());
         assertTrue(r.err().contains("bad.json:2:"), r.err());
         assertTrue(r.err().contains("conductors[0].vertices[1]"), r.err());
@@ -97,10 +78,10 @@ class SolveOutputTest {
 
     @Test
     void badTimeUnitAndMissingFileExitOne() {
-        Result unit = run("solve", "--demo", "rail-sled", "--dt", "3 mT");
+        Result unit = CliRun.run("solve", "--demo", "rail-sled", "--dt", "3 mT");
         assertEquals(KinductMain.BAD_INPUT, unit.code());
         assertTrue(unit.err().contains("--dt"), unit.err());
-        Result missing = run("solve", dir.resolve("nowhere.json").toString());
+        Result missing = CliRun.run("solve", dir.resolve("nowhere.json").toString());
         assertEquals(KinductMain.BAD_INPUT, missing.code());
         assertFalse(missing.err().isBlank());
     }
