@@ -3,6 +3,7 @@ package org.kinduct.report;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
+import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.units.Dimension;
 import org.kinduct.scene.units.Units;
@@ -42,6 +43,9 @@ public final class ResultsTable {
                     Double.isNaN(l) ? "-" : Units.format(l, Dimension.INDUCTANCE), agreement(r));
         }
         out.println();
+        if (scene.conductors().stream().filter(c -> c instanceof Conductor.Loop l && !l.open()).count() > 1) {
+            out.println(InductanceSummary.of(scene));
+        }
         writeBodies(results, out);
         writeAudit(results.audit(), out);
         out.println("Signs: EMF and current are positive along each conductor's vertex order; for a wire,"

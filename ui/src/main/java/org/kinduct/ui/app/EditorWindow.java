@@ -118,7 +118,7 @@ final class EditorWindow {
         VBox plotBox = new VBox(2, plotWhat, plot);
         VBox.setVgrow(plot, Priority.ALWAYS);
         ReadoutTable table = new ReadoutTable(vm);
-        VBox tableBox = new VBox(2, table, energyLine());
+        VBox tableBox = new VBox(2, table, inductanceLine(), energyLine());
         VBox.setVgrow(table, Priority.ALWAYS);
         SplitPane lower = new SplitPane(plotBox, tableBox);
         lower.setDividerPositions(0.42);
@@ -346,6 +346,23 @@ final class EditorWindow {
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(4, 8, 4, 8));
         return bar;
+    }
+
+    /** Self- and mutual inductance of the closed loops as drawn, under the readout table. */
+    private Label inductanceLine() {
+        Label line = new Label();
+        line.setId("inductance");
+        line.setWrapText(true);
+        line.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+        line.setPadding(new Insets(2, 6, 2, 6));
+        Runnable update = () -> {
+            line.setText(org.kinduct.report.InductanceSummary.of(vm.scene()));
+            line.setVisible(!line.getText().isEmpty());
+            line.setManaged(line.isVisible());
+        };
+        vm.sceneProperty().addListener(o -> update.run());
+        update.run();
+        return line;
     }
 
     /** The energy audit of a simulated run, under the readout table; hidden for prescribed motion. */
