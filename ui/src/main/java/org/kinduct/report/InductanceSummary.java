@@ -3,7 +3,9 @@ package org.kinduct.report;
 import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 import org.kinduct.scene.units.Dimension;
 import org.kinduct.scene.units.Units;
@@ -11,7 +13,8 @@ import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.circuit.LoopInductance;
 
 /**
- * Self-inductance of every closed loop and mutual inductance of every pair, with the loops where
+ * Self-inductance of every closed loop and mutual inductance of every pair of loops and of every
+ * loop with every source coil, with the loops and coils where
  * they are at the start of the scene's time window, in one line of words for the CLI table and the
  * editor (formulas and their sources in {@link LoopInductance}). A loop whose wires run too close for
  * the thin-wire formulas is named with the reason instead of a number.
@@ -52,7 +55,26 @@ public final class InductanceSummary {
                         a.wire().diameterM() / 2, a.turns(), vb, b.wire().diameterM() / 2, b.turns())));
             }
         }
+        for (int i = 0; i < loops.size(); i++) {
+            for (Source source : scene.sources()) {
+                if (source instanceof Source.SourceCoil coil) {
+                    mutual.add(attempt("M " + loops.get(i).id() + "–" + coil.id(),
+                            toCoil(loops.get(i), at.get(i), coil, scene.bodiesById().get(coil.body()).poseAt(scene.time().t0S()))));
+                }
+            }
+        }
         return "Inductance at t0: " + String.join(", ", parts) + (mutual.isEmpty() ? "" : "; " + String.join(", ", mutual));
+    }
+
+    /** Mutual inductance of a loop with a source coil placed by {@code pose}, per the coil's shape. */
+    private static java.util.function.DoubleSupplier toCoil(Conductor.Loop loop, List<Vec2> at, Source.SourceCoil coil,
+                                                           Pose pose) {
+        if (coil.shape() instanceof Source.CoilShape.Circle circle) {
+            return () -> LoopInductance.mutualToCircleCoil(at, loop.turns(), pose.place(circle.center()),
+                    circle.radiusM(), coil.planeZM(), coil.turns());
+        }
+        List<Vec2> outline = ((Source.CoilShape.Polygon) coil.shape()).vertices().stream().map(pose::place).toList();
+        return () -> LoopInductance.mutualToPolygonCoil(at, loop.turns(), outline, coil.planeZM(), coil.turns());
     }
 
     private static String attempt(String label, java.util.function.DoubleSupplier henries) {
