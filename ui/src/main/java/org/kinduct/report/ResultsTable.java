@@ -54,9 +54,7 @@ public final class ResultsTable {
             out.println("Note: a field patch moves; the induced electric field of an idealized patch is not known"
                     + " from B_z alone, so wire EMFs marked '*' include the v x B part only.");
         }
-        if (rows.stream().anyMatch(r -> Math.abs(r.peakEmfV()) > Cautions.ELV_DC_V)) {
-            out.println(Cautions.VOLTAGE);
-        }
+        CautionCheck.lines(scene, series).forEach(out::println);
     }
 
     /** The final speed of each free body. */

@@ -1,14 +1,13 @@
-package org.kinduct.ui.export;
+package org.kinduct.report;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.kinduct.report.Cautions;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.solver.Snapshot;
 
 /** The caution lines an exported picture must carry for a scene and its solved series. */
-final class CautionCheck {
+public final class CautionCheck {
 
     private CautionCheck() {
     }
@@ -19,7 +18,7 @@ final class CautionCheck {
      * IEC 61140 (as {@link Cautions} cites): for an EMF that keeps its sign, its peak against the
      * ripple-free DC limit; for one that reverses (AC), its RMS over the series against the AC limit.
      */
-    static List<String> lines(Scene scene, List<Snapshot> series) {
+    public static List<String> lines(Scene scene, List<Snapshot> series) {
         List<String> out = new ArrayList<>();
         if (scene.sources().stream().anyMatch(CautionCheck::strongMagnet)) {
             out.add(Cautions.MAGNETS);
