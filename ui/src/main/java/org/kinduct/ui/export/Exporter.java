@@ -164,7 +164,7 @@ public final class Exporter {
                     v.heightPx() * k);
             int step = (int) Math.max(MAP_STEP_PX,
                     Math.ceil(Math.sqrt(device.widthPx() * device.heightPx() / MAX_MAP_SAMPLES)));
-            FieldMapper mapper = new FieldMapper(SolverEvaluator::new, Runnable::run, Runnable::run, r -> { },
+            FieldMapper mapper = new FieldMapper(s -> evaluator, Runnable::run, Runnable::run, r -> { },
                     e -> { });
             raster = mapper.compute(new MapRequest(scene, 0, options.tS(), device, step));
         }

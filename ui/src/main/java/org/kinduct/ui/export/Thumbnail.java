@@ -11,6 +11,8 @@ import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.field.FieldMapper;
 import org.kinduct.ui.field.MapRequest;
 import org.kinduct.ui.paint.ColourRange;
+import org.kinduct.ui.field.Evaluators;
+import org.kinduct.ui.field.SceneEvaluator;
 import org.kinduct.ui.paint.Frame;
 import org.kinduct.ui.paint.Layer;
 import org.kinduct.ui.paint.ScenePainter;
@@ -43,8 +45,9 @@ public final class Thumbnail {
         double pageH = heightPx * PAGE_PER_PX;
         ViewChoice.Box box = ViewChoice.box(new ViewChoice.Fit(), scene, t);
         ViewTransform view = new ViewTransform(0, 0, 1, pageW, pageH).fitting(box.x0(), box.y0(), box.x1(), box.y1(), 0);
-        Snapshot snapshot = new SolverEvaluator(scene).at(t);
-        FieldMapper mapper = new FieldMapper(SolverEvaluator::new, Runnable::run, Runnable::run, r -> { }, e -> { });
+        SceneEvaluator evaluator = Evaluators.solver().apply(scene);
+        Snapshot snapshot = evaluator.at(t);
+        FieldMapper mapper = new FieldMapper(s -> evaluator, Runnable::run, Runnable::run, r -> { }, e -> { });
         ViewTransform device = new ViewTransform(view.centerX(), view.centerY(), view.pxPerM() / PAGE_PER_PX,
                 widthPx, heightPx);
         var raster = mapper.compute(new MapRequest(scene, 0, t, device, MAP_STEP_PX));
@@ -56,7 +59,7 @@ public final class Thumbnail {
             g.fillRect(0, 0, widthPx, heightPx);
             g.scale(1 / PAGE_PER_PX, 1 / PAGE_PER_PX);
             ScenePainter.draw(new Java2dSurface(g, pageW, pageH), new Frame(scene, t, snapshot, raster, view, LAYERS,
-                    ColourRange.automatic(), null, ""));
+                    ColourRange.automatic(), null, "", evaluator.posesAt(t)));
         } finally {
             g.dispose();
         }

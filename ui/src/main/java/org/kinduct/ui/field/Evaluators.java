@@ -1,12 +1,9 @@
 package org.kinduct.ui.field;
 
-import java.util.List;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Function;
 import org.kinduct.scene.Scene;
-import org.kinduct.solver.SceneField;
 import org.kinduct.solver.SceneSolver;
-import org.kinduct.solver.Snapshot;
 
 /** Where the editor gets its numbers from: the {@link SceneSolver}. */
 public final class Evaluators {
@@ -25,24 +22,7 @@ public final class Evaluators {
             if (TrajectoryEvaluator.needsSimulation(scene)) {
                 return last.updateAndGet(e -> e != null && e.scene().equals(scene) ? e : new TrajectoryEvaluator(scene));
             }
-            SceneSolver solver = new SceneSolver(scene);
-            return new SceneEvaluator() {
-                @Override
-                public Snapshot at(double tS) {
-                    return solver.at(tS);
-                }
-
-                @Override
-                public List<Snapshot> series(double t0S, double t1S, double dtS) {
-                    return solver.series(t0S, t1S, dtS);
-                }
-
-                @Override
-                public BzField fieldAt(double tS) {
-                    SceneField field = solver.fieldAt(tS);
-                    return field::bz;
-                }
-            };
+            return new SolverEvaluator(scene);
         };
     }
 }

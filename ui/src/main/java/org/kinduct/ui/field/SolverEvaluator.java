@@ -1,17 +1,16 @@
-package org.kinduct.ui.export;
+package org.kinduct.ui.field;
 
 import java.util.List;
 import org.kinduct.scene.Scene;
 import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
-import org.kinduct.ui.field.SceneEvaluator;
 
-/** The solver seen as the editor's {@link SceneEvaluator}, so exports map the field exactly as the editor does. */
-final class SolverEvaluator implements SceneEvaluator {
+/** The instant-by-instant {@link SceneSolver} as a {@link SceneEvaluator}: scenes whose bodies all move as prescribed. */
+public final class SolverEvaluator implements SceneEvaluator {
 
     private final SceneSolver solver;
 
-    SolverEvaluator(Scene scene) {
+    public SolverEvaluator(Scene scene) {
         this.solver = new SceneSolver(scene);
     }
 
