@@ -20,6 +20,11 @@ public record Pose(Vec2 pivot, Vec2 offset, double angleRad, Vec2 velocity, doub
         return pivot.plus(offset).plus(drawn.minus(pivot).rotate(angleRad));
     }
 
+    /** Where the point now at {@code now} was drawn: the inverse of {@link #place}. */
+    public Vec2 unplace(Vec2 now) {
+        return pivot.plus(now.minus(pivot.plus(offset)).rotate(-angleRad));
+    }
+
     /** Velocity of the material point that is now at {@code now}: v = v_pivot + ω ẑ × (r − r_pivot). */
     public Vec2 velocityAt(Vec2 now) {
         Vec2 arm = now.minus(pivot.plus(offset));

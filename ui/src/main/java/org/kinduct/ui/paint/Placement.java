@@ -42,8 +42,7 @@ public final class Placement {
 
     /** Where a point now at {@code now} on body {@code bodyId} was drawn: the inverse of {@link Pose#place}. */
     public Vec2 drawn(String bodyId, Vec2 now) {
-        Pose p = poses.get(bodyId);
-        return p.pivot().plus(now.minus(p.pivot().plus(p.offset())).rotate(-p.angleRad()));
+        return poses.get(bodyId).unplace(now);
     }
 
     /** A displacement seen now, expressed in body {@code bodyId}'s drawn frame. */
