@@ -7,6 +7,7 @@ import java.util.Set;
 import java.util.function.UnaryOperator;
 import javafx.animation.AnimationTimer;
 import javafx.animation.PauseTransition;
+import javafx.application.Platform;
 import javafx.beans.Observable;
 import javafx.scene.Cursor;
 import javafx.scene.canvas.Canvas;
@@ -29,14 +30,15 @@ import org.kinduct.ui.edit.SceneEdits;
 import org.kinduct.ui.edit.Snapper;
 import org.kinduct.ui.edit.ToolKind;
 import org.kinduct.ui.paint.EditorMarks;
+import org.kinduct.ui.paint.FieldBackdrop;
+import org.kinduct.ui.paint.FieldRaster;
 import org.kinduct.ui.paint.Frame;
 import org.kinduct.ui.paint.Placement;
-import org.kinduct.ui.paint.ScenePainter;
 import org.kinduct.ui.view.NiceSteps;
 import org.kinduct.ui.view.ViewTransform;
 
 /**
- * The drawing area: paints the scene through {@link ScenePainter}, turns mouse and keys into
+ * The drawing area: paints the scene through {@link CanvasFrames}, turns mouse and keys into
  * view changes and edits, and drives playback. Repaints at most once per pulse, only when
  * something changed.
  */
@@ -50,12 +52,16 @@ final class EditorCanvas extends Pane {
     private final EditorViewModel vm;
     private final Canvas canvas = new Canvas();
     private final PauseTransition refine = new PauseTransition(IDLE_REFINE);
+    private final CanvasFrames frames = new CanvasFrames(canvas);
+    private final BackdropWorker backdrops;
+    private FieldBackdrop backdrop;
     private DrawingTool drawing;
     private boolean spaceDown;
     private boolean needsPaint = true;
     private boolean showFrameTime;
     private double frameMs;
     private double lastFrameMs;
+    private java.util.function.DoubleConsumer paintTimes = ms -> { };
     private long lastNanos;
 
     // Drag state: pan, move selection, or move a vertex.
@@ -84,6 +90,13 @@ final class EditorCanvas extends Pane {
         for (Observable o : new Observable[] {vm.sceneProperty(), vm.snapshotProperty(), vm.rasterProperty(),
                 vm.viewProperty(), vm.layers(), vm.selection(), vm.rangeProperty()}) {
             o.addListener(x -> needsPaint = true);
+        }
+        backdrops = new BackdropWorker(Platform::runLater, b -> {
+            backdrop = vm.rasterProperty().get() != null ? b : null;
+            needsPaint = true;
+        });
+        for (Observable o : new Observable[] {vm.rasterProperty(), vm.viewProperty(), vm.layers(), vm.rangeProperty()}) {
+            o.addListener(x -> requestBackdrop());
         }
         vm.toolProperty().addListener((obs, old, t) -> {
             drawing = t == ToolKind.SELECT ? null : new DrawingTool(t);
@@ -123,14 +136,33 @@ final class EditorCanvas extends Pane {
         }
     }
 
+    /** The field layers change with the map, view, colour range or layer choice: draw them anew off this thread. */
+    private void requestBackdrop() {
+        FieldRaster raster = vm.rasterProperty().get();
+        if (raster == null) {
+            backdrop = null;
+            return;
+        }
+        ViewTransform v = view();
+        if (v.widthPx() >= 1 && v.heightPx() >= 1) {
+            backdrops.request(raster, v, vm.rangeProperty().get().limitFor(raster), vm.layers());
+        }
+    }
+
     /** Paints now; returns the time the painter took, milliseconds. */
     double paint() {
         long t0 = System.nanoTime();
-        ScenePainter.draw(new FxSurface(canvas.getGraphicsContext2D(), getWidth(), getHeight()), frame());
+        frames.show(frame(), backdrop);
         double ms = (System.nanoTime() - t0) * 1e-6;
         lastFrameMs = ms;
         frameMs = frameMs == 0 ? ms : frameMs + FRAME_TIME_SMOOTHING * (ms - frameMs);
+        paintTimes.accept(ms);
         return ms;
+    }
+
+    /** Receives the painter's time of every frame from now on (for the frame-time probe). */
+    void onPainted(java.util.function.DoubleConsumer sink) {
+        paintTimes = sink;
     }
 
     Frame frame() {

@@ -2,13 +2,22 @@ package org.kinduct.ui.app;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.util.EnumSet;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
+import java.util.concurrent.Callable;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
 import javafx.application.Platform;
-import javafx.scene.canvas.Canvas;
+import javafx.stage.Stage;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Motion;
@@ -16,36 +25,39 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
-import org.kinduct.solver.Snapshot;
+import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.ShapeFactory;
 import org.kinduct.ui.field.Evaluators;
 import org.kinduct.ui.field.FieldMapper;
 import org.kinduct.ui.field.MapRequest;
 import org.kinduct.ui.field.SceneEvaluator;
 import org.kinduct.ui.paint.ColourRange;
-import org.kinduct.ui.paint.EditorMarks;
+import org.kinduct.ui.paint.FieldBackdrop;
 import org.kinduct.ui.paint.FieldRaster;
-import org.kinduct.ui.paint.Frame;
 import org.kinduct.ui.paint.Layer;
-import org.kinduct.ui.paint.ScenePainter;
 import org.kinduct.ui.view.ViewTransform;
 
 /**
- * Measures paint time per frame for a 20-object scene with moving magnets on a 1280 × 800
- * canvas, all layers on: {@code java -cp … org.kinduct.ui.app.FrameTimeProbe [frames]}. Field maps
- * and snapshots are computed before each paint and timed separately, since the editor computes
- * them off the UI thread.
+ * Measures the editor's frame time: the real {@link EditorCanvas} in a 1280 × 800 window plays a
+ * 20-object scene with moving magnets, all layers on, field maps and backdrops computed by the
+ * editor's own workers. JavaFX is told to pulse as fast as it can ({@code
+ * javafx.animation.fullspeed}) rather than at 60 Hz, so the interval between frames is what a
+ * frame costs, painting on the UI thread and rasterising on the render thread together.
+ * {@code java -Dprism.order=sw -cp … org.kinduct.ui.app.FrameTimeProbe [frames]}.
  */
 public final class FrameTimeProbe {
 
     static final int WIDTH = 1280;
     static final int HEIGHT = 800;
+    private static final int WARM_UP_FRAMES = 60;
+    private static final double SIXTY_HZ_MS = 1000.0 / 60;
 
     private FrameTimeProbe() {
     }
 
     public static void main(String[] args) throws Exception {
-        int frames = args.length > 0 ? Integer.parseInt(args[0]) : 120;
+        int frames = args.length > 0 ? Integer.parseInt(args[0]) : 300;
+        System.setProperty("javafx.animation.fullspeed", "true");
         Platform.startup(() -> { });
         try {
             System.out.println(measure(frames));
@@ -54,61 +66,139 @@ public final class FrameTimeProbe {
         }
     }
 
-    /** Paints {@code frames} frames; returns a one-paragraph report. */
-    static String measure(int frames) throws InterruptedException, ExecutionException {
+    /** Plays {@code frames} frames after a warm-up; returns a one-paragraph report. */
+    static String measure(int frames) throws InterruptedException, ExecutionException, TimeoutException {
         Scene scene = twentyObjects();
+        ExecutorService work = Executors.newFixedThreadPool(2, r -> {
+            Thread t = new Thread(r, "probe-worker");
+            t.setDaemon(true);
+            return t;
+        });
+        ThreadCpu cpu = new ThreadCpu();
+        double[] interval = new double[frames];
+        double[] paint = new double[frames];
+        CompletableFuture<Void> done = new CompletableFuture<>();
+        onFx(() -> {
+            EditorViewModel vm = new EditorViewModel(scene, Evaluators.solver(), work, Platform::runLater);
+            EditorCanvas canvas = new EditorCanvas(vm, text -> { });
+            Stage stage = new Stage();
+            stage.setScene(new javafx.scene.Scene(canvas, WIDTH, HEIGHT));
+            stage.show();
+            vm.viewProperty().set(new ViewTransform(0, 0, WIDTH / 0.32, WIDTH, HEIGHT));
+            vm.layers().addAll(EnumSet.allOf(Layer.class));
+            vm.speedProperty().set(0.25);
+            vm.playingProperty().set(true);
+            int[] count = {-WARM_UP_FRAMES};
+            long[] last = {0};
+            canvas.onPainted(ms -> {
+                long now = System.nanoTime();
+                int i = count[0]++;
+                if (i == 0) {
+                    cpu.start();
+                }
+                if (i >= 0 && i < frames) {
+                    interval[i] = (now - last[0]) * 1e-6;
+                    paint[i] = ms;
+                } else if (i == frames) {
+                    cpu.stop();
+                    vm.playingProperty().set(false);
+                    stage.close();
+                    done.complete(null);
+                }
+                last[0] = now;
+            });
+            return null;
+        });
+        done.get(5, TimeUnit.MINUTES);
+        work.shutdownNow();
+        double[] offThread = offThreadWork(scene, 40);
+        return String.format(Locale.ROOT,
+                "%d frames of a %d-object scene with moving magnets in a %d×%d editor canvas, software rendering, "
+                        + "%d cores (median / 95th percentile, ms): frame time %.1f / %.1f (%.0f %% of frames within "
+                        + "%.1f ms), of which painting on the UI thread %.1f / %.1f; processor time per frame "
+                        + "(independent of other load): UI thread %.1f, render thread %.1f; off the UI thread per "
+                        + "map: field map (4 px cells) + snapshot %.1f / %.1f, backdrop %.1f / %.1f",
+                frames, scene.sources().size() + scene.conductors().size(), WIDTH, HEIGHT,
+                Runtime.getRuntime().availableProcessors(), median(interval), p95(interval),
+                100 * within(interval, SIXTY_HZ_MS), SIXTY_HZ_MS, median(paint), p95(paint),
+                cpu.perFrameMs("JavaFX Application Thread", frames), cpu.perFrameMs("QuantumRenderer-0", frames),
+                offThread[0], offThread[1], offThread[2], offThread[3]);
+    }
+
+    /** Median and 95th percentile of the map + snapshot and of the backdrop, over {@code n} times of the window. */
+    private static double[] offThreadWork(Scene scene, int n) {
         SceneEvaluator evaluator = Evaluators.solver().apply(scene);
         ViewTransform view = new ViewTransform(0, 0, WIDTH / 0.32, WIDTH, HEIGHT);
         FieldMapper mapper = new FieldMapper(Evaluators.solver(), Runnable::run, Runnable::run, r -> { }, e -> { });
-        Canvas canvas = onFx(() -> new Canvas(WIDTH, HEIGHT));
-        double[] paint = new double[frames];
-        double[] render = new double[frames];
-        double[] compute = new double[frames];
-        for (int i = 0; i < frames; i++) {
-            double t = scene.time().t1S() * i / frames;
+        double[] compute = new double[n];
+        double[] backdrop = new double[n];
+        for (int i = 0; i < n; i++) {
+            double t = scene.time().t1S() * i / n;
             long c0 = System.nanoTime();
             FieldRaster raster = mapper.compute(new MapRequest(scene, 1, t, view, 4));
-            Snapshot snap = evaluator.at(t);
-            compute[i] = (System.nanoTime() - c0) * 1e-6;
-            Frame f = new Frame(scene, t, snap, raster, view, EnumSet.allOf(Layer.class), ColourRange.automatic(),
-                    EditorMarks.none(), "");
-            int frame = i;
-            onFx(() -> {
-                long p0 = System.nanoTime();
-                ScenePainter.draw(new FxSurface(canvas.getGraphicsContext2D(), WIDTH, HEIGHT), f);
-                long p1 = System.nanoTime();
-                canvas.snapshot(null, null);
-                paint[frame] = (p1 - p0) * 1e-6;
-                render[frame] = (System.nanoTime() - p1) * 1e-6;
-                return null;
-            });
+            evaluator.at(t);
+            long c1 = System.nanoTime();
+            FieldBackdrop.render(raster, view, ColourRange.automatic().limitFor(raster), EnumSet.allOf(Layer.class));
+            compute[i] = (c1 - c0) * 1e-6;
+            backdrop[i] = (System.nanoTime() - c1) * 1e-6;
         }
-        return String.format(Locale.ROOT,
-                "%d frames of a %d-object scene at %d×%d on %d cores (median / 95th percentile, ms): "
-                        + "painter %.1f / %.1f; software rasterisation of the canvas %.1f / %.1f; "
-                        + "field map (4 px cells) + snapshot, off the UI thread, %.1f / %.1f",
-                frames, scene.sources().size() + scene.conductors().size(), WIDTH, HEIGHT,
-                Runtime.getRuntime().availableProcessors(), median(paint), p95(paint), median(render), p95(render),
-                median(compute), p95(compute));
+        return new double[] {median(compute), p95(compute), median(backdrop), p95(backdrop)};
     }
 
-    private static double[] warm(double[] ms) {
-        double[] w = Arrays.copyOfRange(ms, Math.min(10, ms.length - 1), ms.length);
+    /** Processor time used by the UI and render threads between {@link #start} and {@link #stop}. */
+    private static final class ThreadCpu {
+        private static final List<String> THREADS = List.of("JavaFX Application Thread", "QuantumRenderer-0");
+        private final ThreadMXBean bean = ManagementFactory.getThreadMXBean();
+        private final Map<String, Long> started = new HashMap<>();
+        private final Map<String, Long> used = new HashMap<>();
+
+        void start() {
+            THREADS.forEach(name -> started.put(name, cpuNanos(name)));
+        }
+
+        void stop() {
+            THREADS.forEach(name -> used.put(name, cpuNanos(name) - started.get(name)));
+        }
+
+        double perFrameMs(String thread, int frames) {
+            return used.getOrDefault(thread, 0L) * 1e-6 / frames;
+        }
+
+        private long cpuNanos(String name) {
+            for (Thread t : Thread.getAllStackTraces().keySet()) {
+                if (t.getName().equals(name)) {
+                    return bean.getThreadCpuTime(t.getId());
+                }
+            }
+            throw new IllegalStateException("no thread named " + name);
+        }
+    }
+
+    private static double within(double[] ms, double limit) {
+        int n = 0;
+        for (double m : ms) {
+            n += m <= limit ? 1 : 0;
+        }
+        return (double) n / ms.length;
+    }
+
+    private static double[] sorted(double[] ms) {
+        double[] w = ms.clone();
         Arrays.sort(w);
         return w;
     }
 
     private static double median(double[] ms) {
-        double[] w = warm(ms);
+        double[] w = sorted(ms);
         return w[w.length / 2];
     }
 
     private static double p95(double[] ms) {
-        double[] w = warm(ms);
+        double[] w = sorted(ms);
         return w[(int) (w.length * 0.95)];
     }
 
-    private static <T> T onFx(java.util.concurrent.Callable<T> task) throws InterruptedException, ExecutionException {
+    private static <T> T onFx(Callable<T> task) throws InterruptedException, ExecutionException {
         CompletableFuture<T> f = new CompletableFuture<>();
         Platform.runLater(() -> {
             try {

@@ -50,6 +50,11 @@ public final class EditorViewModel {
     /** Samples in a time plot. */
     public static final int SERIES_SAMPLES = 241;
     private static final int UNDO_LIMIT = 200;
+    /**
+     * While playing, a coarse field map at most this often (seconds of wall-clock time): maps share
+     * the two cores with painting, and a map that trails the sources by a few frames is fine to look at.
+     */
+    static final double PLAYBACK_MAP_INTERVAL_S = 0.05;
 
     /** How finely to sample the field map, screen pixels per sample. */
     public enum MapQuality {
@@ -96,6 +101,8 @@ public final class EditorViewModel {
     private final BooleanProperty snapAngles = new SimpleBooleanProperty(true);
     private SceneEvaluator evaluator;
     private long evaluatorRevision = -1;
+    private long seriesRevision = -1;
+    private double sincePlaybackMap = Double.POSITIVE_INFINITY;
 
     public EditorViewModel(Scene initial, Function<Scene, SceneEvaluator> evaluators, Executor work, Executor ui) {
         this.evaluators = evaluators;
@@ -106,6 +113,12 @@ public final class EditorViewModel {
         this.mapper = new FieldMapper(evaluators, work, ui, this::acceptRaster,
                 e -> status.set("Field map failed: " + e.getMessage()));
         time.addListener((obs, old, t) -> solveNow());
+        playing.addListener((obs, was, now) -> {
+            if (!now) {
+                solveNow();
+                requestField(MapQuality.FINE);
+            }
+        });
         show(initial);
         time.set(initial.time().t0S());
     }
@@ -201,7 +214,11 @@ public final class EditorViewModel {
             t = span.t0S() + (t - span.t1S()) % (span.t1S() - span.t0S());
         }
         time.set(t);
-        requestField(MapQuality.MEDIUM);
+        sincePlaybackMap += realSeconds;
+        if (sincePlaybackMap >= PLAYBACK_MAP_INTERVAL_S) {
+            sincePlaybackMap = 0;
+            requestField(MapQuality.COARSE);
+        }
     }
 
     /** Moves by {@code steps} of the scene's time step. */
@@ -237,9 +254,16 @@ public final class EditorViewModel {
         return evaluator;
     }
 
-    /** Solves the current time off the UI thread; a result for an older scene is dropped. */
+    /**
+     * Solves the current time off the UI thread; a result for an older scene is dropped. While
+     * playing, the time series' sample nearest in time is shown instead when the series is ready,
+     * so playback moves at frame rate instead of at the solver's pace; pausing solves exactly.
+     */
     private void solveNow() {
         if (scene.get() == null) {
+            return;
+        }
+        if (playing.get() && showSeriesSample(time.get())) {
             return;
         }
         SceneEvaluator ev;
@@ -271,6 +295,34 @@ public final class EditorViewModel {
                 });
             }
         });
+    }
+
+    /** Shows the series sample nearest to {@code t}; false when the series is not for this scene. */
+    private boolean showSeriesSample(double t) {
+        List<Snapshot> samples = series.get();
+        if (seriesRevision != revision.get() || samples.isEmpty()) {
+            return false;
+        }
+        int i = nearestSample(samples, t);
+        List<Map<String, Pose>> placed = poseSeries.get();
+        snapshot.set(samples.get(i));
+        poses.set(placed.size() == samples.size() ? placed.get(i) : Map.of());
+        return true;
+    }
+
+    /** Index of the sample (in time order) nearest to {@code t}. */
+    static int nearestSample(List<Snapshot> samples, double t) {
+        int lo = 0;
+        int hi = samples.size() - 1;
+        while (hi - lo > 1) {
+            int mid = (lo + hi) >>> 1;
+            if (samples.get(mid).tS() <= t) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return Math.abs(samples.get(hi).tS() - t) < Math.abs(samples.get(lo).tS() - t) ? hi : lo;
     }
 
     private void requestSeries() {
@@ -305,6 +357,7 @@ public final class EditorViewModel {
                     if (revision.get() == rev) {
                         series.set(result);
                         poseSeries.set(placed);
+                        seriesRevision = rev;
                         audit.set(energy);
                         if (simulated) {
                             simulating.set(false);

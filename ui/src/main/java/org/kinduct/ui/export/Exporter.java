@@ -19,6 +19,7 @@ import org.kinduct.ui.field.SceneEvaluator;
 import org.kinduct.ui.field.FieldMapper;
 import org.kinduct.ui.field.MapRequest;
 import org.kinduct.ui.paint.FieldRaster;
+import org.kinduct.ui.paint.Java2dSurface;
 import org.kinduct.ui.paint.Layer;
 import org.kinduct.ui.view.ViewTransform;
 

@@ -20,6 +20,7 @@ import org.kinduct.ui.paint.Frame;
 import org.kinduct.ui.paint.Quantities;
 import org.kinduct.ui.paint.ScenePainter;
 import org.kinduct.ui.paint.Surface;
+import org.kinduct.ui.paint.TextMetrics;
 import org.kinduct.ui.view.ViewTransform;
 
 /**

@@ -10,6 +10,7 @@ import java.util.Deque;
 import java.util.Locale;
 import javax.imageio.ImageIO;
 import org.kinduct.ui.paint.Surface;
+import org.kinduct.ui.paint.TextMetrics;
 
 /**
  * {@link Surface} that writes an SVG 1.1 document: real vector paths and text; only rasters (the

@@ -14,6 +14,7 @@ import org.kinduct.ui.paint.ColourRange;
 import org.kinduct.ui.field.Evaluators;
 import org.kinduct.ui.field.SceneEvaluator;
 import org.kinduct.ui.paint.Frame;
+import org.kinduct.ui.paint.Java2dSurface;
 import org.kinduct.ui.paint.Layer;
 import org.kinduct.ui.paint.ScenePainter;
 import org.kinduct.ui.view.ViewTransform;

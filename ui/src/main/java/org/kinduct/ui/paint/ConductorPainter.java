@@ -91,7 +91,7 @@ final class ConductorPainter {
             }
             if (c instanceof Conductor.Loop loop && !loop.open() && st.direction() != Circulation.NONE && maxI > 0) {
                 double width = 1.5 + 4.5 * Math.sqrt(Math.abs(st.currentA()) / maxI);
-                currentArrows(s, v, pts, st.currentA() > 0, width, arrowScale(v, pts));
+                currentArrows(s, v, pts, st.currentA() > 0, width, arrowScale(v, pts), placer);
                 Vec2 c0 = SourcePainter.centroid(pts);
                 Glyphs.fieldSymbol(s, v.screenX(c0.x()), v.screenY(c0.y()), 10, st.direction() == Circulation.CCW,
                         Palette.CURRENT);
@@ -158,8 +158,9 @@ final class ConductorPainter {
         return Math.max(MIN_ARROW_SCALE, Math.min(1, acrossPx / FULL_ARROW_LOOP_PX));
     }
 
+    /** Arrows along a loop's long edges; each claims its box so no label covers it. */
     private static void currentArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward, double width,
-                                      double scale) {
+                                      double scale, LabelPlacer placer) {
         int n = pts.size();
         s.stroke(Palette.CURRENT);
         s.fill(Palette.CURRENT);
@@ -187,6 +188,11 @@ final class ConductorPainter {
             s.lineTo(mx + dx * (half - head * 0.6), my + dy * (half - head * 0.6));
             s.strokePath();
             Glyphs.arrowHead(s, mx + dx * half, my + dy * half, dx, dy, head);
+            double reach = head / 2 + 1;
+            double x0 = mx - Math.abs(dx) * half;
+            double y0 = my - Math.abs(dy) * half;
+            placer.reserve(new LabelPlacer.Box(x0 - reach, y0 - reach, 2 * Math.abs(dx) * half + 2 * reach,
+                    2 * Math.abs(dy) * half + 2 * reach));
         }
     }
 

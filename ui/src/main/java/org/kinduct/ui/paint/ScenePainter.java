@@ -6,19 +6,13 @@ import org.kinduct.ui.view.NiceSteps;
 import org.kinduct.ui.view.ViewTransform;
 
 /**
- * Draws a whole {@link Frame} on a {@link Surface}: field colours, grid, contours, symbols,
- * sources, conductors, polarity and current overlays, value labels, legend and scale bar.
- * Stateless; the live view and every export call the same {@link #draw}.
+ * Draws a whole {@link Frame} on a {@link Surface}: the {@link FieldLayers} (colours, contours,
+ * symbols), grid, sources, conductors, polarity and current overlays, value and contour labels,
+ * legend and scale bar. Stateless; the live view and every export call the same {@link #draw}.
  */
 public final class ScenePainter {
 
     static final double FONT = 12;
-    private static final double SYMBOL_SPACING_PX = 42;
-    private static final double SYMBOL_MIN_FRACTION = 0.04;
-    private static final int MAX_CONTOUR_LEVELS_PER_SIDE = 5;
-    private static final double CONTOUR_CELL_PX = 4;
-    /** A contour label needs this much room from the lines of other levels. */
-    private static final double CONTOUR_CLEAR_PX = 16;
     /**
      * Axis and contour label size: 11 units print at 8.3 pt when an export page (600 units) is
      * placed 16 cm wide (1 pt = 0.3528 mm), the smallest size we allow in print.
@@ -26,20 +20,29 @@ public final class ScenePainter {
     static final double LABEL_FONT = 11;
     /** The "t = …" box in the top-left corner; axis labels keep out of it. */
     private static final LabelPlacer.Box HEADER = new LabelPlacer.Box(6, 6, 150, 20);
+    /** Contour labels per level at most. */
+    private static final int LABELS_PER_LEVEL = 2;
 
     private ScenePainter() {
     }
 
     public static void draw(Surface s, Frame f) {
+        draw(s, f, null);
+    }
+
+    /**
+     * Draws {@code f}, taking the field layers from {@code backdrop} when it shows the same ones
+     * (the live view renders it off the UI thread), else drawing them from the frame's map.
+     */
+    public static void draw(Surface s, Frame f, FieldBackdrop backdrop) {
         ViewTransform v = f.view();
         s.save();
         s.clipRect(0, 0, s.width(), s.height());
         s.fill(Palette.BACKGROUND);
         s.fillRect(0, 0, s.width(), s.height());
         double limit = f.range().limitFor(f.raster());
-        if (f.shows(Layer.HEAT_MAP) && f.raster() != null) {
-            heatMap(s, v, f.raster(), limit);
-        }
+        List<FieldLayers.ContourLabel> contourLabels = backdrop != null && backdrop.shows(f.layers())
+                ? backdrop.drawOn(s, v) : FieldLayers.draw(s, v, f.raster(), limit, f.layers());
         if (f.shows(Layer.GRID)) {
             grid(s, v);
         }
@@ -66,40 +69,18 @@ public final class ScenePainter {
         if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
             ConductorPainter.placeCallouts(s, v, f.scene(), f.snapshot(), placer, labels);
         }
-        if (f.raster() != null && (f.shows(Layer.CONTOURS) || f.shows(Layer.SYMBOLS))) {
-            if (f.shows(Layer.SYMBOLS)) {
-                symbols(s, v, f.raster(), limit);
-            }
-            if (f.shows(Layer.CONTOURS)) {
-                contours(s, v, f.raster(), limit, placer, labels);
-            }
-        }
+        contourLabels.forEach(c -> placeContourLabel(s, c, placer, labels));
         ConductorPainter.drawMarks(s, v, f.marks());
         labels.forEach(Runnable::run);
         if (f.shows(Layer.SCALE_BAR)) {
             scaleBar(s, v);
         }
         if (legendBox != null) {
-            legend(s, legendBox, limit, f.shows(Layer.CONTOURS) ? contourStep(limit) : 0, f.raster() != null);
+            legend(s, legendBox, limit, f.shows(Layer.CONTOURS) ? FieldLayers.contourStep(limit) : 0,
+                    f.raster() != null);
         }
         header(s, f);
         s.restore();
-    }
-
-    /** Contour spacing for a colour limit: a round value giving at most five levels per sign. */
-    public static double contourStep(double limit) {
-        return NiceSteps.atLeast(limit / MAX_CONTOUR_LEVELS_PER_SIDE);
-    }
-
-    private static void heatMap(Surface s, ViewTransform v, FieldRaster r, double limit) {
-        int[] argb = new int[r.cols() * r.rows()];
-        float[] bz = r.bzT();
-        for (int i = 0; i < argb.length; i++) {
-            argb[i] = DivergingScale.argb(bz[i], limit);
-        }
-        double x = v.screenX(r.minX());
-        double y = v.screenY(r.maxY());
-        s.image(argb, r.cols(), r.rows(), x, y, v.screenX(r.maxX()) - x, v.screenY(r.minY()) - y);
     }
 
     private static void grid(Surface s, ViewTransform v) {
@@ -147,73 +128,17 @@ public final class ScenePainter {
         }
     }
 
-    private static void symbols(Surface s, ViewTransform v, FieldRaster r, double limit) {
-        double r0 = 6;
-        for (double sy = SYMBOL_SPACING_PX / 2; sy < s.height(); sy += SYMBOL_SPACING_PX) {
-            for (double sx = SYMBOL_SPACING_PX / 2; sx < s.width(); sx += SYMBOL_SPACING_PX) {
-                double b = r.sample(v.sceneX(sx), v.sceneY(sy));
-                if (!(Math.abs(b) >= SYMBOL_MIN_FRACTION * limit)) {
-                    continue;
-                }
-                double size = r0 * (0.6 + 0.4 * Math.min(1, Math.abs(b) / limit));
-                Glyphs.fieldSymbol(s, sx, sy, size, b > 0, 0xB0202020);
-            }
-        }
-    }
-
-    private static void contours(Surface s, ViewTransform v, FieldRaster fine, double limit, LabelPlacer placer,
-                                 List<Runnable> labels) {
-        double step = contourStep(limit);
-        // Segments of about CONTOUR_CELL_PX keep the path short; the lines are for reading levels, not for numbers.
-        FieldRaster r = fine.decimated((int) Math.round(CONTOUR_CELL_PX / (fine.cellM() * v.pxPerM())));
-        s.dash();
-        List<List<double[]>> mids = new ArrayList<>();
-        List<String> texts = new ArrayList<>();
-        for (int k = -MAX_CONTOUR_LEVELS_PER_SIDE; k <= MAX_CONTOUR_LEVELS_PER_SIDE; k++) {
-            if (k == 0) {
-                continue;
-            }
-            double level = k * step;
-            List<double[]> segs = new ArrayList<>();
-            s.stroke(k > 0 ? 0xC0402000 : 0xC0001A40);
-            s.lineWidth(1);
-            s.beginPath();
-            Contours.lines(r, level, (xs, ys, n) -> {
-                s.moveTo(v.screenX(xs[0]), v.screenY(ys[0]));
-                for (int i = 1; i < n; i++) {
-                    double a = v.screenX(xs[i]);
-                    double b = v.screenY(ys[i]);
-                    s.lineTo(a, b);
-                    if (segs.size() < 4000) {
-                        segs.add(new double[] {(a + v.screenX(xs[i - 1])) / 2, (b + v.screenY(ys[i - 1])) / 2});
-                    }
-                }
-            });
-            s.strokePath();
-            mids.add(segs);
-            texts.add(Quantities.bz(level));
-        }
-        for (int i = 0; i < mids.size(); i++) {
-            labelContour(s, mids, i, texts.get(i), placer, labels);
-        }
-    }
-
-    /**
-     * Up to two labels for level {@code level}, where they collide with nothing already placed and
-     * no other level passes close by: where levels crowd (the edge of an ideal field patch, the rim
-     * of a magnet) a label could not say which line it names.
-     */
-    private static void labelContour(Surface s, List<List<double[]>> mids, int level, String text,
-                                     LabelPlacer placer, List<Runnable> labels) {
-        List<double[]> own = mids.get(level);
-        double w = s.textWidth(text, LABEL_FONT, false) + 4;
+    /** Up to {@value #LABELS_PER_LEVEL} labels of a contour level, on spots nothing placed so far covers. */
+    private static void placeContourLabel(Surface s, FieldLayers.ContourLabel label, LabelPlacer placer,
+                                          List<Runnable> labels) {
+        double w = s.textWidth(label.text(), LABEL_FONT, false) + 4;
         double h = LABEL_FONT + 3;
         int placed = 0;
-        for (int i = 0; i < own.size() && placed < 2; i += Math.max(1, own.size() / 7)) {
-            double[] m = own.get(i);
+        for (int i = 0; i < label.spots().size() && placed < LABELS_PER_LEVEL; i++) {
+            double[] m = label.spots().get(i);
             LabelPlacer.Box b = new LabelPlacer.Box(m[0] - w / 2, m[1] - h / 2, w, h);
-            if (b.x() < 0 || b.y() < 0 || b.x() + w > s.width() || b.y() + h > s.height() || !placer.isFree(b)
-                    || crowded(mids, level, m)) {
+            if (b.x() < 0 || b.y() < 0 || b.x() + w > s.width()
+                    || b.y() + h > s.height() || !placer.isFree(b)) {
                 continue;
             }
             placer.reserve(b);
@@ -222,27 +147,9 @@ public final class ScenePainter {
                 s.fill(0xD9FFFFFF);
                 s.fillRect(b.x(), b.y(), b.w(), b.h());
                 s.fill(Palette.INK);
-                s.text(text, b.centerX(), b.centerY(), LABEL_FONT, false, Surface.Anchor.CENTER);
+                s.text(label.text(), b.centerX(), b.centerY(), LABEL_FONT, false, Surface.Anchor.CENTER);
             });
         }
-    }
-
-    /** True when a line of another level passes within {@value #CONTOUR_CLEAR_PX} px of the point. */
-    private static boolean crowded(List<List<double[]>> mids, int level, double[] at) {
-        double r2 = CONTOUR_CLEAR_PX * CONTOUR_CLEAR_PX;
-        for (int j = 0; j < mids.size(); j++) {
-            if (j == level) {
-                continue;
-            }
-            for (double[] p : mids.get(j)) {
-                double dx = p[0] - at[0];
-                double dy = p[1] - at[1];
-                if (dx * dx + dy * dy < r2) {
-                    return true;
-                }
-            }
-        }
-        return false;
     }
 
     private static void scaleBar(Surface s, ViewTransform v) {

@@ -14,6 +14,8 @@ import javafx.stage.Stage;
 import javax.imageio.ImageIO;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
@@ -25,17 +27,17 @@ import org.kinduct.solver.Terminal;
 import org.kinduct.ui.edit.ShapeFactory;
 import org.kinduct.ui.paint.ColourRange;
 import org.kinduct.ui.paint.EditorMarks;
+import org.kinduct.ui.paint.FieldBackdrop;
 import org.kinduct.ui.paint.FieldRaster;
 import org.kinduct.ui.paint.Frame;
 import org.kinduct.ui.paint.Layer;
-import org.kinduct.ui.paint.ScenePainter;
 import org.kinduct.ui.view.ViewTransform;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /**
- * Renders a hand-made frame on a real JavaFX canvas and checks pixels: the heat map's sign
+ * Shows a hand-made frame on a real JavaFX canvas the way the editor does and checks pixels: the heat map's sign
  * colours and where the polarity discs and the induced-field symbol land.
  */
 @ExtendWith(ApplicationExtension.class)
@@ -67,11 +69,17 @@ class PainterPixelTest {
     }
 
     private static PixelReader render(Scene scene, Snapshot snap, String name) throws Exception {
-        Frame f = new Frame(scene, 0, snap, halves(), VIEW, EnumSet.of(Layer.HEAT_MAP, Layer.CONDUCTORS, Layer.LENZ),
-                ColourRange.automatic(), EditorMarks.none(), "");
+        return render(scene, snap, name, false);
+    }
+
+    /** Shows a frame the way the editor does, the field layers from a backdrop when asked. */
+    private static PixelReader render(Scene scene, Snapshot snap, String name, boolean backdrop) throws Exception {
+        EnumSet<Layer> layers = EnumSet.of(Layer.HEAT_MAP, Layer.CONDUCTORS, Layer.LENZ);
+        Frame f = new Frame(scene, 0, snap, halves(), VIEW, layers, ColourRange.automatic(), EditorMarks.none(), "");
+        FieldBackdrop drawn = backdrop ? FieldBackdrop.render(halves(), VIEW, 0.1, layers) : null;
         WritableImage img = WaitForAsyncUtils.asyncFx(() -> {
             Canvas c = new Canvas(W, H);
-            ScenePainter.draw(new FxSurface(c.getGraphicsContext2D(), W, H), f);
+            new CanvasFrames(c).show(f, drawn);
             return c.snapshot(null, null);
         }).get(20, TimeUnit.SECONDS);
         File out = new File("target/" + name + ".png");
@@ -96,9 +104,10 @@ class PainterPixelTest {
                 plus, 0, Circulation.NONE, Vec2.ZERO, Double.NaN, true);
     }
 
-    @Test
-    void heatMapIsWarmWhereFieldComesOutAndCoolWhereItGoesIn() throws Exception {
-        PixelReader px = render(Scene.empty("empty"), null, "pixel-heatmap");
+    @ParameterizedTest(name = "from a backdrop: {0}")
+    @ValueSource(booleans = {false, true})
+    void heatMapIsWarmWhereFieldComesOutAndCoolWhereItGoesIn(boolean backdrop) throws Exception {
+        PixelReader px = render(Scene.empty("empty"), null, "pixel-heatmap-" + backdrop, backdrop);
         int out = px.getArgb((int) VIEW.screenX(-0.15), (int) VIEW.screenY(0.1));
         int in = px.getArgb((int) VIEW.screenX(0.15), (int) VIEW.screenY(0.1));
         assertTrue(red(out) > blue(out) + 40, "B_z > 0 (out of the screen) is amber: " + Integer.toHexString(out));

@@ -1,4 +1,4 @@
-package org.kinduct.ui.export;
+package org.kinduct.ui.paint;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
@@ -10,16 +10,20 @@ import java.awt.geom.Ellipse2D;
 import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
+import java.awt.image.ColorModel;
+import java.awt.image.DataBufferInt;
+import java.awt.image.DirectColorModel;
+import java.awt.image.Raster;
+import java.awt.image.WritableRaster;
 import java.util.ArrayDeque;
 import java.util.Deque;
-import org.kinduct.ui.paint.Surface;
 
 /**
  * {@link Surface} on a Java2D {@link Graphics2D}, e.g. of a {@link BufferedImage} for PNG export.
  * Needs no display. Strokes use square caps and mitred joins like the JavaFX canvas, so the
  * export matches the screen.
  */
-final class Java2dSurface implements Surface {
+public final class Java2dSurface implements Surface {
 
     private static final float MITER_LIMIT = 10;
 
@@ -31,7 +35,7 @@ final class Java2dSurface implements Surface {
     private Path2D.Double path = new Path2D.Double();
 
     /** Draws on {@code g} (whose transform may scale) in a {@code width × height} box of its user space. */
-    Java2dSurface(Graphics2D g, double width, double height) {
+    public Java2dSurface(Graphics2D g, double width, double height) {
         this.g = g;
         this.width = width;
         this.height = height;
@@ -187,12 +191,18 @@ final class Java2dSurface implements Surface {
 
     @Override
     public void image(int[] argb, int cols, int rows, double x, double y, double w, double h) {
-        BufferedImage img = new BufferedImage(cols, rows, BufferedImage.TYPE_INT_ARGB);
-        img.setRGB(0, 0, cols, rows, argb, 0, cols);
         AffineTransform at = new AffineTransform();
         at.translate(x, y);
         at.scale(w / cols, h / rows);
-        g.drawImage(img, at, null);
+        g.drawImage(wrap(argb, cols, rows), at, null);
+    }
+
+    /** An image over the caller's pixels, without copying them. */
+    private static BufferedImage wrap(int[] argb, int cols, int rows) {
+        DirectColorModel model = (DirectColorModel) ColorModel.getRGBdefault();
+        WritableRaster raster = Raster.createPackedRaster(new DataBufferInt(argb, argb.length), cols, rows, cols,
+                model.getMasks(), null);
+        return new BufferedImage(model, raster, false, null);
     }
 
     private void draw(Shape shape) {

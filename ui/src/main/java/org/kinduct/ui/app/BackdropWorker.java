@@ -1,0 +1,52 @@
+package org.kinduct.ui.app;
+
+import java.util.Set;
+import java.util.concurrent.Executor;
+import java.util.concurrent.Executors;
+import java.util.function.Consumer;
+import org.kinduct.ui.field.LatestOnly;
+import org.kinduct.ui.paint.FieldBackdrop;
+import org.kinduct.ui.paint.FieldRaster;
+import org.kinduct.ui.paint.Layer;
+import org.kinduct.ui.view.ViewTransform;
+
+/**
+ * Renders {@link FieldBackdrop}s on a thread of its own, newest request only, so the UI thread
+ * only copies a finished image per frame.
+ */
+final class BackdropWorker {
+
+    private static final Executor THREAD = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "kinduct-backdrop");
+        t.setDaemon(true);
+        return t;
+    });
+
+    private final LatestOnly jobs = new LatestOnly(THREAD);
+    private final Executor deliverOn;
+    private final Consumer<FieldBackdrop> deliver;
+
+    /**
+     * @param deliver receives each backdrop through {@code deliverOn}, or null when rendering failed
+     *        (the painter then draws the field layers itself and meets the same error where it is shown)
+     */
+    BackdropWorker(Executor deliverOn, Consumer<FieldBackdrop> deliver) {
+        this.deliverOn = deliverOn;
+        this.deliver = deliver;
+    }
+
+    /** Asks for the backdrop of {@code raster} in {@code view}; replaces any request still waiting. */
+    void request(FieldRaster raster, ViewTransform view, double limit, Set<Layer> layers) {
+        Set<Layer> shown = Set.copyOf(layers);
+        jobs.submit(() -> {
+            FieldBackdrop b;
+            try {
+                b = FieldBackdrop.render(raster, view, limit, shown);
+            } catch (RuntimeException e) {
+                b = null;
+            }
+            FieldBackdrop done = b;
+            deliverOn.execute(() -> deliver.accept(done));
+        });
+    }
+}
