@@ -8,6 +8,8 @@ import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
+import org.hipparchus.ode.sampling.ODEStateInterpolator;
+import org.hipparchus.ode.sampling.ODEStepHandler;
 import org.hipparchus.ode.sampling.StepNormalizer;
 import org.hipparchus.ode.sampling.StepNormalizerBounds;
 import org.hipparchus.ode.sampling.StepNormalizerMode;
@@ -32,6 +34,8 @@ import org.kinduct.solver.Snapshot;
  * coupled circuit equations) and the self-inductance of every closed loop; and
  * {@link Trajectory#audit()}, the {@link EnergyAudit} of the whole run. Bad input (a loop whose
  * wires overlap, sides shorter than four wire radii) throws {@link IllegalArgumentException}.
+ * A {@link RunMonitor} passed to {@link #simulate(Scene, double, double, double, RunMonitor)}
+ * follows a long run's progress and can stop it ({@link SimulationCancelledException}).
  *
  * <p><b>Circuits.</b> Every closed loop k carries a current I_k obeying Faraday's law with its
  * own and mutual inductances: d/dt(Σ_j M_kj(q)·I_j + λ_ext,k) + R_k·I_k = 0, where λ_ext,k is its
@@ -118,12 +122,24 @@ public final class CoupledSimulation {
      * on that grid); the energy audit covers the whole of [t0, t1].
      */
     public Trajectory simulate(Scene scene, double t0S, double t1S, double dtS) {
+        return simulate(scene, t0S, t1S, dtS, RunMonitor.NONE);
+    }
+
+    /**
+     * As {@link #simulate(Scene, double, double, double)}, reporting its progress to {@code monitor}
+     * and stopping when it asks: the run then throws {@link SimulationCancelledException} before
+     * the next evaluation of the equations, so at most one integrator step is begun after the
+     * request. The monitor changes no number of the result.
+     */
+    public Trajectory simulate(Scene scene, double t0S, double t1S, double dtS, RunMonitor monitor) {
         Checks.nonNull(scene, "scene");
         Checks.finite(t0S, "t0");
         Checks.positive(dtS, "dt");
+        Checks.nonNull(monitor, "monitor");
         if (!(t1S > t0S)) {
             throw new IllegalArgumentException("t1 must be after t0, got t0 = " + t0S + " s, t1 = " + t1S + " s");
         }
+        stopIfCancelled(monitor, t0S, t0S, t1S);
         double hS = DIFFERENCE_STEP_FRACTION * dtS;
         CoupledModel model = new CoupledModel(scene, hS, circuitModel, dtS);
         double[] y0 = model.initialState(t0S);
@@ -135,31 +151,45 @@ public final class CoupledSimulation {
 
             @Override
             public double[] computeDerivatives(double t, double[] y) {
+                stopIfCancelled(monitor, t, t0S, t1S);
                 return model.evaluate(t, y).derivative;
             }
         };
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-12 * (t1S - t0S), dtS,
                 absoluteTolerances(model, y0, t0S, t1S), relativeTolerances(model));
-        List<double[]> states = new ArrayList<>();
-        List<Double> times = new ArrayList<>();
+        List<Sample> samples = new ArrayList<>();
+        // Samples are made as the grid points are passed, so the progress counts their cost too.
         // BOTH adds t1 itself; it is kept only when it is on the grid and not a rounding twin of the last grid point.
         integrator.addStepHandler(new StepNormalizer(dtS, (ODEStateAndDerivative s, boolean isLast) -> {
             double t = s.getTime();
             double offGrid = Math.abs((t - t0S) / dtS - Math.rint((t - t0S) / dtS));
-            boolean twin = !times.isEmpty() && t - times.get(times.size() - 1) < GRID_SLACK * dtS;
+            boolean twin = !samples.isEmpty() && t - samples.get(samples.size() - 1).tS() < GRID_SLACK * dtS;
             if (offGrid < GRID_SLACK && !twin) {
-                times.add(t);
-                states.add(s.getPrimaryState().clone());
+                samples.add(sample(model, t, s.getPrimaryState()));
             }
         }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.BOTH));
-        ODEStateAndDerivative last = integrator.integrate(equations, new ODEState(t0S, y0), t1S);
+        // Added after the normalizer, so a step's samples are made before its progress is reported.
+        integrator.addStepHandler(new ODEStepHandler() {
+            @Override
+            public void handleStep(ODEStateInterpolator step) {
+                double fraction = (step.getCurrentState().getTime() - t0S) / (t1S - t0S);
+                monitor.progress(Math.min(fraction, 1));
+            }
 
-        List<Sample> samples = new ArrayList<>(states.size());
-        for (int i = 0; i < states.size(); i++) {
-            samples.add(sample(model, times.get(i), states.get(i)));
-        }
+            @Override
+            public void finish(ODEStateAndDerivative end) {
+                monitor.progress(1);
+            }
+        });
+        ODEStateAndDerivative last = integrator.integrate(equations, new ODEState(t0S, y0), t1S);
         return new Trajectory(samples, audit(model, t0S, y0, last.getTime(), last.getPrimaryState()),
                 model.circuitModel());
+    }
+
+    private static void stopIfCancelled(RunMonitor monitor, double tS, double t0S, double t1S) {
+        if (monitor.cancelled()) {
+            throw new SimulationCancelledException(tS, t0S, t1S);
+        }
     }
 
     private static EnergyAudit audit(CoupledModel model, double t0S, double[] y0, double t1S, double[] y1) {

@@ -342,6 +342,7 @@ final class EditorWindow {
         simulating.setTooltip(new Tooltip("Simulating the free bodies; the last result is shown meanwhile"));
         simulating.visibleProperty().bind(vm.simulatingProperty());
         simulating.managedProperty().bind(vm.simulatingProperty());
+        simulating.progressProperty().bind(vm.simulationProgressProperty());
         HBox bar = new HBox(8, play, back, fwd, reset, new Label("speed ×"), speed, scrubber, simulating, time);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(4, 8, 4, 8));

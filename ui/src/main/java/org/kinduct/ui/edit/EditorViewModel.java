@@ -3,17 +3,21 @@ package org.kinduct.ui.edit;
 import java.nio.file.Path;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Executor;
 import java.util.function.Function;
+import java.util.function.LongSupplier;
 import java.util.function.UnaryOperator;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.DoubleProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
+import javafx.beans.property.ReadOnlyDoubleProperty;
+import javafx.beans.property.ReadOnlyDoubleWrapper;
 import javafx.beans.property.ReadOnlyLongProperty;
 import javafx.beans.property.ReadOnlyLongWrapper;
 import javafx.beans.property.ReadOnlyObjectProperty;
@@ -30,6 +34,7 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.EnergyAudit;
+import org.kinduct.solver.dynamics.SimulationCancelledException;
 import org.kinduct.ui.field.FieldMapper;
 import org.kinduct.ui.field.LatestOnly;
 import org.kinduct.ui.field.MapRequest;
@@ -44,11 +49,17 @@ import org.kinduct.ui.view.ViewTransform;
  * The editor's state and the only code that touches the scene and the solver: the current scene
  * with undo history, the selection, the time, the solved snapshot, the field map and time series.
  * Uses JavaFX observable properties but needs no running toolkit (tests drive it directly).
+ *
+ * <p>Work runs on the {@code work} executor and its results arrive through the {@code ui} one,
+ * tagged with the scene revision they belong to; results of an outdated revision are dropped. The
+ * simulation of free bodies reports its progress to the status line and is stopped as soon as a
+ * newer revision (an edit, undo, redo or another scene) appears, so its worker is free at once.
  */
 public final class EditorViewModel {
 
     /** Samples in a time plot. */
     public static final int SERIES_SAMPLES = 241;
+    private static final String SIMULATING = "Simulating the free bodies…";
     private static final int UNDO_LIMIT = 200;
     /**
      * While playing, a coarse field map at most this often (seconds of wall-clock time): maps share
@@ -69,6 +80,7 @@ public final class EditorViewModel {
 
     private final Function<Scene, SceneEvaluator> evaluators;
     private final Executor ui;
+    private final LongSupplier clockNs;
     private final UndoHistory history;
     private final FieldMapper mapper;
     private final LatestOnly snapshotJobs;
@@ -82,6 +94,7 @@ public final class EditorViewModel {
     private final ReadOnlyObjectWrapper<Map<String, Pose>> poses = new ReadOnlyObjectWrapper<>(Map.of());
     private final ReadOnlyObjectWrapper<Optional<EnergyAudit>> audit = new ReadOnlyObjectWrapper<>(Optional.empty());
     private final ReadOnlyBooleanWrapper simulating = new ReadOnlyBooleanWrapper();
+    private final ReadOnlyDoubleWrapper simulationProgress = new ReadOnlyDoubleWrapper(-1);
     private final ReadOnlyObjectWrapper<List<Map<String, Pose>>> poseSeries = new ReadOnlyObjectWrapper<>(List.of());
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
     private final ReadOnlyBooleanWrapper dirty = new ReadOnlyBooleanWrapper();
@@ -103,15 +116,28 @@ public final class EditorViewModel {
     private long evaluatorRevision = -1;
     private long seriesRevision = -1;
     private double sincePlaybackMap = Double.POSITIVE_INFINITY;
+    /** Watches the current revision's simulation; outdated (and so stopped) by the next revision. */
+    private RunWatch watch;
 
     public EditorViewModel(Scene initial, Function<Scene, SceneEvaluator> evaluators, Executor work, Executor ui) {
+        this(initial, evaluators, work, ui, System::nanoTime);
+    }
+
+    /** @param clockNs monotonic clock, nanoseconds, for the simulation's progress reports and duration */
+    EditorViewModel(Scene initial, Function<Scene, SceneEvaluator> evaluators, Executor work, Executor ui,
+                    LongSupplier clockNs) {
         this.evaluators = evaluators;
         this.ui = ui;
+        this.clockNs = clockNs;
         this.history = new UndoHistory(initial, UNDO_LIMIT);
         this.snapshotJobs = new LatestOnly(work);
         this.seriesJobs = new LatestOnly(work);
-        this.mapper = new FieldMapper(evaluators, work, ui, this::acceptRaster,
-                e -> status.set("Field map failed: " + e.getMessage()));
+        // A stopped simulation only ever belongs to an outdated revision: nothing to report.
+        this.mapper = new FieldMapper(evaluators, work, ui, this::acceptRaster, e -> {
+            if (!(e instanceof SimulationCancelledException)) {
+                status.set("Field map failed: " + e.getMessage());
+            }
+        });
         time.addListener((obs, old, t) -> solveNow());
         playing.addListener((obs, was, now) -> {
             if (!now) {
@@ -185,16 +211,22 @@ public final class EditorViewModel {
     }
 
     private void show(Scene s) {
+        if (watch != null) {
+            watch.outdate();
+        }
         selection.removeIf(id -> s.source(id).isEmpty() && s.conductor(id).isEmpty());
         scene.set(s);
         revision.set(revision.get() + 1);
+        long rev = revision.get();
+        watch = new RunWatch(clockNs, percent -> ui.execute(() -> showProgress(rev, percent)));
         updateFlags();
         double t = clampTime(time.get());
         if (t != time.get()) {
             time.set(t);
         }
-        solveNow();
+        // The series first: it says that a simulation is under way before any job can report on it.
         requestSeries();
+        solveNow();
         requestField(MapQuality.FINE);
     }
 
@@ -249,6 +281,7 @@ public final class EditorViewModel {
     private SceneEvaluator evaluator() {
         if (evaluator == null || evaluatorRevision != revision.get()) {
             evaluator = evaluators.apply(scene.get());
+            evaluator.monitor(watch);
             evaluatorRevision = revision.get();
         }
         return evaluator;
@@ -332,6 +365,7 @@ public final class EditorViewModel {
         try {
             ev = evaluator();
         } catch (RuntimeException e) {
+            simulating.set(false);
             status.set("Solver: " + describe(e));
             return;
         }
@@ -340,19 +374,20 @@ public final class EditorViewModel {
         // A simulated scene keeps showing the last good run until the new one is done.
         boolean simulated = TrajectoryEvaluator.needsSimulation(s);
         simulating.set(simulated);
+        simulationProgress.set(-1);
         if (simulated) {
-            status.set("Simulating the free bodies…");
+            status.set(SIMULATING);
         } else {
             audit.set(Optional.empty());
         }
         seriesJobs.submit(() -> {
             try {
-                long started = System.nanoTime();
+                long started = clockNs.getAsLong();
                 List<Snapshot> result = ev.series(span.t0S(), span.t1S(), dt);
                 Optional<EnergyAudit> energy = ev.audit();
                 List<Map<String, Pose>> placed = simulated
                         ? result.stream().map(sn -> ev.posesAt(sn.tS())).toList() : List.of();
-                double seconds = (System.nanoTime() - started) * 1e-9;
+                double seconds = (clockNs.getAsLong() - started) * 1e-9;
                 ui.execute(() -> {
                     if (revision.get() == rev) {
                         series.set(result);
@@ -361,19 +396,28 @@ public final class EditorViewModel {
                         audit.set(energy);
                         if (simulated) {
                             simulating.set(false);
-                            status.set(String.format(java.util.Locale.ROOT, "Free bodies simulated (%.1f s)", seconds));
+                            status.set(String.format(Locale.ROOT, "Free bodies simulated (%.1f s)", seconds));
                         }
                     }
                 });
             } catch (RuntimeException e) {
+                // Failures of an outdated revision, a stopped simulation among them, are not news.
                 ui.execute(() -> {
                     if (revision.get() == rev) {
                         simulating.set(false);
+                        status.set((simulated ? "Simulation: " : "Time series: ") + describe(e));
                     }
-                    status.set((simulated ? "Simulation: " : "Time series: ") + describe(e));
                 });
             }
         });
+    }
+
+    /** Shows a progress report of revision {@code rev}'s simulation while that revision is current. */
+    private void showProgress(long rev, int percent) {
+        if (revision.get() == rev && simulating.get()) {
+            simulationProgress.set(percent / 100.0);
+            status.set(String.format(Locale.ROOT, "%s %d %%", SIMULATING, percent));
+        }
     }
 
     /** Asks for a field map of the current view at the current time. */
@@ -452,6 +496,11 @@ public final class EditorViewModel {
     /** True while a simulation of the current scene is running (the last good result is shown meanwhile). */
     public ReadOnlyBooleanProperty simulatingProperty() {
         return simulating.getReadOnlyProperty();
+    }
+
+    /** Fraction of the current revision's simulation done, −1 until its first report (as a progress indicator takes it). */
+    public ReadOnlyDoubleProperty simulationProgressProperty() {
+        return simulationProgress.getReadOnlyProperty();
     }
 
     public ReadOnlyObjectProperty<FieldRaster> rasterProperty() {

@@ -4,8 +4,9 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.kinduct.scene.Pose;
-import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.dynamics.EnergyAudit;
+import org.kinduct.solver.dynamics.RunMonitor;
 
 /** What the editor asks of the solver for one scene. */
 public interface SceneEvaluator {
@@ -27,6 +28,16 @@ public interface SceneEvaluator {
     /** Where the energy of the simulated run went, for scenes whose motion is simulated. */
     default Optional<EnergyAudit> audit() {
         return Optional.empty();
+    }
+
+    /**
+     * Long work of this evaluator (the simulation of free bodies) reports its progress to
+     * {@code monitor} and stops when it asks, also when it is already under way; replaces the
+     * previous monitor. Callers waiting for stopped work get
+     * {@link org.kinduct.solver.dynamics.SimulationCancelledException}; a later call starts it
+     * anew. Evaluators without long work ignore it.
+     */
+    default void monitor(RunMonitor monitor) {
     }
 
     /** B_z at a point of the plane, tesla; implementations must allow calls from several threads. */

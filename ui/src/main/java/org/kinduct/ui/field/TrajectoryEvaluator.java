@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Motion;
@@ -15,15 +16,16 @@ import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.CoupledSimulation;
 import org.kinduct.solver.dynamics.EnergyAudit;
+import org.kinduct.solver.dynamics.RunMonitor;
 import org.kinduct.solver.dynamics.Sample;
 import org.kinduct.solver.dynamics.Trajectory;
 
 /**
  * The editor's numbers for a scene with free bodies: one {@link CoupledSimulation} run over the
  * scene's time window, made by the first thread that asks (never the UI thread: the view model
- * asks from its workers) and shared by every later question. Conductor states are those of the
- * nearest sample; poses between samples are cubic Hermite interpolated from the sampled positions
- * and velocities (Foley &amp; van Dam, <i>Computer Graphics</i>, 2nd ed., 1990, §11.2), so the
+ * asks from its workers) and shared by every later question; the attached {@link RunMonitor}
+ * follows its progress and can stop it. Conductor states are those of the nearest sample; poses
+ * between samples are cubic Hermite interpolated from the sampled positions and velocities (Foley &amp; van Dam, <i>Computer Graphics</i>, 2nd ed., 1990, §11.2), so the
  * animation is smooth and exact at the samples. The field map places sources by the same poses.
  */
 public final class TrajectoryEvaluator implements SceneEvaluator {
@@ -32,6 +34,19 @@ public final class TrajectoryEvaluator implements SceneEvaluator {
     static final int MAX_SAMPLES = 2000;
 
     private final Scene scene;
+    private volatile RunMonitor monitor = RunMonitor.NONE;
+    /** Asks whichever monitor is attached at the moment, so a run in progress follows a change of monitor. */
+    private final RunMonitor attached = new RunMonitor() {
+        @Override
+        public void progress(double fractionDone) {
+            monitor.progress(fractionDone);
+        }
+
+        @Override
+        public boolean cancelled() {
+            return monitor.cancelled();
+        }
+    };
     private Trajectory trajectory;
     private SceneSolver placed;
 
@@ -53,15 +68,23 @@ public final class TrajectoryEvaluator implements SceneEvaluator {
         return Math.max(span.dtS(), (span.t1S() - span.t0S()) / MAX_SAMPLES);
     }
 
+    @Override
+    public void monitor(RunMonitor monitor) {
+        this.monitor = Objects.requireNonNull(monitor);
+    }
+
     /**
-     * The simulated run, computed on first use; throws what the simulation throws. It runs half a
-     * step past t1 so the last sample is not lost to rounding of the sample grid.
+     * The simulated run, computed on first use; throws what the simulation throws, and
+     * {@link org.kinduct.solver.dynamics.SimulationCancelledException} when the monitor stopped it
+     * (the next call starts it again). It runs half a step past t1 so the last sample is not lost
+     * to rounding of the sample grid.
      */
     public synchronized Trajectory trajectory() {
         if (trajectory == null) {
             TimeSpan span = scene.time();
             double step = stepS(span);
-            trajectory = CoupledSimulation.run(scene, span.t0S(), span.t1S() + step / 2, step);
+            trajectory = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE)
+                    .simulate(scene, span.t0S(), span.t1S() + step / 2, step, attached);
             Map<String, Body> bodies = scene.bodiesById();
             placed = new SceneSolver(scene, (bodyId, tS) -> bodies.get(bodyId).motion() instanceof Motion.Free
                     ? pose(bodyId, tS) : bodies.get(bodyId).poseAt(tS));

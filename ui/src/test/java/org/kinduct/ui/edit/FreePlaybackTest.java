@@ -9,14 +9,9 @@ import java.util.List;
 import java.util.SplittableRandom;
 import java.util.concurrent.Executor;
 import org.junit.jupiter.api.Test;
-import org.kinduct.scene.Body;
-import org.kinduct.scene.Conductor;
-import org.kinduct.scene.Motion;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
-import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
-import org.kinduct.scene.Vec2;
 import org.kinduct.solver.dynamics.CoupledSimulation;
 import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.dynamics.Sample;
@@ -28,30 +23,13 @@ import org.kinduct.ui.field.TrajectoryEvaluator;
 class FreePlaybackTest {
 
     private static final Executor SAME_THREAD = Runnable::run;
-    private static final double MASS_KG = 0.02;
-    private static final double STIFFNESS_N_PER_M = 2;
-    private static final double V0_M_PER_S = 0.1;
+    private static final double MASS_KG = Fixtures.CART_MASS_KG;
+    private static final double STIFFNESS_N_PER_M = Fixtures.CART_SPRING_N_PER_M;
+    private static final double V0_M_PER_S = Fixtures.CART_V0_M_PER_S;
     /** Positions from the integrator are good to about 1e-9 m (CoupledSimulation javadoc); allow for the sampling. */
     private static final double POSITION_TOL_M = 1e-7;
     private static final double CURRENT_REL_TOL = 1e-9;
     private static final long SEED = 20261202L;
-
-    /** A magnet on a cart held by a spring along x (anchor 100 mm to the left, rest length 100 mm). */
-    private static Scene oscillator(boolean withLoop) {
-        Motion.Free free = new Motion.Free(MASS_KG, 0, new Vec2(V0_M_PER_S, 0), 0, 0, Vec2.ZERO, Vec2.ZERO, 0,
-                List.of(new Motion.Free.Spring(new Vec2(0, 0), null, STIFFNESS_N_PER_M, 0.1)));
-        Source.BlockMagnet magnet = new Source.BlockMagnet("magnet", "cart", new Vec2(0.1, 0), 0.01, 0.02, 0.005,
-                0, 0.001, Source.Side.BELOW, 1.2, Source.Magnetization.PLUS_Z);
-        Scene s = Scene.empty("spring cart").withBodies(List.of(new Body("cart", "cart", new Vec2(0.1, 0), free)))
-                .withSources(List.of(magnet)).withTime(new TimeSpan(0, 0.5, 0.002));
-        if (withLoop) {
-            // 100 turns, no load: L/R of about a millisecond, so the run takes seconds, not minutes.
-            Conductor.Loop one = (Conductor.Loop) Fixtures.loopAndMagnet().conductors().get(0);
-            s = s.withConductors(List.of(new Conductor.Loop(one.id(), one.body(), one.vertices(), 100, one.wire(),
-                    false, 0, one.temperatureC())));
-        }
-        return s;
-    }
 
     private static EditorViewModel vm(Scene s) {
         return new EditorViewModel(s, Evaluators.solver(), SAME_THREAD, SAME_THREAD);
@@ -59,7 +37,7 @@ class FreePlaybackTest {
 
     @Test
     void aSpringHeldCartPlaysTheHarmonicMotionOfItsMassAndStiffness() {
-        EditorViewModel vm = vm(oscillator(false));
+        EditorViewModel vm = vm(Fixtures.springCart(false));
         double omega = Math.sqrt(STIFFNESS_N_PER_M / MASS_KG);
         SplittableRandom random = new SplittableRandom(SEED);
         for (int i = 0; i < 20; i++) {
@@ -79,7 +57,7 @@ class FreePlaybackTest {
 
     @Test
     void posesBetweenSamplesFollowTheSameMotion() {
-        Scene s = oscillator(false);
+        Scene s = Fixtures.springCart(false);
         TrajectoryEvaluator ev = new TrajectoryEvaluator(s);
         double omega = Math.sqrt(STIFFNESS_N_PER_M / MASS_KG);
         SplittableRandom random = new SplittableRandom(SEED + 1);
@@ -93,7 +71,7 @@ class FreePlaybackTest {
 
     @Test
     void playbackWithAnInductiveLoopShowsTheCoupledRunAndItsEnergyAudit() {
-        Scene s = oscillator(true);
+        Scene s = Fixtures.springCart(true);
         EditorViewModel vm = vm(s);
         TimeSpan span = s.time();
         double step = TrajectoryEvaluator.stepS(span);
