@@ -2,9 +2,11 @@ package org.kinduct.solver;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 
 /**
@@ -103,6 +105,21 @@ public final class SceneSolver {
     public SceneField fieldAt(double tS) {
         Checks.finite(tS, "time");
         return index.frame(kinematics, tS).all();
+    }
+
+    /**
+     * The summed field of the sources named in {@code sourceIds} at {@code tS} (ids the scene does
+     * not have are ignored): a map can compute still and moving sources apart, and by
+     * superposition the parts add up to {@link #fieldAt}.
+     */
+    public SceneField fieldOf(double tS, Set<String> sourceIds) {
+        Checks.finite(tS, "time");
+        List<Source> sources = index.scene().sources();
+        boolean[] chosen = new boolean[sources.size()];
+        for (int s = 0; s < chosen.length; s++) {
+            chosen[s] = sourceIds.contains(sources.get(s).id());
+        }
+        return index.frame(kinematics, tS).only(chosen);
     }
 
     /** Where {@code conductor}'s vertices are at {@code tS}, each moved by the body it rides. */

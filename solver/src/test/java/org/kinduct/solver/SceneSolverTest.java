@@ -2,10 +2,12 @@ package org.kinduct.solver;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.kinduct.solver.TestScenes.points;
 import static org.kinduct.solver.TestScenes.scene;
 
 import java.util.List;
+import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
@@ -131,5 +133,28 @@ class SceneSolverTest {
         assertEquals(B + 50e-6, field.bz(0.5, 0.5), 1e-15);
         assertEquals(50e-6, field.bz(2, 0.5), 1e-15);
         assertEquals(2, field.size());
+    }
+
+    /** Superposition (Griffiths, Introduction to Electrodynamics, 4th ed., 2013, §5.3): the parts add up to the whole. */
+    @Test
+    void fieldsOfDisjointSourceSetsAddUpToTheWholeField() {
+        Scene scene = scene(List.of(new Body("cart", "cart", Vec2.ZERO, new Motion.Glide(new Vec2(SPEED, 0)))),
+                List.of(TestScenes.rectanglePatch("field", Body.FIXED, 0, 0, 1, 1, B),
+                        new Source.UniformField("earth", 50e-6),
+                        new Source.CylinderMagnet("disc", "cart", new Vec2(0.2, 0.3), 0.01, 0.005, 0.002,
+                                Source.Side.BELOW, 1.2, Source.Magnetization.PLUS_Z)), List.of());
+        SceneSolver solver = new SceneSolver(scene);
+        double t = 0.01;
+        SceneField still = solver.fieldOf(t, Set.of("field", "earth"));
+        SceneField moving = solver.fieldOf(t, Set.of("disc", "not-in-scene"));
+        SceneField whole = solver.fieldAt(t);
+        assertEquals(2, still.size());
+        assertEquals(1, moving.size());
+        for (double[] p : new double[][] {{0.5, 0.5}, {2, 0.5}, {0.2 + SPEED * t, 0.3}, {0.21 + SPEED * t, 0.305}}) {
+            double sum = still.bz(p[0], p[1]) + moving.bz(p[0], p[1]);
+            assertEquals(whole.bz(p[0], p[1]), sum, 1e-12 * Math.max(1, Math.abs(sum)), "at " + p[0] + ", " + p[1]);
+        }
+        // The magnet rides the cart: its own field is strongest over its placed centre.
+        assertTrue(moving.bz(0.2 + SPEED * t, 0.3) > moving.bz(0.2, 0.3));
     }
 }

@@ -2,8 +2,10 @@ package org.kinduct.ui.field;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Objects;
+import java.util.Set;
 import java.util.concurrent.Executor;
 import java.util.function.Consumer;
 import java.util.function.Function;
@@ -12,6 +14,7 @@ import org.kinduct.scene.Body;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
+import org.kinduct.solver.dynamics.SimulationCancelledException;
 import org.kinduct.ui.paint.FieldRaster;
 
 /**
@@ -52,6 +55,8 @@ public final class FieldMapper {
             try {
                 FieldRaster raster = compute(r);
                 deliverOn.execute(() -> deliver.accept(raster));
+            } catch (SimulationCancelledException e) {
+                // An edit outdated the run this map waited for; the new revision asks for its own map.
             } catch (RuntimeException e) {
                 deliverOn.execute(() -> failure.accept(e));
             }
@@ -70,25 +75,36 @@ public final class FieldMapper {
         double minX = Math.floor(r.view().minX() / cell) * cell;
         double maxY = Math.ceil(r.view().maxY() / cell) * cell;
         Grid grid = new Grid(minX, maxY, cell, cols, rows);
-        Scene moving = part(r.scene(), false);
-        Scene fixed = part(r.scene(), true);
-        float[] values = staticValues(fixed, grid).clone();
-        if (!moving.sources().isEmpty()) {
-            add(values, evaluators.apply(moving).fieldAt(r.tS()), grid);
+        // One evaluator for the whole scene, so a free magnet is mapped where the coupled run has it.
+        SceneEvaluator evaluator = evaluators.apply(r.scene());
+        List<Source> still = new ArrayList<>();
+        Set<String> moving = new HashSet<>();
+        for (Source s : r.scene().sources()) {
+            if (isStatic(r.scene(), s)) {
+                still.add(s);
+            } else {
+                moving.add(s.id());
+            }
+        }
+        float[] values = staticValues(evaluator, r.scene().bodies(), still, grid).clone();
+        if (!moving.isEmpty()) {
+            add(values, evaluator.fieldOf(r.tS(), moving), grid);
         }
         return new FieldRaster(minX, maxY, cell, cols, rows, values, autoLimit(values), r.revision(), r.tS());
     }
 
-    private float[] staticValues(Scene fixed, Grid grid) {
+    private float[] staticValues(SceneEvaluator evaluator, List<Body> bodies, List<Source> still, Grid grid) {
         StaticCache c = cache;
-        if (c != null && c.sources.equals(fixed.sources()) && c.grid.equals(grid)) {
+        if (c != null && c.bodies.equals(bodies) && c.sources.equals(still) && c.grid.equals(grid)) {
             return c.values;
         }
         float[] values = new float[grid.cols * grid.rows];
-        if (!fixed.sources().isEmpty()) {
-            add(values, evaluators.apply(fixed).fieldAt(0), grid);
+        if (!still.isEmpty()) {
+            Set<String> ids = new HashSet<>();
+            still.forEach(s -> ids.add(s.id()));
+            add(values, evaluator.fieldOf(0, ids), grid);
         }
-        cache = new StaticCache(fixed.sources(), grid, values);
+        cache = new StaticCache(bodies, still, grid, values);
         return values;
     }
 
@@ -100,17 +116,6 @@ public final class FieldMapper {
                 values[base + col] += (float) field.bz(g.minX + (col + 0.5) * g.cell, y);
             }
         });
-    }
-
-    /** The sources that never change (still body, constant drive) when {@code fixed}, else the others. */
-    static Scene part(Scene scene, boolean fixed) {
-        List<Source> kept = new ArrayList<>();
-        for (Source s : scene.sources()) {
-            if (isStatic(scene, s) == fixed) {
-                kept.add(s);
-            }
-        }
-        return scene.withSources(kept).withConductors(List.of());
     }
 
     private static boolean isStatic(Scene scene, Source s) {
@@ -143,6 +148,7 @@ public final class FieldMapper {
     private record Grid(double minX, double maxY, double cell, int cols, int rows) {
     }
 
-    private record StaticCache(List<Source> sources, Grid grid, float[] values) {
+    /** Still sources' values on a grid; the bodies place them, so they are part of the key. */
+    private record StaticCache(List<Body> bodies, List<Source> sources, Grid grid, float[] values) {
     }
 }

@@ -3,6 +3,7 @@ package org.kinduct.ui.field;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import org.kinduct.scene.Pose;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.EnergyAudit;
@@ -19,6 +20,13 @@ public interface SceneEvaluator {
 
     /** The total B_z in the drawing plane at {@code tS}. */
     BzField fieldAt(double tS);
+
+    /**
+     * B_z of the sources named in {@code sourceIds} only, placed as in {@link #fieldAt}: the field
+     * map computes still and moving sources apart. Sources on bodies that move as prescribed or
+     * not at all are placed without waiting for a simulation.
+     */
+    BzField fieldOf(double tS, Set<String> sourceIds);
 
     /** Poses of the bodies that are not placed by their prescribed motion (free bodies) at {@code tS}; empty if none. */
     default Map<String, Pose> posesAt(double tS) {

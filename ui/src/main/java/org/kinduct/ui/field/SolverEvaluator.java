@@ -1,6 +1,7 @@
 package org.kinduct.ui.field;
 
 import java.util.List;
+import java.util.Set;
 import org.kinduct.scene.Scene;
 import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
@@ -27,5 +28,10 @@ public final class SolverEvaluator implements SceneEvaluator {
     @Override
     public BzField fieldAt(double tS) {
         return solver.fieldAt(tS)::bz;
+    }
+
+    @Override
+    public BzField fieldOf(double tS, Set<String> sourceIds) {
+        return solver.fieldOf(tS, sourceIds)::bz;
     }
 }

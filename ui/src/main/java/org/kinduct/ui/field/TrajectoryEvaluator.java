@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.Set;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Pose;
@@ -49,9 +50,12 @@ public final class TrajectoryEvaluator implements SceneEvaluator {
     };
     private Trajectory trajectory;
     private SceneSolver placed;
+    /** Places every body by its drawn motion (free bodies at rest): exact for sources that ride no free body. */
+    private final SceneSolver prescribed;
 
     public TrajectoryEvaluator(Scene scene) {
         this.scene = scene;
+        this.prescribed = new SceneSolver(scene);
     }
 
     public Scene scene() {
@@ -114,6 +118,18 @@ public final class TrajectoryEvaluator implements SceneEvaluator {
     public BzField fieldAt(double tS) {
         trajectory();
         return placed.fieldAt(tS)::bz;
+    }
+
+    @Override
+    public BzField fieldOf(double tS, Set<String> sourceIds) {
+        boolean free = scene.sources().stream().anyMatch(s -> sourceIds.contains(s.id())
+                && scene.body(s.body()).orElseThrow().motion() instanceof Motion.Free);
+        if (!free) {
+            // Prescribed placement is exact for these sources and needs no run.
+            return prescribed.fieldOf(tS, sourceIds)::bz;
+        }
+        trajectory();
+        return placed.fieldOf(tS, sourceIds)::bz;
     }
 
     @Override

@@ -115,6 +115,11 @@ class EditorViewModelSimulationTest {
                 }
 
                 @Override
+                public BzField fieldOf(double tS, java.util.Set<String> sourceIds) {
+                    return ev.fieldOf(tS, sourceIds);
+                }
+
+                @Override
                 public Map<String, Pose> posesAt(double tS) {
                     return ev.posesAt(tS);
                 }

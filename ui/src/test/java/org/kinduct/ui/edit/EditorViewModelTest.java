@@ -39,6 +39,11 @@ class EditorViewModelTest {
             public BzField fieldAt(double tS) {
                 return (x, y) -> 0;
             }
+
+            @Override
+            public BzField fieldOf(double tS, java.util.Set<String> sourceIds) {
+                return (x, y) -> 0;
+            }
         };
     }
 

@@ -47,6 +47,11 @@ class PlaybackPacingTest {
         public BzField fieldAt(double tS) {
             return (x, y) -> 0;
         }
+
+        @Override
+        public BzField fieldOf(double tS, java.util.Set<String> sourceIds) {
+            return (x, y) -> 0;
+        }
     }
 
     private static Scene scene() {

@@ -8,8 +8,11 @@ import java.util.List;
 import java.util.concurrent.Executor;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.kinduct.scene.Body;
+import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
+import org.kinduct.scene.Vec2;
 import org.kinduct.ui.paint.FieldRaster;
 import org.kinduct.ui.view.ViewTransform;
 
@@ -93,5 +96,41 @@ class FieldMapperTest {
         java.util.Arrays.fill(v, 0.01f);
         v[3] = 50f;
         assertEquals(0.01, FieldMapper.autoLimit(v), FIELD_TOL);
+    }
+
+    /** A still field plus a magnet on a gliding body, mapped the way exports do (one evaluator for the scene). */
+    @Test
+    void stillAndMovingSourcesAreEachCountedOnce() {
+        Scene scene = Scene.empty("mixed")
+                .withBodies(List.of(new Body("cart", "cart", Vec2.ZERO, new Motion.Glide(new Vec2(0.1, 0)))))
+                .withSources(List.of(new Source.UniformField("earth", 0.02),
+                        new Source.CylinderMagnet("disc", "cart", new Vec2(0, 0), 0.01, 0.005, 0.002,
+                                Source.Side.BELOW, 1.2, Source.Magnetization.PLUS_Z)));
+        SceneEvaluator evaluator = Evaluators.solver().apply(scene);
+        FieldMapper m = new FieldMapper(s -> evaluator, SAME_THREAD, SAME_THREAD, delivered::add, failures::add);
+        double t = 0.1;
+        FieldRaster r = m.compute(new MapRequest(scene, 1, t, new ViewTransform(0.01, 0, 4000, 200, 100), 4));
+        SceneEvaluator.BzField exact = evaluator.fieldAt(t);
+        for (int row = 0; row < r.rows(); row += 5) {
+            for (int col = 0; col < r.cols(); col += 5) {
+                double want = exact.bz(r.centerX(col), r.centerY(row));
+                assertEquals(want, r.bzT()[row * r.cols() + col], 1e-5 * Math.abs(want) + FIELD_TOL,
+                        "cell " + row + ", " + col);
+            }
+        }
+    }
+
+    /** The map must use the evaluator of the whole scene, so a free magnet sits where the coupled run has it. */
+    @Test
+    void theMapAsksForTheWholeScenesEvaluatorOnly() {
+        Scene scene = uniform(0.1, 0.2).withBodies(List.of(new Body("cart", "cart", Vec2.ZERO,
+                new Motion.Glide(new Vec2(1, 0)))));
+        List<Scene> asked = new ArrayList<>();
+        FieldMapper m = new FieldMapper(s -> {
+            asked.add(s);
+            return new UniformOnlyEvaluator(s);
+        }, SAME_THREAD, SAME_THREAD, delivered::add, failures::add);
+        m.compute(new MapRequest(scene, 1, 0, new ViewTransform(0, 0, 1000, 20, 10), 4));
+        assertEquals(List.of(scene), asked);
     }
 }

@@ -1,7 +1,10 @@
 package org.kinduct.ui.field;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -15,17 +18,15 @@ final class UniformOnlyEvaluator implements SceneEvaluator {
 
     static final AtomicInteger FIELD_CALLS = new AtomicInteger();
 
-    private final double bz;
+    private final Map<String, Double> bz = new HashMap<>();
 
     UniformOnlyEvaluator(Scene scene) {
-        double sum = 0;
         for (Source s : scene.sources()) {
             if (!(s instanceof Source.UniformField u)) {
                 throw new IllegalArgumentException("test evaluator handles uniform fields only, got " + s.id());
             }
-            sum += u.bzT();
+            bz.put(u.id(), u.bzT());
         }
-        bz = sum;
     }
 
     @Override
@@ -44,7 +45,17 @@ final class UniformOnlyEvaluator implements SceneEvaluator {
 
     @Override
     public BzField fieldAt(double tS) {
+        return fieldOf(tS, bz.keySet());
+    }
+
+    @Override
+    public BzField fieldOf(double tS, Set<String> sourceIds) {
         FIELD_CALLS.incrementAndGet();
-        return (x, y) -> bz;
+        double sum = 0;
+        for (String id : sourceIds) {
+            sum += bz.getOrDefault(id, 0.0);
+        }
+        double total = sum;
+        return (x, y) -> total;
     }
 }
