@@ -456,7 +456,9 @@ final class EditorCanvas extends Pane {
         if (ids.isEmpty()) {
             return;
         }
-        Vec2 c = SceneBounds.ofObjects(vm.scene(), ids, 0).center();
-        vm.apply("Rotate", s -> SceneEdits.rotate(s, ids, c, angleRad));
+        // Turn what the user sees: at t > t0 bodies may have moved and turned since they were drawn.
+        Placement seen = Placement.of(vm.scene(), vm.timeProperty().get(), vm.posesProperty().get());
+        Vec2 c = SceneBounds.ofObjects(vm.scene(), ids, seen).center();
+        vm.apply("Rotate", s -> SceneEdits.rotateAsSeen(s, ids, seen, c, angleRad));
     }
 }

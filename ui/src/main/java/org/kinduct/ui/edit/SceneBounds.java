@@ -1,7 +1,9 @@
 package org.kinduct.ui.edit;
 
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Set;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -12,9 +14,13 @@ import org.kinduct.ui.paint.SourcePainter;
 /** The box around everything drawn in a scene at one instant, for zoom-to-fit. */
 public record SceneBounds(double minX, double minY, double maxX, double maxY) {
 
-    /** Bounds of all outlines at {@code tS}; a 0.2 m box around the origin for an empty scene. */
+    /** Bounds of all outlines at {@code tS}, every body by its prescribed motion; see {@link #of(Scene, Placement)}. */
     public static SceneBounds of(Scene scene, double tS) {
-        Placement placement = Placement.of(scene, tS);
+        return of(scene, Placement.of(scene, tS));
+    }
+
+    /** Bounds of all outlines where {@code placement} puts them; a 0.2 m box around the origin for an empty scene. */
+    public static SceneBounds of(Scene scene, Placement placement) {
         List<Vec2> pts = new ArrayList<>();
         for (Source s : scene.sources()) {
             pts.addAll(SourcePainter.outline(s, placement));
@@ -39,12 +45,17 @@ public record SceneBounds(double minX, double minY, double maxX, double maxY) {
     }
 
     /** Bounds of the objects {@code ids} alone at {@code tS}. */
-    public static SceneBounds ofObjects(Scene scene, java.util.Set<String> ids, double tS) {
-        java.util.Set<String> others = new java.util.HashSet<>();
+    public static SceneBounds ofObjects(Scene scene, Set<String> ids, double tS) {
+        return ofObjects(scene, ids, Placement.of(scene, tS));
+    }
+
+    /** Bounds of the objects {@code ids} alone where {@code placement} (made for {@code scene}) puts them. */
+    public static SceneBounds ofObjects(Scene scene, Set<String> ids, Placement placement) {
+        Set<String> others = new HashSet<>();
         scene.sources().forEach(s -> others.add(s.id()));
         scene.conductors().forEach(c -> others.add(c.id()));
         others.removeAll(ids);
-        return of(SceneEdits.delete(scene, others), tS);
+        return of(SceneEdits.delete(scene, others), placement);
     }
 
     public Vec2 center() {
