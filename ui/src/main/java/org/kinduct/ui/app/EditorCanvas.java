@@ -152,11 +152,9 @@ final class EditorCanvas extends Pane {
         needsPaint = true;
     }
 
-    /** Shows everything the scene holds over its whole time window. */
+    /** Shows everything the scene holds over its whole time window, free bodies along their simulated path. */
     void zoomToFit() {
-        Scene s = vm.scene();
-        SceneBounds b = SceneBounds.of(s, s.time().t0S()).union(SceneBounds.of(s, s.time().t1S()))
-                .union(SceneBounds.of(s, (s.time().t0S() + s.time().t1S()) / 2));
+        SceneBounds b = SceneBounds.ofWindow(vm.scene(), vm.seriesProperty().get(), vm.poseSeriesProperty().get());
         double padX = (b.maxX() - b.minX()) * 0.08;
         double padY = (b.maxY() - b.minY()) * 0.08;
         vm.viewProperty().set(vm.viewProperty().get().fitting(b.minX() - padX, b.minY() - padY, b.maxX() + padX,

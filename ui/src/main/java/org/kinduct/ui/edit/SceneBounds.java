@@ -3,15 +3,19 @@ package org.kinduct.ui.edit;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
+import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.paint.Placement;
 import org.kinduct.ui.paint.SourcePainter;
 
-/** The box around everything drawn in a scene at one instant, for zoom-to-fit. */
+/** The box around everything drawn in a scene, at one instant or over its time window, for zoom-to-fit. */
 public record SceneBounds(double minX, double minY, double maxX, double maxY) {
 
     /** Bounds of all outlines at {@code tS}, every body by its prescribed motion; see {@link #of(Scene, Placement)}. */
@@ -42,6 +46,29 @@ public record SceneBounds(double minX, double minY, double maxX, double maxY) {
             y1 = Math.max(y1, p.y());
         }
         return new SceneBounds(x0, y0, x1, y1);
+    }
+
+    /**
+     * Everything the scene shows over its time window, for zoom-to-fit: all bodies by their
+     * prescribed motion at t0, the midpoint and t1, and at every sample of a simulated run, free
+     * bodies where the run has them.
+     *
+     * @param series the run's samples (only their times are read)
+     * @param poses the simulated poses at each sample's time (same length as {@code series}), or
+     *        empty when no body is simulated
+     * @throws IllegalArgumentException if {@code poses} is neither empty nor as long as {@code series}
+     */
+    public static SceneBounds ofWindow(Scene scene, List<Snapshot> series, List<Map<String, Pose>> poses) {
+        if (!poses.isEmpty() && poses.size() != series.size()) {
+            throw new IllegalArgumentException("simulated poses for " + poses.size() + " samples, but the run has "
+                    + series.size());
+        }
+        TimeSpan w = scene.time();
+        SceneBounds b = of(scene, w.t0S()).union(of(scene, w.t1S())).union(of(scene, (w.t0S() + w.t1S()) / 2));
+        for (int i = 0; i < poses.size(); i++) {
+            b = b.union(of(scene, Placement.of(scene, series.get(i).tS(), poses.get(i))));
+        }
+        return b;
     }
 
     /** Bounds of the objects {@code ids} alone at {@code tS}. */
