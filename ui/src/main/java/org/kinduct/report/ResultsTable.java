@@ -30,6 +30,7 @@ public final class ResultsTable {
                 Units.format(t1, Dimension.TIME), series.size(), results.circuitModel() == null ? ""
                         : " (coupled run, " + Labels.circuitModel(results.circuitModel()) + " circuits)");
         List<ConductorSummary> rows = ConductorSummary.of(series);
+        ResultScales scales = ResultScales.of(series);
         int idWidth = Math.max("conductor".length(), rows.stream().mapToInt(r -> r.id().length()).max().orElse(0));
         String fmt = "%-" + idWidth + "s  %-5s %12s %10s %12s  %-26s %12s %11s  %s%n";
         out.printf(Locale.ROOT, fmt, "conductor", "kind", "peak EMF", "at", "RMS EMF", "polarity at peak",
@@ -37,16 +38,18 @@ public final class ResultsTable {
         for (ConductorSummary r : rows) {
             double l = results.inductanceH(0, r.id());
             out.printf(Locale.ROOT, fmt, r.id(), r.kind() == ConductorState.Kind.LOOP ? "loop" : "wire",
-                    Units.format(r.peakEmfV(), Dimension.VOLTAGE), Units.format(r.peakTimeS(), Dimension.TIME),
-                    Units.format(r.rmsEmfV(), Dimension.VOLTAGE), polarity(r),
-                    r.kind() == ConductorState.Kind.LOOP ? Units.format(r.peakCurrentA(), Dimension.CURRENT) : "-",
+                    Units.format(scales.emf(r.peakEmfV()), Dimension.VOLTAGE),
+                    Units.format(r.peakTimeS(), Dimension.TIME),
+                    Units.format(scales.emf(r.rmsEmfV()), Dimension.VOLTAGE), polarity(r),
+                    r.kind() == ConductorState.Kind.LOOP
+                            ? Units.format(scales.current(r.peakCurrentA()), Dimension.CURRENT) : "-",
                     Double.isNaN(l) ? "-" : Units.format(l, Dimension.INDUCTANCE), agreement(r));
         }
         out.println();
         if (scene.conductors().stream().filter(c -> c instanceof Conductor.Loop l && !l.open()).count() > 1) {
             out.println(InductanceSummary.of(scene));
         }
-        writeBodies(results, out);
+        writeBodies(scene, results, out);
         writeAudit(results.audit(), out);
         out.println("Signs: EMF and current are positive along each conductor's vertex order; for a wire,"
                 + " EMF > 0 means its last vertex is the + end.");
@@ -57,20 +60,37 @@ public final class ResultsTable {
         CautionCheck.lines(scene, series).forEach(out::println);
     }
 
-    /** The final speed of each free body. */
-    private static void writeBodies(SolveResults results, PrintWriter out) {
+    /**
+     * The final speed of each free body. Speeds are read against the fastest any free body goes
+     * in the run, or the speed gravity alone would give over the window if larger (the scale of
+     * the accelerations whose sum a still body's velocity is); angular speeds against the fastest
+     * turn in the run.
+     */
+    private static void writeBodies(Scene scene, SolveResults results, PrintWriter out) {
         if (!results.hasFreeBodies()) {
             return;
+        }
+        List<Snapshot> series = results.series();
+        double speedRef = scene.gravity().length() * (series.get(series.size() - 1).tS() - series.get(0).tS());
+        double omegaRef = 0;
+        for (List<SolveResults.BodyState> bodies : results.freeBodies()) {
+            for (SolveResults.BodyState b : bodies) {
+                speedRef = Math.max(speedRef, b.velocityMps().length());
+                omegaRef = Math.max(omegaRef, Math.abs(b.omegaRadPerS()));
+            }
         }
         List<SolveResults.BodyState> last = results.freeBodies().get(results.freeBodies().size() - 1);
         for (SolveResults.BodyState b : last) {
             out.printf(Locale.ROOT, "Free body %s at the end: speed %s, velocity (%s, %s), ω %s%n", b.id(),
-                    Units.format(b.velocityMps().length(), Dimension.VELOCITY),
-                    Units.format(b.velocityMps().x(), Dimension.VELOCITY),
-                    Units.format(b.velocityMps().y(), Dimension.VELOCITY),
-                    Units.format(b.omegaRadPerS(), Dimension.ANGULAR_SPEED));
+                    speed(b.velocityMps().length(), speedRef), speed(b.velocityMps().x(), speedRef),
+                    speed(b.velocityMps().y(), speedRef),
+                    Units.format(Units.withoutNoise(b.omegaRadPerS(), omegaRef), Dimension.ANGULAR_SPEED));
         }
         out.println();
+    }
+
+    private static String speed(double mps, double referenceMps) {
+        return Units.format(Units.withoutNoise(mps, referenceMps), Dimension.VELOCITY);
     }
 
     /** Where the energy went, and what the balance leaves over. */

@@ -19,11 +19,28 @@ import java.util.regex.Pattern;
  * <p>Output: {@value #DISPLAY_DIGITS} significant digits (rounded half up), an engineering
  * prefix chosen from {@link Dimension#displayUnits()}, and the Unicode minus sign "−". Every
  * string {@code format} returns for a finite value is accepted by {@code parse}.
+ *
+ * <p>Rounding noise: a computed value that is zero in exact arithmetic is rarely zero in floating
+ * point ("8.45e-13 mm/s" for the sideways speed of a body falling straight down). Whether a tiny
+ * value is noise depends on what it was computed from, not on its unit: 1 nV is a real EMF in a
+ * weak field and noise beside a 100 kV one. So callers pass the value through
+ * {@link #withoutNoise(double, double)} with a reference magnitude before formatting it.
  */
 public final class Units {
 
     /** Significant digits written by {@link #format(double, Dimension)}. */
     public static final int DISPLAY_DIGITS = 3;
+
+    /**
+     * Fraction of a reference magnitude below which a value is rounding noise. Each floating-point
+     * operation errs by at most u = 2⁻⁵³ ≈ 1.1e-16 relative, and a sum of n terms by at most
+     * γₙ₋₁·Σ|xᵢ| with γₙ = n·u/(1 − n·u) (Higham, <i>Accuracy and Stability of Numerical
+     * Algorithms</i>, 2nd ed., SIAM 2002, §2.2, Lemma 3.1 and §4.2; from memory). A value worked
+     * out through up to some ten million operations from quantities no larger than the reference,
+     * and zero in exact arithmetic, therefore stays below this fraction. It is also the relative
+     * part of the solver's threshold under which an EMF shows no polarity.
+     */
+    public static final double NOISE_FRACTION = 1e-9;
 
     /** A mantissa outside [1e-3, 1e6) in its unit is written in exponent form, "1.23e-5 m". */
     private static final int SMALLEST_PLAIN_EXPONENT = -3;
@@ -64,6 +81,18 @@ public final class Units {
             throw new IllegalArgumentException(Texts.quote(text) + " is out of range for " + d.noun());
         }
         return si;
+    }
+
+    /**
+     * {@code si}, or zero when it is rounding noise beside {@code referenceSi}: when
+     * |si| &lt; {@value #NOISE_FRACTION}·|referenceSi|. The reference is the size of what the value
+     * was computed from or is shown with, in the same unit: the length of the vector whose
+     * component it is, the largest EMF of the run it belongs to. The rule holds no fixed amount,
+     * so a value is never hidden for being small, only for being small beside its reference.
+     * A NaN value stays NaN; a NaN reference hides nothing.
+     */
+    public static double withoutNoise(double si, double referenceSi) {
+        return Math.abs(si) < NOISE_FRACTION * Math.abs(referenceSi) ? 0 : si;
     }
 
     /** {@code si} with {@value #DISPLAY_DIGITS} significant digits in the best-fitting display unit. */

@@ -184,11 +184,9 @@ final class EditorCanvas extends Pane {
         needsPaint = true;
     }
 
-    /** Shows everything the scene holds over its whole time window. */
+    /** Shows everything the scene holds over its whole time window, free bodies along their simulated path. */
     void zoomToFit() {
-        Scene s = vm.scene();
-        SceneBounds b = SceneBounds.of(s, s.time().t0S()).union(SceneBounds.of(s, s.time().t1S()))
-                .union(SceneBounds.of(s, (s.time().t0S() + s.time().t1S()) / 2));
+        SceneBounds b = SceneBounds.ofWindow(vm.scene(), vm.seriesProperty().get(), vm.poseSeriesProperty().get());
         double padX = (b.maxX() - b.minX()) * 0.08;
         double padY = (b.maxY() - b.minY()) * 0.08;
         vm.viewProperty().set(vm.viewProperty().get().fitting(b.minX() - padX, b.minY() - padY, b.maxX() + padX,
@@ -488,7 +486,9 @@ final class EditorCanvas extends Pane {
         if (ids.isEmpty()) {
             return;
         }
-        Vec2 c = SceneBounds.ofObjects(vm.scene(), ids, 0).center();
-        vm.apply("Rotate", s -> SceneEdits.rotate(s, ids, c, angleRad));
+        // Turn what the user sees: at t > t0 bodies may have moved and turned since they were drawn.
+        Placement seen = Placement.of(vm.scene(), vm.timeProperty().get(), vm.posesProperty().get());
+        Vec2 c = SceneBounds.ofObjects(vm.scene(), ids, seen).center();
+        vm.apply("Rotate", s -> SceneEdits.rotateAsSeen(s, ids, seen, c, angleRad));
     }
 }

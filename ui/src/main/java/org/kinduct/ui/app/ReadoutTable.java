@@ -1,11 +1,15 @@
 package org.kinduct.ui.app;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.function.Function;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
+import org.kinduct.report.ResultScales;
+import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.edit.EditorViewModel;
@@ -18,6 +22,8 @@ final class ReadoutTable extends TableView<ConductorState> {
     static final double AGREEMENT_TOLERANCE = 1e-3;
 
     private final ObservableList<ConductorState> rows = FXCollections.observableArrayList();
+    /** The run's largest values, against which the shown ones are read (rounding noise reads 0). */
+    private ResultScales scales = ResultScales.of(List.of());
 
     ReadoutTable(EditorViewModel vm) {
         setItems(rows);
@@ -25,16 +31,19 @@ final class ReadoutTable extends TableView<ConductorState> {
         setPlaceholder(new javafx.scene.control.Label("No conductors: draw a wire or a loop"));
         setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         getColumns().add(column("Conductor", ConductorState::id));
-        getColumns().add(column("Flux linkage Φ·N", s -> Quantities.flux(s.linkageWb())));
-        getColumns().add(column("EMF −dΦ/dt", s -> Quantities.voltage(s.emfFluxV())));
-        getColumns().add(column("EMF ∮(v×B)·dl", s -> Quantities.voltage(s.emfMotionalV())));
+        getColumns().add(column("Flux linkage Φ·N", s -> Quantities.flux(scales.flux(s.linkageWb()))));
+        getColumns().add(column("EMF −dΦ/dt", s -> Quantities.voltage(scales.emf(s.emfFluxV()))));
+        getColumns().add(column("EMF ∮(v×B)·dl", s -> Quantities.voltage(scales.emf(s.emfMotionalV()))));
         getColumns().add(column("Agreement", ReadoutTable::agreement));
-        getColumns().add(column("Current", s -> Quantities.current(s.currentA())));
+        getColumns().add(column("Current", s -> Quantities.current(scales.current(s.currentA()))));
         getColumns().add(column("Direction", ReadoutTable::direction));
-        getColumns().add(column("Force (x, y)", s -> Quantities.force(s.forceN().x()) + ", "
-                + Quantities.force(s.forceN().y())));
-        vm.snapshotProperty().addListener((obs, old, snap) -> show(snap));
-        show(vm.snapshotProperty().get());
+        getColumns().add(column("Force (x, y)", s -> {
+            Vec2 f = scales.force(s.forceN());
+            return Quantities.force(f.x()) + ", " + Quantities.force(f.y());
+        }));
+        vm.snapshotProperty().addListener((obs, old, snap) -> show(vm.seriesProperty().get(), snap));
+        vm.seriesProperty().addListener((obs, old, run) -> show(run, vm.snapshotProperty().get()));
+        show(vm.seriesProperty().get(), vm.snapshotProperty().get());
         getSelectionModel().selectedItemProperty().addListener((obs, old, row) -> {
             if (row != null && !vm.selection().contains(row.id())) {
                 vm.select(java.util.Set.of(row.id()));
@@ -42,11 +51,14 @@ final class ReadoutTable extends TableView<ConductorState> {
         });
     }
 
-    private void show(Snapshot snap) {
+    private void show(List<Snapshot> run, Snapshot snap) {
         if (snap == null) {
             rows.clear();
             return;
         }
+        List<Snapshot> all = new ArrayList<>(run);
+        all.add(snap);
+        scales = ResultScales.of(all);
         if (rows.size() == snap.conductors().size()) {
             for (int i = 0; i < rows.size(); i++) {
                 rows.set(i, snap.conductors().get(i));

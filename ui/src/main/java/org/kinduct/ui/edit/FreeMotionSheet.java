@@ -68,9 +68,7 @@ final class FreeMotionSheet {
     }
 
     static String springText(Motion.Free.Spring s) {
-        String anchor = s.otherBody() != null ? s.otherBody()
-                : Units.format(s.anchor().x(), Dimension.LENGTH, PropertySheet.EDIT_DIGITS) + ", "
-                + Units.format(s.anchor().y(), Dimension.LENGTH, PropertySheet.EDIT_DIGITS);
+        String anchor = s.otherBody() != null ? s.otherBody() : MotionSheet.pair(s.anchor(), Dimension.LENGTH);
         return anchor + "; " + Units.format(s.stiffnessNPerM(), Dimension.STIFFNESS, PropertySheet.EDIT_DIGITS) + "; "
                 + Units.format(s.restLengthM(), Dimension.LENGTH, PropertySheet.EDIT_DIGITS);
     }

@@ -114,12 +114,19 @@ public final class MotionSheet {
         return s -> SceneEdits.setMotion(s, objectId, m, pivot);
     }
 
+    /**
+     * "x, y" with units, for editing; a component that is rounding noise beside the vector's length
+     * (a point turned onto an axis) reads 0.
+     */
+    static String pair(Vec2 v, Dimension d) {
+        return Units.format(Units.withoutNoise(v.x(), v.length()), d, PropertySheet.EDIT_DIGITS) + ", "
+                + Units.format(Units.withoutNoise(v.y(), v.length()), d, PropertySheet.EDIT_DIGITS);
+    }
+
     /** A vector typed as "x, y", each with its unit. */
     static Property vector(String label, Dimension d, Vec2 v,
                            java.util.function.Function<Vec2, UnaryOperator<Scene>> apply) {
-        String text = Units.format(v.x(), d, PropertySheet.EDIT_DIGITS) + ", "
-                + Units.format(v.y(), d, PropertySheet.EDIT_DIGITS);
-        return new Property(label + " (x, y)", text, List.of(), typed -> {
+        return new Property(label + " (x, y)", pair(v, d), List.of(), typed -> {
             String[] parts = typed.split(",");
             if (parts.length != 2) {
                 throw new IllegalArgumentException("expected two values 'x, y' such as '" + d.example() + ", 0'");

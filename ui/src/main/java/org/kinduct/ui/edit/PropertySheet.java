@@ -43,6 +43,11 @@ public final class PropertySheet {
         return new Property(label, Units.format(si, d, EDIT_DIGITS), List.of(), text -> apply.apply(Units.parse(text, d)));
     }
 
+    /** One coordinate of {@code point}, metres; rounding noise beside the point's distance from the origin reads 0. */
+    static Property coordinate(String label, double valueM, Vec2 point, DoubleFunction<UnaryOperator<Scene>> apply) {
+        return quantity(label, Dimension.LENGTH, Units.withoutNoise(valueM, point.length()), apply);
+    }
+
     static Property whole(String label, int value, java.util.function.IntFunction<UnaryOperator<Scene>> apply) {
         return new Property(label, Integer.toString(value), List.of(), text -> {
             try {
@@ -113,10 +118,10 @@ public final class PropertySheet {
     }
 
     private static void blockProperties(Source.BlockMagnet m, List<Property> p) {
-        p.add(quantity("Centre x", Dimension.LENGTH, m.center().x(), v -> replace(block(m, new Vec2(v, m.center().y()),
+        p.add(coordinate("Centre x", m.center().x(), m.center(), v -> replace(block(m, new Vec2(v, m.center().y()),
                 m.sizeXM(), m.sizeYM(), m.heightM(), m.angleRad(), m.standoffM(), m.side(), m.remanenceT(),
                 m.magnetization()))));
-        p.add(quantity("Centre y", Dimension.LENGTH, m.center().y(), v -> replace(block(m, new Vec2(m.center().x(), v),
+        p.add(coordinate("Centre y", m.center().y(), m.center(), v -> replace(block(m, new Vec2(m.center().x(), v),
                 m.sizeXM(), m.sizeYM(), m.heightM(), m.angleRad(), m.standoffM(), m.side(), m.remanenceT(),
                 m.magnetization()))));
         p.add(quantity("Size x", Dimension.LENGTH, m.sizeXM(), v -> replace(block(m, m.center(), v, m.sizeYM(),
@@ -144,9 +149,9 @@ public final class PropertySheet {
     }
 
     private static void cylinderProperties(Source.CylinderMagnet m, List<Property> p) {
-        p.add(quantity("Centre x", Dimension.LENGTH, m.center().x(), v -> replace(disc(m, new Vec2(v, m.center().y()),
+        p.add(coordinate("Centre x", m.center().x(), m.center(), v -> replace(disc(m, new Vec2(v, m.center().y()),
                 m.radiusM(), m.heightM(), m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
-        p.add(quantity("Centre y", Dimension.LENGTH, m.center().y(), v -> replace(disc(m, new Vec2(m.center().x(), v),
+        p.add(coordinate("Centre y", m.center().y(), m.center(), v -> replace(disc(m, new Vec2(m.center().x(), v),
                 m.radiusM(), m.heightM(), m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
         p.add(quantity("Radius", Dimension.LENGTH, m.radiusM(), v -> replace(disc(m, m.center(), v, m.heightM(),
                 m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));

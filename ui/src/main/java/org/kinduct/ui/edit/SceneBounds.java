@@ -1,20 +1,30 @@
 package org.kinduct.ui.edit;
 
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
+import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.paint.Placement;
 import org.kinduct.ui.paint.SourcePainter;
 
-/** The box around everything drawn in a scene at one instant, for zoom-to-fit. */
+/** The box around everything drawn in a scene, at one instant or over its time window, for zoom-to-fit. */
 public record SceneBounds(double minX, double minY, double maxX, double maxY) {
 
-    /** Bounds of all outlines at {@code tS}; a 0.2 m box around the origin for an empty scene. */
+    /** Bounds of all outlines at {@code tS}, every body by its prescribed motion; see {@link #of(Scene, Placement)}. */
     public static SceneBounds of(Scene scene, double tS) {
-        Placement placement = Placement.of(scene, tS);
+        return of(scene, Placement.of(scene, tS));
+    }
+
+    /** Bounds of all outlines where {@code placement} puts them; a 0.2 m box around the origin for an empty scene. */
+    public static SceneBounds of(Scene scene, Placement placement) {
         List<Vec2> pts = new ArrayList<>();
         for (Source s : scene.sources()) {
             pts.addAll(SourcePainter.outline(s, placement));
@@ -38,13 +48,41 @@ public record SceneBounds(double minX, double minY, double maxX, double maxY) {
         return new SceneBounds(x0, y0, x1, y1);
     }
 
+    /**
+     * Everything the scene shows over its time window, for zoom-to-fit: all bodies by their
+     * prescribed motion at t0, the midpoint and t1, and at every sample of a simulated run, free
+     * bodies where the run has them.
+     *
+     * @param series the run's samples (only their times are read)
+     * @param poses the simulated poses at each sample's time (same length as {@code series}), or
+     *        empty when no body is simulated
+     * @throws IllegalArgumentException if {@code poses} is neither empty nor as long as {@code series}
+     */
+    public static SceneBounds ofWindow(Scene scene, List<Snapshot> series, List<Map<String, Pose>> poses) {
+        if (!poses.isEmpty() && poses.size() != series.size()) {
+            throw new IllegalArgumentException("simulated poses for " + poses.size() + " samples, but the run has "
+                    + series.size());
+        }
+        TimeSpan w = scene.time();
+        SceneBounds b = of(scene, w.t0S()).union(of(scene, w.t1S())).union(of(scene, (w.t0S() + w.t1S()) / 2));
+        for (int i = 0; i < poses.size(); i++) {
+            b = b.union(of(scene, Placement.of(scene, series.get(i).tS(), poses.get(i))));
+        }
+        return b;
+    }
+
     /** Bounds of the objects {@code ids} alone at {@code tS}. */
-    public static SceneBounds ofObjects(Scene scene, java.util.Set<String> ids, double tS) {
-        java.util.Set<String> others = new java.util.HashSet<>();
+    public static SceneBounds ofObjects(Scene scene, Set<String> ids, double tS) {
+        return ofObjects(scene, ids, Placement.of(scene, tS));
+    }
+
+    /** Bounds of the objects {@code ids} alone where {@code placement} (made for {@code scene}) puts them. */
+    public static SceneBounds ofObjects(Scene scene, Set<String> ids, Placement placement) {
+        Set<String> others = new HashSet<>();
         scene.sources().forEach(s -> others.add(s.id()));
         scene.conductors().forEach(c -> others.add(c.id()));
         others.removeAll(ids);
-        return of(SceneEdits.delete(scene, others), tS);
+        return of(SceneEdits.delete(scene, others), placement);
     }
 
     public Vec2 center() {

@@ -11,6 +11,7 @@ import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.ui.paint.Placement;
 
 /** Edits as pure functions from one scene to the next; invalid results throw {@link IllegalArgumentException}. */
 public final class SceneEdits {
@@ -52,12 +53,26 @@ public final class SceneEdits {
 
     /** Moves the drawn geometry of the given objects by {@code d}. */
     public static Scene translate(Scene scene, Set<String> ids, Vec2 d) {
-        return mapGeometry(scene, ids, p -> p.plus(d), 0);
+        return mapGeometry(scene, ids, p -> p.plus(d));
     }
 
-    /** Turns the given objects by {@code angleRad} (counter-clockwise) about {@code center}. */
-    public static Scene rotate(Scene scene, Set<String> ids, Vec2 center, double angleRad) {
-        return mapGeometry(scene, ids, p -> center.plus(p.minus(center).rotate(angleRad)), angleRad);
+    /**
+     * Turns the given objects by {@code angleRad} (counter-clockwise) about {@code centerSeen} as
+     * they are seen in {@code seen}, where bodies may have moved and turned since they were drawn.
+     *
+     * <p>Each drawn point turns about the drawn image of the centre on its own body: a placement P
+     * is a rigid motion, and plane rotations commute, so turning the seen point P(p) by α about c
+     * equals placing p turned by α about P⁻¹(c). Objects on different bodies, and conductor
+     * vertices riding a body of their own, each map through their own body; magnets turn by α.
+     */
+    public static Scene rotateAsSeen(Scene scene, Set<String> ids, Placement seen, Vec2 centerSeen, double angleRad) {
+        List<Source> sources = new ArrayList<>(scene.sources());
+        sources.replaceAll(s -> ids.contains(s.id())
+                ? Shapes.map(s, p -> turned(p, seen.drawn(s.body(), centerSeen), angleRad), angleRad) : s);
+        List<Conductor> conductors = new ArrayList<>(scene.conductors());
+        conductors.replaceAll(c -> ids.contains(c.id())
+                ? Shapes.mapByBody(c, (body, p) -> turned(p, seen.drawn(body, centerSeen), angleRad)) : c);
+        return scene.withSources(sources).withConductors(conductors);
     }
 
     /** Copies the given objects, shifted by {@code offset}, under fresh ids. */
@@ -141,12 +156,16 @@ public final class SceneEdits {
         return scene.withSources(sources).withConductors(conductors);
     }
 
-    private static Scene mapGeometry(Scene scene, Set<String> ids, UnaryOperator<Vec2> f, double turnRad) {
+    private static Scene mapGeometry(Scene scene, Set<String> ids, UnaryOperator<Vec2> f) {
         List<Source> sources = new ArrayList<>(scene.sources());
-        sources.replaceAll(s -> ids.contains(s.id()) ? Shapes.map(s, f, turnRad) : s);
+        sources.replaceAll(s -> ids.contains(s.id()) ? Shapes.map(s, f, 0) : s);
         List<Conductor> conductors = new ArrayList<>(scene.conductors());
         conductors.replaceAll(c -> ids.contains(c.id()) ? Shapes.map(c, f) : c);
         return scene.withSources(sources).withConductors(conductors);
+    }
+
+    private static Vec2 turned(Vec2 p, Vec2 center, double angleRad) {
+        return center.plus(p.minus(center).rotate(angleRad));
     }
 
     private static IllegalArgumentException unknown(String id) {

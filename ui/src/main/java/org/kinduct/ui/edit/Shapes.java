@@ -2,6 +2,7 @@ package org.kinduct.ui.edit;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.BiFunction;
 import java.util.function.UnaryOperator;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Source;
@@ -36,9 +37,14 @@ public final class Shapes {
     }
 
     public static Conductor map(Conductor c, UnaryOperator<Vec2> f) {
+        return mapByBody(c, (body, p) -> f.apply(p));
+    }
+
+    /** Applies {@code f(body, point)} to every drawn vertex, told the id of the body that vertex rides. */
+    public static Conductor mapByBody(Conductor c, BiFunction<String, Vec2, Vec2> f) {
         List<Conductor.Vertex> vs = new ArrayList<>(c.vertices().size());
         for (Conductor.Vertex v : c.vertices()) {
-            vs.add(new Conductor.Vertex(f.apply(v.at()), v.body()));
+            vs.add(new Conductor.Vertex(f.apply(v.bodyOr(c.body()), v.at()), v.body()));
         }
         return withVertices(c, vs);
     }

@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.report.CautionCheck;
+import org.kinduct.report.ResultScales;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.io.SceneFiles;
@@ -145,7 +146,8 @@ public final class Exporter {
             List<Snapshot> checked = new ArrayList<>(series());
             checked.add(snapshot());
             page = SnapshotPage.layout(scene, snapshot(), evaluator.posesAt(options.tS()),
-                    evaluator.audit().map(EnergyText::of).stream().toList(), CautionCheck.lines(scene, checked), options);
+                    evaluator.audit().map(EnergyText::of).stream().toList(), CautionCheck.lines(scene, checked),
+                    ResultScales.of(checked), options);
         }
         return page;
     }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.kinduct.report.ResultScales;
 import org.kinduct.report.ResultsTable;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Pose;
@@ -93,8 +94,7 @@ final class SnapshotPage {
     }
 
     private SnapshotPage(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> remarks,
-                         List<String> cautions,
-                         SnapshotOptions options) {
+                         List<String> cautions, ResultScales scales, SnapshotOptions options) {
         this.poses = Map.copyOf(poses);
         this.scene = scene;
         this.snapshot = snapshot;
@@ -118,7 +118,7 @@ final class SnapshotPage {
             mapHeight = clampMapHeight(WIDTH * aspect);
             mapView = new ViewTransform(0, 0, 1, WIDTH, mapHeight).fitting(box.x0(), box.y0(), box.x1(), box.y1(), 0);
         }
-        table = table(scene, snapshot, text);
+        table = table(scene, snapshot, scales, text);
         tableTop = mapTop + mapHeight + 12;
         boolean motionalOnly = false;
         for (ConductorState c : snapshot.conductors()) {
@@ -158,16 +158,17 @@ final class SnapshotPage {
     }
 
     static SnapshotPage layout(Scene scene, Snapshot snapshot, List<String> cautions, SnapshotOptions options) {
-        return layout(scene, snapshot, Map.of(), List.of(), cautions, options);
+        return layout(scene, snapshot, Map.of(), List.of(), cautions, ResultScales.of(List.of(snapshot)), options);
     }
 
     /**
      * A page whose free bodies are drawn at their simulated {@code poses} (body id → pose at the
-     * snapshot's time), with {@code remarks} (e.g. the run's energy audit) under the sign conventions.
+     * snapshot's time), with {@code remarks} (e.g. the run's energy audit) under the sign conventions,
+     * and table values read against {@code scales} (those of the run, so that rounding noise reads 0).
      */
     static SnapshotPage layout(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> remarks,
-                               List<String> cautions, SnapshotOptions options) {
-        return new SnapshotPage(scene, snapshot, poses, remarks, cautions, options);
+                               List<String> cautions, ResultScales scales, SnapshotOptions options) {
+        return new SnapshotPage(scene, snapshot, poses, remarks, cautions, scales, options);
     }
 
     double height() {
@@ -264,13 +265,13 @@ final class SnapshotPage {
      * The results table at the snapshot time. Columns that apply to no conductor are left out; a
      * table still too wide for {@code avail} units gets a smaller font, then shortened ids.
      */
-    private static Table table(Scene scene, Snapshot snap, double avail) {
+    private static Table table(Scene scene, Snapshot snap, ResultScales scales, double avail) {
         String[] header = {"conductor", "Φ per turn", "EMF", "methods agree", "I", "polarity / sense",
             "force, direction"};
         boolean[] numeric = {false, true, true, false, true, false, false};
         List<String[]> all = new ArrayList<>();
         for (ConductorState st : snap.conductors()) {
-            all.add(row(scene.conductor(st.id()).orElseThrow(), st));
+            all.add(row(scene.conductor(st.id()).orElseThrow(), st, scales));
         }
         List<Integer> kept = new ArrayList<>();
         for (int col = 0; col < header.length; col++) {
@@ -348,16 +349,16 @@ final class SnapshotPage {
         return text.substring(0, end) + "…";
     }
 
-    private static String[] row(Conductor c, ConductorState st) {
+    private static String[] row(Conductor c, ConductorState st, ResultScales scales) {
         boolean closedLoop = c instanceof Conductor.Loop loop && !loop.open();
         boolean wire = st.kind() == ConductorState.Kind.WIRE;
-        String flux = wire ? NOT_APPLICABLE : Quantities.flux(st.fluxWb());
-        String emf = Quantities.voltage(st.emfV()) + (wire && !st.inducedFieldIncluded() ? " *" : "");
+        String flux = wire ? NOT_APPLICABLE : Quantities.flux(scales.flux(st.fluxWb()));
+        String emf = Quantities.voltage(scales.emf(st.emfV())) + (wire && !st.inducedFieldIncluded() ? " *" : "");
         String agree = wire ? NOT_APPLICABLE
                 : st.disagreement() == 0 ? "yes"
                 : String.format(Locale.ROOT, st.disagreement() <= ResultsTable.AGREEMENT_FLAG ? "yes, %.0e"
                         : "CHECK, %.0e", st.disagreement());
-        String current = closedLoop ? Quantities.current(st.currentA()) : NOT_APPLICABLE;
+        String current = closedLoop ? Quantities.current(scales.current(st.currentA())) : NOT_APPLICABLE;
         String sense;
         if (closedLoop) {
             sense = st.direction() == Circulation.CCW ? "↺ counter-clockwise"
@@ -367,8 +368,10 @@ final class SnapshotPage {
             sense = st.positiveEnd() == Terminal.LAST ? "+ at last end" + gap
                     : st.positiveEnd() == Terminal.FIRST ? "+ at first end" + gap : "no EMF";
         }
-        double f = Math.hypot(st.forceN().x(), st.forceN().y());
-        String force = closedLoop && f > 0 ? Quantities.force(f) + " ∠ " + direction(st.forceN()) : NOT_APPLICABLE;
+        Vec2 forceN = scales.force(st.forceN());
+        double f = forceN.length();
+        String force = closedLoop && f > 0 ? Quantities.force(f) + " ∠ " + direction(forceN)
+                : NOT_APPLICABLE;
         return new String[] {c.id(), flux, emf, agree, current, sense, force};
     }
 

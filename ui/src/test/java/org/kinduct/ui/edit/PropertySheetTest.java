@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
@@ -14,6 +15,7 @@ import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.ui.paint.Placement;
 
 class PropertySheetTest {
 
@@ -37,6 +39,17 @@ class PropertySheetTest {
         assertEquals(0.012, m.sizeXM(), TOL);
         // 1 G = 1e-4 T (SI Brochure, 9th ed., Table 9, non-SI CGS units).
         assertEquals(0.5e-4, m.remanenceT(), TOL);
+    }
+
+    @Test
+    void aMagnetTurnedOntoTheYAxisShowsItsCentreOnTheAxis() {
+        // Turning (0.1 m, 0) a quarter turn about the origin gives (0, 0.1 m); in floating point
+        // x is 0.1·cos(π/2) ≈ 6e-18 m, rounding noise beside the 0.1 m the centre lies out.
+        Scene s = Fixtures.loopAndMagnet();
+        Scene t = SceneEdits.rotateAsSeen(s, Set.of("magnet"), Placement.of(s, 0), Vec2.ZERO, Math.PI / 2);
+        List<Property> props = PropertySheet.of(t, "magnet");
+        assertEquals("0.000 m", find(props, "Centre x").text());
+        assertEquals("100.0 mm", find(props, "Centre y").text());
     }
 
     @Test

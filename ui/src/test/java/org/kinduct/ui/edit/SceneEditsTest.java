@@ -12,6 +12,7 @@ import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.ui.paint.Placement;
 
 class SceneEditsTest {
 
@@ -28,7 +29,7 @@ class SceneEditsTest {
     @Test
     void rotatingAMagnetTurnsItsCentreAndItsAxis() {
         Scene s = Fixtures.loopAndMagnet();
-        Scene turned = SceneEdits.rotate(s, Set.of("magnet"), Vec2.ZERO, Math.PI / 2);
+        Scene turned = SceneEdits.rotateAsSeen(s, Set.of("magnet"), Placement.of(s, 0), Vec2.ZERO, Math.PI / 2);
         Source.BlockMagnet m = (Source.BlockMagnet) turned.source("magnet").orElseThrow();
         assertTrue(m.center().eq(new Vec2(0, 0.1), GEOMETRY_TOL));
         assertEquals(Math.PI / 2, m.angleRad(), GEOMETRY_TOL);

@@ -1,0 +1,61 @@
+package org.kinduct.report;
+
+import java.util.Collection;
+import org.kinduct.scene.Vec2;
+import org.kinduct.scene.units.Units;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.Snapshot;
+
+/**
+ * The largest magnitude each conductor quantity reaches in a set of results (a run, and the
+ * instant shown): the references against which single values are read, so that rounding noise
+ * prints as zero ({@link Units#withoutNoise}). A conductor that has no EMF at some instant (a
+ * spinning coil at its zero crossing), or none at all, then reads "0" beside the run's largest
+ * EMF instead of "5.20e-7 nV"; a small EMF in a run of small EMFs keeps its value. Entries that do
+ * not apply (NaN, e.g. the flux of an open wire) are skipped.
+ *
+ * @param emfV largest |EMF| by either method, volts
+ * @param currentA largest |current|, amperes
+ * @param fluxWb largest |flux| or |flux linkage|, webers
+ * @param forceN largest force magnitude, newtons
+ */
+public record ResultScales(double emfV, double currentA, double fluxWb, double forceN) {
+
+    public static ResultScales of(Collection<Snapshot> results) {
+        double emf = 0;
+        double current = 0;
+        double flux = 0;
+        double force = 0;
+        for (Snapshot s : results) {
+            for (ConductorState c : s.conductors()) {
+                emf = larger(larger(larger(emf, c.emfV()), c.emfFluxV()), c.emfMotionalV());
+                current = larger(current, c.currentA());
+                flux = larger(larger(flux, c.fluxWb()), c.linkageWb());
+                force = larger(force, c.forceN().length());
+            }
+        }
+        return new ResultScales(emf, current, flux, force);
+    }
+
+    /** An EMF, zero when it is noise beside the largest EMF. */
+    public double emf(double v) {
+        return Units.withoutNoise(v, emfV);
+    }
+
+    public double current(double a) {
+        return Units.withoutNoise(a, currentA);
+    }
+
+    /** A flux or flux linkage. */
+    public double flux(double wb) {
+        return Units.withoutNoise(wb, fluxWb);
+    }
+
+    public Vec2 force(Vec2 n) {
+        return new Vec2(Units.withoutNoise(n.x(), forceN), Units.withoutNoise(n.y(), forceN));
+    }
+
+    private static double larger(double soFar, double v) {
+        return Double.isNaN(v) ? soFar : Math.max(soFar, Math.abs(v));
+    }
+}
