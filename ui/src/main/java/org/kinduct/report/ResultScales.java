@@ -1,6 +1,8 @@
 package org.kinduct.report;
 
+import java.util.ArrayList;
 import java.util.Collection;
+import java.util.List;
 import org.kinduct.scene.Vec2;
 import org.kinduct.scene.units.Units;
 import org.kinduct.solver.ConductorState;
@@ -35,6 +37,15 @@ public record ResultScales(double emfV, double currentA, double fluxWb, double f
             }
         }
         return new ResultScales(emf, current, flux, force);
+    }
+
+    /** The scales of a run and the instant shown (which may lie between the run's samples); {@code now} may be null. */
+    public static ResultScales of(List<Snapshot> run, Snapshot now) {
+        List<Snapshot> all = new ArrayList<>(run);
+        if (now != null) {
+            all.add(now);
+        }
+        return of(all);
     }
 
     /** An EMF, zero when it is noise beside the largest EMF. */

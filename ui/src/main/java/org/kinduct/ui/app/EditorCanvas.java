@@ -18,6 +18,7 @@ import javafx.scene.input.MouseEvent;
 import javafx.scene.input.ScrollEvent;
 import javafx.scene.layout.Pane;
 import javafx.util.Duration;
+import org.kinduct.report.ResultScales;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
@@ -176,7 +177,8 @@ final class EditorCanvas extends Pane {
         double t = snap != null ? snap.tS() : vm.timeProperty().get();
         return new Frame(scene, t, snap,
                 vm.rasterProperty().get(), vm.viewProperty().get(), vm.layers(), vm.rangeProperty().get(), marks, note,
-                dragPreview != null ? java.util.Map.of() : vm.posesProperty().get());
+                dragPreview != null ? java.util.Map.of() : vm.posesProperty().get(),
+                ResultScales.of(vm.seriesProperty().get(), snap));
     }
 
     void toggleFrameTime() {

@@ -1,6 +1,5 @@
 package org.kinduct.ui.app;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Function;
 import javafx.beans.property.ReadOnlyStringWrapper;
@@ -56,9 +55,7 @@ final class ReadoutTable extends TableView<ConductorState> {
             rows.clear();
             return;
         }
-        List<Snapshot> all = new ArrayList<>(run);
-        all.add(snap);
-        scales = ResultScales.of(all);
+        scales = ResultScales.of(run, snap);
         if (rows.size() == snap.conductors().size()) {
             for (int i = 0; i < rows.size(); i++) {
                 rows.set(i, snap.conductors().get(i));

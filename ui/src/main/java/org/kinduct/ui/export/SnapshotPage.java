@@ -81,6 +81,7 @@ final class SnapshotPage {
     private final double mapTop;
     private final double mapHeight;
     private final Table table;
+    private final ResultScales scales;
     private final double tableTop;
     private final List<Note> notes = new ArrayList<>();
     private final double height;
@@ -119,6 +120,7 @@ final class SnapshotPage {
             mapView = new ViewTransform(0, 0, 1, WIDTH, mapHeight).fitting(box.x0(), box.y0(), box.x1(), box.y1(), 0);
         }
         table = table(scene, snapshot, scales, text);
+        this.scales = scales;
         tableTop = mapTop + mapHeight + 12;
         boolean motionalOnly = false;
         for (ConductorState c : snapshot.conductors()) {
@@ -193,7 +195,7 @@ final class SnapshotPage {
         s.save();
         s.translate(0, mapTop);
         ScenePainter.draw(new Viewport(s, WIDTH, mapHeight), new Frame(scene, options.tS(), snapshot, raster, mapView,
-                options.layers(), options.range(), EditorMarks.none(), "", poses));
+                options.layers(), options.range(), EditorMarks.none(), "", poses, scales));
         s.restore();
         s.stroke(RULE);
         s.lineWidth(1);

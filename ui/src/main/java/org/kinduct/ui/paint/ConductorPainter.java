@@ -1,6 +1,7 @@
 package org.kinduct.ui.paint;
 
 import java.util.List;
+import org.kinduct.report.ResultScales;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
@@ -196,7 +197,7 @@ final class ConductorPainter {
         }
     }
 
-    static void placeCallouts(Surface s, ViewTransform v, Scene scene, Snapshot snap,
+    static void placeCallouts(Surface s, ViewTransform v, Scene scene, Snapshot snap, ResultScales scales,
                               LabelPlacer placer, List<Runnable> labels) {
         double lineH = ScenePainter.FONT + 3;
         for (ConductorState st : snap.conductors()) {
@@ -211,7 +212,7 @@ final class ConductorPainter {
             Vec2 anchor = anchor(c, pts);
             double ax = v.screenX(anchor.x());
             double ay = v.screenY(anchor.y());
-            String[] lines = calloutLines(c, st);
+            String[] lines = calloutLines(c, st, scales);
             double w = 0;
             for (String line : lines) {
                 w = Math.max(w, s.textWidth(line, ScenePainter.FONT, false));
@@ -274,14 +275,15 @@ final class ConductorPainter {
         return lerp(pts.get(mid), pts.get(mid + 1), 0.5);
     }
 
-    static String[] calloutLines(Conductor c, ConductorState st) {
-        String emf = "ε " + Quantities.voltage(Math.abs(st.emfV()));
+    /** The callout's lines: id, EMF and current or flux or polarity, noise read as 0 against {@code scales}. */
+    static String[] calloutLines(Conductor c, ConductorState st, ResultScales scales) {
+        String emf = "ε " + Quantities.voltage(Math.abs(scales.emf(st.emfV())));
         if (c instanceof Conductor.Loop loop) {
             if (loop.open()) {
-                return new String[] {c.id(), emf + " across gap", "Φ " + Quantities.flux(st.linkageWb())};
+                return new String[] {c.id(), emf + " across gap", "Φ " + Quantities.flux(scales.flux(st.linkageWb()))};
             }
             String sense = st.direction() == Circulation.CCW ? " ↺" : st.direction() == Circulation.CW ? " ↻" : "";
-            return new String[] {c.id(), emf, "I " + Quantities.current(Math.abs(st.currentA())) + sense};
+            return new String[] {c.id(), emf, "I " + Quantities.current(Math.abs(scales.current(st.currentA()))) + sense};
         }
         String end = st.positiveEnd() == Terminal.LAST ? "+ at last end"
                 : st.positiveEnd() == Terminal.FIRST ? "+ at first end" : "no polarity";

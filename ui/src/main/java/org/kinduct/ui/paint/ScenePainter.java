@@ -67,7 +67,7 @@ public final class ScenePainter {
         }
         List<Runnable> labels = new ArrayList<>();
         if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
-            ConductorPainter.placeCallouts(s, v, f.scene(), f.snapshot(), placer, labels);
+            ConductorPainter.placeCallouts(s, v, f.scene(), f.snapshot(), f.scales(), placer, labels);
         }
         contourLabels.forEach(c -> placeContourLabel(s, c, placer, labels));
         ConductorPainter.drawMarks(s, v, f.marks());

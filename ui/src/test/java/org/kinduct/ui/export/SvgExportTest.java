@@ -79,6 +79,22 @@ class SvgExportTest {
         assertTrue(texts.contains("Rod on a cart"), "title in " + texts);
     }
 
+    /**
+     * The rotor demo's coil is centred over its magnet at t = 0, where by symmetry Φ(θ) = Φ(−θ)
+     * and the EMF is zero (common practice): its callout reads zero, not the rounding noise of the
+     * flux difference, while elsewhere in the run the EMF is large.
+     */
+    @Test
+    void calloutsReadRoundingNoiseAsZero() throws Exception {
+        Scene scene = org.kinduct.demo.Demos.load("spinning-coil-generator");
+        Exporter export = new Exporter(scene, ExportFixtures.options(0, WIDTH_PX, 150, new ViewChoice.Fit()));
+        List<String> callouts = texts(export.svg()).stream().filter(t -> t.startsWith("ε ")).toList();
+        assertTrue(!callouts.isEmpty(), "a callout per conductor");
+        for (String c : callouts) {
+            assertTrue(!c.contains("e-"), "no floating-point noise in " + c);
+        }
+    }
+
     @Test
     void renderedSvgShowsThePlusMarkAtTheUpperEndAndFieldColoursBySign() throws Exception {
         Scene scene = ExportFixtures.rodInUniformField();
