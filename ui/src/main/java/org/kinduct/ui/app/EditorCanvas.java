@@ -34,7 +34,9 @@ import org.kinduct.ui.paint.EditorMarks;
 import org.kinduct.ui.paint.FieldBackdrop;
 import org.kinduct.ui.paint.FieldRaster;
 import org.kinduct.ui.paint.Frame;
+import org.kinduct.ui.paint.Layer;
 import org.kinduct.ui.paint.Placement;
+import org.kinduct.ui.paint.ScenePainter;
 import org.kinduct.ui.view.NiceSteps;
 import org.kinduct.ui.view.ViewTransform;
 
@@ -191,8 +193,9 @@ final class EditorCanvas extends Pane {
         SceneBounds b = SceneBounds.ofWindow(vm.scene(), vm.seriesProperty().get(), vm.poseSeriesProperty().get());
         double padX = (b.maxX() - b.minX()) * 0.08;
         double padY = (b.maxY() - b.minY()) * 0.08;
+        double legend = vm.layers().contains(Layer.LEGEND) ? ScenePainter.LEGEND_SPAN_PX : 0;
         vm.viewProperty().set(vm.viewProperty().get().fitting(b.minX() - padX, b.minY() - padY, b.maxX() + padX,
-                b.maxY() + padY, 30));
+                b.maxY() + padY, 30, legend));
         vm.requestField(MapQuality.FINE);
     }
 

@@ -20,6 +20,11 @@ public final class ScenePainter {
     static final double LABEL_FONT = 11;
     /** The "t = …" box in the top-left corner; axis labels keep out of it. */
     private static final LabelPlacer.Box HEADER = new LabelPlacer.Box(6, 6, 150, 20);
+    private static final double LEGEND_W = 178;
+    private static final double LEGEND_H = 218;
+    private static final double LEGEND_GAP = 10;
+    /** Width the colour legend takes from the right edge of the view, gap included. */
+    public static final double LEGEND_SPAN_PX = LEGEND_W + LEGEND_GAP;
     /** Contour labels per level at most. */
     private static final int LABELS_PER_LEVEL = 2;
 
@@ -173,9 +178,7 @@ public final class ScenePainter {
     }
 
     private static LabelPlacer.Box legendBox(Surface s) {
-        double w = 178;
-        double h = 218;
-        return new LabelPlacer.Box(s.width() - w - 10, s.height() - h - 10, w, h);
+        return new LabelPlacer.Box(s.width() - LEGEND_SPAN_PX, s.height() - LEGEND_H - LEGEND_GAP, LEGEND_W, LEGEND_H);
     }
 
     private static void legend(Surface s, LabelPlacer.Box box, double limit, double contourStep, boolean hasMap) {

@@ -89,11 +89,21 @@ public record ViewTransform(double centerX, double centerY, double pxPerM, doubl
 
     /** Shows the scene box [minX, maxX] × [minY, maxY] with {@code marginPx} free around it. */
     public ViewTransform fitting(double minX, double minY, double maxX, double maxY, double marginPx) {
+        return fitting(minX, minY, maxX, maxY, marginPx, 0);
+    }
+
+    /**
+     * As {@link #fitting(double, double, double, double, double)}, keeping the rightmost {@code
+     * rightReservedPx} of the view free (where the colour legend sits) and centring the box in the rest.
+     */
+    public ViewTransform fitting(double minX, double minY, double maxX, double maxY, double marginPx,
+                                 double rightReservedPx) {
         double w = Math.max(maxX - minX, 1e-6);
         double h = Math.max(maxY - minY, 1e-6);
-        double availW = Math.max(widthPx - 2 * marginPx, 10);
+        double reserved = Math.min(Math.max(rightReservedPx, 0), widthPx / 2);
+        double availW = Math.max(widthPx - reserved - 2 * marginPx, 10);
         double availH = Math.max(heightPx - 2 * marginPx, 10);
         double s = Math.max(MIN_PX_PER_M, Math.min(MAX_PX_PER_M, Math.min(availW / w, availH / h)));
-        return new ViewTransform((minX + maxX) / 2, (minY + maxY) / 2, s, widthPx, heightPx);
+        return new ViewTransform((minX + maxX) / 2 + reserved / 2 / s, (minY + maxY) / 2, s, widthPx, heightPx);
     }
 }

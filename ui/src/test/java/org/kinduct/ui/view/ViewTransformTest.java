@@ -67,4 +67,16 @@ class ViewTransformTest {
         assertTrue(v.screenX(-0.2) >= 20 - PIXEL_TOL && v.screenX(0.3) <= 780 + PIXEL_TOL);
         assertTrue(v.screenY(0.1) >= 20 - PIXEL_TOL && v.screenY(-0.05) <= 580 + PIXEL_TOL);
     }
+
+    @Test
+    void fittingBesideTheLegendKeepsTheReservedStripFreeAndCentresInTheRest() {
+        double reserved = 188;
+        ViewTransform v = new ViewTransform(5, 5, 1, 800, 600).fitting(-0.2, -0.05, 0.3, 0.1, 20, reserved);
+        assertTrue(v.screenX(-0.2) >= 20 - PIXEL_TOL && v.screenX(0.3) <= 800 - reserved - 20 + PIXEL_TOL,
+                v.screenX(-0.2) + " … " + v.screenX(0.3));
+        // The box is wider than tall here, so it fills the free width and sits centred in it.
+        assertEquals(20, v.screenX(-0.2), PIXEL_TOL);
+        assertEquals((800 - reserved) / 2, v.screenX(0.05), PIXEL_TOL);
+        assertTrue(v.screenY(0.1) >= 20 - PIXEL_TOL && v.screenY(-0.05) <= 580 + PIXEL_TOL);
+    }
 }
