@@ -3,6 +3,7 @@ package org.kinduct.ui.paint;
 import java.awt.Graphics2D;
 import java.awt.image.BufferedImage;
 import java.awt.image.DataBufferInt;
+import java.util.Arrays;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
@@ -36,19 +37,67 @@ public record FieldBackdrop(int[] argb, int width, int height, ViewTransform vie
         int h = Math.max(1, (int) Math.ceil(view.heightPx()));
         // Pre-multiplied pixels draw fastest; the image is opaque, so they equal plain ARGB.
         BufferedImage image = new BufferedImage(w, h, BufferedImage.TYPE_INT_ARGB_PRE);
+        int[] pixels = ((DataBufferInt) image.getRaster().getDataBuffer()).getData();
+        Arrays.fill(pixels, Palette.BACKGROUND);
         Set<Layer> field = fieldLayersOf(shown);
+        if (field.contains(Layer.HEAT_MAP) && raster != null) {
+            colours(pixels, w, h, view, raster, limit);
+        }
+        Set<Layer> lines = EnumSet.copyOf(field);
+        lines.remove(Layer.HEAT_MAP);
         Graphics2D g = image.createGraphics();
         List<FieldLayers.ContourLabel> labels;
         try {
-            Surface s = new Java2dSurface(g, w, h);
-            s.fill(Palette.BACKGROUND);
-            s.fillRect(0, 0, w, h);
-            labels = FieldLayers.draw(s, view, raster, limit, field);
+            labels = FieldLayers.draw(new Java2dSurface(g, w, h), view, raster, limit, lines);
         } finally {
             g.dispose();
         }
-        int[] pixels = ((DataBufferInt) image.getRaster().getDataBuffer()).getData();
         return new FieldBackdrop(pixels, w, h, view, field, labels);
+    }
+
+    /**
+     * The field colours, one per pixel, from B_z interpolated bilinearly between the map's cell
+     * centres and then coloured (so in-between colours are those of in-between fields). A loop of
+     * our own because Java2D's general image scaling took three times as long for a 1280 × 800 view.
+     */
+    private static void colours(int[] out, int w, int h, ViewTransform v, FieldRaster r, double limit) {
+        int[] c0 = new int[w];
+        int[] c1 = new int[w];
+        float[] wx = new float[w];
+        boolean[] inX = new boolean[w];
+        for (int px = 0; px < w; px++) {
+            double x = v.sceneX(px + 0.5);
+            double f = (x - r.minX()) / r.cellM() - 0.5;
+            inX[px] = x >= r.minX() && x <= r.maxX();
+            int c = (int) Math.floor(f);
+            c0[px] = Math.max(0, Math.min(r.cols() - 1, c));
+            c1[px] = Math.max(0, Math.min(r.cols() - 1, c + 1));
+            wx[px] = (float) (f - c);
+        }
+        float[] bz = r.bzT();
+        for (int py = 0; py < h; py++) {
+            double y = v.sceneY(py + 0.5);
+            if (y < r.minY() || y > r.maxY()) {
+                continue;
+            }
+            double f = (r.maxY() - y) / r.cellM() - 0.5;
+            int row = (int) Math.floor(f);
+            int base0 = Math.max(0, Math.min(r.rows() - 1, row)) * r.cols();
+            int base1 = Math.max(0, Math.min(r.rows() - 1, row + 1)) * r.cols();
+            float wy = (float) (f - row);
+            int at = py * w;
+            for (int px = 0; px < w; px++) {
+                if (!inX[px]) {
+                    continue;
+                }
+                float top = bz[base0 + c0[px]] + (bz[base0 + c1[px]] - bz[base0 + c0[px]]) * wx[px];
+                float bottom = bz[base1 + c0[px]] + (bz[base1 + c1[px]] - bz[base1 + c0[px]]) * wx[px];
+                int argb = DivergingScale.argb(top + (bottom - top) * wy, limit);
+                if (argb >>> 24 != 0) {
+                    out[at + px] = argb;
+                }
+            }
+        }
     }
 
     /** The field layers among {@code shown}. */

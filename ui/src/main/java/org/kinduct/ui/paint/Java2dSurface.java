@@ -10,7 +10,9 @@ import java.awt.geom.Ellipse2D;
 import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
+import java.awt.color.ColorSpace;
 import java.awt.image.ColorModel;
+import java.awt.image.DataBuffer;
 import java.awt.image.DataBufferInt;
 import java.awt.image.DirectColorModel;
 import java.awt.image.Raster;
@@ -26,6 +28,9 @@ import java.util.Deque;
 public final class Java2dSurface implements Surface {
 
     private static final float MITER_LIMIT = 10;
+    private static volatile Opacity lastOpacity;
+    private static final DirectColorModel OPAQUE_PRE = new DirectColorModel(ColorSpace.getInstance(ColorSpace.CS_sRGB),
+            32, 0x00FF0000, 0x0000FF00, 0x000000FF, 0xFF000000, true, DataBuffer.TYPE_INT);
 
     private final Graphics2D g;
     private final double width;
@@ -199,10 +204,30 @@ public final class Java2dSurface implements Surface {
 
     /** An image over the caller's pixels, without copying them. */
     private static BufferedImage wrap(int[] argb, int cols, int rows) {
-        DirectColorModel model = (DirectColorModel) ColorModel.getRGBdefault();
+        // Opaque pixels are their own pre-multiplied form, which Java2D draws faster. The answer is
+        // kept for the last array: the live view draws the same backdrop frame after frame.
+        Opacity known = lastOpacity;
+        if (known == null || known.pixels() != argb) {
+            known = new Opacity(argb, opaque(argb));
+            lastOpacity = known;
+        }
+        DirectColorModel model = known.opaque() ? OPAQUE_PRE : (DirectColorModel) ColorModel.getRGBdefault();
         WritableRaster raster = Raster.createPackedRaster(new DataBufferInt(argb, argb.length), cols, rows, cols,
                 model.getMasks(), null);
-        return new BufferedImage(model, raster, false, null);
+        return new BufferedImage(model, raster, model.isAlphaPremultiplied(), null);
+    }
+
+    /** Whether every pixel of an array is opaque; arrays handed to {@link #image} never change. */
+    private record Opacity(int[] pixels, boolean opaque) {
+    }
+
+    private static boolean opaque(int[] argb) {
+        for (int p : argb) {
+            if (p >>> 24 != 0xFF) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private void draw(Shape shape) {

@@ -65,7 +65,8 @@ public interface Surface {
 
     /**
      * Draws a {@code cols × rows} raster of {@code 0xAARRGGBB} pixels (row 0 at the top) stretched
-     * over the screen box, smoothing allowed.
+     * over the screen box, smoothing allowed. The array must not change afterwards: a surface may
+     * keep what it learnt of it (the live view draws the same field backdrop frame after frame).
      */
     void image(int[] argb, int cols, int rows, double x, double y, double w, double h);
 }
