@@ -108,7 +108,7 @@ final class SnapshotPage {
         }
         description = desc;
         mapTop = MARGIN + TITLE + 8 + description.size() * LINE + LINE + 8;
-        ViewChoice.Box box = ViewChoice.box(options.view(), scene, options.tS());
+        ViewChoice.Box box = ViewChoice.box(options.view(), scene, options.tS(), poses);
         double aspect = (box.y1() - box.y0()) / (box.x1() - box.x0());
         // A chosen box is shown whole but, like a fitted scene, clear of the legend when there is one.
         if (options.view() instanceof ViewChoice.Fit || options.layers().contains(Layer.LEGEND)) {

@@ -1,7 +1,10 @@
 package org.kinduct.ui.export;
 
+import java.util.Map;
+import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.ui.edit.SceneBounds;
+import org.kinduct.ui.paint.Placement;
 import org.kinduct.ui.view.ViewTransform;
 
 /** Which part of the plane a snapshot or field map shows. */
@@ -38,6 +41,11 @@ public sealed interface ViewChoice {
 
     /** The box shown, metres: {x0, y0, x1, y1}. */
     static Box box(ViewChoice choice, Scene scene, double tS) {
+        return box(choice, scene, tS, Map.of());
+    }
+
+    /** As {@link #box(ViewChoice, Scene, double)}; a fitted box also holds the free bodies where {@code poses} put them at {@code tS}. */
+    static Box box(ViewChoice choice, Scene scene, double tS, Map<String, Pose> poses) {
         if (choice instanceof Box b) {
             return b;
         }
@@ -47,8 +55,8 @@ public sealed interface ViewChoice {
         }
         double t0 = scene.time().t0S();
         double t1 = scene.time().t1S();
-        SceneBounds b = SceneBounds.of(scene, tS).union(SceneBounds.of(scene, t0)).union(SceneBounds.of(scene, t1))
-                .union(SceneBounds.of(scene, (t0 + t1) / 2));
+        SceneBounds b = SceneBounds.of(scene, Placement.of(scene, tS, poses)).union(SceneBounds.of(scene, t0))
+                .union(SceneBounds.of(scene, t1)).union(SceneBounds.of(scene, (t0 + t1) / 2));
         double w = Math.max(b.maxX() - b.minX(), 1e-3);
         double h = Math.max(b.maxY() - b.minY(), 1e-3);
         double pad = FIT_PAD * Math.max(w, h);
