@@ -350,12 +350,13 @@ final class EditorCanvas extends Pane {
         double y0 = Math.min(v.sceneY(pressY), v.sceneY(bandY));
         double y1 = Math.max(v.sceneY(pressY), v.sceneY(bandY));
         Scene s = vm.scene();
-        double t = vm.timeProperty().get();
+        // What the user sees: bodies where they are now, free ones where the run has them.
+        Placement seen = Placement.of(s, vm.timeProperty().get(), vm.posesProperty().get());
         java.util.Set<String> inside = new java.util.HashSet<>();
         s.sources().forEach(x -> inside.add(x.id()));
         s.conductors().forEach(x -> inside.add(x.id()));
         inside.removeIf(id -> {
-            SceneBounds b = SceneBounds.ofObjects(s, Set.of(id), t);
+            SceneBounds b = SceneBounds.ofObjects(s, Set.of(id), seen);
             return b.minX() < x0 || b.maxX() > x1 || b.minY() < y0 || b.maxY() > y1
                     || s.source(id).filter(src -> src instanceof org.kinduct.scene.Source.UniformField).isPresent();
         });
