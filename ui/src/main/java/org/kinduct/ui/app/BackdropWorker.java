@@ -3,7 +3,7 @@ package org.kinduct.ui.app;
 import java.util.Set;
 import java.util.concurrent.Executor;
 import java.util.concurrent.Executors;
-import java.util.function.Consumer;
+import java.util.function.BiConsumer;
 import org.kinduct.ui.field.LatestOnly;
 import org.kinduct.ui.paint.FieldBackdrop;
 import org.kinduct.ui.paint.FieldRaster;
@@ -24,13 +24,14 @@ final class BackdropWorker {
 
     private final LatestOnly jobs = new LatestOnly(THREAD);
     private final Executor deliverOn;
-    private final Consumer<FieldBackdrop> deliver;
+    private final BiConsumer<FieldRaster, FieldBackdrop> deliver;
 
     /**
-     * @param deliver receives each backdrop through {@code deliverOn}, or null when rendering failed
-     *        (the painter then draws the field layers itself and meets the same error where it is shown)
+     * @param deliver receives each map and its backdrop through {@code deliverOn}, the backdrop null
+     *        when rendering failed (the painter then draws the field layers itself and meets the
+     *        same error where it is shown)
      */
-    BackdropWorker(Executor deliverOn, Consumer<FieldBackdrop> deliver) {
+    BackdropWorker(Executor deliverOn, BiConsumer<FieldRaster, FieldBackdrop> deliver) {
         this.deliverOn = deliverOn;
         this.deliver = deliver;
     }
@@ -46,7 +47,7 @@ final class BackdropWorker {
                 b = null;
             }
             FieldBackdrop done = b;
-            deliverOn.execute(() -> deliver.accept(done));
+            deliverOn.execute(() -> deliver.accept(raster, done));
         });
     }
 }

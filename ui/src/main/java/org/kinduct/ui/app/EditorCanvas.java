@@ -94,8 +94,9 @@ final class EditorCanvas extends Pane {
                 vm.viewProperty(), vm.layers(), vm.selection(), vm.rangeProperty()}) {
             o.addListener(x -> needsPaint = true);
         }
-        backdrops = new BackdropWorker(Platform::runLater, b -> {
+        backdrops = new BackdropWorker(Platform::runLater, (raster, b) -> {
             backdrop = vm.rasterProperty().get() != null ? b : null;
+            vm.mapShown(raster);
             needsPaint = true;
         });
         for (Observable o : new Observable[] {vm.rasterProperty(), vm.viewProperty(), vm.layers(), vm.rangeProperty()}) {

@@ -66,6 +66,9 @@ public final class EditorViewModel {
      * the two cores with painting, and a map that trails the sources by a few frames is fine to look at.
      */
     static final double PLAYBACK_MAP_INTERVAL_S = 0.05;
+    private static final double LATENCY_SMOOTHING = 0.3;
+    /** A map that took longer than this (a stall) is not taken as the usual delay. */
+    private static final double MAX_MAP_LATENCY_S = 0.5;
 
     /** How finely to sample the field map, screen pixels per sample. */
     public enum MapQuality {
@@ -116,6 +119,10 @@ public final class EditorViewModel {
     private long evaluatorRevision = -1;
     private long seriesRevision = -1;
     private double sincePlaybackMap = Double.POSITIVE_INFINITY;
+    /** Wall-clock seconds from asking for a playback map to seeing it, smoothed; a first guess until measured. */
+    private double mapLatencyS = 0.1;
+    private double leadMapT = Double.NaN;
+    private long leadMapAskedNs;
     /** Watches the current revision's simulation; outdated (and so stopped) by the next revision. */
     private RunWatch watch;
 
@@ -240,17 +247,39 @@ public final class EditorViewModel {
 
     /** Advances playback by {@code realSeconds} of wall-clock time times the speed, wrapping at the end. */
     public void advance(double realSeconds) {
-        TimeSpan span = scene.get().time();
-        double t = time.get() + realSeconds * speed.get();
-        if (t > span.t1S()) {
-            t = span.t0S() + (t - span.t1S()) % (span.t1S() - span.t0S());
-        }
-        time.set(t);
+        time.set(wrapped(time.get() + realSeconds * speed.get()));
         sincePlaybackMap += realSeconds;
         if (sincePlaybackMap >= PLAYBACK_MAP_INTERVAL_S) {
             sincePlaybackMap = 0;
-            requestField(MapQuality.COARSE);
+            // Ask for the instant playback will have reached when the map is on screen, so moving
+            // sources and their colours stay together instead of the colours trailing behind.
+            double lead = (mapLatencyS + PLAYBACK_MAP_INTERVAL_S / 2) * speed.get();
+            leadMapT = wrapped(time.get() + lead);
+            leadMapAskedNs = clockNs.getAsLong();
+            requestField(MapQuality.COARSE, leadMapT);
         }
+    }
+
+    /**
+     * The view shows the map made for {@code r}: if it is the latest map asked for ahead of
+     * playback, the wall-clock time it took from asking to showing refines how far ahead to ask.
+     */
+    public void mapShown(FieldRaster r) {
+        if (r.tS() == leadMapT && r.revision() == revision.get()) {
+            double took = (clockNs.getAsLong() - leadMapAskedNs) * 1e-9;
+            mapLatencyS += LATENCY_SMOOTHING * (Math.min(took, MAX_MAP_LATENCY_S) - mapLatencyS);
+            leadMapT = Double.NaN;
+        }
+    }
+
+    /** How far ahead of playback, in wall-clock seconds, maps are asked for (before the half interval). */
+    double mapLatencyS() {
+        return mapLatencyS;
+    }
+
+    private double wrapped(double t) {
+        TimeSpan span = scene.get().time();
+        return t > span.t1S() ? span.t0S() + (t - span.t1S()) % (span.t1S() - span.t0S()) : t;
     }
 
     /** Moves by {@code steps} of the scene's time step. */
@@ -422,12 +451,16 @@ public final class EditorViewModel {
 
     /** Asks for a field map of the current view at the current time. */
     public void requestField(MapQuality quality) {
+        requestField(quality, time.get());
+    }
+
+    private void requestField(MapQuality quality, double tS) {
         ViewTransform v = view.get();
         if (v.widthPx() < 1 || v.heightPx() < 1 || !layers.contains(Layer.HEAT_MAP)
                 && !layers.contains(Layer.CONTOURS) && !layers.contains(Layer.SYMBOLS)) {
             return;
         }
-        mapper.request(new MapRequest(scene.get(), revision.get(), time.get(), v, quality.stepPx));
+        mapper.request(new MapRequest(scene.get(), revision.get(), tS, v, quality.stepPx));
     }
 
     /** Takes a finished map unless the scene changed since it was asked for. */

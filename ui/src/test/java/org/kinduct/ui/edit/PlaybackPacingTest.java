@@ -14,6 +14,7 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.field.SceneEvaluator;
+import org.kinduct.ui.paint.FieldRaster;
 
 /**
  * Playback pace: while playing, the view shows the precomputed time series instead of solving
@@ -112,6 +113,39 @@ class PlaybackPacingTest {
         // One map on the first frame, then one each time PLAYBACK_MAP_INTERVAL_S of frames has passed.
         int expected = 1 + (int) Math.floor((frames - 1) / Math.ceil(EditorViewModel.PLAYBACK_MAP_INTERVAL_S / frame));
         assertEquals(expected, maps.get());
+    }
+
+    @Test
+    void playbackMapsAreAskedAheadByTheMeasuredDelay() {
+        long[] nowNs = {0};
+        List<double[]> asked = new ArrayList<>();
+        EditorViewModel vm = new EditorViewModel(scene(), s -> new CountingEvaluator(), SAME_THREAD, SAME_THREAD,
+                () -> nowNs[0]);
+        List<FieldRaster> maps = new ArrayList<>();
+        vm.rasterProperty().addListener((o, a, r) -> {
+            maps.add(r);
+            asked.add(new double[] {vm.timeProperty().get(), r.tS()});
+        });
+        double speed = 0.5;
+        vm.speedProperty().set(speed);
+        vm.playingProperty().set(true);
+        vm.advance(0.01);
+        double guess = vm.mapLatencyS();
+        double[] first = asked.get(asked.size() - 1);
+        assertEquals(first[0] + (guess + EditorViewModel.PLAYBACK_MAP_INTERVAL_S / 2) * speed, first[1], 1e-12);
+
+        double took = 3 * guess;
+        nowNs[0] += (long) (took * 1e9);
+        vm.mapShown(maps.get(maps.size() - 1));
+        double learnt = vm.mapLatencyS();
+        assertTrue(learnt > guess && learnt <= took, "moves toward the measured delay: " + learnt);
+
+        int before = asked.size();
+        for (int i = 0; i < 10 && asked.size() == before; i++) {
+            vm.advance(0.01);
+        }
+        double[] next = asked.get(asked.size() - 1);
+        assertEquals(next[0] + (learnt + EditorViewModel.PLAYBACK_MAP_INTERVAL_S / 2) * speed, next[1], 1e-12);
     }
 
     private static void drain(Queue<Runnable> jobs) {
