@@ -21,7 +21,7 @@ import org.kinduct.ui.paint.FieldRaster;
  * Computes B_z maps for display off the UI thread. Requests coalesce: while one map is being
  * computed only the newest waiting request is kept. Sources that never change (on still bodies,
  * constant drive) are evaluated once per grid and cached; only the rest is re-evaluated per
- * frame. Rows are computed in parallel.
+ * frame. Rows of large maps are computed in parallel.
  *
  * <p>Results go to {@code deliver} through {@code deliverOn} (the UI thread in the app, the same
  * thread in tests); each carries the revision and time it was computed for, so the receiver can
@@ -32,6 +32,7 @@ public final class FieldMapper {
     /** Fraction of samples kept for the automatic colour limit. */
     private static final double AUTO_PERCENTILE = 0.98;
     private static final int MAX_CELLS = 1_200_000;
+    private static final int PARALLEL_CELLS = 50_000;
 
     private final Function<Scene, SceneEvaluator> evaluators;
     private final LatestOnly jobs;
@@ -109,7 +110,9 @@ public final class FieldMapper {
     }
 
     private static void add(float[] values, SceneEvaluator.BzField field, Grid g) {
-        IntStream.range(0, g.rows).parallel().forEach(row -> {
+        IntStream rows = IntStream.range(0, g.rows);
+        // Small maps (coarse ones while playing) stay on one thread and leave the other core to painting.
+        (g.cols * g.rows >= PARALLEL_CELLS ? rows.parallel() : rows).forEach(row -> {
             double y = g.maxY - (row + 0.5) * g.cell;
             int base = row * g.cols;
             for (int col = 0; col < g.cols; col++) {
