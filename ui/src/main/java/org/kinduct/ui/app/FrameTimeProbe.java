@@ -78,6 +78,7 @@ public final class FrameTimeProbe {
         double[] interval = new double[frames];
         double[] paint = new double[frames];
         double[] seriesS = {0};
+        List<Double> solving = new ArrayList<>();
         CompletableFuture<Void> done = new CompletableFuture<>();
         onFx(() -> {
             EditorViewModel vm = new EditorViewModel(scene, Evaluators.solver(), work, Platform::runLater);
@@ -95,7 +96,11 @@ public final class FrameTimeProbe {
             canvas.onPainted(ms -> {
                 long now = System.nanoTime();
                 if (vm.seriesProperty().get().isEmpty()) {
-                    // Playback is measured once the time series is solved, as after any edit.
+                    // Playback proper is measured once the time series is solved; until then every
+                    // frame's instant is solved on the workers, as right after an edit.
+                    if (last[0] != 0) {
+                        solving.add((now - last[0]) * 1e-6);
+                    }
                     last[0] = now;
                     return;
                 }
@@ -122,18 +127,19 @@ public final class FrameTimeProbe {
         done.get(5, TimeUnit.MINUTES);
         work.shutdownNow();
         double[] offThread = offThreadWork(scene, 40);
+        double[] meanwhile = solving.stream().mapToDouble(Double::doubleValue).toArray();
         return String.format(Locale.ROOT,
                 "%d frames of a %d-object scene with moving magnets in a %d×%d editor canvas, software rendering, "
                         + "%d cores (median / 95th percentile, ms): frame time %.1f / %.1f (%.0f %% of frames within "
                         + "%.1f ms), of which painting on the UI thread %.1f / %.1f; processor time per frame "
                         + "(independent of other load): UI thread %.1f, render thread %.1f; off the UI thread per "
                         + "map: field map (4 px cells) + snapshot %.1f / %.1f, backdrop %.1f / %.1f; measured once "
-                        + "the time series was solved (%.1f s after opening)",
+                        + "the time series was solved (%.1f s after opening; frame time meanwhile %.1f / %.1f)",
                 frames, scene.sources().size() + scene.conductors().size(), WIDTH, HEIGHT,
                 Runtime.getRuntime().availableProcessors(), median(interval), p95(interval),
                 100 * within(interval, SIXTY_HZ_MS), SIXTY_HZ_MS, median(paint), p95(paint),
                 cpu.perFrameMs("JavaFX Application Thread", frames), cpu.perFrameMs("QuantumRenderer-0", frames),
-                offThread[0], offThread[1], offThread[2], offThread[3], seriesS[0]);
+                offThread[0], offThread[1], offThread[2], offThread[3], seriesS[0], median(meanwhile), p95(meanwhile));
     }
 
     /** Median and 95th percentile of the map + snapshot and of the backdrop, over {@code n} times of the window. */
