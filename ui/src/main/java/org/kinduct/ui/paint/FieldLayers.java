@@ -1,7 +1,9 @@
 package org.kinduct.ui.paint;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.kinduct.ui.view.NiceSteps;
 import org.kinduct.ui.view.ViewTransform;
@@ -22,9 +24,9 @@ public final class FieldLayers {
     private static final int MAX_CONTOUR_LEVELS_PER_SIDE = 5;
     private static final double CONTOUR_CELL_PX = 4;
     /** A contour label needs this much room from the lines of other levels. */
-    private static final double CONTOUR_CLEAR_PX = 16;
-    /** Label spots tried per level, spread along its lines. */
-    private static final int SPOTS_PER_LEVEL = 7;
+    private static final double CONTOUR_CLEAR_PX = 10;
+    /** Label spots tried per level, spread along its lines (where levels crowd, few are free). */
+    private static final int SPOTS_PER_LEVEL = 60;
     private static final int MAX_SEGMENTS_PER_LEVEL = 4000;
 
     private FieldLayers() {
@@ -120,12 +122,13 @@ public final class FieldLayers {
             mids.add(segs);
             texts.add(Quantities.bz(level));
         }
+        LevelGrid near = new LevelGrid(mids);
         List<ContourLabel> labels = new ArrayList<>();
         for (int i = 0; i < mids.size(); i++) {
             List<double[]> own = mids.get(i);
             List<double[]> spots = new ArrayList<>();
             for (int j = 0; j < own.size(); j += Math.max(1, own.size() / SPOTS_PER_LEVEL)) {
-                if (!crowded(mids, i, own.get(j))) {
+                if (!near.crowded(i, own.get(j))) {
                     spots.add(own.get(j));
                 }
             }
@@ -134,21 +137,47 @@ public final class FieldLayers {
         return labels;
     }
 
-    /** True when a line of another level passes within {@value #CONTOUR_CLEAR_PX} px of the point. */
-    private static boolean crowded(List<List<double[]>> mids, int level, double[] at) {
-        double r2 = CONTOUR_CLEAR_PX * CONTOUR_CLEAR_PX;
-        for (int j = 0; j < mids.size(); j++) {
-            if (j == level) {
-                continue;
-            }
-            for (double[] p : mids.get(j)) {
-                double dx = p[0] - at[0];
-                double dy = p[1] - at[1];
-                if (dx * dx + dy * dy < r2) {
-                    return true;
+    /**
+     * Contour points of every level bucketed in squares of {@value #CONTOUR_CLEAR_PX} px, so the
+     * question "does another level pass close by?" looks at nine squares instead of every point.
+     */
+    private static final class LevelGrid {
+        private final Map<Long, List<double[]>> squares = new HashMap<>();
+
+        LevelGrid(List<List<double[]>> mids) {
+            for (int level = 0; level < mids.size(); level++) {
+                for (double[] p : mids.get(level)) {
+                    squares.computeIfAbsent(key(square(p[0]), square(p[1])), k -> new ArrayList<>())
+                            .add(new double[] {p[0], p[1], level});
                 }
             }
         }
-        return false;
+
+        /** True when a line of another level passes within {@value #CONTOUR_CLEAR_PX} px of the point. */
+        boolean crowded(int level, double[] at) {
+            double r2 = CONTOUR_CLEAR_PX * CONTOUR_CLEAR_PX;
+            long cx = square(at[0]);
+            long cy = square(at[1]);
+            for (long dx = -1; dx <= 1; dx++) {
+                for (long dy = -1; dy <= 1; dy++) {
+                    for (double[] p : squares.getOrDefault(key(cx + dx, cy + dy), List.of())) {
+                        double ex = p[0] - at[0];
+                        double ey = p[1] - at[1];
+                        if (p[2] != level && ex * ex + ey * ey < r2) {
+                            return true;
+                        }
+                    }
+                }
+            }
+            return false;
+        }
+
+        private static long square(double px) {
+            return (long) Math.floor(px / CONTOUR_CLEAR_PX);
+        }
+
+        private static long key(long x, long y) {
+            return (x << 32) ^ (y & 0xFFFFFFFFL);
+        }
     }
 }

@@ -25,6 +25,8 @@ public final class ScenePainter {
     private static final double LEGEND_GAP = 10;
     /** Width the colour legend takes from the right edge of the view, gap included. */
     public static final double LEGEND_SPAN_PX = LEGEND_W + LEGEND_GAP;
+    /** Two labels of one level at least this far apart, so they name different stretches of it. */
+    private static final double SAME_LEVEL_LABEL_GAP_PX = 200;
     /** Contour labels per level at most. */
     private static final int LABELS_PER_LEVEL = 2;
 
@@ -138,16 +140,16 @@ public final class ScenePainter {
                                           List<Runnable> labels) {
         double w = s.textWidth(label.text(), LABEL_FONT, false) + 4;
         double h = LABEL_FONT + 3;
-        int placed = 0;
-        for (int i = 0; i < label.spots().size() && placed < LABELS_PER_LEVEL; i++) {
+        List<double[]> placed = new ArrayList<>();
+        for (int i = 0; i < label.spots().size() && placed.size() < LABELS_PER_LEVEL; i++) {
             double[] m = label.spots().get(i);
             LabelPlacer.Box b = new LabelPlacer.Box(m[0] - w / 2, m[1] - h / 2, w, h);
-            if (b.x() < 0 || b.y() < 0 || b.x() + w > s.width()
-                    || b.y() + h > s.height() || !placer.isFree(b)) {
+            if (b.x() < 0 || b.y() < 0 || b.x() + w > s.width() || b.y() + h > s.height() || !placer.isFree(b)
+                    || placed.stream().anyMatch(p -> Math.hypot(p[0] - m[0], p[1] - m[1]) < SAME_LEVEL_LABEL_GAP_PX)) {
                 continue;
             }
             placer.reserve(b);
-            placed++;
+            placed.add(m);
             labels.add(() -> {
                 s.fill(0xD9FFFFFF);
                 s.fillRect(b.x(), b.y(), b.w(), b.h());

@@ -77,6 +77,22 @@ class PainterLabelTest {
     }
 
     @Test
+    void twoLabelsOfOneLevelNameDifferentStretchesOfIt() {
+        // The same ramp: each level is a straight vertical line the full height of the view.
+        FieldRaster ramp = raster((x, y) -> x / 0.2 * 0.5);
+        List<Text> labels = contourLabels(texts(ramp, EnumSet.of(Layer.CONTOURS)));
+        for (int i = 0; i < labels.size(); i++) {
+            for (int j = i + 1; j < labels.size(); j++) {
+                Text a = labels.get(i);
+                Text b = labels.get(j);
+                if (a.text().equals(b.text())) {
+                    assertTrue(Math.hypot(a.x() - b.x(), a.y() - b.y()) >= 200, a + " and " + b);
+                }
+            }
+        }
+    }
+
+    @Test
     void axisAndContourLabelsAreLargeEnoughForPrintAndKeepOutOfTheTimeBox() {
         FieldRaster ramp = raster((x, y) -> x / 0.2 * 0.5);
         List<Text> all = texts(ramp, EnumSet.of(Layer.CONTOURS, Layer.GRID));
