@@ -50,18 +50,21 @@ public final class ScenePainter {
         double limit = f.range().limitFor(f.raster());
         List<FieldLayers.ContourLabel> contourLabels = backdrop != null && backdrop.shows(f.layers())
                 ? backdrop.drawOn(s, v) : FieldLayers.draw(s, v, f.raster(), limit, f.layers());
-        if (f.shows(Layer.GRID)) {
-            grid(s, v);
+        // Boxes the header, scale bar and legend will cover: no label is drawn under them.
+        List<LabelPlacer.Box> fixed = new ArrayList<>();
+        fixed.add(new LabelPlacer.Box(0, 0, HEADER.x() + HEADER.w() + 14, HEADER.y() + HEADER.h()));
+        if (f.shows(Layer.SCALE_BAR)) {
+            fixed.add(new LabelPlacer.Box(8, s.height() - 44, 180, 40));
         }
-        LabelPlacer placer = new LabelPlacer(s.width(), s.height());
         LabelPlacer.Box legendBox = f.shows(Layer.LEGEND) ? legendBox(s) : null;
         if (legendBox != null) {
-            placer.reserve(legendBox);
+            fixed.add(legendBox);
         }
-        placer.reserve(new LabelPlacer.Box(0, 0, HEADER.x() + HEADER.w() + 14, HEADER.y() + HEADER.h()));
-        if (f.shows(Layer.SCALE_BAR)) {
-            placer.reserve(new LabelPlacer.Box(8, s.height() - 44, 180, 40));
+        if (f.shows(Layer.GRID)) {
+            grid(s, v, new ArrayList<>(fixed));
         }
+        LabelPlacer placer = new LabelPlacer(s.width(), s.height());
+        fixed.forEach(placer::reserve);
         Placement placement = Placement.of(f.scene(), f.tS(), f.poses());
         if (f.shows(Layer.SOURCES)) {
             SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer);
@@ -90,7 +93,8 @@ public final class ScenePainter {
         s.restore();
     }
 
-    private static void grid(Surface s, ViewTransform v) {
+    /** Grid lines and axis values; a value is left out where it would touch a box of {@code taken} or another value. */
+    private static void grid(Surface s, ViewTransform v, List<LabelPlacer.Box> taken) {
         double major = NiceSteps.atLeast(90 / v.pxPerM());
         double mantissa = major / Math.pow(10, Math.floor(Math.log10(major) + 1e-9));
         double minor = major / (Math.round(mantissa) == 2 ? 4 : 5);
@@ -103,19 +107,22 @@ public final class ScenePainter {
         s.fillRect(Math.round(v.screenX(0)), 0, 1, s.height());
         s.fillRect(0, Math.round(v.screenY(0)), s.width(), 1);
         s.fill(Palette.MUTED);
-        for (double x = Math.ceil(v.minX() / major) * major; x <= v.maxX(); x += major) {
-            axisLabel(s, Quantities.length(snap(x, major)), v.screenX(x) + 3, 30, false);
-        }
         for (double y = Math.ceil(v.minY() / major) * major; y <= v.maxY(); y += major) {
-            axisLabel(s, Quantities.length(snap(y, major)), 4, v.screenY(y) - 2, true);
+            axisLabel(s, Quantities.length(snap(y, major)), 4, v.screenY(y) - 2, true, taken);
+        }
+        for (double x = Math.ceil(v.minX() / major) * major; x <= v.maxX(); x += major) {
+            axisLabel(s, Quantities.length(snap(x, major)), v.screenX(x) + 3, 30, false, taken);
         }
     }
 
-    /** An axis label with its top-left (or bottom-left) corner at (x, y), left out where the "t = …" box is. */
-    private static void axisLabel(Surface s, String text, double x, double y, boolean bottom) {
+    /** An axis label with its top-left (or bottom-left) corner at (x, y), unless it would be cut off or touch a taken box. */
+    private static void axisLabel(Surface s, String text, double x, double y, boolean bottom,
+                                  List<LabelPlacer.Box> taken) {
         double top = bottom ? y - LABEL_FONT - 2 : y;
         LabelPlacer.Box box = new LabelPlacer.Box(x, top, s.textWidth(text, LABEL_FONT, false), LABEL_FONT + 2);
-        if (!box.overlaps(HEADER, 2)) {
+        boolean inside = box.x() + box.w() <= s.width() && box.y() >= 0 && box.y() + box.h() <= s.height();
+        if (inside && taken.stream().noneMatch(t -> box.overlaps(t, 2))) {
+            taken.add(box);
             s.text(text, x, y, LABEL_FONT, false, bottom ? Surface.Anchor.BOTTOM_LEFT : Surface.Anchor.TOP_LEFT);
         }
     }

@@ -108,6 +108,33 @@ class PainterLabelTest {
     }
 
     @Test
+    void axisValuesNeitherTouchEachOtherNorHideUnderTheScaleBarNorRunOffTheEdge() {
+        FieldRaster ramp = raster((x, y) -> x / 0.2 * 0.5);
+        List<Text> axis = texts(ramp, EnumSet.of(Layer.GRID, Layer.SCALE_BAR)).stream()
+                .filter(t -> t.size() == ScenePainter.LABEL_FONT).toList();
+        assertTrue(axis.size() > 4, axis.toString());
+        List<double[]> boxes = new ArrayList<>();
+        for (Text t : axis) {
+            double w = 0.6 * t.size() * t.text().length();
+            double h = t.size() + 2;
+            // x values hang from y = 30 (top-left anchor); y values stand at x = 4 (bottom-left anchor).
+            double top = t.x() == 4 ? t.y() - h : t.y();
+            boxes.add(new double[] {t.x(), top, w, h});
+            assertTrue(t.x() >= 0 && t.x() + w <= W && top >= 0 && top + h <= H, t + " is cut off");
+            boolean underBar = t.x() < 8 + 180 && t.x() + w > 8 && top < H - 4 && top + h > H - 44;
+            assertFalse(underBar, t + " is under the scale bar");
+        }
+        for (int i = 0; i < boxes.size(); i++) {
+            for (int j = i + 1; j < boxes.size(); j++) {
+                double[] a = boxes.get(i);
+                double[] b = boxes.get(j);
+                boolean overlap = a[0] < b[0] + b[2] && b[0] < a[0] + a[2] && a[1] < b[1] + b[3] && b[1] < a[1] + a[3];
+                assertFalse(overlap, axis.get(i) + " touches " + axis.get(j));
+            }
+        }
+    }
+
+    @Test
     void currentArrowsShrinkOnLoopsThatAreSmallOnScreen() {
         List<Vec2> square10mm = List.of(new Vec2(0, 0), new Vec2(0.01, 0), new Vec2(0.01, 0.01), new Vec2(0, 0.01));
         // 10 mm at 2000 px/m is 20 px across: the smallest arrows.
