@@ -1,13 +1,7 @@
 package org.kinduct.ui.app;
 
 import java.awt.Graphics2D;
-import java.awt.color.ColorSpace;
 import java.awt.image.BufferedImage;
-import java.awt.image.DataBuffer;
-import java.awt.image.DataBufferInt;
-import java.awt.image.DirectColorModel;
-import java.awt.image.Raster;
-import java.awt.image.WritableRaster;
 import java.nio.IntBuffer;
 import javafx.scene.canvas.Canvas;
 import javafx.scene.canvas.GraphicsContext;
@@ -31,10 +25,6 @@ import org.kinduct.ui.paint.ScenePainter;
  */
 final class CanvasFrames {
 
-    /** Java2D's layout of JavaFX's INT_ARGB_PRE: packed ARGB ints, colours pre-multiplied by alpha. */
-    private static final DirectColorModel ARGB_PRE = new DirectColorModel(ColorSpace.getInstance(ColorSpace.CS_sRGB),
-            32, 0x00FF0000, 0x0000FF00, 0x000000FF, 0xFF000000, true, DataBuffer.TYPE_INT);
-
     private final Canvas canvas;
     private final Buffer[] buffers = new Buffer[2];
     private int next;
@@ -49,11 +39,9 @@ final class CanvasFrames {
 
         static Buffer of(int width, int height) {
             int[] data = new int[width * height];
-            WritableRaster raster = Raster.createPackedRaster(new DataBufferInt(data, data.length), width, height,
-                    width, ARGB_PRE.getMasks(), null);
             PixelBuffer<IntBuffer> pixels = new PixelBuffer<>(width, height, IntBuffer.wrap(data),
                     PixelFormat.getIntArgbPreInstance());
-            return new Buffer(width, height, new BufferedImage(ARGB_PRE, raster, true, null), pixels,
+            return new Buffer(width, height, Java2dSurface.premultipliedOver(data, width, height), pixels,
                     new WritableImage(pixels));
         }
     }

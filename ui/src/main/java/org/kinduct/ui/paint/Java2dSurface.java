@@ -29,7 +29,7 @@ public final class Java2dSurface implements Surface {
 
     private static final float MITER_LIMIT = 10;
     private static volatile Opacity lastOpacity;
-    private static final DirectColorModel OPAQUE_PRE = new DirectColorModel(ColorSpace.getInstance(ColorSpace.CS_sRGB),
+    private static final DirectColorModel PREMULTIPLIED = new DirectColorModel(ColorSpace.getInstance(ColorSpace.CS_sRGB),
             32, 0x00FF0000, 0x0000FF00, 0x000000FF, 0xFF000000, true, DataBuffer.TYPE_INT);
 
     private final Graphics2D g;
@@ -211,8 +211,20 @@ public final class Java2dSurface implements Surface {
             known = new Opacity(argb, opaque(argb));
             lastOpacity = known;
         }
-        DirectColorModel model = known.opaque() ? OPAQUE_PRE : (DirectColorModel) ColorModel.getRGBdefault();
-        WritableRaster raster = Raster.createPackedRaster(new DataBufferInt(argb, argb.length), cols, rows, cols,
+        DirectColorModel model = known.opaque() ? PREMULTIPLIED : (DirectColorModel) ColorModel.getRGBdefault();
+        return imageOver(argb, cols, rows, model);
+    }
+
+    /**
+     * A Java2D image drawing straight into {@code pixels} (packed ARGB, pre-multiplied by alpha,
+     * row by row): JavaFX's INT_ARGB_PRE layout, so one array can serve both.
+     */
+    public static BufferedImage premultipliedOver(int[] pixels, int cols, int rows) {
+        return imageOver(pixels, cols, rows, PREMULTIPLIED);
+    }
+
+    private static BufferedImage imageOver(int[] pixels, int cols, int rows, DirectColorModel model) {
+        WritableRaster raster = Raster.createPackedRaster(new DataBufferInt(pixels, pixels.length), cols, rows, cols,
                 model.getMasks(), null);
         return new BufferedImage(model, raster, model.isAlphaPremultiplied(), null);
     }
