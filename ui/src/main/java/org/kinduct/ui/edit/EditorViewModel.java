@@ -119,6 +119,8 @@ public final class EditorViewModel {
     private long evaluatorRevision = -1;
     private long seriesRevision = -1;
     private double sincePlaybackMap = Double.POSITIVE_INFINITY;
+    /** Scene time the last playback frame moved on by. */
+    private double playbackStepS;
     /** Wall-clock seconds from asking for a playback map to seeing it, smoothed; a first guess until measured. */
     private double mapLatencyS = 0.1;
     private double leadMapT = Double.NaN;
@@ -247,7 +249,8 @@ public final class EditorViewModel {
 
     /** Advances playback by {@code realSeconds} of wall-clock time times the speed, wrapping at the end. */
     public void advance(double realSeconds) {
-        time.set(wrapped(time.get() + realSeconds * speed.get()));
+        playbackStepS = realSeconds * speed.get();
+        time.set(wrapped(time.get() + playbackStepS));
         sincePlaybackMap += realSeconds;
         if (sincePlaybackMap >= PLAYBACK_MAP_INTERVAL_S) {
             sincePlaybackMap = 0;
@@ -359,10 +362,18 @@ public final class EditorViewModel {
         });
     }
 
-    /** Shows the series sample nearest to {@code t}; false when the series is not for this scene. */
+    /**
+     * Shows the series sample nearest to {@code t}; false when the series is not for this scene,
+     * or when playback is so slow that frames fall between its samples (slow motion would then
+     * move in steps: those frames are solved exactly).
+     */
     private boolean showSeriesSample(double t) {
         List<Snapshot> samples = series.get();
-        if (seriesRevision != revision.get() || samples.isEmpty()) {
+        if (seriesRevision != revision.get() || samples.size() < 2) {
+            return false;
+        }
+        double sampleStep = (samples.get(samples.size() - 1).tS() - samples.get(0).tS()) / (samples.size() - 1);
+        if (playbackStepS < sampleStep) {
             return false;
         }
         int i = nearestSample(samples, t);

@@ -76,6 +76,20 @@ class PlaybackPacingTest {
     }
 
     @Test
+    void slowMotionBetweenSeriesSamplesIsSolvedExactly() {
+        CountingEvaluator ev = new CountingEvaluator();
+        EditorViewModel vm = new EditorViewModel(scene(), s -> ev, SAME_THREAD, SAME_THREAD);
+        double sampleStep = vm.seriesProperty().get().get(1).tS() - vm.seriesProperty().get().get(0).tS();
+        vm.speedProperty().set(0.01);
+        vm.playingProperty().set(true);
+        for (int i = 0; i < 5; i++) {
+            vm.advance(0.0167);
+            assertTrue(0.0167 * 0.01 < sampleStep, "frames fall between samples");
+            assertEquals(vm.timeProperty().get(), vm.snapshotProperty().get().tS(), 0, "moves smoothly, not in steps");
+        }
+    }
+
+    @Test
     void pausingSolvesAtTheExactTime() {
         CountingEvaluator ev = new CountingEvaluator();
         EditorViewModel vm = new EditorViewModel(scene(), s -> ev, SAME_THREAD, SAME_THREAD);
