@@ -91,7 +91,15 @@ final class EditorWindow {
                 vm.say("Entry: " + error);
             }
         });
-        entry.visibleProperty().bind(vm.toolProperty().isNotEqualTo(ToolKind.SELECT));
+        // Shown only once the user types while drawing, so it never sits where the next click goes.
+        entry.visibleProperty().bind(vm.toolProperty().isNotEqualTo(ToolKind.SELECT)
+                .and(entry.focusedProperty().or(entry.textProperty().isNotEmpty())));
+        entry.setOnKeyPressed(e -> {
+            if (e.getCode() == javafx.scene.input.KeyCode.ESCAPE) {
+                entry.clear();
+                canvas.requestFocus();
+            }
+        });
         StackPane canvasStack = new StackPane(canvas, entry);
         StackPane.setAlignment(entry, Pos.BOTTOM_CENTER);
         StackPane.setMargin(entry, new Insets(0, 0, 50, 0));
@@ -284,6 +292,9 @@ final class EditorWindow {
             b.setSelected(vm.toolProperty().get() == kind);
             b.setOnAction(e -> {
                 vm.toolProperty().set(kind);
+                if (kind != ToolKind.SELECT) {
+                    vm.say(kind.label() + ": " + kind.help() + ". Type a length, or x, y, to place a point exactly.");
+                }
                 canvas.requestFocus();
             });
             vm.toolProperty().addListener((obs, old, t) -> b.setSelected(t == kind));

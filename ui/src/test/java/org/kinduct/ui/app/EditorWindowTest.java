@@ -138,6 +138,18 @@ class EditorWindowTest {
     }
 
     @Test
+    void theNumericEntryAppearsOnlyOnceTheUserTypes(FxRobot robot) {
+        robot.clickOn("#tool-wire");
+        robot.clickOn(screenOf(robot, 0, 0));
+        javafx.scene.Node entry = robot.lookup("#numeric-entry").query();
+        assertFalse(entry.isVisible(), "no box where the next click may go");
+        robot.write("2");
+        assertTrue(entry.isVisible(), "typing a number opens it");
+        robot.type(KeyCode.ESCAPE);
+        assertFalse(entry.isVisible(), "Escape puts it away");
+    }
+
+    @Test
     void typedLengthWhileDrawingPlacesTheNextVertex(FxRobot robot) {
         robot.clickOn("#tool-wire");
         robot.clickOn(screenOf(robot, 0, 0));
