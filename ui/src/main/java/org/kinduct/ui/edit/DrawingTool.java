@@ -17,6 +17,9 @@ import org.kinduct.ui.paint.Quantities;
  */
 public final class DrawingTool {
 
+    /** Points closer than this are one point (far below any drawn feature, far above rounding). */
+    private static final double SAME_POINT_M = 1e-9;
+
     private final ToolKind kind;
     private final List<Vec2> points = new ArrayList<>();
     private Snapper.Snap cursor;
@@ -114,11 +117,19 @@ public final class DrawingTool {
                 + (cursor.to().isEmpty() ? "" : " · " + cursor.to());
     }
 
+    /**
+     * Whether two snapped points are the same vertex: snapping by angle or grid rounds differently
+     * from the first click (cos 90° is 6e-17, not 0), so exact equality would miss.
+     */
+    private static boolean same(Vec2 a, Vec2 b) {
+        return a.minus(b).length() <= SAME_POINT_M;
+    }
+
     private Optional<UnaryOperator<Scene>> addPoint(Vec2 p) {
-        if (!points.isEmpty() && points.get(points.size() - 1).equals(p)) {
+        if (!points.isEmpty() && same(points.get(points.size() - 1), p)) {
             return Optional.empty();
         }
-        if (kind.gesture() == ToolKind.Gesture.POLYGON && points.size() >= 3 && points.get(0).equals(p)) {
+        if (kind.gesture() == ToolKind.Gesture.POLYGON && points.size() >= 3 && same(points.get(0), p)) {
             return finish();
         }
         points.add(p);

@@ -49,6 +49,21 @@ class DrawingToolTest {
     }
 
     @Test
+    void aClickThatSnapsOntoTheFirstVertexByAngleClosesTheLoopDespiteRounding() {
+        // Grid 5 mm, reach too small for a vertex snap: the closing point comes from the 15° rule,
+        // previous + polar(10 mm, −90°), whose x is off by cos(−90°)·10 mm ≈ 6e-19 m.
+        DrawingTool t = new DrawingTool(ToolKind.LOOP);
+        Snapper snap = new Snapper(0.005, 1e-6, true);
+        t.click(new Vec2(0.0101, 0.0099), snap, List.of());
+        t.click(new Vec2(0.0301, 0.0099), snap, List.of());
+        t.click(new Vec2(0.0301, 0.0201), snap, List.of());
+        t.click(new Vec2(0.0101, 0.0201), snap, List.of());
+        Optional<UnaryOperator<Scene>> done = t.click(new Vec2(0.0104, 0.0102), snap, List.of());
+        assertTrue(done.isPresent(), "closed, not a fifth vertex on top of the first: " + t.points());
+        assertEquals(4, done.get().apply(Scene.empty("t")).conductors().get(0).vertices().size());
+    }
+
+    @Test
     void rectangleToolDrawsCounterClockwiseFromAnyCorners() {
         DrawingTool t = new DrawingTool(ToolKind.RECT_LOOP);
         t.click(new Vec2(0.05, 0.04), NO_SNAP, List.of());
