@@ -15,6 +15,7 @@ import org.kinduct.scene.Vec2;
 public record Snapper(double gridM, double reachM, boolean angles) {
 
     public static final double ANGLE_STEP_RAD = Math.toRadians(15);
+    private static final double AXIS_EPS = 1e-12;
 
     /** Result: the snapped point and what it snapped to ("vertex", "15°", "grid" or ""). */
     public record Snap(Vec2 point, String to) {
@@ -39,7 +40,10 @@ public record Snapper(double gridM, double reachM, boolean angles) {
             if (len > 0) {
                 double a = Math.round(Math.atan2(d.y(), d.x()) / ANGLE_STEP_RAD) * ANGLE_STEP_RAD;
                 double l = gridM > 0 ? Math.max(gridM, Math.round(len / gridM) * gridM) : len;
-                return new Snap(previous.plus(Vec2.polar(l, a)), "15°");
+                // cos 90° is 6e-17, not 0: axis directions exactly, so axis-parallel edges stay exact.
+                double c = Math.abs(Math.cos(a)) < AXIS_EPS ? 0 : Math.cos(a);
+                double sn = Math.abs(Math.sin(a)) < AXIS_EPS ? 0 : Math.sin(a);
+                return new Snap(previous.plus(new Vec2(l * c, l * sn)), "15°");
             }
         }
         if (gridM > 0) {

@@ -49,4 +49,14 @@ class SnapperTest {
         Vec2 raw = new Vec2(0.0149, -0.0251);
         assertEquals(raw, new Snapper(0, 0.001, false).snap(raw, Vec2.ZERO, List.of()).point());
     }
+
+    @Test
+    void anAngleSnapAlongAnAxisKeepsTheOtherCoordinateExactly() {
+        Snapper snap = new Snapper(0.005, 1e-6, true);
+        Vec2 from = new Vec2(0.03, 0.02);
+        Vec2 up = snap.snap(new Vec2(0.0302, 0.0451), from, List.of()).point();
+        Vec2 left = snap.snap(new Vec2(0.0049, 0.0203), from, List.of()).point();
+        assertEquals(0.03, up.x(), 0.0, "straight up: x unchanged to the last bit");
+        assertEquals(0.02, left.y(), 0.0, "straight left: y unchanged to the last bit");
+    }
 }
