@@ -6,10 +6,12 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.ToDoubleFunction;
+import org.kinduct.report.ResultScales;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Units;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
 
@@ -48,6 +50,17 @@ public final class PlotSeries {
             return ofBody != null;
         }
 
+        /** The run's largest value of this conductor quantity. */
+        double runScale(ResultScales scales) {
+            return switch (this) {
+                case EMF -> scales.emfV();
+                case CURRENT -> scales.currentA();
+                case FLUX -> scales.fluxWb();
+                case FORCE_X, FORCE_Y -> scales.forceN();
+                default -> throw new IllegalStateException(this + " is a body quantity");
+            };
+        }
+
         @Override
         public String toString() {
             return label;
@@ -73,11 +86,16 @@ public final class PlotSeries {
         }
         double[] t = series.stream().mapToDouble(Snapshot::tS).toArray();
         if (!q.ofBodies()) {
+            // Read against the largest value of any conductor in the run, so a conductor with no
+            // EMF plots flat at zero instead of its rounding noise stretched to full height.
+            double reference = q.runScale(ResultScales.of(series));
             for (ConductorState first : series.get(0).conductors()) {
                 if (selection.isEmpty() || selection.contains(first.id())) {
                     double[] v = new double[t.length];
                     for (int i = 0; i < t.length; i++) {
-                        v[i] = series.get(i).conductor(first.id()).map(q.ofConductor::applyAsDouble).orElse(Double.NaN);
+                        double raw = series.get(i).conductor(first.id()).map(q.ofConductor::applyAsDouble)
+                                .orElse(Double.NaN);
+                        v[i] = Units.withoutNoise(raw, reference);
                     }
                     lines.add(new Line(first.id(), t, v));
                 }
