@@ -425,7 +425,9 @@ final class EditorCanvas extends Pane {
 
     private void updateCursor(double sx, double sy) {
         Vec2 p = view().toScene(sx, sy);
-        double bz = vm.bzAt(p.x(), p.y());
+        // Read against the colour scale's limit: at a point of symmetry the exact sum is rounding noise.
+        double bz = org.kinduct.scene.units.Units.withoutNoise(vm.bzAt(p.x(), p.y()),
+                vm.rangeProperty().get().limitFor(vm.rasterProperty().get()));
         String sense = bz > 0 ? " ⊙" : bz < 0 ? " ⊗" : "";
         String cursorText = "x " + org.kinduct.ui.paint.Quantities.length(p.x()) + "   y "
                 + org.kinduct.ui.paint.Quantities.length(p.y()) + "   B_z "
