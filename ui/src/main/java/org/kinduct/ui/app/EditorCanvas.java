@@ -58,6 +58,8 @@ final class EditorCanvas extends Pane {
     private final CanvasFrames frames = new CanvasFrames(canvas);
     private final BackdropWorker backdrops;
     private FieldBackdrop backdrop;
+    /** The view the last zoom-to-fit made. */
+    private ViewTransform fitted;
     private DrawingTool drawing;
     private boolean spaceDown;
     private boolean needsPaint = true;
@@ -102,6 +104,7 @@ final class EditorCanvas extends Pane {
         for (Observable o : new Observable[] {vm.rasterProperty(), vm.viewProperty(), vm.layers(), vm.rangeProperty()}) {
             o.addListener(x -> requestBackdrop());
         }
+        vm.poseSeriesProperty().addListener(x -> refitAfterRun());
         vm.toolProperty().addListener((obs, old, t) -> {
             drawing = t == ToolKind.SELECT ? null : new DrawingTool(t);
             setCursor(t == ToolKind.SELECT ? Cursor.DEFAULT : Cursor.CROSSHAIR);
@@ -191,13 +194,25 @@ final class EditorCanvas extends Pane {
 
     /** Shows everything the scene holds over its whole time window, free bodies along their simulated path. */
     void zoomToFit() {
-        SceneBounds b = SceneBounds.ofWindow(vm.scene(), vm.seriesProperty().get(), vm.poseSeriesProperty().get());
+        // A run of the scene shown before (just after opening another) says nothing about this one.
+        boolean current = vm.seriesIsCurrent();
+        SceneBounds b = SceneBounds.ofWindow(vm.scene(), current ? vm.seriesProperty().get() : List.of(),
+                current ? vm.poseSeriesProperty().get() : List.of());
         double padX = (b.maxX() - b.minX()) * 0.08;
         double padY = (b.maxY() - b.minY()) * 0.08;
         double legend = vm.layers().contains(Layer.LEGEND) ? ScenePainter.LEGEND_SPAN_PX : 0;
         vm.viewProperty().set(vm.viewProperty().get().fitting(b.minX() - padX, b.minY() - padY, b.maxX() + padX,
                 b.maxY() + padY, 30, legend));
+        fitted = vm.viewProperty().get();
         vm.requestField(MapQuality.FINE);
+    }
+
+    /** A fitted view is fitted again once the free bodies' run is in, unless the user has moved it since. */
+    private void refitAfterRun() {
+        if (fitted != null && fitted.equals(vm.viewProperty().get()) && vm.seriesIsCurrent()
+                && !vm.poseSeriesProperty().get().isEmpty()) {
+            zoomToFit();
+        }
     }
 
     private void resizeView() {

@@ -362,6 +362,11 @@ public final class EditorViewModel {
         });
     }
 
+    /** Whether {@link #seriesProperty()} (and the simulated poses) belong to the scene shown now. */
+    public boolean seriesIsCurrent() {
+        return seriesRevision == revision.get();
+    }
+
     /**
      * Shows the series sample nearest to {@code t}; false when the series is not for this scene,
      * or when playback is so slow that frames fall between its samples (slow motion would then
@@ -430,9 +435,9 @@ public final class EditorViewModel {
                 double seconds = (clockNs.getAsLong() - started) * 1e-9;
                 ui.execute(() -> {
                     if (revision.get() == rev) {
+                        seriesRevision = rev;
                         series.set(result);
                         poseSeries.set(placed);
-                        seriesRevision = rev;
                         audit.set(energy);
                         if (simulated) {
                             simulating.set(false);

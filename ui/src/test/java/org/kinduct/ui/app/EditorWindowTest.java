@@ -149,6 +149,26 @@ class EditorWindowTest {
         assertFalse(entry.isVisible(), "Escape puts it away");
     }
 
+    /** A loop dropped from rest falls g·t²/2 = 4.9 m in 1 s (free fall): the fitted view follows it there once the run is in. */
+    @Test
+    void aFittedViewTakesInWhereAFreeBodyFallsOnceItsRunIsDone() throws Exception {
+        Body cage = new Body("cage", "cage", Vec2.ZERO, Motion.Free.ofMass(0.1));
+        Conductor.Loop loop = Conductor.Loop.simple("loop", "cage", List.of(Conductor.Vertex.at(0, 0),
+                Conductor.Vertex.at(0.1, 0), Conductor.Vertex.at(0.1, 0.1), Conductor.Vertex.at(0, 0.1)),
+                org.kinduct.ui.edit.ShapeFactory.DEFAULT_WIRE);
+        Scene drop = Scene.empty("drop").withBodies(List.of(cage)).withConductors(List.of(loop))
+                .withGravity(new Vec2(0, -9.81)).withTime(new org.kinduct.scene.TimeSpan(0, 1, 0.01));
+        interact(() -> {
+            vm.load(drop, null);
+            window.canvas().zoomToFit();
+        });
+        WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> vm.seriesIsCurrent()
+                && !vm.poseSeriesProperty().get().isEmpty());
+        WaitForAsyncUtils.waitForFxEvents();
+        ViewTransform v = vm.viewProperty().get();
+        assertTrue(v.minY() < -4.8 && v.maxY() > 0.1, "view " + v.minY() + " … " + v.maxY() + " m holds the fall");
+    }
+
     @Test
     void typedLengthWhileDrawingPlacesTheNextVertex(FxRobot robot) {
         robot.clickOn("#tool-wire");
