@@ -184,7 +184,7 @@ final class EditorCanvas extends Pane {
         return new Frame(scene, t, snap,
                 vm.rasterProperty().get(), vm.viewProperty().get(), vm.layers(), vm.rangeProperty().get(), marks, note,
                 dragPreview != null ? java.util.Map.of() : vm.posesProperty().get(),
-                ResultScales.of(vm.seriesProperty().get(), snap));
+                ResultScales.of(vm.currentSeries(), snap));
     }
 
     void toggleFrameTime() {
@@ -195,9 +195,8 @@ final class EditorCanvas extends Pane {
     /** Shows everything the scene holds over its whole time window, free bodies along their simulated path. */
     void zoomToFit() {
         // A run of the scene shown before (just after opening another) says nothing about this one.
-        boolean current = vm.seriesIsCurrent();
-        SceneBounds b = SceneBounds.ofWindow(vm.scene(), current ? vm.seriesProperty().get() : List.of(),
-                current ? vm.poseSeriesProperty().get() : List.of());
+        SceneBounds b = SceneBounds.ofWindow(vm.scene(), vm.currentSeries(),
+                vm.seriesIsCurrent() ? vm.poseSeriesProperty().get() : List.of());
         double padX = (b.maxX() - b.minX()) * 0.08;
         double padY = (b.maxY() - b.minY()) * 0.08;
         double legend = vm.layers().contains(Layer.LEGEND) ? ScenePainter.LEGEND_SPAN_PX : 0;

@@ -95,7 +95,7 @@ public final class FrameTimeProbe {
             long shown = System.nanoTime();
             canvas.onPainted(ms -> {
                 long now = System.nanoTime();
-                if (vm.seriesProperty().get().isEmpty()) {
+                if (vm.currentSeries().isEmpty()) {
                     // Playback proper is measured once the time series is solved; until then every
                     // frame's instant is solved on the workers, as right after an edit.
                     if (last[0] != 0) {

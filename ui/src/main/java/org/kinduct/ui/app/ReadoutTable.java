@@ -40,9 +40,10 @@ final class ReadoutTable extends TableView<ConductorState> {
             Vec2 f = scales.force(s.forceN());
             return Quantities.force(f.x()) + ", " + Quantities.force(f.y());
         }));
-        vm.snapshotProperty().addListener((obs, old, snap) -> show(vm.seriesProperty().get(), snap));
-        vm.seriesProperty().addListener((obs, old, run) -> show(run, vm.snapshotProperty().get()));
-        show(vm.seriesProperty().get(), vm.snapshotProperty().get());
+        // Values are read against the current scene's run only: an earlier scene's may be far larger.
+        vm.snapshotProperty().addListener((obs, old, snap) -> show(vm.currentSeries(), snap));
+        vm.seriesProperty().addListener((obs, old, run) -> show(vm.currentSeries(), vm.snapshotProperty().get()));
+        show(vm.currentSeries(), vm.snapshotProperty().get());
         getSelectionModel().selectedItemProperty().addListener((obs, old, row) -> {
             if (row != null && !vm.selection().contains(row.id())) {
                 vm.select(java.util.Set.of(row.id()));

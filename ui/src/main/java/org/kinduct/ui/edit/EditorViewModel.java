@@ -367,6 +367,11 @@ public final class EditorViewModel {
         return seriesRevision == revision.get();
     }
 
+    /** The time series of the scene shown now; empty while it is being solved after an edit. */
+    public List<Snapshot> currentSeries() {
+        return seriesIsCurrent() ? series.get() : List.of();
+    }
+
     /**
      * Shows the series sample nearest to {@code t}; false when the series is not for this scene,
      * or when playback is so slow that frames fall between its samples (slow motion would then
