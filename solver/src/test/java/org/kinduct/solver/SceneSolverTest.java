@@ -40,6 +40,15 @@ class SceneSolverTest {
     }
 
     @Test
+    void seriesHoldsExactlyTheInstantsSolvedOneByOneInTimeOrder() {
+        SceneSolver solver = new SceneSolver(squareEnteringPatch(false));
+        List<Snapshot> series = solver.series(0, 1, 0.05);
+        for (int i = 0; i < series.size(); i++) {
+            assertEquals(solver.at(i * 0.05), series.get(i), "instant " + i);
+        }
+    }
+
+    @Test
     void seriesStopsAtTheLastWholeStepBeforeTheEnd() {
         List<Snapshot> series = new SceneSolver(squareEnteringPatch(false)).series(0, 1, 0.3);
         assertEquals(4, series.size());
