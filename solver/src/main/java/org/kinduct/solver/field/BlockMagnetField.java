@@ -119,11 +119,38 @@ public final class BlockMagnetField extends CurrentSourceField {
     /**
      * ∫_{zLow}^{zHigh} [asinh(t2/√(c² + z²)) − asinh(t1/√(c² + z²))] dz for t1 &lt; t2: the potential
      * of a unit ribbon running from t1 to t2 along its line, c ≥ 0 the in-plane distance to that line.
+     * [G(t2, c, z) − G(t1, c, z)] between the faces, G the antiderivative in the class documentation,
+     * with the terms of both faces that share t paired so that each pair takes one logarithm or one
+     * arctangent: t·[asinh(zHigh/ρ) − asinh(zLow/ρ)] with ρ = √(c² + t²) as one log
+     * ({@link StraightFilament#asinhDifference}), the c·atan terms by {@link #atanDifference}.
+     * G(t, c, 0) = 0.
      */
     static double ribbon(double t1, double t2, double c, double zLow, double zHigh) {
-        double rho1 = Math.sqrt(c * c + t1 * t1);
-        double rho2 = Math.sqrt(c * c + t2 * t2);
-        return slice(t1, t2, c, rho1, rho2, zHigh) - slice(t1, t2, c, rho1, rho2, zLow);
+        double c2 = c * c;
+        double rho1 = Math.sqrt(c2 + t1 * t1);
+        double rho2 = Math.sqrt(c2 + t2 * t2);
+        double zLow2 = zLow * zLow;
+        double zHigh2 = zHigh * zHigh;
+        double r1Low = Math.sqrt(rho1 * rho1 + zLow2);
+        double r2Low = Math.sqrt(rho2 * rho2 + zLow2);
+        double r1High = Math.sqrt(rho1 * rho1 + zHigh2);
+        double r2High = Math.sqrt(rho2 * rho2 + zHigh2);
+        double height = zHigh - zLow;
+        double g = weightedAsinhDifference(t2, zHigh, zLow, r2High, r2Low, rho2, height)
+                - weightedAsinhDifference(t1, zHigh, zLow, r1High, r1Low, rho1, height);
+        if (zHigh != 0) {
+            g += zHigh * StraightFilament.asinhDifference(t2, t1, r2High, r1High, c2 + zHigh2, t2 - t1);
+            if (c != 0) {
+                g -= c * atanDifference(t1, t2, c, zHigh, r1High, r2High);
+            }
+        }
+        if (zLow != 0) {
+            g -= zLow * StraightFilament.asinhDifference(t2, t1, r2Low, r1Low, c2 + zLow2, t2 - t1);
+            if (c != 0) {
+                g += c * atanDifference(t1, t2, c, zLow, r1Low, r2Low);
+            }
+        }
+        return g;
     }
 
     private double ribbon(double t1, double t2, double c) {
@@ -131,31 +158,31 @@ public final class BlockMagnetField extends CurrentSourceField {
     }
 
     /**
-     * G(t2, c, z) − G(t1, c, z), G the antiderivative in the class documentation, in forms free of
-     * cancellation: the z·asinh difference as one log ({@link StraightFilament#asinhDifference}),
-     * the t·asinh(z/ρ) terms through log1p. ρ_i = √(c² + t_i²). G(t, c, 0) = 0.
+     * t·[asinh(zHigh/ρ) − asinh(zLow/ρ)] with r = √(ρ² + z²) at each face: one log of a ratio
+     * ({@link StraightFilament#asinhDifference}, free of cancellation); 0 for t = 0 (where ρ may be 0).
      */
-    private static double slice(double t1, double t2, double c, double rho1, double rho2, double z) {
-        if (z == 0) {
-            return 0;
-        }
-        double z2 = z * z;
-        double r1 = Math.sqrt(rho1 * rho1 + z2);
-        double r2 = Math.sqrt(rho2 * rho2 + z2);
-        double g = z * StraightFilament.asinhDifference(t2, t1, r2, r1, c * c + z2, t2 - t1)
-                + weightedAsinh(t2, z, r2, rho2) - weightedAsinh(t1, z, r1, rho1);
-        if (c != 0) {
-            g -= c * (Math.atan(t2 * z / (c * r2)) - Math.atan(t1 * z / (c * r1)));
-        }
-        return g;
-    }
-
-    /** t·asinh(z/ρ) with r = √(ρ² + z²), as t·sign(z)·log1p((|z| + z²/(r + ρ))/ρ); 0 for t = 0. */
-    private static double weightedAsinh(double t, double z, double r, double rho) {
+    private static double weightedAsinhDifference(double t, double zHigh, double zLow, double rHigh, double rLow,
+                                                  double rho, double height) {
         if (t == 0) {
             return 0;
         }
-        double az = Math.abs(z);
-        return t * Math.copySign(Math.log1p((az + az * az / (r + rho)) / rho), z);
+        return t * StraightFilament.asinhDifference(zHigh, zLow, rHigh, rLow, rho * rho, height);
+    }
+
+    /**
+     * atan(t2·z/(c·r2)) − atan(t1·z/(c·r1)) for c &gt; 0, t1 &lt; t2, r_i = √(c² + t_i² + z²), as one
+     * atan2: by the subtraction formula arctan α − arctan β = arctan[(α − β)/(1 + αβ)]
+     * (Abramowitz &amp; Stegun, <i>Handbook of Mathematical Functions</i>, 1964, eq. 4.4.34; from
+     * memory), whose branch atan2 picks from the signs of numerator and denominator (both scaled by
+     * c²·r1·r2 &gt; 0, which keeps them finite for small c). The numerator's t2·r1 − t1·r2 is taken
+     * as (c² + z²)(t2 − t1)(t2 + t1)/(t2·r1 + t1·r2) when t1, t2 share a sign, free of cancellation;
+     * the denominator's parts are each at most the length of (numerator, denominator), so its
+     * rounding moves the angle by a few ulp only.
+     */
+    private static double atanDifference(double t1, double t2, double c, double z, double r1, double r2) {
+        double cross = t1 * t2 > 0
+                ? (c * c + z * z) * (t2 - t1) * (t2 + t1) / (t2 * r1 + t1 * r2)
+                : t2 * r1 - t1 * r2;
+        return Math.atan2(c * z * cross, c * c * r1 * r2 + t1 * t2 * z * z);
     }
 }
