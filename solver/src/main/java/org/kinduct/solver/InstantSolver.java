@@ -39,7 +39,10 @@ final class InstantSolver {
     private final double fieldScaleT;
     private final List<PlacedConductor> placed;
     private final SceneField field;
-    private final SceneField[] aroundVaryingPhysical;
+    /** The sources whose current changes with time, at each stencil time. */
+    private final SceneField[] aroundDriven;
+    /** Magnets and steady coils that move: their induced field along a wire is closed form. */
+    private final boolean[] rigidlyMoving;
     private final Frame now;
     private final Frame[] around;
     private final boolean[] varying;
@@ -71,16 +74,19 @@ final class InstantSolver {
 
         int sources = index.sourceCount();
         varying = new boolean[sources];
-        boolean[] varyingPhysical = new boolean[sources];
+        boolean[] drivenCoil = new boolean[sources];
+        rigidlyMoving = new boolean[sources];
         boolean any = false;
         boolean ideal = false;
         double piece = Double.POSITIVE_INFINITY;
         for (int s = 0; s < sources; s++) {
             varying[s] = varies(s);
-            varyingPhysical[s] = varying[s] && now.field(s).hasPhysicalPotential();
+            boolean physical = now.field(s).hasPhysicalPotential();
+            drivenCoil[s] = driven(s);
+            rigidlyMoving[s] = varying[s] && physical && !drivenCoil[s];
             any |= varying[s];
-            ideal |= varying[s] && !varyingPhysical[s];
-            if (varyingPhysical[s]) {
+            ideal |= varying[s] && !physical;
+            if (drivenCoil[s]) {
                 piece = Math.min(piece, index.reach(s).lengthM());
             }
         }
@@ -89,13 +95,13 @@ final class InstantSolver {
         pieceM = piece;
 
         around = new Frame[DifferenceStep.OFFSETS.length];
-        aroundVaryingPhysical = new SceneField[around.length];
+        aroundDriven = new SceneField[around.length];
         unchanged = new boolean[around.length][sources];
         for (int k = 0; k < around.length; k++) {
             around[k] = index.frame(kinematics, tS + DifferenceStep.OFFSETS[k] * h);
-            aroundVaryingPhysical[k] = around[k].only(varyingPhysical);
+            aroundDriven[k] = around[k].only(drivenCoil);
             for (int s = 0; s < sources; s++) {
-                unchanged[k][s] = !driven(s) && samePlace(now.pose(index.sourceBody(s)), around[k].pose(index.sourceBody(s)));
+                unchanged[k][s] = !drivenCoil[s] && samePlace(now.pose(index.sourceBody(s)), around[k].pose(index.sourceBody(s)));
             }
         }
     }
@@ -198,12 +204,17 @@ final class InstantSolver {
         PlacedConductor at = placed.get(c);
         EdgeSums sums = EdgeSums.along(field, at);
         double induced = 0;
-        if (aroundVaryingPhysical[0].size() > 0) {
+        for (int s = 0; s < rigidlyMoving.length; s++) {
+            if (rigidlyMoving[s]) {
+                induced += RigidInduction.emf(now.field(s), now.pose(index.sourceBody(s)), at);
+            }
+        }
+        if (aroundDriven[0].size() > 0) {
             double[] lineIntegrals = new double[around.length];
             for (int k = 0; k < around.length; k++) {
-                lineIntegrals[k] = PotentialIntegral.along(aroundVaryingPhysical[k], at, pieceM);
+                lineIntegrals[k] = PotentialIntegral.along(aroundDriven[k], at, pieceM);
             }
-            induced = DifferenceStep.negativeDerivative(lineIntegrals, h);
+            induced += DifferenceStep.negativeDerivative(lineIntegrals, h);
         }
         double emf = sums.motionalV() + induced;
         double threshold = TERMINAL_ABS_V + TERMINAL_REL * emfScale(at);
