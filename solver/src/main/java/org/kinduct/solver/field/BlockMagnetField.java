@@ -140,15 +140,12 @@ public final class BlockMagnetField extends CurrentSourceField {
                 - weightedAsinhDifference(t1, zHigh, zLow, r1High, r1Low, rho1, height);
         if (zHigh != 0) {
             g += zHigh * StraightFilament.asinhDifference(t2, t1, r2High, r1High, c2 + zHigh2, t2 - t1);
-            if (c != 0) {
-                g -= c * atanDifference(t1, t2, c, zHigh, r1High, r2High);
-            }
         }
         if (zLow != 0) {
             g -= zLow * StraightFilament.asinhDifference(t2, t1, r2Low, r1Low, c2 + zLow2, t2 - t1);
-            if (c != 0) {
-                g += c * atanDifference(t1, t2, c, zLow, r1Low, r2Low);
-            }
+        }
+        if (c != 0) {
+            g -= c * atanDifference(t1, t2, c, zHigh, zLow, r1High, r2High, r1Low, r2Low);
         }
         return g;
     }
@@ -170,19 +167,28 @@ public final class BlockMagnetField extends CurrentSourceField {
     }
 
     /**
-     * atan(t2·z/(c·r2)) − atan(t1·z/(c·r1)) for c &gt; 0, t1 &lt; t2, r_i = √(c² + t_i² + z²), as one
-     * atan2: by the subtraction formula arctan α − arctan β = arctan[(α − β)/(1 + αβ)]
-     * (Abramowitz &amp; Stegun, <i>Handbook of Mathematical Functions</i>, 1964, eq. 4.4.34; from
-     * memory), whose branch atan2 picks from the signs of numerator and denominator (both scaled by
-     * c²·r1·r2 &gt; 0, which keeps them finite for small c). The numerator's t2·r1 − t1·r2 is taken
-     * as (c² + z²)(t2 − t1)(t2 + t1)/(t2·r1 + t1·r2) when t1, t2 share a sign, free of cancellation;
-     * the denominator's parts are each at most the length of (numerator, denominator), so its
-     * rounding moves the angle by a few ulp only.
+     * The four arctangents of both faces, [atan(t2·z/(c·r2)) − atan(t1·z/(c·r1))] at zHigh minus the
+     * same at zLow, for c &gt; 0, t1 &lt; t2, r_i = √(c² + t_i² + z²), as one atan2. By the subtraction
+     * formula arctan α − arctan β = arctan[(α − β)/(1 + αβ)] (Abramowitz &amp; Stegun, <i>Handbook of
+     * Mathematical Functions</i>, 1964, eq. 4.4.34; from memory) each face's pair is the angle of the
+     * vector (X, Y) = c²·r1·r2·(1 + αβ, α − β), scaled by c²·r1·r2 &gt; 0 to stay finite for small c;
+     * its t2·r1 − t1·r2 is taken as (c² + z²)(t2 − t1)(t2 + t1)/(t2·r1 + t1·r2) when t1, t2 share a
+     * sign, free of cancellation. Both faces' angles lie in (0, π) for z &gt; 0 and in (−π, 0) for
+     * z &lt; 0 (0 for z = 0), and the faces do not straddle the plane, so their difference lies in
+     * (−π, π) and is the angle of (X_h·X_l + Y_h·Y_l, Y_h·X_l − X_h·Y_l). Rounding moves the result
+     * by a few ulp of π, as it would each of the four arctangents.
      */
-    private static double atanDifference(double t1, double t2, double c, double z, double r1, double r2) {
-        double cross = t1 * t2 > 0
-                ? (c * c + z * z) * (t2 - t1) * (t2 + t1) / (t2 * r1 + t1 * r2)
-                : t2 * r1 - t1 * r2;
-        return Math.atan2(c * z * cross, c * c * r1 * r2 + t1 * t2 * z * z);
+    private static double atanDifference(double t1, double t2, double c, double zHigh, double zLow,
+                                         double r1High, double r2High, double r1Low, double r2Low) {
+        double xHigh = c * c * r1High * r2High + t1 * t2 * zHigh * zHigh;
+        double yHigh = c * zHigh * cross(t1, t2, c, zHigh, r1High, r2High);
+        double xLow = c * c * r1Low * r2Low + t1 * t2 * zLow * zLow;
+        double yLow = c * zLow * cross(t1, t2, c, zLow, r1Low, r2Low);
+        return Math.atan2(yHigh * xLow - xHigh * yLow, xHigh * xLow + yHigh * yLow);
+    }
+
+    /** t2·r1 − t1·r2 without cancellation; see {@link #atanDifference}. */
+    private static double cross(double t1, double t2, double c, double z, double r1, double r2) {
+        return t1 * t2 > 0 ? (c * c + z * z) * (t2 - t1) * (t2 + t1) / (t2 * r1 + t1 * r2) : t2 * r1 - t1 * r2;
     }
 }
