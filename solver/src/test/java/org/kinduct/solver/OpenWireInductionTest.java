@@ -74,8 +74,16 @@ class OpenWireInductionTest {
         // −f'(t) ≈ −[f(t−2h) − 8f(t−h) + 8f(t+h) − f(t+2h)]/(12h) (Abramowitz & Stegun 1964, eq. 25.3.6; from memory)
         double expected = -(f[0] - 8 * f[1] + 8 * f[2] - f[3]) / (12 * STEP_S);
         assertTrue(wire.inducedFieldIncluded(), "seed " + seed);
-        assertEquals(expected, wire.emfV(), AGREEMENT * Math.abs(expected) + ROUNDING * bound(scene, path),
+        assertEquals(expected, wire.emfV(), AGREEMENT * Math.abs(expected) + ROUNDING * RandomScenes.physicalEmfBound(scene, length(path)),
                 "seed " + seed + ", t = " + t);
+    }
+
+    private static double length(List<Vec2> path) {
+        double length = 0;
+        for (int i = 0; i + 1 < path.size(); i++) {
+            length += path.get(i + 1).minus(path.get(i)).length();
+        }
+        return length;
     }
 
     /** ∫ A·dl along the still path at tS, every source placed at its body's pose then. */
@@ -99,29 +107,5 @@ class OpenWireInductionTest {
             }
         }
         return sum;
-    }
-
-    /**
-     * An EMF bound, sources × 1 T × length × the fastest point of the carrier within 3 m of its
-     * pivot, plus 2π f·μ0·N·I per metre of an AC coil (its field at 0.1 m is below 1 T·m/m).
-     */
-    private static double bound(Scene scene, List<Vec2> path) {
-        double length = 0;
-        for (int i = 0; i + 1 < path.size(); i++) {
-            length += path.get(i + 1).minus(path.get(i)).length();
-        }
-        Kinematics kinematics = Kinematics.prescribed(scene);
-        double speed = 0;
-        for (int i = 0; i <= 100; i++) {
-            Pose pose = kinematics.poseAt("carrier", i / 100.0);
-            speed = Math.max(speed, pose.velocity().length() + Math.abs(pose.omegaRadPerS()) * 3);
-        }
-        double rate = 0;
-        for (Source source : scene.sources()) {
-            if (source instanceof Source.SourceCoil coil && coil.drive().frequencyHz() > 0) {
-                rate = Math.max(rate, 2 * Math.PI * coil.drive().frequencyHz());
-            }
-        }
-        return scene.sources().size() * length * (speed + rate * length);
     }
 }
