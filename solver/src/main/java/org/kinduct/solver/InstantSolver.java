@@ -17,8 +17,8 @@ import org.kinduct.scene.Vec2;
  * <p>A loop's flux is summed source by source, so that the stencil reuses what it already has:
  * where the loop stands still over the stencil the flux through it held where it is (transformer
  * term) is the flux through it as placed (flux rule), and a source whose field is the same at a
- * stencil time as now (same pose, no AC drive) gives the flux it gave now. The sums are taken in
- * the same order as before, so the results are the same to the last bit.
+ * stencil time as now (same pose, no AC drive) gives the flux it gave now. Either way the sums run
+ * over the sources in scene order, so a reused value gives the same bits as one computed afresh.
  */
 final class InstantSolver {
 
@@ -101,7 +101,8 @@ final class InstantSolver {
             around[k] = index.frame(kinematics, tS + DifferenceStep.OFFSETS[k] * h);
             aroundDriven[k] = around[k].only(drivenCoil);
             for (int s = 0; s < sources; s++) {
-                unchanged[k][s] = !drivenCoil[s] && samePlace(now.pose(index.sourceBody(s)), around[k].pose(index.sourceBody(s)));
+                int body = index.sourceBody(s);
+                unchanged[k][s] = !drivenCoil[s] && samePlace(now.pose(body), around[k].pose(body));
             }
         }
     }

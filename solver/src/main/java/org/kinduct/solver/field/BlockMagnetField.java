@@ -41,6 +41,7 @@ public final class BlockMagnetField extends CurrentSourceField {
     private final double halfY;
     private final double zLowM;
     private final double zHighM;
+    /** zLow² and zHigh², m²: every corner distance of the potential needs them. */
     private final double zLowSquared;
     private final double zHighSquared;
     /** z − z1 and z − z2 at the field plane z = 0, as signed zeros on the outside when 0. */
