@@ -1,9 +1,11 @@
 package org.kinduct.solver;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Polygons;
+import org.kinduct.scene.Pose;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 
@@ -11,6 +13,12 @@ import org.kinduct.scene.Vec2;
  * Solves every conductor of a scene at one instant; {@link SceneSolver} states the physics.
  * Holds the frames of the difference stencil around the instant so that all conductors share
  * them.
+ *
+ * <p>A loop's flux is summed source by source, so that the stencil reuses what it already has:
+ * where the loop stands still over the stencil the flux through it held where it is (transformer
+ * term) is the flux through it as placed (flux rule), and a source whose field is the same at a
+ * stencil time as now (same pose, no AC drive) gives the flux it gave now. Either way the sums run
+ * over the sources in scene order, so a reused value gives the same bits as one computed afresh.
  */
 final class InstantSolver {
 
@@ -31,10 +39,15 @@ final class InstantSolver {
     private final double fieldScaleT;
     private final List<PlacedConductor> placed;
     private final SceneField field;
-    private final SceneField[] aroundAll;
-    private final SceneField[] aroundVarying;
-    private final SceneField[] aroundVaryingPhysical;
+    /** The sources whose current changes with time, at each stencil time. */
+    private final SceneField[] aroundDriven;
+    /** Magnets and steady coils that move: their induced field along a wire is closed form. */
+    private final boolean[] rigidlyMoving;
+    private final Frame now;
     private final Frame[] around;
+    private final boolean[] varying;
+    /** unchanged[k][s]: source s has at stencil time k exactly the field it has now. */
+    private final boolean[][] unchanged;
     private final boolean anyVarying;
     private final boolean idealVarying;
     private final double pieceM;
@@ -43,7 +56,7 @@ final class InstantSolver {
     InstantSolver(SceneIndex index, DifferenceStep step, Kinematics kinematics, double tS) {
         this.index = index;
         this.tS = tS;
-        Frame now = index.frame(kinematics, tS);
+        now = index.frame(kinematics, tS);
         List<Conductor> conductors = index.scene().conductors();
         placed = new ArrayList<>(conductors.size());
         for (int c = 0; c < conductors.size(); c++) {
@@ -60,17 +73,20 @@ final class InstantSolver {
         fieldScaleT = index.fieldScaleT();
 
         int sources = index.sourceCount();
-        boolean[] varying = new boolean[sources];
-        boolean[] varyingPhysical = new boolean[sources];
+        varying = new boolean[sources];
+        boolean[] drivenCoil = new boolean[sources];
+        rigidlyMoving = new boolean[sources];
         boolean any = false;
         boolean ideal = false;
         double piece = Double.POSITIVE_INFINITY;
         for (int s = 0; s < sources; s++) {
-            varying[s] = varies(now, s);
-            varyingPhysical[s] = varying[s] && now.field(s).hasPhysicalPotential();
+            varying[s] = varies(s);
+            boolean physical = now.field(s).hasPhysicalPotential();
+            drivenCoil[s] = driven(s);
+            rigidlyMoving[s] = varying[s] && physical && !drivenCoil[s];
             any |= varying[s];
-            ideal |= varying[s] && !varyingPhysical[s];
-            if (varyingPhysical[s]) {
+            ideal |= varying[s] && !physical;
+            if (drivenCoil[s]) {
                 piece = Math.min(piece, index.reach(s).lengthM());
             }
         }
@@ -79,15 +95,26 @@ final class InstantSolver {
         pieceM = piece;
 
         around = new Frame[DifferenceStep.OFFSETS.length];
-        aroundAll = new SceneField[around.length];
-        aroundVarying = new SceneField[around.length];
-        aroundVaryingPhysical = new SceneField[around.length];
+        aroundDriven = new SceneField[around.length];
+        unchanged = new boolean[around.length][sources];
         for (int k = 0; k < around.length; k++) {
             around[k] = index.frame(kinematics, tS + DifferenceStep.OFFSETS[k] * h);
-            aroundAll[k] = around[k].all();
-            aroundVarying[k] = around[k].only(varying);
-            aroundVaryingPhysical[k] = around[k].only(varyingPhysical);
+            aroundDriven[k] = around[k].only(drivenCoil);
+            for (int s = 0; s < sources; s++) {
+                int body = index.sourceBody(s);
+                unchanged[k][s] = !drivenCoil[s] && samePlace(now.pose(body), around[k].pose(body));
+            }
         }
+    }
+
+    /** True when source s is a coil whose current changes with time. */
+    private boolean driven(int s) {
+        return index.scene().sources().get(s) instanceof Source.SourceCoil coil && DifferenceStep.varies(coil.drive());
+    }
+
+    /** A placed source depends on its body's pose only through the offset and the angle. */
+    private static boolean samePlace(Pose a, Pose b) {
+        return a.offset().equals(b.offset()) && a.angleRad() == b.angleRad();
     }
 
     Snapshot solve() {
@@ -104,12 +131,12 @@ final class InstantSolver {
      * A source varies at this instant when its body moves or turns, or its drive current changes;
      * a uniform field is unchanged by any motion.
      */
-    private boolean varies(Frame now, int s) {
+    private boolean varies(int s) {
         Source source = index.scene().sources().get(s);
         if (source instanceof Source.UniformField) {
             return false;
         }
-        if (source instanceof Source.SourceCoil coil && DifferenceStep.varies(coil.drive())) {
+        if (driven(s)) {
             return true;
         }
         var pose = now.pose(index.sourceBody(s));
@@ -120,7 +147,13 @@ final class InstantSolver {
         PlacedConductor at = placed.get(c);
         int turns = loop.turns();
         int n = at.xs().length;
-        double flux = field.flux(at.xs(), at.ys());
+        int sources = index.sourceCount();
+        double[] fluxNow = new double[sources];
+        double flux = 0;
+        for (int s = 0; s < sources; s++) {
+            fluxNow[s] = now.field(s).flux(at.xs(), at.ys());
+            flux += fluxNow[s];
+        }
         EdgeSums sums = EdgeSums.along(field, at);
 
         double[] moved = new double[around.length];
@@ -129,8 +162,14 @@ final class InstantSolver {
         double[] ys = new double[n];
         for (int k = 0; k < around.length; k++) {
             index.place(c, around[k], xs, ys);
-            moved[k] = aroundAll[k].flux(xs, ys);
-            frozen[k] = anyVarying ? aroundVarying[k].flux(at.xs(), at.ys()) : 0;
+            boolean still = Arrays.equals(xs, at.xs()) && Arrays.equals(ys, at.ys());
+            for (int s = 0; s < sources; s++) {
+                double placedFlux = still && unchanged[k][s] ? fluxNow[s] : around[k].field(s).flux(xs, ys);
+                moved[k] += placedFlux;
+                if (varying[s]) {
+                    frozen[k] += still ? placedFlux : around[k].field(s).flux(at.xs(), at.ys());
+                }
+            }
         }
         double emfFlux = turns * DifferenceStep.negativeDerivative(moved, h);
         double transformer = anyVarying ? DifferenceStep.negativeDerivative(frozen, h) : 0;
@@ -166,12 +205,17 @@ final class InstantSolver {
         PlacedConductor at = placed.get(c);
         EdgeSums sums = EdgeSums.along(field, at);
         double induced = 0;
-        if (aroundVaryingPhysical[0].size() > 0) {
+        for (int s = 0; s < rigidlyMoving.length; s++) {
+            if (rigidlyMoving[s]) {
+                induced += RigidInduction.emf(now.field(s), now.pose(index.sourceBody(s)), at);
+            }
+        }
+        if (aroundDriven[0].size() > 0) {
             double[] lineIntegrals = new double[around.length];
             for (int k = 0; k < around.length; k++) {
-                lineIntegrals[k] = PotentialIntegral.along(aroundVaryingPhysical[k], at, pieceM);
+                lineIntegrals[k] = PotentialIntegral.along(aroundDriven[k], at, pieceM);
             }
-            induced = DifferenceStep.negativeDerivative(lineIntegrals, h);
+            induced += DifferenceStep.negativeDerivative(lineIntegrals, h);
         }
         double emf = sums.motionalV() + induced;
         double threshold = TERMINAL_ABS_V + TERMINAL_REL * emfScale(at);

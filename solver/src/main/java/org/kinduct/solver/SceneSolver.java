@@ -33,8 +33,10 @@ import org.kinduct.scene.Vec2;
  * vertex: EMF &gt; 0 makes the last vertex +), no current and no force.
  *
  * <p><b>Wires</b> (open polylines, first to last vertex): EMF = ∫ (v × B)·dl − ∫ ∂A/∂t·dl, the
- * second term from the difference in time of the line integral of A over the wire held where it
- * is, for magnets and coils that move or are driven by AC ({@link PotentialIntegral}). A moving
+ * second term over the wire held where it is: for magnets and steady coils on moving bodies in
+ * closed form, [w·A] at the ends minus ∫ (w × B)·dl with w the source body's velocity field
+ * ({@link RigidInduction}); for AC-driven coils from the difference in time of the line integral
+ * of A ({@link PotentialIntegral}). A moving
  * field patch has no physical potential, so its induced field is left out and the state says so
  * ({@code inducedFieldIncluded = false}). Unlike a loop's, an open wire's EMF depends on the
  * frame: a wire moving past a still magnet and a magnet moving past a still wire differ by

@@ -138,6 +138,30 @@ final class RandomScenes {
         return turns * bSum * length * fastest;
     }
 
+    /**
+     * An EMF bound for a conductor of length {@code lengthM} among magnets and coils: sources × 1 T ×
+     * length × (the fastest point of any body within 3 m of its pivot over 0…1 s, plus 2π f·length
+     * for the fastest AC drive); a source's field scale of 1 T per source holds for magnets of
+     * remanence below that and the coils drawn here away from their filaments.
+     */
+    static double physicalEmfBound(Scene scene, double lengthM) {
+        Kinematics kinematics = Kinematics.prescribed(scene);
+        double speed = 0;
+        for (var body : scene.bodies()) {
+            for (int i = 0; i <= SPEED_SAMPLES; i++) {
+                Pose pose = kinematics.poseAt(body.id(), (double) i / SPEED_SAMPLES);
+                speed = Math.max(speed, pose.velocity().length() + Math.abs(pose.omegaRadPerS()) * 3);
+            }
+        }
+        double rate = 0;
+        for (Source source : scene.sources()) {
+            if (source instanceof Source.SourceCoil coil && coil.drive().frequencyHz() > 0) {
+                rate = Math.max(rate, 2 * Math.PI * coil.drive().frequencyHz());
+            }
+        }
+        return scene.sources().size() * lengthM * (speed + rate * lengthM);
+    }
+
     private static double peakSpeed(Kinematics kinematics, String body, List<Vec2> drawn) {
         double fastest = 0;
         for (int i = 0; i <= SPEED_SAMPLES; i++) {

@@ -41,6 +41,9 @@ public final class BlockMagnetField extends CurrentSourceField {
     private final double halfY;
     private final double zLowM;
     private final double zHighM;
+    /** zLow² and zHigh², m²: every corner distance of the potential needs them. */
+    private final double zLowSquared;
+    private final double zHighSquared;
     /** z − z1 and z − z2 at the field plane z = 0, as signed zeros on the outside when 0. */
     private final double dzBottom;
     private final double dzTop;
@@ -68,6 +71,8 @@ public final class BlockMagnetField extends CurrentSourceField {
         requireOffPlane(zLowM, zHighM);
         this.zLowM = zLowM;
         this.zHighM = zHighM;
+        this.zLowSquared = zLowM * zLowM;
+        this.zHighSquared = zHighM * zHighM;
         // The outside of the bottom face is below it (z − z1 → 0⁻), of the top face above (→ 0⁺).
         this.dzBottom = zLowM == 0 ? -0.0 : -zLowM;
         this.dzTop = zHighM == 0 ? 0.0 : -zHighM;
@@ -110,8 +115,27 @@ public final class BlockMagnetField extends CurrentSourceField {
         double tx2 = halfX - u;
         double ty1 = -halfY - v;
         double ty2 = halfY - v;
-        double au = brOver4Pi * (ribbon(tx1, tx2, Math.abs(v + halfY)) - ribbon(tx1, tx2, Math.abs(v - halfY)));
-        double av = brOver4Pi * (ribbon(ty1, ty2, Math.abs(u - halfX)) - ribbon(ty1, ty2, Math.abs(u + halfX)));
+        // Each corner (x_i, y_j) ends one ribbon along x and one along y, which share its distances.
+        double p11 = tx1 * tx1 + ty1 * ty1;
+        double p21 = tx2 * tx2 + ty1 * ty1;
+        double p12 = tx1 * tx1 + ty2 * ty2;
+        double p22 = tx2 * tx2 + ty2 * ty2;
+        double low11 = Math.sqrt(p11 + zLowSquared);
+        double low21 = Math.sqrt(p21 + zLowSquared);
+        double low12 = Math.sqrt(p12 + zLowSquared);
+        double low22 = Math.sqrt(p22 + zLowSquared);
+        double high11 = Math.sqrt(p11 + zHighSquared);
+        double high21 = Math.sqrt(p21 + zHighSquared);
+        double high12 = Math.sqrt(p12 + zHighSquared);
+        double high22 = Math.sqrt(p22 + zHighSquared);
+        double f11 = faceAsinh(p11, high11, low11, zLowM, zHighM);
+        double f21 = faceAsinh(p21, high21, low21, zLowM, zHighM);
+        double f12 = faceAsinh(p12, high12, low12, zLowM, zHighM);
+        double f22 = faceAsinh(p22, high22, low22, zLowM, zHighM);
+        double au = brOver4Pi * (ribbon(tx1, tx2, Math.abs(ty1), zLowM, zHighM, low11, low21, high11, high21, f11, f21)
+                - ribbon(tx1, tx2, Math.abs(ty2), zLowM, zHighM, low12, low22, high12, high22, f12, f22));
+        double av = brOver4Pi * (ribbon(ty1, ty2, Math.abs(tx2), zLowM, zHighM, low21, low22, high21, high22, f21, f22)
+                - ribbon(ty1, ty2, Math.abs(tx1), zLowM, zHighM, low11, low12, high11, high12, f11, f12));
         out[0] = cos * au - sin * av;
         out[1] = sin * au + cos * av;
     }
@@ -121,41 +145,73 @@ public final class BlockMagnetField extends CurrentSourceField {
      * of a unit ribbon running from t1 to t2 along its line, c ≥ 0 the in-plane distance to that line.
      */
     static double ribbon(double t1, double t2, double c, double zLow, double zHigh) {
-        double rho1 = Math.sqrt(c * c + t1 * t1);
-        double rho2 = Math.sqrt(c * c + t2 * t2);
-        return slice(t1, t2, c, rho1, rho2, zHigh) - slice(t1, t2, c, rho1, rho2, zLow);
-    }
-
-    private double ribbon(double t1, double t2, double c) {
-        return ribbon(t1, t2, c, zLowM, zHighM);
+        double p1 = c * c + t1 * t1;
+        double p2 = c * c + t2 * t2;
+        double low1 = Math.sqrt(p1 + zLow * zLow);
+        double low2 = Math.sqrt(p2 + zLow * zLow);
+        double high1 = Math.sqrt(p1 + zHigh * zHigh);
+        double high2 = Math.sqrt(p2 + zHigh * zHigh);
+        return ribbon(t1, t2, c, zLow, zHigh, low1, low2, high1, high2,
+                faceAsinh(p1, high1, low1, zLow, zHigh), faceAsinh(p2, high2, low2, zLow, zHigh));
     }
 
     /**
-     * G(t2, c, z) − G(t1, c, z), G the antiderivative in the class documentation, in forms free of
-     * cancellation: the z·asinh difference as one log ({@link StraightFilament#asinhDifference}),
-     * the t·asinh(z/ρ) terms through log1p. ρ_i = √(c² + t_i²). G(t, c, 0) = 0.
+     * The ribbon given at both ends the distances r = √(ρ² + z²) to each face's corner and
+     * F = asinh(zHigh/ρ) − asinh(zLow/ρ) ({@link #faceAsinh}), ρ = √(c² + t²): [G(t2, c, z) −
+     * G(t1, c, z)] between the faces, G the antiderivative in the class documentation, with the terms
+     * of both faces that share t paired so that each pair takes one logarithm, t·F, and the c·atan
+     * terms as one arctangent ({@link #atanDifference}). G(t, c, 0) = 0.
      */
-    private static double slice(double t1, double t2, double c, double rho1, double rho2, double z) {
-        if (z == 0) {
-            return 0;
+    private static double ribbon(double t1, double t2, double c, double zLow, double zHigh, double low1, double low2,
+                                 double high1, double high2, double f1, double f2) {
+        double g = t2 * f2 - t1 * f1;
+        if (zHigh != 0) {
+            g += zHigh * StraightFilament.asinhDifference(t2, t1, high2, high1, c * c + zHigh * zHigh, t2 - t1);
         }
-        double z2 = z * z;
-        double r1 = Math.sqrt(rho1 * rho1 + z2);
-        double r2 = Math.sqrt(rho2 * rho2 + z2);
-        double g = z * StraightFilament.asinhDifference(t2, t1, r2, r1, c * c + z2, t2 - t1)
-                + weightedAsinh(t2, z, r2, rho2) - weightedAsinh(t1, z, r1, rho1);
+        if (zLow != 0) {
+            g -= zLow * StraightFilament.asinhDifference(t2, t1, low2, low1, c * c + zLow * zLow, t2 - t1);
+        }
         if (c != 0) {
-            g -= c * (Math.atan(t2 * z / (c * r2)) - Math.atan(t1 * z / (c * r1)));
+            g -= c * atanDifference(t1, t2, c, zHigh, zLow, high1, high2, low1, low2);
         }
         return g;
     }
 
-    /** t·asinh(z/ρ) with r = √(ρ² + z²), as t·sign(z)·log1p((|z| + z²/(r + ρ))/ρ); 0 for t = 0. */
-    private static double weightedAsinh(double t, double z, double r, double rho) {
-        if (t == 0) {
+    /**
+     * asinh(zHigh/ρ) − asinh(zLow/ρ) at in-plane distance ρ = √rho2 from a corner, r = √(ρ² + z²)
+     * at each face: one log of a ratio ({@link StraightFilament#asinhDifference}, free of
+     * cancellation). 0 at the corner itself (ρ = 0), where it only ever multiplies t = 0.
+     */
+    private static double faceAsinh(double rho2, double rHigh, double rLow, double zLow, double zHigh) {
+        if (rho2 == 0) {
             return 0;
         }
-        double az = Math.abs(z);
-        return t * Math.copySign(Math.log1p((az + az * az / (r + rho)) / rho), z);
+        return StraightFilament.asinhDifference(zHigh, zLow, rHigh, rLow, rho2, zHigh - zLow);
+    }
+
+    /**
+     * The four arctangents of both faces, [atan(t2·z/(c·r2)) − atan(t1·z/(c·r1))] at zHigh minus the
+     * same at zLow, for c &gt; 0, t1 &lt; t2, r_i = √(c² + t_i² + z²), as one atan2. By the subtraction
+     * formula arctan α − arctan β = arctan[(α − β)/(1 + αβ)] (Abramowitz &amp; Stegun, <i>Handbook of
+     * Mathematical Functions</i>, 1964, eq. 4.4.34; from memory) each face's pair is the angle of the
+     * vector (X, Y) = c²·r1·r2·(1 + αβ, α − β), scaled by c²·r1·r2 &gt; 0 to stay finite for small c;
+     * its t2·r1 − t1·r2 is taken as (c² + z²)(t2 − t1)(t2 + t1)/(t2·r1 + t1·r2) when t1, t2 share a
+     * sign, free of cancellation. Both faces' angles lie in (0, π) for z &gt; 0 and in (−π, 0) for
+     * z &lt; 0 (0 for z = 0), and the faces do not straddle the plane, so their difference lies in
+     * (−π, π) and is the angle of (X_h·X_l + Y_h·Y_l, Y_h·X_l − X_h·Y_l). Rounding moves the result
+     * by a few ulp of π, as it would each of the four arctangents.
+     */
+    private static double atanDifference(double t1, double t2, double c, double zHigh, double zLow,
+                                         double r1High, double r2High, double r1Low, double r2Low) {
+        double xHigh = c * c * r1High * r2High + t1 * t2 * zHigh * zHigh;
+        double yHigh = c * zHigh * cross(t1, t2, c, zHigh, r1High, r2High);
+        double xLow = c * c * r1Low * r2Low + t1 * t2 * zLow * zLow;
+        double yLow = c * zLow * cross(t1, t2, c, zLow, r1Low, r2Low);
+        return Math.atan2(yHigh * xLow - xHigh * yLow, xHigh * xLow + yHigh * yLow);
+    }
+
+    /** t2·r1 − t1·r2 without cancellation; see {@link #atanDifference}. */
+    private static double cross(double t1, double t2, double c, double z, double r1, double r2) {
+        return t1 * t2 > 0 ? (c * c + z * z) * (t2 - t1) * (t2 + t1) / (t2 * r1 + t1 * r2) : t2 * r1 - t1 * r2;
     }
 }
