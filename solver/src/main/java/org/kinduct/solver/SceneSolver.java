@@ -84,9 +84,17 @@ public final class SceneSolver {
 
     /**
      * States at t0, t0 + dt, …, up to t1 inclusive when (t1 − t0)/dt is a whole number within
-     * rounding, else up to the last step before t1.
+     * rounding, else up to the last step before t1; the instants are solved on every core.
      */
     public List<Snapshot> series(double t0S, double t1S, double dtS) {
+        return series(t0S, t1S, dtS, true);
+    }
+
+    /**
+     * As {@link #series(double, double, double)}; with {@code parallel} false on the calling
+     * thread alone, for an interactive caller that leaves the other cores to its display.
+     */
+    public List<Snapshot> series(double t0S, double t1S, double dtS, boolean parallel) {
         Checks.finite(t0S, "t0");
         Checks.finite(t1S, "t1");
         Checks.positive(dtS, "dt");
@@ -97,8 +105,9 @@ public final class SceneSolver {
         if (steps > MAX_STEPS) {
             throw new IllegalArgumentException("more than " + MAX_STEPS + " time steps: (t1 − t0)/dt = " + steps);
         }
-        // Instants are independent and this solver is immutable: solve them on every core.
-        return IntStream.rangeClosed(0, (int) steps).parallel().mapToObj(i -> at(t0S + i * dtS)).toList();
+        // Instants are independent and this solver is immutable: they may be solved on every core.
+        IntStream steps0 = IntStream.rangeClosed(0, (int) steps);
+        return (parallel ? steps0.parallel() : steps0).mapToObj(i -> at(t0S + i * dtS)).toList();
     }
 
     /** The summed field of all sources at {@code tS}, e.g. for a B_z map. */

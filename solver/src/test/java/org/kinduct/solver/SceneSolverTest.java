@@ -46,6 +46,7 @@ class SceneSolverTest {
         for (int i = 0; i < series.size(); i++) {
             assertEquals(solver.at(i * 0.05), series.get(i), "instant " + i);
         }
+        assertEquals(series, solver.series(0, 1, 0.05, false), "one core or all, the same states");
     }
 
     @Test

@@ -49,7 +49,7 @@ public final class FrameTimeProbe {
 
     static final int WIDTH = 1280;
     static final int HEIGHT = 800;
-    private static final int WARM_UP_FRAMES = 60;
+    private static final int WARM_UP_FRAMES = 240;
     private static final double SIXTY_HZ_MS = 1000.0 / 60;
 
     private FrameTimeProbe() {

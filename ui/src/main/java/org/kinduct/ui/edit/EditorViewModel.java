@@ -66,6 +66,8 @@ public final class EditorViewModel {
      * the two cores with painting, and a map that trails the sources by a few frames is fine to look at.
      */
     static final double PLAYBACK_MAP_INTERVAL_S = 0.05;
+    /** Frames that move on by less than this fraction of the series step are solved exactly. */
+    static final double SLOW_MOTION_FRACTION = 0.25;
     private static final double LATENCY_SMOOTHING = 0.3;
     /** A map that took longer than this (a stall) is not taken as the usual delay. */
     private static final double MAX_MAP_LATENCY_S = 0.5;
@@ -374,8 +376,8 @@ public final class EditorViewModel {
 
     /**
      * Shows the series sample nearest to {@code t}; false when the series is not for this scene,
-     * or when playback is so slow that frames fall between its samples (slow motion would then
-     * move in steps: those frames are solved exactly).
+     * or when playback is so slow that several frames fall between two samples (slow motion would
+     * then move in visible steps: those frames are solved exactly).
      */
     private boolean showSeriesSample(double t) {
         List<Snapshot> samples = series.get();
@@ -383,7 +385,7 @@ public final class EditorViewModel {
             return false;
         }
         double sampleStep = (samples.get(samples.size() - 1).tS() - samples.get(0).tS()) / (samples.size() - 1);
-        if (playbackStepS < sampleStep) {
+        if (playbackStepS < sampleStep * SLOW_MOTION_FRACTION) {
             return false;
         }
         int i = nearestSample(samples, t);
