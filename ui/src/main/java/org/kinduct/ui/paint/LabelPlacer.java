@@ -49,10 +49,9 @@ public final class LabelPlacer {
         taken.add(box);
     }
 
-    /** Places a {@code w × h} box near (ax, ay) and records it as taken. */
+    /** Places a {@code w × h} box near (ax, ay), on the side away from it (a callout with a leader), and records it. */
     public Box place(double ax, double ay, double w, double h) {
-        Box best = null;
-        double bestOverlap = Double.POSITIVE_INFINITY;
+        List<Box> candidates = new ArrayList<>();
         for (double r : RINGS) {
             for (int k = 0; k < DIRECTIONS; k++) {
                 double a = -Math.PI / 4 + k * 2 * Math.PI / DIRECTIONS;
@@ -61,18 +60,42 @@ public final class LabelPlacer {
                 // Put the box on the side of the ring facing away from the anchor.
                 double x = Math.cos(a) >= -1e-9 ? cx : cx - w;
                 double y = Math.abs(Math.sin(a)) < 1e-9 ? cy - h / 2 : (Math.sin(a) > 0 ? cy - h : cy);
-                x = Math.max(0, Math.min(width - w, x));
-                y = Math.max(0, Math.min(height - h, y));
-                Box b = new Box(x, y, w, h);
-                double overlap = overlap(b);
-                if (overlap == 0) {
-                    taken.add(b);
-                    return b;
-                }
-                if (overlap < bestOverlap) {
-                    bestOverlap = overlap;
-                    best = b;
-                }
+                candidates.add(onSurface(x, y, w, h));
+            }
+        }
+        return take(candidates);
+    }
+
+    /** Places a {@code w × h} box centred on (ax, ay) if free, else centred as near it as is free, and records it. */
+    public Box placeAround(double ax, double ay, double w, double h) {
+        List<Box> candidates = new ArrayList<>();
+        candidates.add(onSurface(ax - w / 2, ay - h / 2, w, h));
+        for (double r : RINGS) {
+            for (int k = 0; k < DIRECTIONS; k++) {
+                double a = k * 2 * Math.PI / DIRECTIONS;
+                candidates.add(onSurface(ax + r * Math.cos(a) - w / 2, ay - r * Math.sin(a) - h / 2, w, h));
+            }
+        }
+        return take(candidates);
+    }
+
+    private Box onSurface(double x, double y, double w, double h) {
+        return new Box(Math.max(0, Math.min(width - w, x)), Math.max(0, Math.min(height - h, y)), w, h);
+    }
+
+    /** The first free candidate, else the least covered one; recorded as taken. */
+    private Box take(List<Box> candidates) {
+        Box best = null;
+        double bestOverlap = Double.POSITIVE_INFINITY;
+        for (Box b : candidates) {
+            double overlap = overlap(b);
+            if (overlap == 0) {
+                taken.add(b);
+                return b;
+            }
+            if (overlap < bestOverlap) {
+                bestOverlap = overlap;
+                best = b;
             }
         }
         taken.add(best);

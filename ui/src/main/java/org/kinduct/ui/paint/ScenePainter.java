@@ -66,15 +66,15 @@ public final class ScenePainter {
         LabelPlacer placer = new LabelPlacer(s.width(), s.height());
         fixed.forEach(placer::reserve);
         Placement placement = Placement.of(f.scene(), f.tS(), f.poses());
-        if (f.shows(Layer.SOURCES)) {
-            SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer);
-        }
+        List<Runnable> patchMarks = f.shows(Layer.SOURCES)
+                ? SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer) : List.of();
         if (f.shows(Layer.CONDUCTORS)) {
             ConductorPainter.drawConductors(s, v, f.scene(), placement, f.marks());
         }
         if (f.shows(Layer.LENZ) && f.snapshot() != null) {
             ConductorPainter.drawLenz(s, v, f.scene(), f.snapshot(), placer);
         }
+        patchMarks.forEach(Runnable::run);
         List<Runnable> labels = new ArrayList<>();
         if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
             ConductorPainter.placeCallouts(s, v, f.scene(), f.snapshot(), f.scales(), placer, labels);

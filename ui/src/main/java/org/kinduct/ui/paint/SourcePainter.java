@@ -12,11 +12,20 @@ public final class SourcePainter {
 
     private static final int CIRCLE_SEGMENTS = 72;
 
+    /** Height of a patch's mark: the 7 px symbol above a 14 px value. */
+    private static final double PATCH_MARK_H = 34;
+
     private SourcePainter() {
     }
 
-    static void draw(Surface s, ViewTransform v, Scene scene, Placement placement, EditorMarks marks,
-                     LabelPlacer placer) {
+    /**
+     * Draws the sources; returns the field patches' value marks (⊙/⊗ and B_z), to be placed once
+     * conductors and their arrows have claimed their room, so a conductor crossing a patch's
+     * centre does not run through its value.
+     */
+    static List<Runnable> draw(Surface s, ViewTransform v, Scene scene, Placement placement, EditorMarks marks,
+                               LabelPlacer placer) {
+        List<Runnable> patchMarks = new ArrayList<>();
         for (Source src : scene.sources()) {
             boolean selected = marks.selected().contains(src.id());
             List<Vec2> outline = outline(src, placement);
@@ -33,9 +42,7 @@ public final class SourcePainter {
                 s.strokePath();
                 s.dash();
                 Vec2 c = centroid(outline);
-                Glyphs.fieldSymbol(s, v.screenX(c.x()), v.screenY(c.y()) - 10, 7, patch.bzT() > 0, Palette.INK);
-                label(s, v, c, Quantities.bz(patch.bzT()), 8);
-                placer.reserve(new LabelPlacer.Box(v.screenX(c.x()) - 30, v.screenY(c.y()) - 20, 60, 42));
+                patchMarks.add(() -> patchMark(s, placer, v.screenX(c.x()), v.screenY(c.y()), patch.bzT()));
             } else if (src instanceof Source.SourceCoil coil) {
                 polygon(s, v, outline, true);
                 s.stroke(Palette.COIL);
@@ -66,6 +73,20 @@ public final class SourcePainter {
                 s.dash();
             }
         }
+        return patchMarks;
+    }
+
+    /** A patch's ⊙/⊗ and value in the free box nearest its centre (cx, cy). */
+    private static void patchMark(Surface s, LabelPlacer placer, double cx, double cy, double bzT) {
+        String text = Quantities.bz(bzT);
+        double w = Math.max(s.textWidth(text, 11, false) + 6, 20);
+        LabelPlacer.Box b = placer.placeAround(cx, cy, w, PATCH_MARK_H);
+        double x = b.centerX();
+        Glyphs.fieldSymbol(s, x, b.y() + 8, 7, bzT > 0, Palette.INK);
+        s.fill(0xC0FFFFFF);
+        s.fillRect(x - (w) / 2, b.y() + 18, w, 14);
+        s.fill(Palette.INK);
+        s.text(text, x, b.y() + 25, 11, false, Surface.Anchor.CENTER);
     }
 
     /** The source's outline in scene metres at this instant (empty for a field without outline). */

@@ -1,5 +1,6 @@
 package org.kinduct.ui.paint;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -49,5 +50,21 @@ class LabelPlacerTest {
         p.reserve(legend);
         LabelPlacer.Box b = p.place(300, 220, 60, 30);
         assertFalse(overlap(b, legend));
+    }
+
+    @Test
+    void aMarkSitsCentredOnItsAnchorWhenFreeAndStepsAsideFromWhatIsTaken() {
+        LabelPlacer p = new LabelPlacer(400, 300);
+        LabelPlacer.Box free = p.placeAround(100, 100, 40, 30);
+        assertEquals(100, free.centerX(), 1e-12);
+        assertEquals(100, free.centerY(), 1e-12);
+
+        LabelPlacer q = new LabelPlacer(400, 300);
+        LabelPlacer.Box arrow = new LabelPlacer.Box(195, 60, 10, 80);
+        q.reserve(arrow);
+        LabelPlacer.Box moved = q.placeAround(200, 100, 40, 30);
+        assertFalse(overlap(moved, arrow));
+        assertTrue(Math.hypot(moved.centerX() - 200, moved.centerY() - 100) <= 40,
+                "stays near its anchor: " + moved);
     }
 }
