@@ -1,6 +1,5 @@
 package org.kinduct.report;
 
-import java.util.ArrayList;
 import java.util.Collection;
 import java.util.List;
 import org.kinduct.scene.Vec2;
@@ -39,13 +38,14 @@ public record ResultScales(double emfV, double currentA, double fluxWb, double f
         return new ResultScales(emf, current, flux, force);
     }
 
-    /** The scales of a run and the instant shown (which may lie between the run's samples); {@code now} may be null. */
-    public static ResultScales of(List<Snapshot> run, Snapshot now) {
-        List<Snapshot> all = new ArrayList<>(run);
-        if (now != null) {
-            all.add(now);
+    /** These scales widened to the instant shown (which may lie between a run's samples); this when {@code now} is null. */
+    public ResultScales including(Snapshot now) {
+        if (now == null) {
+            return this;
         }
-        return of(all);
+        ResultScales n = of(List.of(now));
+        return new ResultScales(Math.max(emfV, n.emfV), Math.max(currentA, n.currentA), Math.max(fluxWb, n.fluxWb),
+                Math.max(forceN, n.forceN));
     }
 
     /** An EMF, zero when it is noise beside the largest EMF. */

@@ -79,4 +79,14 @@ class ResultScalesTest {
     private static ConductorState coil(Snapshot s) {
         return s.conductor("rotor-coil").orElseThrow();
     }
+
+    @Test
+    void anInstantBeyondTheRunWidensTheScalesAndNoInstantLeavesThemAsTheyAre() {
+        List<Snapshot> run = rotorRun(Demos.load("spinning-coil-generator"));
+        ResultScales start = ResultScales.of(run.subList(0, 1));
+        Snapshot peak = run.stream().max(java.util.Comparator.comparingDouble(s -> Math.abs(coil(s).emfV())))
+                .orElseThrow();
+        assertEquals(ResultScales.of(List.of(run.get(0), peak)), start.including(peak));
+        assertEquals(start, start.including(null));
+    }
 }

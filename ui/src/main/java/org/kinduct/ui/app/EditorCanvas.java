@@ -18,7 +18,6 @@ import javafx.scene.input.MouseEvent;
 import javafx.scene.input.ScrollEvent;
 import javafx.scene.layout.Pane;
 import javafx.util.Duration;
-import org.kinduct.report.ResultScales;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
@@ -184,7 +183,7 @@ final class EditorCanvas extends Pane {
         return new Frame(scene, t, snap,
                 vm.rasterProperty().get(), vm.viewProperty().get(), vm.layers(), vm.rangeProperty().get(), marks, note,
                 dragPreview != null ? java.util.Map.of() : vm.posesProperty().get(),
-                ResultScales.of(vm.currentSeries(), snap));
+                vm.scalesNow());
     }
 
     void toggleFrameTime() {
@@ -229,6 +228,11 @@ final class EditorCanvas extends Pane {
         return vm.viewProperty().get();
     }
 
+    /** Where the user sees things: bodies where they are now, free ones where the run has them. */
+    private Placement seen() {
+        return Placement.of(vm.scene(), vm.timeProperty().get(), vm.posesProperty().get());
+    }
+
     private Snapper snapper() {
         double grid = vm.snapToGridProperty().get() ? NiceSteps.atLeast(GRID_SNAP_PX / view().pxPerM()) : 0;
         return new Snapper(grid, Picker.REACH_PX / view().pxPerM(), vm.snapAnglesProperty().get());
@@ -262,7 +266,7 @@ final class EditorCanvas extends Pane {
         if (panning || e.getButton() != MouseButton.PRIMARY || drawing != null) {
             return;
         }
-        Placement placement = Placement.of(vm.scene(), vm.timeProperty().get(), vm.posesProperty().get());
+        Placement placement = seen();
         vertexDrag = Picker.vertex(vm.scene(), placement, view(), e.getX(), e.getY(), vm.selection()).orElse(null);
         if (vertexDrag != null) {
             return;
@@ -304,7 +308,7 @@ final class EditorCanvas extends Pane {
         Vec2 d = view().toScene(e.getX(), e.getY()).minus(view().toScene(pressX, pressY));
         try {
             // Edits change the drawn geometry; at t > t0 a body may have moved and turned since.
-            Placement now = Placement.of(vm.scene(), vm.timeProperty().get(), vm.posesProperty().get());
+            Placement now = seen();
             if (vertexDrag != null) {
                 Vec2 at = snapper().snap(view().toScene(e.getX(), e.getY()), null, List.of()).point();
                 Conductor c = vm.scene().conductor(vertexDrag.conductorId()).orElseThrow();
@@ -365,8 +369,7 @@ final class EditorCanvas extends Pane {
         double y0 = Math.min(v.sceneY(pressY), v.sceneY(bandY));
         double y1 = Math.max(v.sceneY(pressY), v.sceneY(bandY));
         Scene s = vm.scene();
-        // What the user sees: bodies where they are now, free ones where the run has them.
-        Placement seen = Placement.of(s, vm.timeProperty().get(), vm.posesProperty().get());
+        Placement seen = seen();
         java.util.Set<String> inside = new java.util.HashSet<>();
         s.sources().forEach(x -> inside.add(x.id()));
         s.conductors().forEach(x -> inside.add(x.id()));
@@ -510,7 +513,7 @@ final class EditorCanvas extends Pane {
             return;
         }
         // Turn what the user sees: at t > t0 bodies may have moved and turned since they were drawn.
-        Placement seen = Placement.of(vm.scene(), vm.timeProperty().get(), vm.posesProperty().get());
+        Placement seen = seen();
         Vec2 c = SceneBounds.ofObjects(vm.scene(), ids, seen).center();
         vm.apply("Rotate", s -> SceneEdits.rotateAsSeen(s, ids, seen, c, angleRad));
     }

@@ -40,10 +40,9 @@ final class ReadoutTable extends TableView<ConductorState> {
             Vec2 f = scales.force(s.forceN());
             return Quantities.force(f.x()) + ", " + Quantities.force(f.y());
         }));
-        // Values are read against the current scene's run only: an earlier scene's may be far larger.
-        vm.snapshotProperty().addListener((obs, old, snap) -> show(vm.currentSeries(), snap));
-        vm.seriesProperty().addListener((obs, old, run) -> show(vm.currentSeries(), vm.snapshotProperty().get()));
-        show(vm.currentSeries(), vm.snapshotProperty().get());
+        vm.snapshotProperty().addListener((obs, old, snap) -> show(vm));
+        vm.seriesProperty().addListener((obs, old, run) -> show(vm));
+        show(vm);
         getSelectionModel().selectedItemProperty().addListener((obs, old, row) -> {
             if (row != null && !vm.selection().contains(row.id())) {
                 vm.select(java.util.Set.of(row.id()));
@@ -51,12 +50,13 @@ final class ReadoutTable extends TableView<ConductorState> {
         });
     }
 
-    private void show(List<Snapshot> run, Snapshot snap) {
+    private void show(EditorViewModel vm) {
+        Snapshot snap = vm.snapshotProperty().get();
         if (snap == null) {
             rows.clear();
             return;
         }
-        scales = ResultScales.of(run, snap);
+        scales = vm.scalesNow();
         if (rows.size() == snap.conductors().size()) {
             for (int i = 0; i < rows.size(); i++) {
                 rows.set(i, snap.conductors().get(i));

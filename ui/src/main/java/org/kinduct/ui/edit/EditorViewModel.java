@@ -29,6 +29,7 @@ import javafx.beans.property.SimpleDoubleProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableSet;
+import org.kinduct.report.ResultScales;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
@@ -61,6 +62,7 @@ public final class EditorViewModel {
     public static final int SERIES_SAMPLES = 241;
     private static final String SIMULATING = "Simulating the free bodies…";
     private static final int UNDO_LIMIT = 200;
+    private static final ResultScales NO_SCALES = ResultScales.of(List.of());
     /**
      * While playing, a coarse field map at most this often (seconds of wall-clock time): maps share
      * the two cores with painting, and a map that trails the sources by a few frames is fine to look at.
@@ -120,6 +122,7 @@ public final class EditorViewModel {
     private SceneEvaluator evaluator;
     private long evaluatorRevision = -1;
     private long seriesRevision = -1;
+    private ResultScales runScales = NO_SCALES;
     private double sincePlaybackMap = Double.POSITIVE_INFINITY;
     /** Scene time the last playback frame moved on by. */
     private double playbackStepS;
@@ -375,6 +378,14 @@ public final class EditorViewModel {
     }
 
     /**
+     * What values shown now are read against (noise reads 0): the current scene's run, taken once
+     * when it arrives, widened to the snapshot shown.
+     */
+    public ResultScales scalesNow() {
+        return (seriesIsCurrent() ? runScales : NO_SCALES).including(snapshot.get());
+    }
+
+    /**
      * Shows the series sample nearest to {@code t}; false when the series is not for this scene,
      * or when playback is so slow that several frames fall between two samples (slow motion would
      * then move in visible steps: those frames are solved exactly).
@@ -443,6 +454,7 @@ public final class EditorViewModel {
                 ui.execute(() -> {
                     if (revision.get() == rev) {
                         seriesRevision = rev;
+                        runScales = ResultScales.of(result);
                         series.set(result);
                         poseSeries.set(placed);
                         audit.set(energy);

@@ -12,6 +12,7 @@ import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.ui.paint.Extent;
 import org.kinduct.ui.paint.Placement;
 import org.kinduct.ui.paint.SourcePainter;
 
@@ -35,17 +36,8 @@ public record SceneBounds(double minX, double minY, double maxX, double maxY) {
         if (pts.isEmpty()) {
             return new SceneBounds(-0.1, -0.1, 0.1, 0.1);
         }
-        double x0 = Double.POSITIVE_INFINITY;
-        double y0 = Double.POSITIVE_INFINITY;
-        double x1 = Double.NEGATIVE_INFINITY;
-        double y1 = Double.NEGATIVE_INFINITY;
-        for (Vec2 p : pts) {
-            x0 = Math.min(x0, p.x());
-            y0 = Math.min(y0, p.y());
-            x1 = Math.max(x1, p.x());
-            y1 = Math.max(y1, p.y());
-        }
-        return new SceneBounds(x0, y0, x1, y1);
+        Extent e = Extent.of(pts);
+        return new SceneBounds(e.minX(), e.minY(), e.maxX(), e.maxY());
     }
 
     /**

@@ -145,17 +145,8 @@ final class ConductorPainter {
      * {@value #MIN_ARROW_SCALE} of it.
      */
     static double arrowScale(ViewTransform v, List<Vec2> pts) {
-        double minX = Double.POSITIVE_INFINITY;
-        double maxX = Double.NEGATIVE_INFINITY;
-        double minY = Double.POSITIVE_INFINITY;
-        double maxY = Double.NEGATIVE_INFINITY;
-        for (Vec2 p : pts) {
-            minX = Math.min(minX, p.x());
-            maxX = Math.max(maxX, p.x());
-            minY = Math.min(minY, p.y());
-            maxY = Math.max(maxY, p.y());
-        }
-        double acrossPx = Math.min(maxX - minX, maxY - minY) * v.pxPerM();
+        Extent e = Extent.of(pts);
+        double acrossPx = Math.min(e.width(), e.height()) * v.pxPerM();
         return Math.max(MIN_ARROW_SCALE, Math.min(1, acrossPx / FULL_ARROW_LOOP_PX));
     }
 
@@ -245,18 +236,11 @@ final class ConductorPainter {
 
     /** Keeps labels off small conductors (large ones would leave no room, so they stay open). */
     private static void reserveIfSmall(ViewTransform v, List<Vec2> pts, LabelPlacer placer) {
-        double x0 = Double.POSITIVE_INFINITY;
-        double y0 = Double.POSITIVE_INFINITY;
-        double x1 = Double.NEGATIVE_INFINITY;
-        double y1 = Double.NEGATIVE_INFINITY;
-        for (Vec2 p : pts) {
-            x0 = Math.min(x0, v.screenX(p.x()));
-            x1 = Math.max(x1, v.screenX(p.x()));
-            y0 = Math.min(y0, v.screenY(p.y()));
-            y1 = Math.max(y1, v.screenY(p.y()));
-        }
-        if (x1 - x0 < SMALL_PX && y1 - y0 < SMALL_PX) {
-            placer.reserve(new LabelPlacer.Box(x0 - 4, y0 - 4, x1 - x0 + 8, y1 - y0 + 8));
+        Extent e = Extent.of(pts);
+        double w = e.width() * v.pxPerM();
+        double h = e.height() * v.pxPerM();
+        if (w < SMALL_PX && h < SMALL_PX) {
+            placer.reserve(new LabelPlacer.Box(v.screenX(e.minX()) - 4, v.screenY(e.maxY()) - 4, w + 8, h + 8));
         }
     }
 
