@@ -145,7 +145,10 @@ class SceneSolverTest {
         assertEquals(2, field.size());
     }
 
-    /** Superposition (Griffiths, Introduction to Electrodynamics, 4th ed., 2013, §5.3): the parts add up to the whole. */
+    /**
+     * Superposition: B is linear in its sources (Griffiths, Introduction to Electrodynamics, 4th
+     * ed., 2013, ch. 5; section from memory), so the parts add up to the whole.
+     */
     @Test
     void fieldsOfDisjointSourceSetsAddUpToTheWholeField() {
         Scene scene = scene(List.of(new Body("cart", "cart", Vec2.ZERO, new Motion.Glide(new Vec2(SPEED, 0)))),
