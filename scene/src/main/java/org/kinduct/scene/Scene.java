@@ -85,6 +85,15 @@ public record Scene(String name, String description, List<Body> bodies, List<Sou
         return new Scene(newName, newDescription, bodies, sources, conductors, time, gravity);
     }
 
+    /** This scene without the sources and conductors whose ids are in {@code ids}. */
+    public Scene without(java.util.Collection<String> ids) {
+        List<Source> keptSources = new ArrayList<>(sources);
+        keptSources.removeIf(s -> ids.contains(s.id()));
+        List<Conductor> keptConductors = new ArrayList<>(conductors);
+        keptConductors.removeIf(c -> ids.contains(c.id()));
+        return withSources(keptSources).withConductors(keptConductors);
+    }
+
     public Scene withGravity(Vec2 newGravity) {
         return new Scene(name, description, bodies, sources, conductors, time, newGravity);
     }

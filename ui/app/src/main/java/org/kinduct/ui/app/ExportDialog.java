@@ -1,0 +1,207 @@
+package org.kinduct.ui.app;
+
+import org.kinduct.render.export.Exporter;
+import org.kinduct.render.export.SnapshotOptions;
+import org.kinduct.render.export.ViewChoice;
+
+import java.io.File;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.EnumSet;
+import java.util.Locale;
+import javafx.application.Platform;
+import javafx.geometry.Insets;
+import javafx.scene.control.ButtonBar;
+import javafx.scene.control.ButtonType;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.Dialog;
+import javafx.scene.control.Label;
+import javafx.scene.control.RadioButton;
+import javafx.scene.control.TextField;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.stage.FileChooser;
+import javafx.stage.Window;
+import org.kinduct.report.Version;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Units;
+import org.kinduct.ui.edit.EditorViewModel;
+import org.kinduct.render.paint.Layer;
+import org.kinduct.render.paint.Quantities;
+
+/**
+ * The editor's export dialog: format, size, resolution, view and time, then a file chooser. It
+ * remembers the last choices ({@link ExportPreferences}) and exports off the UI thread, reporting
+ * in the editor's status line.
+ */
+public final class ExportDialog {
+
+    private final Window owner;
+    private final EditorViewModel vm;
+    private final Path home;
+    private final ComboBox<ExportPreferences.Format> format = new ComboBox<>();
+    private final TextField width = new TextField();
+    private final TextField dpi = new TextField();
+    private final TextField time = new TextField();
+    private final RadioButton currentView = new RadioButton("Current view");
+    private final RadioButton wholeScene = new RadioButton("Whole scene");
+    private Choice chosen;
+
+    private ExportDialog(Window owner, EditorViewModel vm, Path home) {
+        this.owner = owner;
+        this.vm = vm;
+        this.home = home;
+    }
+
+    /** Shows the dialog for the editor's scene, view and time; {@code home} keeps the choices. */
+    public static void show(Window owner, EditorViewModel vm, Path home) {
+        new ExportDialog(owner, vm, home).run();
+    }
+
+    private void run() {
+        ExportPreferences prefs = ExportPreferences.load(home);
+        Dialog<ButtonType> d = new Dialog<>();
+        d.initOwner(owner);
+        d.setTitle("Export");
+        d.setHeaderText("Annotated snapshot or data of \"" + sceneName(vm.scene()) + "\"");
+        ButtonType export = new ButtonType("Export…", ButtonBar.ButtonData.OK_DONE);
+        d.getDialogPane().getButtonTypes().addAll(export, ButtonType.CANCEL);
+        d.getDialogPane().setId("export-dialog");
+        format.getItems().setAll(ExportPreferences.Format.values());
+        format.setValue(prefs.format());
+        format.setId("export-format");
+        width.setText(Integer.toString(prefs.widthPx()));
+        width.setId("export-width");
+        dpi.setText(Integer.toString(prefs.dpi()));
+        dpi.setId("export-dpi");
+        time.setText(Quantities.time(vm.timeProperty().get()));
+        time.setId("export-time");
+        ToggleGroup views = new ToggleGroup();
+        currentView.setToggleGroup(views);
+        wholeScene.setToggleGroup(views);
+        (prefs.wholeScene() ? wholeScene : currentView).setSelected(true);
+        GridPane grid = new GridPane();
+        grid.setHgap(10);
+        grid.setVgap(8);
+        grid.setPadding(new Insets(12));
+        grid.addRow(0, new Label("Export"), format);
+        grid.addRow(1, new Label("Width (pixels)"), width);
+        grid.addRow(2, new Label("Resolution (dpi)"), dpi);
+        grid.addRow(3, new Label("Shows"), new HBox(12, currentView, wholeScene));
+        grid.addRow(4, new Label("At time"), time);
+        Label note = new Label("Time series and JSON cover the scene's whole time window.");
+        note.setWrapText(true);
+        grid.add(note, 0, 5, 2, 1);
+        Runnable enable = () -> {
+            boolean image = format.getValue() == ExportPreferences.Format.PNG
+                    || format.getValue() == ExportPreferences.Format.SVG;
+            width.setDisable(!image);
+            dpi.setDisable(format.getValue() != ExportPreferences.Format.PNG);
+        };
+        format.setOnAction(e -> enable.run());
+        enable.run();
+        d.getDialogPane().setContent(grid);
+        d.getDialogPane().lookupButton(export).addEventFilter(javafx.event.ActionEvent.ACTION, e -> {
+            chosen = read();
+            if (chosen == null) {
+                e.consume();
+            }
+        });
+        d.showAndWait().filter(b -> b == export).ifPresent(b -> chooseAndExport(chosen, prefs.folder()));
+    }
+
+    /** The dialog's values as options, or null after telling the user what is wrong. */
+    private Choice read() {
+        try {
+            int w = Integer.parseInt(width.getText().strip());
+            int r = Integer.parseInt(dpi.getText().strip());
+            double t = Units.parse(time.getText(), Dimension.TIME);
+            ViewChoice view = wholeScene.isSelected() ? new ViewChoice.Fit() : new ViewChoice.Current(vm.viewProperty().get());
+            EnumSet<Layer> layers = vm.layers().isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(vm.layers());
+            SnapshotOptions options = new SnapshotOptions(t, w, r, view, layers, vm.rangeProperty().get(),
+                    LocalDate.now(), Version.text());
+            return new Choice(format.getValue(), options);
+        } catch (NumberFormatException e) {
+            vm.say("Export: width and resolution must be whole numbers");
+        } catch (IllegalArgumentException e) {
+            vm.say("Export: " + e.getMessage());
+        }
+        return null;
+    }
+
+    private record Choice(ExportPreferences.Format format, SnapshotOptions options) {
+    }
+
+    private void chooseAndExport(Choice c, Path lastFolder) {
+        FileChooser chooser = new FileChooser();
+        chooser.setTitle("Export " + c.format());
+        String ext = c.format().extension();
+        chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter(c.format().toString(), "*." + ext));
+        Path folder = lastFolder != null ? lastFolder : vm.fileProperty().get() != null
+                ? vm.fileProperty().get().toAbsolutePath().getParent() : null;
+        if (folder != null && Files.isDirectory(folder)) {
+            chooser.setInitialDirectory(folder.toFile());
+        }
+        chooser.setInitialFileName(baseName(vm.scene(), c) + "." + ext);
+        File file = chooser.showSaveDialog(owner);
+        if (file == null) {
+            return;
+        }
+        Path target = file.toPath();
+        remember(c, target.toAbsolutePath().getParent());
+        Scene scene = vm.scene();
+        vm.say("Exporting " + target.getFileName() + "…");
+        Thread worker = new Thread(() -> {
+            String message;
+            try {
+                new Exporter(scene, c.options()).write(targets(c.format(), target));
+                message = "Exported " + target.getFileName();
+            } catch (IOException | RuntimeException e) {
+                message = "Export failed: " + e.getMessage();
+            }
+            String shown = message;
+            Platform.runLater(() -> vm.say(shown));
+        }, "kinduct-export");
+        worker.setDaemon(true);
+        worker.start();
+    }
+
+    private void remember(Choice c, Path folder) {
+        try {
+            new ExportPreferences(c.format(), c.options().widthPx(), c.options().dpi(),
+                    c.options().view() instanceof ViewChoice.Fit, folder).save(home);
+        } catch (IOException e) {
+            vm.say("Could not keep the export settings: " + e.getMessage());
+        }
+    }
+
+    static Exporter.Targets targets(ExportPreferences.Format format, Path file) {
+        return switch (format) {
+            case PNG -> new Exporter.Targets(file, null, null, null, null);
+            case SVG -> new Exporter.Targets(null, file, null, null, null);
+            case SERIES_CSV -> new Exporter.Targets(null, null, file, null, null);
+            case FIELD_CSV -> new Exporter.Targets(null, null, null, file, null);
+            case JSON -> new Exporter.Targets(null, null, null, null, file);
+        };
+    }
+
+    private static String sceneName(Scene scene) {
+        return scene.name().isEmpty() ? "untitled" : scene.name();
+    }
+
+    /** A file name from the scene's name and the time, e.g. {@code rod-on-a-cart-t50ms}. */
+    private static String baseName(Scene scene, Choice c) {
+        String slug = sceneName(scene).toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-|-$", "");
+        String suffix = switch (c.format()) {
+            case SERIES_CSV -> "-series";
+            case JSON -> "-results";
+            case FIELD_CSV -> "-field-t" + Quantities.time(c.options().tS()).replaceAll("[^A-Za-z0-9.]", "");
+            default -> "-t" + Quantities.time(c.options().tS()).replaceAll("[^A-Za-z0-9.]", "");
+        };
+        return (slug.isEmpty() ? "scene" : slug) + suffix;
+    }
+}

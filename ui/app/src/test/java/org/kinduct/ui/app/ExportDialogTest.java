@@ -1,0 +1,79 @@
+package org.kinduct.ui.app;
+
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.concurrent.TimeUnit;
+import javafx.application.Platform;
+import javafx.embed.swing.SwingFXUtils;
+import javafx.scene.control.DialogPane;
+import javafx.scene.image.WritableImage;
+import javax.imageio.ImageIO;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.TextField;
+import javafx.stage.Stage;
+import org.junit.jupiter.api.Test;
+import org.kinduct.render.field.SolverEvaluator;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.kinduct.ui.edit.EditorViewModel;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** The export dialog opens with the remembered choices and refuses input it cannot use. */
+@ExtendWith(ApplicationExtension.class)
+class ExportDialogTest {
+
+    @TempDir
+    Path home;
+
+    private Stage stage;
+    private EditorViewModel vm;
+
+    @Start
+    void start(Stage stage) {
+        this.stage = stage;
+        vm = new EditorViewModel(org.kinduct.demo.Demos.load("drive-sense-wire"), s -> new SolverEvaluator(s), Runnable::run,
+                Runnable::run);
+        stage.setScene(new javafx.scene.Scene(new javafx.scene.layout.Pane(), 400, 300));
+        stage.show();
+    }
+
+    private void open() {
+        Platform.runLater(() -> ExportDialog.show(stage, vm, home));
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    @Test
+    void dialogStartsFromTheRememberedChoices(FxRobot robot) throws Exception {
+        new ExportPreferences(ExportPreferences.Format.SVG, 2222, 150, true, null).save(home);
+
+        open();
+
+        assertEquals(ExportPreferences.Format.SVG, robot.lookup("#export-format").queryAs(ComboBox.class).getValue());
+        assertEquals("2222", robot.lookup("#export-width").queryAs(TextField.class).getText());
+        assertEquals("150", robot.lookup("#export-dpi").queryAs(TextField.class).getText());
+        DialogPane pane = robot.lookup("#export-dialog").queryAs(DialogPane.class);
+        WritableImage shot = WaitForAsyncUtils.asyncFx(() -> pane.snapshot(null, null)).get(10, TimeUnit.SECONDS);
+        ImageIO.write(SwingFXUtils.fromFXImage(shot, null), "png", Path.of("target", "export-dialog.png").toFile());
+        robot.clickOn("Cancel");
+    }
+
+    @Test
+    void invalidWidthKeepsTheDialogOpenAndSaysWhy(FxRobot robot) throws Exception {
+        open();
+        TextField width = robot.lookup("#export-width").queryAs(TextField.class);
+        WaitForAsyncUtils.asyncFx(() -> width.setText("wide")).get(10, TimeUnit.SECONDS);
+
+        robot.clickOn("Export…");
+        WaitForAsyncUtils.waitForFxEvents();
+
+        assertTrue(robot.lookup("#export-dialog").tryQuery().isPresent(), "dialog still open");
+        assertTrue(vm.statusProperty().get().contains("whole numbers"), vm.statusProperty().get());
+        robot.clickOn("Cancel");
+    }
+}

@@ -1,0 +1,101 @@
+package org.kinduct.ui.edit;
+
+import org.kinduct.report.EnergyText;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.junit.jupiter.api.Test;
+import org.kinduct.scene.Motion;
+import org.kinduct.scene.Pose;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.SceneSolver;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.dynamics.EnergyAudit;
+
+class PlotSeriesTest {
+
+    private static final double TOL = 1e-12;
+
+    private static Scene glidingMagnet() {
+        Scene s = Fixtures.loopAndMagnet();
+        return find(MotionSheet.of(s, "magnet"), "Motion").check(s, "glide").apply(s);
+    }
+
+    private static Property find(List<Property> props, String label) {
+        return props.stream().filter(p -> p.label().startsWith(label)).findFirst().orElseThrow();
+    }
+
+    @Test
+    void bodyPositionOfAPrescribedGlideIsPivotPlusVelocityTimesTime() {
+        Scene s = glidingMagnet();
+        Motion.Glide g = (Motion.Glide) s.body(SceneEdits.bodyOf(s, "magnet")).orElseThrow().motion();
+        Vec2 pivot = s.body(SceneEdits.bodyOf(s, "magnet")).orElseThrow().pivot();
+        List<Snapshot> series = new SceneSolver(s).series(0, 1, 0.25);
+        List<PlotSeries.Line> lines = PlotSeries.lines(s, series, List.of(), Set.of("magnet"),
+                PlotSeries.Quantity.POSITION_X);
+        assertEquals(1, lines.size());
+        for (int i = 0; i < series.size(); i++) {
+            // Uniform motion x = x0 + v·t (definition of constant velocity).
+            assertEquals(pivot.x() + g.velocity().x() * series.get(i).tS(), lines.get(0).values()[i], TOL);
+        }
+        List<PlotSeries.Line> speed = PlotSeries.lines(s, series, List.of(), Set.of(), PlotSeries.Quantity.SPEED);
+        assertEquals(g.velocity().length(), speed.get(0).values()[2], TOL);
+    }
+
+    /**
+     * The rotor demo's coil is centred over its magnets at t = 0 and t = 25 ms, where by symmetry
+     * Φ(θ) = Φ(−θ) and the EMF is zero (common practice): the solver returns rounding noise there,
+     * which the plot must show as zero, not stretch to the axis height.
+     */
+    @Test
+    void aConductorsRoundingNoiseIsPlottedAsZero() {
+        Scene s = org.kinduct.demo.Demos.load("spinning-coil-generator");
+        List<Snapshot> series = new SceneSolver(s).series(0, 0.025, 1.25e-3);
+        double[] emf = PlotSeries.lines(s, series, List.of(), Set.of(), PlotSeries.Quantity.EMF).get(0).values();
+        assertTrue(series.get(0).conductors().get(0).emfV() != 0, "the solver's value there is noise, not an exact 0");
+        assertEquals(0, emf[0], 0.0);
+        assertEquals(0, emf[emf.length - 1], 0.0);
+        double peak = 0;
+        for (double v : emf) {
+            peak = Math.max(peak, Math.abs(v));
+        }
+        assertTrue(peak > 0.1, "edges crossing the magnets: " + peak + " V");
+    }
+
+    @Test
+    void simulatedPosesTakePrecedenceOverTheDrawnPose() {
+        Scene s = glidingMagnet();
+        String body = SceneEdits.bodyOf(s, "magnet");
+        List<Snapshot> series = new SceneSolver(s).series(0, 1, 0.5);
+        Pose moved = new Pose(Vec2.ZERO, new Vec2(0.3, 0), 0, new Vec2(0, 2), 0);
+        List<Map<String, Pose>> poses = List.of(Map.of(body, moved), Map.of(body, moved), Map.of(body, moved));
+        PlotSeries.Line y = PlotSeries.lines(s, series, poses, Set.of(), PlotSeries.Quantity.SPEED).get(0);
+        assertEquals(2, y.values()[1], TOL);
+    }
+
+    @Test
+    void conductorQuantitiesFollowTheSelectionAndTheSnapshots() {
+        Scene s = glidingMagnet();
+        List<Snapshot> series = new SceneSolver(s).series(0, 1, 0.5);
+        PlotSeries.Line f = PlotSeries.lines(s, series, List.of(), Set.of("loop"), PlotSeries.Quantity.FORCE_X).get(0);
+        assertEquals("loop", f.id());
+        assertEquals(series.get(1).conductor("loop").orElseThrow().forceN().x(), f.values()[1], 0);
+        assertTrue(PlotSeries.lines(s, series, List.of(), Set.of("magnet"), PlotSeries.Quantity.EMF).isEmpty());
+    }
+
+    @Test
+    void energyLineNamesEveryTermAndTheResidual() {
+        EnergyAudit a = new EnergyAudit(1e-3, 0, 0, 6e-4, 1e-4, 2e-4, 1e-4, 0);
+        String text = EnergyText.of(a);
+        for (String term : List.of("work in", "Joule heat", "damping heat", "Δ kinetic", "Δ potential", "Δ magnetic",
+                "residual")) {
+            assertTrue(text.contains(term), text);
+        }
+        assertTrue(text.contains("work in 1.00 mJ"), text);
+    }
+}

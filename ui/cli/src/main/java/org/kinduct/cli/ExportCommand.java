@@ -1,0 +1,106 @@
+package org.kinduct.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.concurrent.Callable;
+import org.kinduct.report.Version;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Units;
+import org.kinduct.render.export.Exporter;
+import org.kinduct.render.export.SnapshotOptions;
+import org.kinduct.render.export.ViewChoice;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** {@code kinduct export}: annotated snapshot (PNG, SVG) and data files (CSV, JSON), without a display. */
+@Command(name = "export", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Export an annotated snapshot at one instant and the scene's data, without a display.",
+                "Times and lengths accept units, e.g. --at '350 ms', --view '-5 cm,-3 cm,5 cm,3 cm'.",
+                "The series CSV and the JSON cover the scene's own time window."})
+final class ExportCommand implements Callable<Integer> {
+
+    @Mixin
+    SceneInput input;
+
+    @Option(names = "--at", paramLabel = "TIME", description = "Instant shown (default: the scene's start time).")
+    String at;
+
+    @Option(names = "--png", paramLabel = "FILE", description = "Annotated snapshot as PNG.")
+    Path png;
+
+    @Option(names = "--svg", paramLabel = "FILE", description = "Annotated snapshot as SVG.")
+    Path svg;
+
+    @Option(names = "--width", paramLabel = "PX", description = "Image width in pixels (default: ${DEFAULT-VALUE}).",
+            defaultValue = "" + SnapshotOptions.DEFAULT_WIDTH_PX)
+    int widthPx;
+
+    @Option(names = "--dpi", paramLabel = "N", description = "Resolution stored in the PNG (default: ${DEFAULT-VALUE}).",
+            defaultValue = "" + SnapshotOptions.DEFAULT_DPI)
+    int dpi;
+
+    @Option(names = "--view", paramLabel = "fit|x0,y0,x1,y1",
+            description = "Whole scene (default), or the box with these corners in metres.", defaultValue = "fit")
+    String view;
+
+    @Option(names = "--csv", paramLabel = "FILE", description = "Time series, one row per time (wide CSV).")
+    Path seriesCsv;
+
+    @Option(names = "--field-csv", paramLabel = "FILE", description = "B_z map of the view: x_m, y_m, Bz_T.")
+    Path fieldCsv;
+
+    @Option(names = "--json", paramLabel = "FILE", description = "Results as by 'kinduct solve --format json'.")
+    Path json;
+
+    @Override
+    public Integer call() {
+        Exporter.Targets targets = new Exporter.Targets(png, svg, seriesCsv, fieldCsv, json);
+        if (targets.isEmpty()) {
+            throw new BadInputException("nothing to export: give at least one of --png, --svg, --csv, --field-csv,"
+                    + " --json");
+        }
+        Scene scene = input.load();
+        SnapshotOptions options;
+        try {
+            double t = at == null ? scene.time().t0S() : Units.parse(at, Dimension.TIME);
+            options = SnapshotOptions.standard(t, widthPx, dpi, viewChoice(view), LocalDate.now(), Version.text());
+        } catch (IllegalArgumentException e) {
+            throw new BadInputException(e.getMessage());
+        }
+        try {
+            for (Path written : new Exporter(scene, options).write(targets)) {
+                System.out.println("wrote " + written);
+            }
+        } catch (IOException e) {
+            throw new BadInputException(e.getMessage());
+        }
+        return KinductMain.OK;
+    }
+
+    /** {@code fit}, or four comma-separated lengths x0, y0, x1, y1. */
+    static ViewChoice viewChoice(String text) {
+        if (text.strip().equalsIgnoreCase("fit")) {
+            return new ViewChoice.Fit();
+        }
+        String[] parts = text.split(",");
+        if (parts.length != 4) {
+            throw new IllegalArgumentException("--view: expected 'fit' or four lengths x0,y0,x1,y1, got '" + text + "'");
+        }
+        double[] v = new double[4];
+        for (int i = 0; i < 4; i++) {
+            try {
+                v[i] = Units.parse(parts[i].strip(), Dimension.LENGTH);
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException("--view corner " + (i + 1) + ": " + e.getMessage(), e);
+            }
+        }
+        try {
+            return new ViewChoice.Box(v[0], v[1], v[2], v[3]);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("--view: " + e.getMessage(), e);
+        }
+    }
+}

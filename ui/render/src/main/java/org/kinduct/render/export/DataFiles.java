@@ -1,0 +1,108 @@
+package org.kinduct.render.export;
+
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.util.List;
+import java.util.function.ToDoubleFunction;
+import org.kinduct.report.ResultsJson;
+import org.kinduct.report.SolveResults;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.TimeSpan;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.render.field.SceneEvaluator;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.dynamics.CircuitModel;
+
+/**
+ * The exported data as text: the time series in wide CSV form, the B_z map of a view as CSV, and
+ * the results JSON of {@code kinduct solve --format json}. Numbers are written with
+ * {@link Double#toString}, which reads back to the identical double.
+ */
+public final class DataFiles {
+
+    /** Columns of the field-map CSV across the view; rows follow from the view's aspect. */
+    public static final int FIELD_COLUMNS = 200;
+
+    private DataFiles() {
+    }
+
+    /** One column of the series CSV for a conductor: name with unit, and where its value comes from. */
+    private record Column(String name, ToDoubleFunction<ConductorState> value) {
+    }
+
+    private static final List<Column> LOOP_COLUMNS = List.of(new Column("flux_Wb", ConductorState::fluxWb),
+            new Column("linkage_Wb", ConductorState::linkageWb), new Column("emf_V", ConductorState::emfV),
+            new Column("emf_flux_V", ConductorState::emfFluxV), new Column("current_A", ConductorState::currentA),
+            new Column("force_x_N", c -> c.forceN().x()), new Column("force_y_N", c -> c.forceN().y()));
+    private static final List<Column> WIRE_COLUMNS = List.of(new Column("emf_V", ConductorState::emfV));
+
+    /**
+     * One row per time; per conductor the columns that apply to it, named {@code id.quantity_unit}:
+     * wires {@code emf_V}; loops {@code flux_Wb, linkage_Wb, emf_V, emf_flux_V, current_A,
+     * force_x_N, force_y_N}. Empty cells for values that are not finite.
+     */
+    public static String seriesCsv(List<Snapshot> series) {
+        StringBuilder out = new StringBuilder("t_s");
+        if (!series.isEmpty()) {
+            for (ConductorState c : series.get(0).conductors()) {
+                for (Column col : columns(c)) {
+                    out.append(',').append(c.id()).append('.').append(col.name());
+                }
+            }
+        }
+        out.append('\n');
+        for (Snapshot s : series) {
+            out.append(num(s.tS()));
+            for (ConductorState c : s.conductors()) {
+                for (Column col : columns(c)) {
+                    out.append(',').append(num(col.value().applyAsDouble(c)));
+                }
+            }
+            out.append('\n');
+        }
+        return out.toString();
+    }
+
+    private static List<Column> columns(ConductorState c) {
+        return c.kind() == ConductorState.Kind.LOOP ? LOOP_COLUMNS : WIRE_COLUMNS;
+    }
+
+    /**
+     * B_z at the centres of a {@link #FIELD_COLUMNS}-wide grid of square cells over {@code box},
+     * evaluated exactly (not taken from the display raster); rows from bottom to top, x fastest.
+     */
+    public static String fieldCsv(SceneEvaluator.BzField field, ViewChoice.Box box) {
+        double cell = (box.x1() - box.x0()) / FIELD_COLUMNS;
+        int rows = Math.max(1, (int) Math.round((box.y1() - box.y0()) / cell));
+        double cellY = (box.y1() - box.y0()) / rows;
+        StringBuilder out = new StringBuilder(FIELD_COLUMNS * rows * 40).append("x_m,y_m,Bz_T\n");
+        for (int r = 0; r < rows; r++) {
+            double y = box.y0() + (r + 0.5) * cellY;
+            for (int c = 0; c < FIELD_COLUMNS; c++) {
+                double x = box.x0() + (c + 0.5) * cell;
+                out.append(num(x)).append(',').append(num(y)).append(',').append(num(field.bz(x, y))).append('\n');
+            }
+        }
+        return out.toString();
+    }
+
+    /**
+     * The same document as {@code kinduct solve --format json}: the coupled run over the scene's
+     * own time window (free bodies move, loop currents with the automatic circuit model).
+     */
+    public static String resultsJson(Scene scene) {
+        TimeSpan span = scene.time();
+        StringWriter w = new StringWriter();
+        try {
+            ResultsJson.write(scene, SolveResults.run(scene, span.t0S(), span.t1S(), span.dtS(), CircuitModel.AUTO), w);
+        } catch (IOException e) {
+            throw new UncheckedIOException("writing to memory failed", e);
+        }
+        return w.toString();
+    }
+
+    private static String num(double v) {
+        return Double.isFinite(v) ? Double.toString(v) : "";
+    }
+}

@@ -1,0 +1,53 @@
+package org.kinduct.render.export;
+
+import java.time.LocalDate;
+import java.util.EnumSet;
+import java.util.Set;
+import org.kinduct.render.paint.ColourRange;
+import org.kinduct.render.paint.Layer;
+
+/**
+ * How to draw an annotated snapshot.
+ *
+ * @param tS time shown, seconds
+ * @param widthPx width of the PNG in pixels (the SVG's nominal width)
+ * @param dpi resolution written into the PNG, dots per inch
+ * @param layers what the map shows
+ * @param date date printed in the title block
+ * @param version program version printed in the title block
+ */
+public record SnapshotOptions(double tS, int widthPx, int dpi, ViewChoice view, Set<Layer> layers,
+                              ColourRange range, LocalDate date, String version) {
+
+    /** Default width: 16 cm at about 280 dpi. */
+    public static final int DEFAULT_WIDTH_PX = 1800;
+    public static final int DEFAULT_DPI = 300;
+    public static final int MIN_WIDTH_PX = 300;
+    public static final int MAX_WIDTH_PX = 12_000;
+    public static final int MIN_DPI = 30;
+    public static final int MAX_DPI = 2400;
+
+    public SnapshotOptions {
+        if (!Double.isFinite(tS)) {
+            throw new IllegalArgumentException("time must be finite, got " + tS);
+        }
+        if (widthPx < MIN_WIDTH_PX || widthPx > MAX_WIDTH_PX) {
+            throw new IllegalArgumentException("width must be " + MIN_WIDTH_PX + " to " + MAX_WIDTH_PX
+                    + " pixels, got " + widthPx);
+        }
+        if (dpi < MIN_DPI || dpi > MAX_DPI) {
+            throw new IllegalArgumentException("resolution must be " + MIN_DPI + " to " + MAX_DPI + " dpi, got " + dpi);
+        }
+        if (view == null || range == null || date == null || version == null) {
+            throw new IllegalArgumentException("view, colour range, date and version are required");
+        }
+        layers = layers.isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(layers);
+    }
+
+    /** The editor's default layers (all but the ⊙/⊗ symbol grid) and an automatic colour range. */
+    public static SnapshotOptions standard(double tS, int widthPx, int dpi, ViewChoice view, LocalDate date,
+                                           String version) {
+        return new SnapshotOptions(tS, widthPx, dpi, view, EnumSet.complementOf(EnumSet.of(Layer.SYMBOLS)),
+                ColourRange.automatic(), date, version);
+    }
+}

@@ -1,0 +1,410 @@
+package org.kinduct.render.export;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.kinduct.report.ResultScales;
+import org.kinduct.report.ResultsTable;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Pose;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Circulation;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.Terminal;
+import org.kinduct.render.paint.EditorMarks;
+import org.kinduct.render.paint.FieldRaster;
+import org.kinduct.render.paint.Layer;
+import org.kinduct.render.paint.Frame;
+import org.kinduct.render.paint.Quantities;
+import org.kinduct.render.paint.ScenePainter;
+import org.kinduct.render.paint.Surface;
+import org.kinduct.render.paint.TextMetrics;
+import org.kinduct.render.view.ViewTransform;
+
+/**
+ * An annotated snapshot as one page: title block, the painter's map (field, conductors, polarity,
+ * callouts, legend, scale bar), a results table per conductor, sign conventions and cautions.
+ *
+ * <p>The page is laid out in units on a fixed width of {@link #WIDTH}; outputs scale it to their
+ * pixel width. The width is chosen for legibility in print: placed 16 cm wide, one unit is
+ * 0.267 mm, so the 12-unit body text is 9.1 pt, the painter's 12-unit callouts the same and its
+ * 11-unit legend text 8.3 pt (1 pt = 0.3528 mm).
+ */
+final class SnapshotPage {
+
+    static final double WIDTH = 600;
+    static final double MARGIN = 16;
+    static final double BODY = 12;
+    private static final double TITLE = 17;
+    /** Smallest table text: still 8 pt when the page is printed 16 cm wide. */
+    static final double MIN_TABLE_FONT = 10.6;
+    private static final double LINE = 16;
+    private static final double COLUMN_GAP = 10;
+    /** Rounding room when a shrunk table is checked against the width it was shrunk to, units. */
+    private static final double FIT_SLACK = 0.5;
+    private static final double MIN_MAP_HEIGHT = 340;
+    private static final double MAX_MAP_HEIGHT = 600;
+    private static final int MAX_DESCRIPTION_LINES = 4;
+    /**
+     * Room a fitted scene (or a chosen box, when the legend is shown) leaves free in the map for
+     * the painter's overlays: its legend on the right, the time box and axis labels on top.
+     */
+    private static final double FIT_LEFT = 30;
+    private static final double FIT_RIGHT = 204;
+    private static final double FIT_TOP = 46;
+    private static final double FIT_BOTTOM = 30;
+
+    private static final int PAPER = 0xFFFFFFFF;
+    private static final int INK = 0xFF1E1E1E;
+    private static final int MUTED = 0xFF555555;
+    private static final int RULE = 0xFF8C8C8C;
+    private static final int STRIPE = 0xFFF1F1EC;
+    private static final int WARNING = 0xFFB00020;
+
+    /** A table cell for a quantity that does not apply to a conductor (wire flux, open-loop current). */
+    static final String NOT_APPLICABLE = "—";
+    static final String SIGNS = "Signs: x right, y up; B_z > 0 out of the page (⊙), < 0 into it (⊗). EMF and"
+            + " current are positive along each conductor's vertex order (loops: counter-clockwise); a wire's"
+            + " EMF > 0 makes its last vertex the + end.";
+    static final String MOTIONAL_ONLY = "* v × B part only: a moving field patch has no known induced electric"
+            + " field.";
+
+    private final Scene scene;
+    private final Snapshot snapshot;
+    private final Map<String, Pose> poses;
+    private final SnapshotOptions options;
+    private final ViewTransform mapView;
+    private final List<String> description;
+    private final double mapTop;
+    private final double mapHeight;
+    private final Table table;
+    private final ResultScales scales;
+    private final double tableTop;
+    private final List<Note> notes = new ArrayList<>();
+    private final double height;
+
+    /** One wrapped line of text under the table. */
+    private record Note(String text, int colour, boolean bold) {
+    }
+
+    /** Cells per row, the header first; numeric columns are right-aligned. */
+    private record Table(List<String[]> rows, double[] left, double[] width, boolean[] right, double font) {
+    }
+
+    private SnapshotPage(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> remarks,
+                         List<String> cautions, ResultScales scales, SnapshotOptions options) {
+        this.poses = Map.copyOf(poses);
+        this.scene = scene;
+        this.snapshot = snapshot;
+        this.options = options;
+        double text = WIDTH - 2 * MARGIN;
+        List<String> desc = wrap(scene.description(), BODY, false, text);
+        if (desc.size() > MAX_DESCRIPTION_LINES) {
+            desc = new ArrayList<>(desc.subList(0, MAX_DESCRIPTION_LINES));
+            desc.set(MAX_DESCRIPTION_LINES - 1, desc.get(MAX_DESCRIPTION_LINES - 1) + " …");
+        }
+        description = desc;
+        mapTop = MARGIN + TITLE + 8 + description.size() * LINE + LINE + 8;
+        ViewChoice.Box box = ViewChoice.box(options.view(), scene, options.tS(), poses);
+        double aspect = (box.y1() - box.y0()) / (box.x1() - box.x0());
+        // A chosen box is shown whole but, like a fitted scene, clear of the legend when there is one.
+        if (options.view() instanceof ViewChoice.Fit || options.layers().contains(Layer.LEGEND)) {
+            double room = WIDTH - FIT_LEFT - FIT_RIGHT;
+            mapHeight = clampMapHeight(room * aspect + FIT_TOP + FIT_BOTTOM);
+            mapView = fitInto(box, FIT_LEFT, FIT_TOP, WIDTH - FIT_RIGHT, mapHeight - FIT_BOTTOM);
+        } else {
+            mapHeight = clampMapHeight(WIDTH * aspect);
+            mapView = new ViewTransform(0, 0, 1, WIDTH, mapHeight).fitting(box.x0(), box.y0(), box.x1(), box.y1(), 0);
+        }
+        table = table(scene, snapshot, scales, text);
+        this.scales = scales;
+        tableTop = mapTop + mapHeight + 12;
+        boolean motionalOnly = false;
+        for (ConductorState c : snapshot.conductors()) {
+            motionalOnly |= c.kind() == ConductorState.Kind.WIRE && !c.inducedFieldIncluded();
+        }
+        for (String line : wrap(SIGNS, BODY, false, text)) {
+            notes.add(new Note(line, MUTED, false));
+        }
+        if (motionalOnly) {
+            for (String line : wrap(MOTIONAL_ONLY, BODY, false, text)) {
+                notes.add(new Note(line, MUTED, false));
+            }
+        }
+        for (String remark : remarks) {
+            for (String line : wrap(remark, BODY, false, text)) {
+                notes.add(new Note(line, MUTED, false));
+            }
+        }
+        for (String caution : cautions) {
+            for (String line : wrap(caution, BODY, true, text)) {
+                notes.add(new Note(line, WARNING, true));
+            }
+        }
+        height = Math.ceil(tableTop + table.rows().size() * LINE + 10 + notes.size() * LINE + MARGIN);
+    }
+
+    private static double clampMapHeight(double h) {
+        return Math.max(MIN_MAP_HEIGHT, Math.min(MAX_MAP_HEIGHT, Math.round(h)));
+    }
+
+    /** A map view showing {@code box} as large as fits in the map region [left, right] × [top, bottom], centred. */
+    private ViewTransform fitInto(ViewChoice.Box box, double left, double top, double right, double bottom) {
+        double s = Math.min((right - left) / (box.x1() - box.x0()), (bottom - top) / (box.y1() - box.y0()));
+        double cx = (box.x0() + box.x1()) / 2 - ((left + right) / 2 - WIDTH / 2) / s;
+        double cy = (box.y0() + box.y1()) / 2 + ((top + bottom) / 2 - mapHeight / 2) / s;
+        return new ViewTransform(cx, cy, s, WIDTH, mapHeight);
+    }
+
+    static SnapshotPage layout(Scene scene, Snapshot snapshot, List<String> cautions, SnapshotOptions options) {
+        return layout(scene, snapshot, Map.of(), List.of(), cautions, ResultScales.of(List.of(snapshot)), options);
+    }
+
+    /**
+     * A page whose free bodies are drawn at their simulated {@code poses} (body id → pose at the
+     * snapshot's time), with {@code remarks} (e.g. the run's energy audit) under the sign conventions,
+     * and table values read against {@code scales} (those of the run, so that rounding noise reads 0).
+     */
+    static SnapshotPage layout(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> remarks,
+                               List<String> cautions, ResultScales scales, SnapshotOptions options) {
+        return new SnapshotPage(scene, snapshot, poses, remarks, cautions, scales, options);
+    }
+
+    double height() {
+        return height;
+    }
+
+    /** The map's view transform in page units (origin at the map's top-left corner). */
+    ViewTransform mapView() {
+        return mapView;
+    }
+
+    double mapTop() {
+        return mapTop;
+    }
+
+    /** Draws the page on {@code s}, which must be {@link #WIDTH} × {@link #height()} units. */
+    void draw(Surface s, FieldRaster raster) {
+        s.save();
+        s.fill(PAPER);
+        s.fillRect(0, 0, WIDTH, height);
+        titleBlock(s);
+        s.save();
+        s.translate(0, mapTop);
+        ScenePainter.draw(new Viewport(s, WIDTH, mapHeight), new Frame(scene, options.tS(), snapshot, raster, mapView,
+                options.layers(), options.range(), EditorMarks.none(), "", poses, scales));
+        s.restore();
+        s.stroke(RULE);
+        s.lineWidth(1);
+        s.dash();
+        s.strokeRect(0.5, mapTop, WIDTH - 1, mapHeight);
+        drawTable(s);
+        double y = tableTop + table.rows().size() * LINE + 10;
+        for (Note n : notes) {
+            s.fill(n.colour());
+            s.text(n.text(), MARGIN, y + LINE / 2, BODY, n.bold(), Surface.Anchor.LEFT);
+            y += LINE;
+        }
+        s.restore();
+    }
+
+    private void titleBlock(Surface s) {
+        s.fill(INK);
+        String name = scene.name().isEmpty() ? "(unnamed scene)" : scene.name();
+        s.text(name, MARGIN, MARGIN, TITLE, true, Surface.Anchor.TOP_LEFT);
+        double y = MARGIN + TITLE + 8;
+        s.fill(MUTED);
+        for (String line : description) {
+            s.text(line, MARGIN, y + LINE / 2, BODY, false, Surface.Anchor.LEFT);
+            y += LINE;
+        }
+        s.fill(INK);
+        s.text("t = " + Quantities.time(options.tS()), MARGIN, y + LINE / 2, BODY, true, Surface.Anchor.LEFT);
+        s.fill(MUTED);
+        s.text(viewText() + " · " + options.date() + " · Kinduct " + options.version(), WIDTH - MARGIN,
+                y + LINE / 2, BODY, false, Surface.Anchor.RIGHT);
+    }
+
+    private String viewText() {
+        if (options.view() instanceof ViewChoice.Fit) {
+            return "whole scene";
+        }
+        return "view " + Quantities.length(mapView.maxX() - mapView.minX()) + " × "
+                + Quantities.length(mapView.maxY() - mapView.minY());
+    }
+
+    private void drawTable(Surface s) {
+        double y = tableTop;
+        List<String[]> rows = table.rows();
+        for (int r = 0; r < rows.size(); r++) {
+            if (r > 0 && r % 2 == 0) {
+                s.fill(STRIPE);
+                s.fillRect(MARGIN - 4, y, WIDTH - 2 * MARGIN + 8, LINE);
+            }
+            s.fill(INK);
+            String[] cells = rows.get(r);
+            for (int c = 0; c < cells.length; c++) {
+                double x = table.right()[c] ? table.left()[c] + table.width()[c] : table.left()[c];
+                s.text(cells[c], x, y + LINE / 2, table.font(), r == 0,
+                        table.right()[c] ? Surface.Anchor.RIGHT : Surface.Anchor.LEFT);
+            }
+            if (r == 0) {
+                s.stroke(RULE);
+                s.lineWidth(1);
+                s.beginPath();
+                s.moveTo(MARGIN - 4, y + LINE);
+                s.lineTo(WIDTH - MARGIN + 4, y + LINE);
+                s.strokePath();
+            }
+            y += LINE;
+        }
+    }
+
+    /**
+     * The results table at the snapshot time. Columns that apply to no conductor are left out; a
+     * table still too wide for {@code avail} units gets a smaller font, then shortened ids.
+     */
+    private static Table table(Scene scene, Snapshot snap, ResultScales scales, double avail) {
+        String[] header = {"conductor", "Φ per turn", "EMF", "methods agree", "I", "polarity / sense",
+            "force, direction"};
+        boolean[] numeric = {false, true, true, false, true, false, false};
+        List<String[]> all = new ArrayList<>();
+        for (ConductorState st : snap.conductors()) {
+            all.add(row(scene.conductor(st.id()).orElseThrow(), st, scales));
+        }
+        List<Integer> kept = new ArrayList<>();
+        for (int col = 0; col < header.length; col++) {
+            final int c = col;
+            if (col == 0 || all.stream().anyMatch(r -> !NOT_APPLICABLE.equals(r[c]))) {
+                kept.add(col);
+            }
+        }
+        int n = kept.size();
+        List<String[]> rows = new ArrayList<>();
+        for (int r = -1; r < all.size(); r++) {
+            String[] src = r < 0 ? header : all.get(r);
+            String[] cells = new String[n];
+            for (int i = 0; i < n; i++) {
+                cells[i] = src[kept.get(i)];
+            }
+            rows.add(cells);
+        }
+        boolean[] right = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            right[i] = numeric[kept.get(i)];
+        }
+        double gaps = COLUMN_GAP * (n - 1);
+        double font = BODY;
+        double[] width = widths(rows, font);
+        double total = sum(width) + gaps;
+        if (total > avail) {
+            font = Math.max(MIN_TABLE_FONT, font * (avail - gaps) / (total - gaps));
+            width = widths(rows, font);
+            double idRoom = avail - gaps - (sum(width) - width[0]);
+            if (width[0] > idRoom + FIT_SLACK) {
+                for (int r = 1; r < rows.size(); r++) {
+                    rows.get(r)[0] = ellipsize(rows.get(r)[0], font, idRoom);
+                }
+                width[0] = idRoom;
+            }
+        }
+        double[] left = new double[n];
+        double x = MARGIN;
+        for (int col = 0; col < n; col++) {
+            left[col] = x;
+            x += width[col] + COLUMN_GAP;
+        }
+        return new Table(rows, left, width, right, font);
+    }
+
+    /** Widest cell per column, header in bold. */
+    private static double[] widths(List<String[]> rows, double font) {
+        double[] w = new double[rows.get(0).length];
+        for (int r = 0; r < rows.size(); r++) {
+            for (int c = 0; c < w.length; c++) {
+                w[c] = Math.max(w[c], TextMetrics.width(rows.get(r)[c], font, r == 0));
+            }
+        }
+        return w;
+    }
+
+    private static double sum(double[] values) {
+        double s = 0;
+        for (double v : values) {
+            s += v;
+        }
+        return s;
+    }
+
+    /** {@code text}, cut and ended with "…" so that it fits {@code max} units. */
+    static String ellipsize(String text, double font, double max) {
+        if (TextMetrics.width(text, font, false) <= max) {
+            return text;
+        }
+        int end = text.length();
+        while (end > 1 && TextMetrics.width(text.substring(0, end) + "…", font, false) > max) {
+            end--;
+        }
+        return text.substring(0, end) + "…";
+    }
+
+    private static String[] row(Conductor c, ConductorState st, ResultScales scales) {
+        boolean closedLoop = c instanceof Conductor.Loop loop && !loop.open();
+        boolean wire = st.kind() == ConductorState.Kind.WIRE;
+        String flux = wire ? NOT_APPLICABLE : Quantities.flux(scales.flux(st.fluxWb()));
+        String emf = Quantities.voltage(scales.emf(st.emfV())) + (wire && !st.inducedFieldIncluded() ? " *" : "");
+        String agree = wire ? NOT_APPLICABLE
+                : st.disagreement() == 0 ? "yes"
+                : String.format(Locale.ROOT, st.disagreement() <= ResultsTable.AGREEMENT_FLAG ? "yes, %.0e"
+                        : "CHECK, %.0e", st.disagreement());
+        String current = closedLoop ? Quantities.current(scales.current(st.currentA())) : NOT_APPLICABLE;
+        String sense;
+        if (closedLoop) {
+            sense = st.direction() == Circulation.CCW ? "↺ counter-clockwise"
+                    : st.direction() == Circulation.CW ? "↻ clockwise" : "no current";
+        } else {
+            String gap = wire ? "" : " (gap)";
+            sense = st.positiveEnd() == Terminal.LAST ? "+ at last end" + gap
+                    : st.positiveEnd() == Terminal.FIRST ? "+ at first end" + gap : "no EMF";
+        }
+        Vec2 forceN = scales.force(st.forceN());
+        double f = forceN.length();
+        String force = closedLoop && f > 0 ? Quantities.force(f) + " ∠ " + direction(forceN)
+                : NOT_APPLICABLE;
+        return new String[] {c.id(), flux, emf, agree, current, sense, force};
+    }
+
+    /** Direction of an in-plane vector as an angle from +x, counter-clockwise, in whole degrees (−179° … 180°). */
+    static String direction(Vec2 v) {
+        long deg = Math.round(Math.toDegrees(Math.atan2(v.y(), v.x())));
+        long d = deg == -180 ? 180 : deg;
+        return (d < 0 ? "−" + -d : Long.toString(d)) + "°";
+    }
+
+    /** Greedy word wrap to {@code width} units. */
+    static List<String> wrap(String text, double size, boolean bold, double width) {
+        List<String> lines = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String word : text.strip().split("\\s+")) {
+            if (word.isEmpty()) {
+                continue;
+            }
+            String tried = line.length() == 0 ? word : line + " " + word;
+            if (line.length() > 0 && TextMetrics.width(tried, size, bold) > width) {
+                lines.add(line.toString());
+                line.setLength(0);
+                line.append(word);
+            } else {
+                line.setLength(0);
+                line.append(tried);
+            }
+        }
+        if (line.length() > 0) {
+            lines.add(line.toString());
+        }
+        return lines;
+    }
+}

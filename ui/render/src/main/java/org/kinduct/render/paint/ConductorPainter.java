@@ -1,0 +1,316 @@
+package org.kinduct.render.paint;
+
+import java.util.List;
+import org.kinduct.report.ResultScales;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Circulation;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.Terminal;
+import org.kinduct.render.view.ViewTransform;
+
+/**
+ * Conductors and what the solver says about them, drawn per Lenz's law: + and − discs at a
+ * wire's ends or an open loop's gap (size grows with |EMF|), arrows along closed loops in the
+ * current's direction (width grows with |I|), and the induced current's own field (⊙ or ⊗)
+ * inside each closed loop.
+ */
+final class ConductorPainter {
+
+    /** Fraction of the closing edge left open to show an open loop's gap. */
+    private static final double GAP_START = 0.38;
+    private static final double GAP_END = 0.62;
+    private static final double MIN_ARROW_EDGE_PX = 30;
+    /** A loop this many pixels across (its smaller side) or more gets full-size current arrows. */
+    private static final double FULL_ARROW_LOOP_PX = 160;
+    private static final double MIN_ARROW_SCALE = 0.4;
+    /** Conductors smaller than this on screen keep labels off themselves. */
+    private static final double SMALL_PX = 160;
+
+    private ConductorPainter() {
+    }
+
+    static void drawConductors(Surface s, ViewTransform v, Scene scene, Placement placement, EditorMarks marks) {
+        for (Conductor c : scene.conductors()) {
+            List<Vec2> pts = placement.vertices(c);
+            boolean selected = marks.selected().contains(c.id());
+            for (int pass = 0; pass < 2; pass++) {
+                s.stroke(pass == 0 ? (selected ? Palette.withAlpha(Palette.SELECTION, 0.55) : Palette.HALO)
+                        : Palette.INK);
+                s.lineWidth(pass == 0 ? (selected ? 9 : 5.5) : 2.5);
+                s.dash();
+                outline(s, v, c, pts);
+            }
+            if (selected) {
+                for (Vec2 p : pts) {
+                    double x = v.screenX(p.x());
+                    double y = v.screenY(p.y());
+                    s.fill(0xFFFFFFFF);
+                    s.fillRect(x - 4, y - 4, 8, 8);
+                    s.stroke(Palette.SELECTION);
+                    s.lineWidth(1.5);
+                    s.strokeRect(x - 4, y - 4, 8, 8);
+                }
+            }
+        }
+    }
+
+    private static void outline(Surface s, ViewTransform v, Conductor c, List<Vec2> pts) {
+        boolean loop = c instanceof Conductor.Loop;
+        SourcePainter.polygon(s, v, pts, loop && !((Conductor.Loop) c).open());
+        if (loop && ((Conductor.Loop) c).open()) {
+            Vec2 last = pts.get(pts.size() - 1);
+            Vec2 first = pts.get(0);
+            Vec2 g1 = lerp(last, first, GAP_START);
+            Vec2 g2 = lerp(last, first, GAP_END);
+            s.moveTo(v.screenX(last.x()), v.screenY(last.y()));
+            s.lineTo(v.screenX(g1.x()), v.screenY(g1.y()));
+            s.moveTo(v.screenX(g2.x()), v.screenY(g2.y()));
+            s.lineTo(v.screenX(first.x()), v.screenY(first.y()));
+        }
+        s.strokePath();
+    }
+
+    static void drawLenz(Surface s, ViewTransform v, Scene scene, Snapshot snap, LabelPlacer placer) {
+        double maxEmf = 0;
+        double maxI = 0;
+        for (ConductorState st : snap.conductors()) {
+            maxEmf = Math.max(maxEmf, Math.abs(st.emfV()));
+            maxI = Math.max(maxI, Math.abs(st.currentA()));
+        }
+        for (Conductor c : scene.conductors()) {
+            ConductorState st = snap.conductor(c.id()).orElse(null);
+            if (st == null) {
+                continue;
+            }
+            List<Vec2> pts = st.vertices();
+            if (st.positiveEnd() != Terminal.NONE && maxEmf > 0) {
+                double r = 6 + 5 * Math.sqrt(Math.abs(st.emfV()) / maxEmf);
+                terminals(s, v, c, pts, st.positiveEnd() == Terminal.LAST, r, placer);
+            }
+            if (c instanceof Conductor.Loop loop && !loop.open() && st.direction() != Circulation.NONE && maxI > 0) {
+                double width = 1.5 + 4.5 * Math.sqrt(Math.abs(st.currentA()) / maxI);
+                currentArrows(s, v, pts, st.currentA() > 0, width, arrowScale(v, pts), placer);
+                Vec2 c0 = SourcePainter.centroid(pts);
+                Glyphs.fieldSymbol(s, v.screenX(c0.x()), v.screenY(c0.y()), 10, st.direction() == Circulation.CCW,
+                        Palette.CURRENT);
+                placer.reserve(new LabelPlacer.Box(v.screenX(c0.x()) - 12, v.screenY(c0.y()) - 12, 24, 24));
+            }
+        }
+    }
+
+    /** + and − discs: at a wire's two ends, or either side of an open loop's gap. */
+    private static void terminals(Surface s, ViewTransform v, Conductor c, List<Vec2> pts, boolean lastPositive,
+                                  double r, LabelPlacer placer) {
+        Vec2 lastEnd;
+        Vec2 firstEnd;
+        Vec2 lastDir;
+        Vec2 firstDir;
+        if (c instanceof Conductor.Loop) {
+            Vec2 last = pts.get(pts.size() - 1);
+            Vec2 first = pts.get(0);
+            lastEnd = lerp(last, first, GAP_START);
+            firstEnd = lerp(last, first, GAP_END);
+            Vec2 across = first.minus(last);
+            Vec2 side = across.perp();
+            lastDir = side;
+            firstDir = side;
+        } else {
+            lastEnd = pts.get(pts.size() - 1);
+            firstEnd = pts.get(0);
+            lastDir = lastEnd.minus(pts.get(pts.size() - 2));
+            firstDir = firstEnd.minus(pts.get(1));
+        }
+        marker(s, v, lastEnd, lastDir, r, lastPositive, placer);
+        marker(s, v, firstEnd, firstDir, r, !lastPositive, placer);
+    }
+
+    private static void marker(Surface s, ViewTransform v, Vec2 at, Vec2 outward, double r, boolean positive,
+                               LabelPlacer placer) {
+        double dx = outward.x();
+        double dy = -outward.y();
+        double len = Math.hypot(dx, dy);
+        double off = r + 5;
+        double x = v.screenX(at.x()) + (len > 0 ? dx / len * off : 0);
+        double y = v.screenY(at.y()) + (len > 0 ? dy / len * off : 0);
+        Glyphs.terminal(s, x, y, r, positive);
+        placer.reserve(new LabelPlacer.Box(x - r - 1, y - r - 1, 2 * r + 2, 2 * r + 2));
+    }
+
+    /**
+     * Shrinks the current arrows of a loop that is small on screen, so they do not swamp it: full
+     * size from {@value #FULL_ARROW_LOOP_PX} px across (the loop's smaller side), down to
+     * {@value #MIN_ARROW_SCALE} of it.
+     */
+    static double arrowScale(ViewTransform v, List<Vec2> pts) {
+        Extent e = Extent.of(pts);
+        double acrossPx = Math.min(e.width(), e.height()) * v.pxPerM();
+        return Math.max(MIN_ARROW_SCALE, Math.min(1, acrossPx / FULL_ARROW_LOOP_PX));
+    }
+
+    /** Arrows along a loop's long edges; each claims its box so no label covers it. */
+    private static void currentArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward, double width,
+                                      double scale, LabelPlacer placer) {
+        int n = pts.size();
+        s.stroke(Palette.CURRENT);
+        s.fill(Palette.CURRENT);
+        s.lineWidth(width * scale);
+        s.dash();
+        for (int i = 0; i < n; i++) {
+            Vec2 a = pts.get(forward ? i : (i + 1) % n);
+            Vec2 b = pts.get(forward ? (i + 1) % n : i);
+            double ax = v.screenX(a.x());
+            double ay = v.screenY(a.y());
+            double bx = v.screenX(b.x());
+            double by = v.screenY(b.y());
+            double len = Math.hypot(bx - ax, by - ay);
+            if (len < MIN_ARROW_EDGE_PX) {
+                continue;
+            }
+            double dx = (bx - ax) / len;
+            double dy = (by - ay) / len;
+            double head = (9 + 2 * width) * scale;
+            double half = Math.min(len * 0.25, 40);
+            double mx = (ax + bx) / 2;
+            double my = (ay + by) / 2;
+            s.beginPath();
+            s.moveTo(mx - dx * half, my - dy * half);
+            s.lineTo(mx + dx * (half - head * 0.6), my + dy * (half - head * 0.6));
+            s.strokePath();
+            Glyphs.arrowHead(s, mx + dx * half, my + dy * half, dx, dy, head);
+            double reach = head / 2 + 1;
+            double x0 = mx - Math.abs(dx) * half;
+            double y0 = my - Math.abs(dy) * half;
+            placer.reserve(new LabelPlacer.Box(x0 - reach, y0 - reach, 2 * Math.abs(dx) * half + 2 * reach,
+                    2 * Math.abs(dy) * half + 2 * reach));
+        }
+    }
+
+    static void placeCallouts(Surface s, ViewTransform v, Scene scene, Snapshot snap, ResultScales scales,
+                              LabelPlacer placer, List<Runnable> labels) {
+        double lineH = ScenePainter.FONT + 3;
+        for (ConductorState st : snap.conductors()) {
+            reserveIfSmall(v, st.vertices(), placer);
+        }
+        for (Conductor c : scene.conductors()) {
+            ConductorState st = snap.conductor(c.id()).orElse(null);
+            if (st == null) {
+                continue;
+            }
+            List<Vec2> pts = st.vertices();
+            Vec2 anchor = anchor(c, pts);
+            double ax = v.screenX(anchor.x());
+            double ay = v.screenY(anchor.y());
+            String[] lines = calloutLines(c, st, scales);
+            double w = 0;
+            for (String line : lines) {
+                w = Math.max(w, s.textWidth(line, ScenePainter.FONT, false));
+            }
+            w += 12;
+            double h = lines.length * lineH + 6;
+            LabelPlacer.Box b = placer.place(ax, ay, w, h);
+            labels.add(() -> {
+                double lx = Math.max(b.x(), Math.min(b.x() + b.w(), ax));
+                double ly = Math.max(b.y(), Math.min(b.y() + b.h(), ay));
+                s.stroke(Palette.LABEL_EDGE);
+                s.lineWidth(1);
+                s.dash();
+                s.beginPath();
+                s.moveTo(lx, ly);
+                s.lineTo(ax, ay);
+                s.strokePath();
+                s.fill(Palette.LABEL_BOX);
+                s.fillRect(b.x(), b.y(), b.w(), b.h());
+                s.stroke(Palette.LABEL_EDGE);
+                s.strokeRect(b.x(), b.y(), b.w(), b.h());
+                for (int i = 0; i < lines.length; i++) {
+                    s.fill(i == 0 ? Palette.INK : Palette.MUTED);
+                    s.text(lines[i], b.x() + 6, b.y() + 3 + (i + 0.5) * lineH, ScenePainter.FONT, i == 0,
+                            Surface.Anchor.LEFT);
+                }
+            });
+        }
+    }
+
+    /** Keeps labels off small conductors (large ones would leave no room, so they stay open). */
+    private static void reserveIfSmall(ViewTransform v, List<Vec2> pts, LabelPlacer placer) {
+        Extent e = Extent.of(pts);
+        double w = e.width() * v.pxPerM();
+        double h = e.height() * v.pxPerM();
+        if (w < SMALL_PX && h < SMALL_PX) {
+            placer.reserve(new LabelPlacer.Box(v.screenX(e.minX()) - 4, v.screenY(e.maxY()) - 4, w + 8, h + 8));
+        }
+    }
+
+    /** Where a callout's leader points: a loop's upper-right-most vertex, a wire's middle. */
+    private static Vec2 anchor(Conductor c, List<Vec2> pts) {
+        if (c instanceof Conductor.Loop) {
+            Vec2 best = pts.get(0);
+            for (Vec2 p : pts) {
+                if (p.x() + p.y() > best.x() + best.y()) {
+                    best = p;
+                }
+            }
+            return best;
+        }
+        int mid = (pts.size() - 1) / 2;
+        return lerp(pts.get(mid), pts.get(mid + 1), 0.5);
+    }
+
+    /** The callout's lines: id, EMF and current or flux or polarity, noise read as 0 against {@code scales}. */
+    static String[] calloutLines(Conductor c, ConductorState st, ResultScales scales) {
+        String emf = "ε " + Quantities.voltage(Math.abs(scales.emf(st.emfV())));
+        if (c instanceof Conductor.Loop loop) {
+            if (loop.open()) {
+                return new String[] {c.id(), emf + " across gap", "Φ " + Quantities.flux(scales.flux(st.linkageWb()))};
+            }
+            String sense = st.direction() == Circulation.CCW ? " ↺" : st.direction() == Circulation.CW ? " ↻" : "";
+            return new String[] {c.id(), emf, "I " + Quantities.current(Math.abs(scales.current(st.currentA()))) + sense};
+        }
+        String end = st.positiveEnd() == Terminal.LAST ? "+ at last end"
+                : st.positiveEnd() == Terminal.FIRST ? "+ at first end" : "no polarity";
+        return new String[] {c.id(), emf, end};
+    }
+
+    static void drawMarks(Surface s, ViewTransform v, EditorMarks marks) {
+        List<Vec2> pts = marks.preview();
+        if (!pts.isEmpty()) {
+            SourcePainter.polygon(s, v, pts, marks.previewClosed());
+            s.stroke(Palette.PREVIEW);
+            s.lineWidth(2);
+            s.dash(7, 4);
+            s.strokePath();
+            s.dash();
+            s.fill(Palette.PREVIEW);
+            for (Vec2 p : pts) {
+                s.fillOval(v.screenX(p.x()), v.screenY(p.y()), 3.5);
+            }
+        }
+        if (marks.snap() != null) {
+            double x = v.screenX(marks.snap().x());
+            double y = v.screenY(marks.snap().y());
+            s.stroke(Palette.PREVIEW);
+            s.lineWidth(1.5);
+            s.strokeOval(x, y, 6);
+            s.beginPath();
+            s.moveTo(x - 10, y);
+            s.lineTo(x + 10, y);
+            s.moveTo(x, y - 10);
+            s.lineTo(x, y + 10);
+            s.strokePath();
+            if (!marks.hint().isEmpty()) {
+                double w = s.textWidth(marks.hint(), ScenePainter.FONT, false) + 10;
+                s.fill(Palette.LABEL_BOX);
+                s.fillRect(x + 12, y + 10, w, 18);
+                s.fill(Palette.PREVIEW);
+                s.text(marks.hint(), x + 17, y + 19, ScenePainter.FONT, false, Surface.Anchor.LEFT);
+            }
+        }
+    }
+
+    private static Vec2 lerp(Vec2 a, Vec2 b, double t) {
+        return a.plus(b.minus(a).times(t));
+    }
+}

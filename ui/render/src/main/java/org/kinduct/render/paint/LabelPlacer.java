@@ -1,0 +1,119 @@
+package org.kinduct.render.paint;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Greedy label placement: each label tries positions on rings around its anchor, nearest first,
+ * and takes the first that overlaps no earlier label and stays on the surface. When none is
+ * free it takes the least-overlapping one, so a label is never dropped.
+ */
+public final class LabelPlacer {
+
+    /** A placed box, screen pixels. */
+    public record Box(double x, double y, double w, double h) {
+        boolean overlaps(Box o, double pad) {
+            return x < o.x + o.w + pad && o.x < x + w + pad && y < o.y + o.h + pad && o.y < y + h + pad;
+        }
+
+        double overlapArea(Box o) {
+            double ox = Math.min(x + w, o.x + o.w) - Math.max(x, o.x);
+            double oy = Math.min(y + h, o.y + o.h) - Math.max(y, o.y);
+            return ox > 0 && oy > 0 ? ox * oy : 0;
+        }
+
+        public double centerX() {
+            return x + w / 2;
+        }
+
+        public double centerY() {
+            return y + h / 2;
+        }
+    }
+
+    private static final double PAD = 3;
+    private static final double[] RINGS = {16, 36, 62, 96, 140};
+    private static final int DIRECTIONS = 8;
+
+    private final double width;
+    private final double height;
+    private final List<Box> taken = new ArrayList<>();
+
+    public LabelPlacer(double width, double height) {
+        this.width = width;
+        this.height = height;
+    }
+
+    /** Marks a screen area as occupied (e.g. the legend) without placing a label there. */
+    public void reserve(Box box) {
+        taken.add(box);
+    }
+
+    /** Places a {@code w × h} box near (ax, ay), on the side away from it (a callout with a leader), and records it. */
+    public Box place(double ax, double ay, double w, double h) {
+        List<Box> candidates = new ArrayList<>();
+        for (double r : RINGS) {
+            for (int k = 0; k < DIRECTIONS; k++) {
+                double a = -Math.PI / 4 + k * 2 * Math.PI / DIRECTIONS;
+                double cx = ax + r * Math.cos(a);
+                double cy = ay - r * Math.sin(a);
+                // Put the box on the side of the ring facing away from the anchor.
+                double x = Math.cos(a) >= -1e-9 ? cx : cx - w;
+                double y = Math.abs(Math.sin(a)) < 1e-9 ? cy - h / 2 : (Math.sin(a) > 0 ? cy - h : cy);
+                candidates.add(onSurface(x, y, w, h));
+            }
+        }
+        return take(candidates);
+    }
+
+    /** Places a {@code w × h} box centred on (ax, ay) if free, else centred as near it as is free, and records it. */
+    public Box placeAround(double ax, double ay, double w, double h) {
+        List<Box> candidates = new ArrayList<>();
+        candidates.add(onSurface(ax - w / 2, ay - h / 2, w, h));
+        for (double r : RINGS) {
+            for (int k = 0; k < DIRECTIONS; k++) {
+                double a = k * 2 * Math.PI / DIRECTIONS;
+                candidates.add(onSurface(ax + r * Math.cos(a) - w / 2, ay - r * Math.sin(a) - h / 2, w, h));
+            }
+        }
+        return take(candidates);
+    }
+
+    private Box onSurface(double x, double y, double w, double h) {
+        return new Box(Math.max(0, Math.min(width - w, x)), Math.max(0, Math.min(height - h, y)), w, h);
+    }
+
+    /** The first free candidate, else the least covered one; recorded as taken. */
+    private Box take(List<Box> candidates) {
+        Box best = null;
+        double bestOverlap = Double.POSITIVE_INFINITY;
+        for (Box b : candidates) {
+            double overlap = overlap(b);
+            if (overlap == 0) {
+                taken.add(b);
+                return b;
+            }
+            if (overlap < bestOverlap) {
+                bestOverlap = overlap;
+                best = b;
+            }
+        }
+        taken.add(best);
+        return best;
+    }
+
+    /** Whether a box would be free of every taken box. */
+    public boolean isFree(Box b) {
+        return overlap(b) == 0;
+    }
+
+    private double overlap(Box b) {
+        double sum = 0;
+        for (Box t : taken) {
+            if (t.overlaps(b, PAD)) {
+                sum += t.overlapArea(b) + 1;
+            }
+        }
+        return sum;
+    }
+}

@@ -1,0 +1,25 @@
+package org.kinduct.render.paint;
+
+/** What the painter draws; each can be switched off on its own. */
+public enum Layer {
+    HEAT_MAP("Field colours"),
+    CONTOURS("Contour lines"),
+    SYMBOLS("⊙/⊗ symbols"),
+    GRID("Grid"),
+    SOURCES("Sources"),
+    CONDUCTORS("Conductors"),
+    LENZ("Polarity and current arrows"),
+    CALLOUTS("Value labels"),
+    LEGEND("Colour legend"),
+    SCALE_BAR("Scale bar");
+
+    private final String label;
+
+    Layer(String label) {
+        this.label = label;
+    }
+
+    public String label() {
+        return label;
+    }
+}

@@ -1,0 +1,242 @@
+package org.kinduct.render.paint;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.kinduct.render.view.NiceSteps;
+import org.kinduct.render.view.ViewTransform;
+
+/**
+ * Draws a whole {@link Frame} on a {@link Surface}: the {@link FieldLayers} (colours, contours,
+ * symbols), grid, sources, conductors, polarity and current overlays, value and contour labels,
+ * legend and scale bar. Stateless; the live view and every export call the same {@link #draw}.
+ */
+public final class ScenePainter {
+
+    static final double FONT = 12;
+    /**
+     * Axis and contour label size: 11 units print at 8.3 pt when an export page (600 units) is
+     * placed 16 cm wide (1 pt = 0.3528 mm), the smallest size we allow in print.
+     */
+    static final double LABEL_FONT = 11;
+    /** The "t = …" box in the top-left corner; axis labels keep out of it. */
+    private static final LabelPlacer.Box HEADER = new LabelPlacer.Box(6, 6, 150, 20);
+    private static final double LEGEND_W = 178;
+    private static final double LEGEND_H = 218;
+    private static final double LEGEND_GAP = 10;
+    /** Width the colour legend takes from the right edge of the view, gap included. */
+    public static final double LEGEND_SPAN_PX = LEGEND_W + LEGEND_GAP;
+    /** Two labels of one level at least this far apart, so they name different stretches of it. */
+    private static final double SAME_LEVEL_LABEL_GAP_PX = 200;
+    /** Contour labels per level at most. */
+    private static final int LABELS_PER_LEVEL = 2;
+
+    private ScenePainter() {
+    }
+
+    public static void draw(Surface s, Frame f) {
+        draw(s, f, null);
+    }
+
+    /**
+     * Draws {@code f}, taking the field layers from {@code backdrop} when it shows the same ones
+     * (the live view renders it off the UI thread), else drawing them from the frame's map.
+     */
+    public static void draw(Surface s, Frame f, FieldBackdrop backdrop) {
+        ViewTransform v = f.view();
+        s.save();
+        s.clipRect(0, 0, s.width(), s.height());
+        s.fill(Palette.BACKGROUND);
+        s.fillRect(0, 0, s.width(), s.height());
+        double limit = f.range().limitFor(f.raster());
+        List<FieldLayers.ContourLabel> contourLabels = backdrop != null && backdrop.shows(f.layers())
+                ? backdrop.drawOn(s, v) : FieldLayers.draw(s, v, f.raster(), limit, f.layers());
+        // Boxes the header, scale bar and legend will cover: no label is drawn under them.
+        List<LabelPlacer.Box> fixed = new ArrayList<>();
+        fixed.add(new LabelPlacer.Box(0, 0, HEADER.x() + HEADER.w() + 14, HEADER.y() + HEADER.h()));
+        if (f.shows(Layer.SCALE_BAR)) {
+            fixed.add(new LabelPlacer.Box(8, s.height() - 44, 180, 40));
+        }
+        LabelPlacer.Box legendBox = f.shows(Layer.LEGEND) ? legendBox(s) : null;
+        if (legendBox != null) {
+            fixed.add(legendBox);
+        }
+        if (f.shows(Layer.GRID)) {
+            grid(s, v, new ArrayList<>(fixed));
+        }
+        LabelPlacer placer = new LabelPlacer(s.width(), s.height());
+        fixed.forEach(placer::reserve);
+        Placement placement = Placement.of(f.scene(), f.tS(), f.poses());
+        List<Runnable> patchMarks = f.shows(Layer.SOURCES)
+                ? SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer) : List.of();
+        if (f.shows(Layer.CONDUCTORS)) {
+            ConductorPainter.drawConductors(s, v, f.scene(), placement, f.marks());
+        }
+        if (f.shows(Layer.LENZ) && f.snapshot() != null) {
+            ConductorPainter.drawLenz(s, v, f.scene(), f.snapshot(), placer);
+        }
+        patchMarks.forEach(Runnable::run);
+        List<Runnable> labels = new ArrayList<>();
+        if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
+            ConductorPainter.placeCallouts(s, v, f.scene(), f.snapshot(), f.scales(), placer, labels);
+        }
+        contourLabels.forEach(c -> placeContourLabel(s, c, placer, labels));
+        ConductorPainter.drawMarks(s, v, f.marks());
+        labels.forEach(Runnable::run);
+        if (f.shows(Layer.SCALE_BAR)) {
+            scaleBar(s, v);
+        }
+        if (legendBox != null) {
+            legend(s, legendBox, limit, f.shows(Layer.CONTOURS) ? FieldLayers.contourStep(limit) : 0,
+                    f.raster() != null);
+        }
+        header(s, f);
+        s.restore();
+    }
+
+    /** Grid lines and axis values; a value is left out where it would touch a box of {@code taken} or another value. */
+    private static void grid(Surface s, ViewTransform v, List<LabelPlacer.Box> taken) {
+        double major = NiceSteps.atLeast(90 / v.pxPerM());
+        double mantissa = major / Math.pow(10, Math.floor(Math.log10(major) + 1e-9));
+        double minor = major / (Math.round(mantissa) == 2 ? 4 : 5);
+        s.dash();
+        if (minor * v.pxPerM() >= 9) {
+            gridLines(s, v, minor, Palette.GRID_MINOR, 1);
+        }
+        gridLines(s, v, major, Palette.GRID_MAJOR, 1);
+        s.fill(Palette.AXIS);
+        s.fillRect(Math.round(v.screenX(0)), 0, 1, s.height());
+        s.fillRect(0, Math.round(v.screenY(0)), s.width(), 1);
+        s.fill(Palette.MUTED);
+        for (double y = Math.ceil(v.minY() / major) * major; y <= v.maxY(); y += major) {
+            axisLabel(s, Quantities.length(snap(y, major)), 4, v.screenY(y) - 2, true, taken);
+        }
+        for (double x = Math.ceil(v.minX() / major) * major; x <= v.maxX(); x += major) {
+            axisLabel(s, Quantities.length(snap(x, major)), v.screenX(x) + 3, 30, false, taken);
+        }
+    }
+
+    /** An axis label with its top-left (or bottom-left) corner at (x, y), unless it would be cut off or touch a taken box. */
+    private static void axisLabel(Surface s, String text, double x, double y, boolean bottom,
+                                  List<LabelPlacer.Box> taken) {
+        double top = bottom ? y - LABEL_FONT - 2 : y;
+        LabelPlacer.Box box = new LabelPlacer.Box(x, top, s.textWidth(text, LABEL_FONT, false), LABEL_FONT + 2);
+        boolean inside = box.x() + box.w() <= s.width() && box.y() >= 0 && box.y() + box.h() <= s.height();
+        if (inside && taken.stream().noneMatch(t -> box.overlaps(t, 2))) {
+            taken.add(box);
+            s.text(text, x, y, LABEL_FONT, false, bottom ? Surface.Anchor.BOTTOM_LEFT : Surface.Anchor.TOP_LEFT);
+        }
+    }
+
+    private static double snap(double value, double step) {
+        return Math.abs(value) < step * 1e-6 ? 0 : value;
+    }
+
+    /** Axis-parallel lines as one-pixel rectangles: far cheaper than stroked paths on a software pipeline. */
+    private static void gridLines(Surface s, ViewTransform v, double step, int colour, double width) {
+        s.fill(colour);
+        for (double x = Math.ceil(v.minX() / step) * step; x <= v.maxX(); x += step) {
+            s.fillRect(Math.round(v.screenX(x)), 0, width, s.height());
+        }
+        for (double y = Math.ceil(v.minY() / step) * step; y <= v.maxY(); y += step) {
+            s.fillRect(0, Math.round(v.screenY(y)), s.width(), width);
+        }
+    }
+
+    /** Up to {@value #LABELS_PER_LEVEL} labels of a contour level, on spots nothing placed so far covers. */
+    private static void placeContourLabel(Surface s, FieldLayers.ContourLabel label, LabelPlacer placer,
+                                          List<Runnable> labels) {
+        double w = s.textWidth(label.text(), LABEL_FONT, false) + 4;
+        double h = LABEL_FONT + 3;
+        List<double[]> placed = new ArrayList<>();
+        for (int i = 0; i < label.spots().size() && placed.size() < LABELS_PER_LEVEL; i++) {
+            double[] m = label.spots().get(i);
+            LabelPlacer.Box b = new LabelPlacer.Box(m[0] - w / 2, m[1] - h / 2, w, h);
+            if (b.x() < 0 || b.y() < 0 || b.x() + w > s.width() || b.y() + h > s.height() || !placer.isFree(b)
+                    || placed.stream().anyMatch(p -> Math.hypot(p[0] - m[0], p[1] - m[1]) < SAME_LEVEL_LABEL_GAP_PX)) {
+                continue;
+            }
+            placer.reserve(b);
+            placed.add(m);
+            labels.add(() -> {
+                s.fill(0xD9FFFFFF);
+                s.fillRect(b.x(), b.y(), b.w(), b.h());
+                s.fill(Palette.INK);
+                s.text(label.text(), b.centerX(), b.centerY(), LABEL_FONT, false, Surface.Anchor.CENTER);
+            });
+        }
+    }
+
+    private static void scaleBar(Surface s, ViewTransform v) {
+        double len = NiceSteps.atMost(140 / v.pxPerM());
+        double px = len * v.pxPerM();
+        double x = 16;
+        double y = s.height() - 18;
+        s.fill(Palette.LABEL_BOX);
+        s.fillRect(x - 6, y - 24, Math.max(px, 60) + 12, 32);
+        s.stroke(Palette.INK);
+        s.lineWidth(2);
+        s.dash();
+        s.beginPath();
+        s.moveTo(x, y - 5);
+        s.lineTo(x, y);
+        s.lineTo(x + px, y);
+        s.lineTo(x + px, y - 5);
+        s.strokePath();
+        s.fill(Palette.INK);
+        s.text(Quantities.length(len), x + px / 2, y - 7, FONT, false, Surface.Anchor.BOTTOM_CENTER);
+    }
+
+    private static LabelPlacer.Box legendBox(Surface s) {
+        return new LabelPlacer.Box(s.width() - LEGEND_SPAN_PX, s.height() - LEGEND_H - LEGEND_GAP, LEGEND_W, LEGEND_H);
+    }
+
+    private static void legend(Surface s, LabelPlacer.Box box, double limit, double contourStep, boolean hasMap) {
+        s.fill(Palette.LABEL_BOX);
+        s.fillRect(box.x(), box.y(), box.w(), box.h());
+        s.stroke(Palette.LABEL_EDGE);
+        s.lineWidth(1);
+        s.dash();
+        s.strokeRect(box.x(), box.y(), box.w(), box.h());
+        double x = box.x() + 12;
+        double top = box.y() + 46;
+        double barH = 120;
+        s.fill(Palette.INK);
+        s.text("B_z (normal to plane)", x, box.y() + 8, FONT, true, Surface.Anchor.TOP_LEFT);
+        int n = 64;
+        int[] bar = new int[n];
+        for (int i = 0; i < n; i++) {
+            bar[i] = DivergingScale.argbAt(1 - 2.0 * i / (n - 1));
+        }
+        s.image(bar, 1, n, x, top, 16, barH);
+        s.stroke(Palette.INK);
+        s.strokeRect(x, top, 16, barH);
+        double tx = x + 24;
+        s.fill(Palette.INK);
+        s.text("+" + Quantities.bz(limit), tx, top, FONT, false, Surface.Anchor.LEFT);
+        s.text("0", tx, top + barH / 2, FONT, false, Surface.Anchor.LEFT);
+        s.text("−" + Quantities.bz(limit), tx, top + barH, FONT, false, Surface.Anchor.LEFT);
+        Glyphs.fieldSymbol(s, x + 8, top - 12, 6, true, Palette.INK);
+        s.fill(Palette.INK);
+        s.text("out of screen", x + 20, top - 12, 11, false, Surface.Anchor.LEFT);
+        Glyphs.fieldSymbol(s, x + 8, top + barH + 13, 6, false, Palette.INK);
+        s.fill(Palette.INK);
+        s.text("into screen", x + 20, top + barH + 13, 11, false, Surface.Anchor.LEFT);
+        s.fill(Palette.MUTED);
+        String foot = !hasMap ? "computing field…" : contourStep > 0 ? "contours every " + Quantities.bz(contourStep) : "";
+        s.text(foot, x, box.y() + box.h() - 8, 11, false, Surface.Anchor.BOTTOM_LEFT);
+    }
+
+    private static void header(Surface s, Frame f) {
+        s.fill(Palette.LABEL_BOX);
+        s.fillRect(HEADER.x(), HEADER.y(), HEADER.w(), HEADER.h());
+        s.fill(Palette.INK);
+        s.text("t = " + Quantities.time(f.tS()), 12, 16, FONT, true, Surface.Anchor.LEFT);
+        if (!f.note().isEmpty()) {
+            double w = s.textWidth(f.note(), FONT, false) + 12;
+            s.fill(0xE0202020);
+            s.fillRect(s.width() - w - 6, 6, w, 20);
+            s.fill(0xFFFFFFFF);
+            s.text(f.note(), s.width() - 12, 16, FONT, false, Surface.Anchor.RIGHT);
+        }
+    }
+}

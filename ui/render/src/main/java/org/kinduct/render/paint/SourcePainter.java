@@ -1,0 +1,194 @@
+package org.kinduct.render.paint;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
+import org.kinduct.scene.Vec2;
+import org.kinduct.render.view.ViewTransform;
+
+/** Outlines of field sources where their bodies have carried them. */
+public final class SourcePainter {
+
+    private static final int CIRCLE_SEGMENTS = 72;
+
+    /** Height of a patch's mark: the 7 px symbol above a 14 px value. */
+    private static final double PATCH_MARK_H = 34;
+
+    private SourcePainter() {
+    }
+
+    /**
+     * Draws the sources; returns the field patches' value marks (⊙/⊗ and B_z), to be placed once
+     * conductors and their arrows have claimed their room, so a conductor crossing a patch's
+     * centre does not run through its value.
+     */
+    static List<Runnable> draw(Surface s, ViewTransform v, Scene scene, Placement placement, EditorMarks marks,
+                               LabelPlacer placer) {
+        List<Runnable> patchMarks = new ArrayList<>();
+        for (Source src : scene.sources()) {
+            boolean selected = marks.selected().contains(src.id());
+            List<Vec2> outline = outline(src, placement);
+            if (outline.isEmpty()) {
+                continue;
+            }
+            if (src instanceof Source.FieldPatch patch) {
+                polygon(s, v, outline, true);
+                s.fill(Palette.withAlpha(DivergingScale.argbAt(Math.signum(patch.bzT())), 0.25));
+                s.fillPath();
+                s.stroke(Palette.INK);
+                s.lineWidth(1.5);
+                s.dash(6, 4);
+                s.strokePath();
+                s.dash();
+                Vec2 c = centroid(outline);
+                patchMarks.add(() -> patchMark(s, placer, v.screenX(c.x()), v.screenY(c.y()), patch.bzT()));
+            } else if (src instanceof Source.SourceCoil coil) {
+                polygon(s, v, outline, true);
+                s.stroke(Palette.COIL);
+                s.lineWidth(3);
+                s.dash(10, 3, 2, 3);
+                s.strokePath();
+                s.dash();
+                coilArrows(s, v, outline, coil.drive().dcA() + coil.drive().amplitudeA() >= 0);
+                label(s, v, centroid(outline), coil.turns() + " turns", 0);
+            } else {
+                polygon(s, v, outline, true);
+                s.fill(Palette.MAGNET_FILL);
+                s.fillPath();
+                s.stroke(Palette.MAGNET_EDGE);
+                s.lineWidth(2);
+                s.dash();
+                s.strokePath();
+                Vec2 c = centroid(outline);
+                magnetHint(s, v, c, src);
+                placer.reserve(new LabelPlacer.Box(v.screenX(c.x()) - 16, v.screenY(c.y()) - 18, 32, 32));
+            }
+            if (selected) {
+                polygon(s, v, outline, true);
+                s.stroke(Palette.SELECTION);
+                s.lineWidth(3);
+                s.dash(5, 3);
+                s.strokePath();
+                s.dash();
+            }
+        }
+        return patchMarks;
+    }
+
+    /** A patch's ⊙/⊗ and value in the free box nearest its centre (cx, cy). */
+    private static void patchMark(Surface s, LabelPlacer placer, double cx, double cy, double bzT) {
+        String text = Quantities.bz(bzT);
+        double w = Math.max(s.textWidth(text, 11, false) + 6, 20);
+        LabelPlacer.Box b = placer.placeAround(cx, cy, w, PATCH_MARK_H);
+        double x = b.centerX();
+        Glyphs.fieldSymbol(s, x, b.y() + 8, 7, bzT > 0, Palette.INK);
+        s.fill(0xC0FFFFFF);
+        s.fillRect(x - (w) / 2, b.y() + 18, w, 14);
+        s.fill(Palette.INK);
+        s.text(text, x, b.y() + 25, 11, false, Surface.Anchor.CENTER);
+    }
+
+    /** The source's outline in scene metres at this instant (empty for a field without outline). */
+    public static List<Vec2> outline(Source src, Placement placement) {
+        if (src instanceof Source.FieldPatch p) {
+            return placement.place(p.body(), p.outline());
+        }
+        if (src instanceof Source.BlockMagnet m) {
+            List<Vec2> corners = new ArrayList<>(4);
+            double hx = m.sizeXM() / 2;
+            double hy = m.sizeYM() / 2;
+            for (double[] c : new double[][] {{-hx, -hy}, {hx, -hy}, {hx, hy}, {-hx, hy}}) {
+                corners.add(m.center().plus(new Vec2(c[0], c[1]).rotate(m.angleRad())));
+            }
+            return placement.place(m.body(), corners);
+        }
+        if (src instanceof Source.CylinderMagnet m) {
+            return placement.place(m.body(), circle(m.center(), m.radiusM()));
+        }
+        if (src instanceof Source.SourceCoil c) {
+            List<Vec2> drawn = c.shape() instanceof Source.CoilShape.Circle circle
+                    ? circle(circle.center(), circle.radiusM())
+                    : ((Source.CoilShape.Polygon) c.shape()).vertices();
+            return placement.place(c.body(), drawn);
+        }
+        return List.of();
+    }
+
+    private static List<Vec2> circle(Vec2 center, double r) {
+        List<Vec2> pts = new ArrayList<>(CIRCLE_SEGMENTS);
+        for (int i = 0; i < CIRCLE_SEGMENTS; i++) {
+            pts.add(center.plus(Vec2.polar(r, 2 * Math.PI * i / CIRCLE_SEGMENTS)));
+        }
+        return pts;
+    }
+
+    static void polygon(Surface s, ViewTransform v, List<Vec2> pts, boolean closed) {
+        s.beginPath();
+        for (int i = 0; i < pts.size(); i++) {
+            double x = v.screenX(pts.get(i).x());
+            double y = v.screenY(pts.get(i).y());
+            if (i == 0) {
+                s.moveTo(x, y);
+            } else {
+                s.lineTo(x, y);
+            }
+        }
+        if (closed) {
+            s.closePath();
+        }
+    }
+
+    static Vec2 centroid(List<Vec2> pts) {
+        double x = 0;
+        double y = 0;
+        for (Vec2 p : pts) {
+            x += p.x();
+            y += p.y();
+        }
+        return new Vec2(x / pts.size(), y / pts.size());
+    }
+
+    /** The face the viewer sees (+z side): N for a magnet magnetized towards +z. */
+    private static void magnetHint(Surface s, ViewTransform v, Vec2 c, Source src) {
+        boolean plus = src instanceof Source.BlockMagnet b
+                ? b.magnetization() == Source.Magnetization.PLUS_Z
+                : ((Source.CylinderMagnet) src).magnetization() == Source.Magnetization.PLUS_Z;
+        double x = v.screenX(c.x());
+        double y = v.screenY(c.y());
+        s.fill(Palette.INK);
+        s.text(plus ? "N" : "S", x, y - 1, 15, true, Surface.Anchor.BOTTOM_CENTER);
+        s.text(plus ? "M +z" : "M −z", x, y + 1, 10, false, Surface.Anchor.TOP_CENTER);
+    }
+
+    private static void coilArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward) {
+        s.fill(Palette.COIL);
+        int n = pts.size();
+        int every = Math.max(1, n / 4);
+        for (int i = 0; i < n; i += every) {
+            Vec2 a = pts.get(i);
+            Vec2 b = pts.get((i + 1) % n);
+            double ax = v.screenX(a.x());
+            double ay = v.screenY(a.y());
+            double bx = v.screenX(b.x());
+            double by = v.screenY(b.y());
+            double len = Math.hypot(bx - ax, by - ay);
+            if (len < 1e-6) {
+                continue;
+            }
+            double dx = (bx - ax) / len * (forward ? 1 : -1);
+            double dy = (by - ay) / len * (forward ? 1 : -1);
+            Glyphs.arrowHead(s, (ax + bx) / 2 + dx * 5, (ay + by) / 2 + dy * 5, dx, dy, 10);
+        }
+    }
+
+    private static void label(Surface s, ViewTransform v, Vec2 at, String text, double dy) {
+        double x = v.screenX(at.x());
+        double y = v.screenY(at.y()) + dy;
+        double w = s.textWidth(text, 11, false) + 6;
+        s.fill(0xC0FFFFFF);
+        s.fillRect(x - w / 2, y, w, 14);
+        s.fill(Palette.INK);
+        s.text(text, x, y + 7, 11, false, Surface.Anchor.CENTER);
+    }
+}

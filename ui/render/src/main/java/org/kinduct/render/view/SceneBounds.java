@@ -1,0 +1,89 @@
+package org.kinduct.render.view;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Pose;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
+import org.kinduct.scene.TimeSpan;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.render.paint.Extent;
+import org.kinduct.render.paint.Placement;
+import org.kinduct.render.paint.SourcePainter;
+
+/** The box around everything drawn in a scene, at one instant or over its time window, for zoom-to-fit. */
+public record SceneBounds(double minX, double minY, double maxX, double maxY) {
+
+    /** Bounds of all outlines at {@code tS}, every body by its prescribed motion; see {@link #of(Scene, Placement)}. */
+    public static SceneBounds of(Scene scene, double tS) {
+        return of(scene, Placement.of(scene, tS));
+    }
+
+    /** Bounds of all outlines where {@code placement} puts them; a 0.2 m box around the origin for an empty scene. */
+    public static SceneBounds of(Scene scene, Placement placement) {
+        List<Vec2> pts = new ArrayList<>();
+        for (Source s : scene.sources()) {
+            pts.addAll(SourcePainter.outline(s, placement));
+        }
+        for (Conductor c : scene.conductors()) {
+            pts.addAll(placement.vertices(c));
+        }
+        if (pts.isEmpty()) {
+            return new SceneBounds(-0.1, -0.1, 0.1, 0.1);
+        }
+        Extent e = Extent.of(pts);
+        return new SceneBounds(e.minX(), e.minY(), e.maxX(), e.maxY());
+    }
+
+    /**
+     * Everything the scene shows over its time window, for zoom-to-fit: all bodies by their
+     * prescribed motion at t0, the midpoint and t1, and at every sample of a simulated run, free
+     * bodies where the run has them.
+     *
+     * @param series the run's samples (only their times are read)
+     * @param poses the simulated poses at each sample's time (same length as {@code series}), or
+     *        empty when no body is simulated
+     * @throws IllegalArgumentException if {@code poses} is neither empty nor as long as {@code series}
+     */
+    public static SceneBounds ofWindow(Scene scene, List<Snapshot> series, List<Map<String, Pose>> poses) {
+        if (!poses.isEmpty() && poses.size() != series.size()) {
+            throw new IllegalArgumentException("simulated poses for " + poses.size() + " samples, but the run has "
+                    + series.size());
+        }
+        TimeSpan w = scene.time();
+        SceneBounds b = of(scene, w.t0S()).union(of(scene, w.t1S())).union(of(scene, (w.t0S() + w.t1S()) / 2));
+        for (int i = 0; i < poses.size(); i++) {
+            b = b.union(of(scene, Placement.of(scene, series.get(i).tS(), poses.get(i))));
+        }
+        return b;
+    }
+
+    /** Bounds of the objects {@code ids} alone at {@code tS}. */
+    public static SceneBounds ofObjects(Scene scene, Set<String> ids, double tS) {
+        return ofObjects(scene, ids, Placement.of(scene, tS));
+    }
+
+    /** Bounds of the objects {@code ids} alone where {@code placement} (made for {@code scene}) puts them. */
+    public static SceneBounds ofObjects(Scene scene, Set<String> ids, Placement placement) {
+        Set<String> others = new HashSet<>();
+        scene.sources().forEach(s -> others.add(s.id()));
+        scene.conductors().forEach(c -> others.add(c.id()));
+        others.removeAll(ids);
+        return of(scene.without(others), placement);
+    }
+
+    public Vec2 center() {
+        return new Vec2((minX + maxX) / 2, (minY + maxY) / 2);
+    }
+
+    /** This box grown to include {@code o}. */
+    public SceneBounds union(SceneBounds o) {
+        return new SceneBounds(Math.min(minX, o.minX), Math.min(minY, o.minY), Math.max(maxX, o.maxX),
+                Math.max(maxY, o.maxY));
+    }
+}

@@ -1,0 +1,70 @@
+package org.kinduct.render.paint;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.SplittableRandom;
+import org.junit.jupiter.api.RepeatedTest;
+import org.junit.jupiter.api.Test;
+
+class LabelPlacerTest {
+
+    private static final SplittableRandom SEEDS = new SplittableRandom(77L);
+
+    private static boolean overlap(LabelPlacer.Box a, LabelPlacer.Box b) {
+        return a.x() < b.x() + b.w() && b.x() < a.x() + a.w() && a.y() < b.y() + b.h() && b.y() < a.y() + a.h();
+    }
+
+    @Test
+    void labelsSharingOneAnchorDoNotOverlap() {
+        LabelPlacer p = new LabelPlacer(1000, 800);
+        List<LabelPlacer.Box> boxes = new ArrayList<>();
+        for (int i = 0; i < 8; i++) {
+            boxes.add(p.place(500, 400, 90, 40));
+        }
+        for (int i = 0; i < boxes.size(); i++) {
+            for (int j = i + 1; j < boxes.size(); j++) {
+                assertFalse(overlap(boxes.get(i), boxes.get(j)), "labels " + i + " and " + j);
+            }
+        }
+    }
+
+    @RepeatedTest(20)
+    void labelsStayOnTheSurface() {
+        long seed = SEEDS.nextLong();
+        SplittableRandom r = new SplittableRandom(seed);
+        LabelPlacer p = new LabelPlacer(640, 480);
+        for (int i = 0; i < 12; i++) {
+            LabelPlacer.Box b = p.place(r.nextDouble(-50, 700), r.nextDouble(-50, 530), 80, 36);
+            assertTrue(b.x() >= 0 && b.y() >= 0 && b.x() + b.w() <= 640 && b.y() + b.h() <= 480, "seed " + seed);
+        }
+    }
+
+    @Test
+    void reservedAreasAreAvoided() {
+        LabelPlacer p = new LabelPlacer(400, 300);
+        LabelPlacer.Box legend = new LabelPlacer.Box(200, 150, 200, 150);
+        p.reserve(legend);
+        LabelPlacer.Box b = p.place(300, 220, 60, 30);
+        assertFalse(overlap(b, legend));
+    }
+
+    @Test
+    void aMarkSitsCentredOnItsAnchorWhenFreeAndStepsAsideFromWhatIsTaken() {
+        LabelPlacer p = new LabelPlacer(400, 300);
+        LabelPlacer.Box free = p.placeAround(100, 100, 40, 30);
+        assertEquals(100, free.centerX(), 1e-12);
+        assertEquals(100, free.centerY(), 1e-12);
+
+        LabelPlacer q = new LabelPlacer(400, 300);
+        LabelPlacer.Box arrow = new LabelPlacer.Box(195, 60, 10, 80);
+        q.reserve(arrow);
+        LabelPlacer.Box moved = q.placeAround(200, 100, 40, 30);
+        assertFalse(overlap(moved, arrow));
+        assertTrue(Math.hypot(moved.centerX() - 200, moved.centerY() - 100) <= 40,
+                "stays near its anchor: " + moved);
+    }
+}

@@ -1,0 +1,28 @@
+package org.kinduct.report;
+
+import java.util.Locale;
+import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Units;
+import org.kinduct.solver.dynamics.EnergyAudit;
+
+/** The energy audit of a simulated run as one line of text, for under the readout table. */
+public final class EnergyText {
+
+    private EnergyText() {
+    }
+
+    /** "Energy over the run: work in …, Joule heat …, damping …, Δ kinetic …, Δ potential …, Δ magnetic …, residual … (x %)". */
+    public static String of(EnergyAudit a) {
+        double scale = Math.max(Math.abs(a.suppliedJ()), a.jouleJ() + a.dampingJ());
+        String share = scale > 0 ? String.format(Locale.ROOT, " (%.1e of the energy turned over)",
+                Math.abs(a.residualJ()) / scale) : "";
+        return "Energy over the run: work in " + j(a.suppliedJ()) + ", Joule heat " + j(a.jouleJ())
+                + ", damping heat " + j(a.dampingJ()) + ", Δ kinetic " + j(a.deltaKineticJ())
+                + ", Δ potential " + j(a.deltaPotentialJ()) + ", Δ magnetic " + j(a.deltaMagneticJ())
+                + ", residual " + j(a.residualJ()) + share;
+    }
+
+    private static String j(double joules) {
+        return Units.format(joules, Dimension.ENERGY);
+    }
+}
