@@ -15,6 +15,19 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop {
     List<Vertex> vertices();
 
     /**
+     * Dispatches to the case for this kind. Adding a kind adds a method to {@link Cases}, so every
+     * place that handles conductors fails to compile until it handles the new one.
+     */
+    <R> R match(Cases<R> cases);
+
+    /** One method per kind of conductor. */
+    interface Cases<R> {
+        R wire(Wire wire);
+
+        R loop(Loop loop);
+    }
+
+    /**
      * An open polyline from its first vertex to its last. EMF &gt; 0 means the last end is the
      * positive terminal.
      */
@@ -26,6 +39,11 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop {
             if (vertices.size() < 2) {
                 throw new IllegalArgumentException("a wire needs at least 2 vertices, got " + vertices.size());
             }
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.wire(this);
         }
     }
 
@@ -55,6 +73,11 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop {
             if (temperatureC < -273.15) {
                 throw new IllegalArgumentException("temperature must be above absolute zero, got " + temperatureC);
             }
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.loop(this);
         }
 
         /** A shorted single-turn copper loop at 20 °C. */

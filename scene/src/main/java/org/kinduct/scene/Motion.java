@@ -13,8 +13,36 @@ public sealed interface Motion
     /** The body's pose at {@code tS}; {@code pivot} is the body's pivot as drawn. */
     Pose poseAt(Vec2 pivot, double tS);
 
+    /**
+     * Dispatches to the case for this kind. Adding a kind adds a method to {@link Cases}, so every
+     * place that handles motions fails to compile until it handles the new one.
+     */
+    <R> R match(Cases<R> cases);
+
+    /** One method per kind of motion. */
+    interface Cases<R> {
+        R still(Still still);
+
+        R glide(Glide glide);
+
+        R accelerate(Accelerate accelerate);
+
+        R oscillate(Oscillate oscillate);
+
+        R spin(Spin spin);
+
+        R path(Path path);
+
+        R free(Free free);
+    }
+
     /** Does not move. */
     record Still() implements Motion {
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.still(this);
+        }
+
         @Override
         public Pose poseAt(Vec2 pivot, double tS) {
             return Pose.rest(pivot);
@@ -28,6 +56,11 @@ public sealed interface Motion
         }
 
         @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.glide(this);
+        }
+
+        @Override
         public Pose poseAt(Vec2 pivot, double tS) {
             return new Pose(pivot, velocity.times(tS), 0, velocity, 0);
         }
@@ -38,6 +71,11 @@ public sealed interface Motion
         public Accelerate {
             Checks.nonNull(initialVelocity, "initialVelocity");
             Checks.nonNull(acceleration, "acceleration");
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.accelerate(this);
         }
 
         @Override
@@ -60,6 +98,11 @@ public sealed interface Motion
         }
 
         @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.oscillate(this);
+        }
+
+        @Override
         public Pose poseAt(Vec2 pivot, double tS) {
             double w = 2 * Math.PI * frequencyHz;
             Vec2 u = Vec2.polar(1, directionRad);
@@ -73,6 +116,11 @@ public sealed interface Motion
         public Spin {
             Checks.finite(omegaRadPerS, "angular speed");
             Checks.finite(startAngleRad, "start angle");
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.spin(this);
         }
 
         @Override
@@ -100,6 +148,11 @@ public sealed interface Motion
                             + " at " + keys.get(i).tS() + " s follows " + keys.get(i - 1).tS() + " s");
                 }
             }
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.path(this);
         }
 
         @Override
@@ -196,6 +249,11 @@ public sealed interface Motion
 
         public static Free ofMass(double massKg) {
             return new Free(massKg, 0, Vec2.ZERO, 0, 0, Vec2.ZERO, Vec2.ZERO, 0, List.of());
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.free(this);
         }
 
         @Override

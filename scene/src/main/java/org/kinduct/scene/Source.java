@@ -16,6 +16,31 @@ public sealed interface Source
     /** Id of the body the source rides; {@link Body#FIXED} for the fixed frame. */
     String body();
 
+    /**
+     * Dispatches to the case for this kind. Adding a kind adds a method to {@link Cases}, so every
+     * place that handles sources fails to compile until it handles the new one (Java 17 has no
+     * exhaustive pattern {@code switch} outside preview).
+     */
+    <R> R match(Cases<R> cases);
+
+    /** True when the source's strength changes with time by itself (an AC-driven coil), whether or not its body moves. */
+    default boolean alternates() {
+        return this instanceof SourceCoil coil && coil.drive().alternates();
+    }
+
+    /** One method per kind of source. */
+    interface Cases<R> {
+        R patch(FieldPatch patch);
+
+        R uniform(UniformField uniform);
+
+        R block(BlockMagnet block);
+
+        R cylinder(CylinderMagnet cylinder);
+
+        R coil(SourceCoil coil);
+    }
+
     /** An ideal region of uniform B_z (tesla, + out of the screen) bounded by a simple polygon. */
     record FieldPatch(String id, String body, List<Vec2> outline, double bzT) implements Source {
         public FieldPatch {
@@ -24,6 +49,11 @@ public sealed interface Source
             outline = Polygons.requireSimple(outline, "field patch outline");
             Checks.finite(bzT, "B_z");
         }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.patch(this);
+        }
     }
 
     /** Uniform B_z everywhere (tesla), e.g. the normal component of the Earth's field. */
@@ -31,6 +61,11 @@ public sealed interface Source
         public UniformField {
             Checks.id(id, "Source");
             Checks.finite(bzT, "B_z");
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.uniform(this);
         }
 
         @Override
@@ -75,6 +110,11 @@ public sealed interface Source
             Checks.positive(remanenceT, "remanence");
             Checks.nonNull(magnetization, "magnetization");
         }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.block(this);
+        }
     }
 
     /** A cylindrical magnet, axis along z, magnetized along ±z. Stand-off as for {@link BlockMagnet}. */
@@ -91,6 +131,11 @@ public sealed interface Source
             Checks.nonNull(side, "side");
             Checks.positive(remanenceT, "remanence");
             Checks.nonNull(magnetization, "magnetization");
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.cylinder(this);
         }
     }
 
@@ -114,14 +159,35 @@ public sealed interface Source
             }
             Checks.nonNull(drive, "drive");
         }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.coil(this);
+        }
     }
 
     /** The outline of a source coil. */
     sealed interface CoilShape permits CoilShape.Polygon, CoilShape.Circle {
+
+        /** Dispatches to the case for this shape (see {@link Source#match}). */
+        <R> R match(Cases<R> cases);
+
+        /** One method per coil shape. */
+        interface Cases<R> {
+            R polygon(Polygon polygon);
+
+            R circle(Circle circle);
+        }
+
         /** Closed polygon, vertex order gives the positive current direction. */
         record Polygon(List<Vec2> vertices) implements CoilShape {
             public Polygon {
                 vertices = Polygons.requireSimple(vertices, "coil outline");
+            }
+
+            @Override
+            public <R> R match(Cases<R> cases) {
+                return cases.polygon(this);
             }
         }
 
@@ -130,6 +196,11 @@ public sealed interface Source
             public Circle {
                 Checks.nonNull(center, "center");
                 Checks.positive(radiusM, "radius");
+            }
+
+            @Override
+            public <R> R match(Cases<R> cases) {
+                return cases.circle(this);
             }
         }
     }
@@ -147,6 +218,11 @@ public sealed interface Source
 
         public static Drive dc(double amps) {
             return new Drive(amps, 0, 0, 0);
+        }
+
+        /** True when the current changes with time: a nonzero amplitude at a nonzero frequency. */
+        public boolean alternates() {
+            return amplitudeA != 0 && frequencyHz > 0;
         }
 
         public double currentAt(double tS) {

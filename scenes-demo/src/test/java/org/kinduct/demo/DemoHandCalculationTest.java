@@ -13,8 +13,7 @@ import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.Terminal;
 import org.kinduct.solver.dynamics.CoupledSimulation;
 import org.kinduct.solver.dynamics.EnergyAudit;
-import org.kinduct.solver.dynamics.Sample;
-import org.kinduct.solver.dynamics.Trajectory;
+import org.kinduct.solver.dynamics.CoupledRun;
 
 /**
  * Demo results against independent hand calculations. The straight-conductor cases use
@@ -137,7 +136,7 @@ class DemoHandCalculationTest {
     /** ½·L·I² at the terminal current, about 1e-3 of the heat, is left out of the hand balance. */
     private static final double HEAT_TOL = 3e-3;
 
-    private static Trajectory frameBrakeRun() {
+    private static CoupledRun frameBrakeRun() {
         Scene scene = Demos.load("frame-brake");
         return CoupledSimulation.run(scene, scene.time().t0S(), scene.time().t1S(), scene.time().dtS());
     }
@@ -157,25 +156,25 @@ class DemoHandCalculationTest {
         // R = ρ·perimeter/(π d²/4) (Pouillet; common practice), no load resistor.
         double r = RHO_ALUMINIUM * 2 * (FRAME_W + FRAME_H) / (Math.PI * ROD_D * ROD_D / 4);
         double vTerminal = mass * G * r / (GAP_B * GAP_B * FRAME_W * FRAME_W);
-        List<Sample> samples = frameBrakeRun().samples();
-        Sample last = samples.get(samples.size() - 1);
+        List<Snapshot> samples = frameBrakeRun().samples();
+        Snapshot last = samples.get(samples.size() - 1);
 
-        assertEquals(-vTerminal, last.pose("frame").velocity().y(), TERMINAL_TOL * vTerminal);
+        assertEquals(-vTerminal, last.freeBody("frame").velocity().y(), TERMINAL_TOL * vTerminal);
         // The terminal current carries the weight: I·w·B = m·g, clockwise (Lenz: the flux out of the page grows).
-        assertEquals(-mass * G / (GAP_B * FRAME_W), last.conductor("frame-loop").currentA(),
+        assertEquals(-mass * G / (GAP_B * FRAME_W), last.conductor("frame-loop").orElseThrow().currentA(),
                 TERMINAL_TOL * mass * G / (GAP_B * FRAME_W));
-        assertEquals(Circulation.CW, last.conductor("frame-loop").direction());
+        assertEquals(Circulation.CW, last.conductor("frame-loop").orElseThrow().direction());
     }
 
     @Test
     void frameBrakeHeatIsTheLostPotentialEnergyLessTheKineticEnergy() {
         Scene scene = Demos.load("frame-brake");
         double mass = ((org.kinduct.scene.Motion.Free) scene.body("frame").orElseThrow().motion()).massKg();
-        Trajectory run = frameBrakeRun();
-        Sample first = run.samples().get(0);
-        Sample last = run.samples().get(run.samples().size() - 1);
-        double drop = first.pose("frame").offset().y() - last.pose("frame").offset().y();
-        double speed = last.pose("frame").velocity().length();
+        CoupledRun run = frameBrakeRun();
+        Snapshot first = run.samples().get(0);
+        Snapshot last = run.samples().get(run.samples().size() - 1);
+        double drop = first.freeBody("frame").offset().y() - last.freeBody("frame").offset().y();
+        double speed = last.freeBody("frame").velocity().length();
         double heat = mass * G * drop - 0.5 * mass * speed * speed;
 
         EnergyAudit audit = run.audit();
@@ -186,7 +185,7 @@ class DemoHandCalculationTest {
     @Test
     void harvesterBuildsUpToTheResonanceAmplitudeAndFeedsItsLoad() {
         Scene scene = Demos.load("pcb-harvester");
-        Trajectory run = CoupledSimulation.run(scene, scene.time().t0S(), scene.time().t1S(), scene.time().dtS());
+        CoupledRun run = CoupledSimulation.run(scene, scene.time().t0S(), scene.time().t1S(), scene.time().dtS());
         // Driven at its natural frequency ω0 = √(k/m) (711 N/m, 5 g: 60.0 Hz), a damped oscillator settles at
         // X = F0/(c·ω0) (Taylor, Classical Mechanics, 2005, §5.5, resonance amplitude f0/(2βω0)); the coil's
         // electrical damping is a fraction of a percent of the flexure's 0.075 N·s/m here. After 4.5 time
@@ -194,9 +193,9 @@ class DemoHandCalculationTest {
         double omega0 = Math.sqrt(711 / 0.005);
         double expected = 0.1 / (0.075 * omega0);
         double amplitude = 0;
-        for (Sample s : run.samples()) {
+        for (Snapshot s : run.samples()) {
             if (s.tS() > scene.time().t1S() - 2 / 60.0) {
-                amplitude = Math.max(amplitude, Math.abs(s.poses().get("flexure").offset().x()));
+                amplitude = Math.max(amplitude, Math.abs(s.freeBody("flexure").offset().x()));
             }
         }
         assertEquals(expected, amplitude, 0.03 * expected, "steady amplitude at resonance");

@@ -54,7 +54,7 @@ final class DifferenceStep {
             scale = Math.min(scale, motionScaleS(body.motion()));
         }
         for (Source source : scene.sources()) {
-            if (source instanceof Source.SourceCoil coil && varies(coil.drive())) {
+            if (source instanceof Source.SourceCoil coil && coil.alternates()) {
                 scale = Math.min(scale, 1 / (2 * Math.PI * coil.drive().frequencyHz()));
             }
         }
@@ -65,10 +65,6 @@ final class DifferenceStep {
     record Pace(double timeScaleS, double stepS) {
     }
 
-    /** True when a drive's current changes with time. */
-    static boolean varies(Source.Drive drive) {
-        return drive.amplitudeA() != 0 && drive.frequencyHz() > 0;
-    }
 
     /**
      * −df/dt from f at t−2h, t−h, t+h, t+2h (in {@link #OFFSETS} order). Differences of
@@ -128,20 +124,48 @@ final class DifferenceStep {
         return new Pace(scale, Math.max(h, Math.scalb(Math.ulp(Math.abs(now.tS())), 26)));
     }
 
+    /** The time over which a prescribed motion changes appreciably (infinite for steady or no motion). */
     private static double motionScaleS(Motion motion) {
-        if (motion instanceof Motion.Oscillate oscillate) {
-            return 1 / (2 * Math.PI * oscillate.frequencyHz());
-        }
-        if (motion instanceof Motion.Spin spin && spin.omegaRadPerS() != 0) {
-            return 1 / Math.abs(spin.omegaRadPerS());
-        }
-        if (motion instanceof Motion.Path path) {
-            double shortest = Double.POSITIVE_INFINITY;
-            for (int i = 1; i < path.keys().size(); i++) {
-                shortest = Math.min(shortest, path.keys().get(i).tS() - path.keys().get(i - 1).tS());
+        return motion.match(new Motion.Cases<>() {
+            @Override
+            public Double still(Motion.Still still) {
+                return Double.POSITIVE_INFINITY;
             }
-            return shortest;
-        }
-        return Double.POSITIVE_INFINITY;
+
+            @Override
+            public Double glide(Motion.Glide glide) {
+                return Double.POSITIVE_INFINITY;
+            }
+
+            @Override
+            public Double accelerate(Motion.Accelerate accelerate) {
+                return Double.POSITIVE_INFINITY;
+            }
+
+            @Override
+            public Double oscillate(Motion.Oscillate oscillate) {
+                return 1 / (2 * Math.PI * oscillate.frequencyHz());
+            }
+
+            @Override
+            public Double spin(Motion.Spin spin) {
+                return spin.omegaRadPerS() != 0 ? 1 / Math.abs(spin.omegaRadPerS()) : Double.POSITIVE_INFINITY;
+            }
+
+            @Override
+            public Double path(Motion.Path path) {
+                double shortest = Double.POSITIVE_INFINITY;
+                for (int i = 1; i < path.keys().size(); i++) {
+                    shortest = Math.min(shortest, path.keys().get(i).tS() - path.keys().get(i - 1).tS());
+                }
+                return shortest;
+            }
+
+            @Override
+            public Double free(Motion.Free free) {
+                // A free body's motion is not known in advance; ℓ/v at each instant covers it.
+                return Double.POSITIVE_INFINITY;
+            }
+        });
     }
 }

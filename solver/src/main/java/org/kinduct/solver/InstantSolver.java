@@ -109,7 +109,7 @@ final class InstantSolver {
 
     /** True when source s is a coil whose current changes with time. */
     private boolean driven(int s) {
-        return index.scene().sources().get(s) instanceof Source.SourceCoil coil && DifferenceStep.varies(coil.drive());
+        return index.scene().sources().get(s).alternates();
     }
 
     /** A placed source depends on its body's pose only through the offset and the angle. */
@@ -121,8 +121,18 @@ final class InstantSolver {
         List<Conductor> conductors = index.scene().conductors();
         List<ConductorState> states = new ArrayList<>(conductors.size());
         for (int c = 0; c < conductors.size(); c++) {
-            Conductor conductor = conductors.get(c);
-            states.add(conductor instanceof Conductor.Loop loop ? loop(c, loop) : wire(c, conductor));
+            int index = c;
+            states.add(conductors.get(c).match(new Conductor.Cases<>() {
+                @Override
+                public ConductorState wire(Conductor.Wire wire) {
+                    return InstantSolver.this.wire(index, wire);
+                }
+
+                @Override
+                public ConductorState loop(Conductor.Loop loop) {
+                    return InstantSolver.this.loop(index, loop);
+                }
+            }));
         }
         return new Snapshot(tS, states);
     }
@@ -181,24 +191,19 @@ final class InstantSolver {
                 ? (denominator > 0 ? Math.abs(emfFlux - emf) / denominator : 0)
                 : Double.NaN;
 
-        double resistance = turns * at.lengthM() * loop.wire().material().resistivityAt(loop.temperatureC())
-                / loop.wire().crossSectionM2() + loop.loadOhm();
-        if (!(resistance > 0)) {
-            throw new IllegalArgumentException("loop '" + loop.id() + "' has no positive resistance at "
-                    + loop.temperatureC() + " °C (" + resistance + " Ω): the resistivity model does not reach there");
-        }
+        double resistance = LoopResistance.ohms(loop, at.lengthM());
         List<Vec2> vertices = vertices(at);
         if (loop.open()) {
             return new ConductorState(loop.id(), ConductorState.Kind.LOOP, vertices, flux, turns * flux, emfFlux, emf,
-                    emf, disagreement, terminal(emf, threshold), 0, Circulation.NONE, Vec2.ZERO, resistance, true);
+                    emf, disagreement, threshold, Terminal.of(emf, threshold), 0, Circulation.NONE, Vec2.ZERO,
+                    resistance, Double.NaN, true);
         }
         double current = emf / resistance;
-        double sense = Math.signum(current) * Math.signum(Polygons.signedArea(vertices));
-        Circulation direction = Math.abs(emf) <= threshold || sense == 0 ? Circulation.NONE
-                : sense > 0 ? Circulation.CCW : Circulation.CW;
         Vec2 force = new Vec2(turns * current * sums.forceXNPerA(), turns * current * sums.forceYNPerA());
         return new ConductorState(loop.id(), ConductorState.Kind.LOOP, vertices, flux, turns * flux, emfFlux, emf,
-                emf, disagreement, Terminal.NONE, current, direction, force, resistance, true);
+                emf, disagreement, threshold, Terminal.NONE, current,
+                Circulation.of(current, Polygons.signedArea(vertices), threshold / resistance), force, resistance,
+                Double.NaN, true);
     }
 
     private ConductorState wire(int c, Conductor wire) {
@@ -220,8 +225,8 @@ final class InstantSolver {
         double emf = sums.motionalV() + induced;
         double threshold = TERMINAL_ABS_V + TERMINAL_REL * emfScale(at);
         return new ConductorState(wire.id(), ConductorState.Kind.WIRE, vertices(at), Double.NaN, Double.NaN,
-                Double.NaN, emf, emf, 0, terminal(emf, threshold), 0, Circulation.NONE, Vec2.ZERO, Double.NaN,
-                !idealVarying);
+                Double.NaN, emf, emf, 0, threshold, Terminal.of(emf, threshold), 0, Circulation.NONE, Vec2.ZERO,
+                Double.NaN, Double.NaN, !idealVarying);
     }
 
     /**
@@ -234,10 +239,6 @@ final class InstantSolver {
     private double emfScale(PlacedConductor at) {
         double length = at.lengthM();
         return fieldScaleT * length * length / pace.timeScaleS();
-    }
-
-    private static Terminal terminal(double emf, double threshold) {
-        return emf > threshold ? Terminal.LAST : emf < -threshold ? Terminal.FIRST : Terminal.NONE;
     }
 
     private static List<Vec2> vertices(PlacedConductor at) {

@@ -21,20 +21,39 @@ public final class SourceFields {
      * and coils by {@link PhysicalSources}.
      */
     public static PlaneField place(Source source, Pose pose, double tS) {
-        if (source instanceof Source.FieldPatch patch) {
-            List<Vec2> outline = patch.outline();
-            double[] xs = new double[outline.size()];
-            double[] ys = new double[outline.size()];
-            for (int i = 0; i < xs.length; i++) {
-                Vec2 p = pose.place(outline.get(i));
-                xs[i] = p.x();
-                ys[i] = p.y();
+        return source.match(new Source.Cases<>() {
+            @Override
+            public PlaneField patch(Source.FieldPatch patch) {
+                List<Vec2> outline = patch.outline();
+                double[] xs = new double[outline.size()];
+                double[] ys = new double[outline.size()];
+                for (int i = 0; i < xs.length; i++) {
+                    Vec2 p = pose.place(outline.get(i));
+                    xs[i] = p.x();
+                    ys[i] = p.y();
+                }
+                return new PatchField(xs, ys, patch.bzT());
             }
-            return new PatchField(xs, ys, patch.bzT());
-        }
-        if (source instanceof Source.UniformField uniform) {
-            return new UniformField(uniform.bzT());
-        }
-        return PhysicalSources.place(source, pose, tS);
+
+            @Override
+            public PlaneField uniform(Source.UniformField uniform) {
+                return new UniformField(uniform.bzT());
+            }
+
+            @Override
+            public PlaneField block(Source.BlockMagnet block) {
+                return PhysicalSources.block(block, pose);
+            }
+
+            @Override
+            public PlaneField cylinder(Source.CylinderMagnet cylinder) {
+                return PhysicalSources.cylinder(cylinder, pose);
+            }
+
+            @Override
+            public PlaneField coil(Source.SourceCoil coil) {
+                return PhysicalSources.coil(coil, pose, tS);
+            }
+        });
     }
 }

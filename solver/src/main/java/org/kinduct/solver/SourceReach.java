@@ -19,32 +19,56 @@ import org.kinduct.solver.field.PhysicalConstants;
 record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT) {
 
     static SourceReach of(Source source) {
-        if (source instanceof Source.FieldPatch patch) {
-            return ofOutline(patch.outline(), Double.POSITIVE_INFINITY, Math.abs(patch.bzT()));
-        }
-        if (source instanceof Source.UniformField uniform) {
-            return new SourceReach(Vec2.ZERO, 0, Double.POSITIVE_INFINITY, Math.abs(uniform.bzT()));
-        }
-        if (source instanceof Source.BlockMagnet block) {
-            return new SourceReach(block.center(), 0.5 * Math.hypot(block.sizeXM(), block.sizeYM()),
-                    Math.min(Math.min(block.sizeXM(), block.sizeYM()), block.heightM()) + block.standoffM(),
-                    block.remanenceT());
-        }
-        if (source instanceof Source.CylinderMagnet cylinder) {
-            return new SourceReach(cylinder.center(), cylinder.radiusM(),
-                    Math.min(2 * cylinder.radiusM(), cylinder.heightM()) + cylinder.standoffM(),
-                    cylinder.remanenceT());
-        }
-        Source.SourceCoil coil = (Source.SourceCoil) source;
+        return source.match(new Source.Cases<>() {
+            @Override
+            public SourceReach patch(Source.FieldPatch patch) {
+                return ofOutline(patch.outline(), Double.POSITIVE_INFINITY, Math.abs(patch.bzT()));
+            }
+
+            @Override
+            public SourceReach uniform(Source.UniformField uniform) {
+                return new SourceReach(Vec2.ZERO, 0, Double.POSITIVE_INFINITY, Math.abs(uniform.bzT()));
+            }
+
+            @Override
+            public SourceReach block(Source.BlockMagnet block) {
+                return new SourceReach(block.center(), 0.5 * Math.hypot(block.sizeXM(), block.sizeYM()),
+                        Math.min(Math.min(block.sizeXM(), block.sizeYM()), block.heightM()) + block.standoffM(),
+                        block.remanenceT());
+            }
+
+            @Override
+            public SourceReach cylinder(Source.CylinderMagnet cylinder) {
+                return new SourceReach(cylinder.center(), cylinder.radiusM(),
+                        Math.min(2 * cylinder.radiusM(), cylinder.heightM()) + cylinder.standoffM(),
+                        cylinder.remanenceT());
+            }
+
+            @Override
+            public SourceReach coil(Source.SourceCoil coil) {
+                return ofCoil(coil);
+            }
+        });
+    }
+
+    private static SourceReach ofCoil(Source.SourceCoil coil) {
         double plane = Math.abs(coil.planeZM());
         double amps = coil.turns() * (Math.abs(coil.drive().dcA()) + Math.abs(coil.drive().amplitudeA()));
-        if (coil.shape() instanceof Source.CoilShape.Circle circle) {
-            double length = Math.min(circle.radiusM(), plane);
-            return new SourceReach(circle.center(), circle.radiusM(), length, PhysicalConstants.MU_0 * amps / (2 * Math.PI * length));
-        }
-        SourceReach outline = ofOutline(((Source.CoilShape.Polygon) coil.shape()).vertices(), plane, 0);
-        return new SourceReach(outline.anchor(), outline.extentM(), outline.lengthM(),
-                PhysicalConstants.MU_0 * amps / (2 * Math.PI * outline.lengthM()));
+        return coil.shape().match(new Source.CoilShape.Cases<>() {
+            @Override
+            public SourceReach polygon(Source.CoilShape.Polygon polygon) {
+                SourceReach outline = ofOutline(polygon.vertices(), plane, 0);
+                return new SourceReach(outline.anchor(), outline.extentM(), outline.lengthM(),
+                        PhysicalConstants.MU_0 * amps / (2 * Math.PI * outline.lengthM()));
+            }
+
+            @Override
+            public SourceReach circle(Source.CoilShape.Circle circle) {
+                double length = Math.min(circle.radiusM(), plane);
+                return new SourceReach(circle.center(), circle.radiusM(), length,
+                        PhysicalConstants.MU_0 * amps / (2 * Math.PI * length));
+            }
+        });
     }
 
     private static SourceReach ofOutline(List<Vec2> outline, double lengthCapM, double fieldT) {

@@ -7,5 +7,10 @@ public enum Terminal {
     /** The last vertex is the + end (EMF &gt; 0 along the vertex order). */
     LAST,
     /** |EMF| is below the reporting threshold. */
-    NONE
+    NONE;
+
+    /** The + end for an EMF along the vertex order; NONE when |EMF| ≤ {@code noiseV}. */
+    public static Terminal of(double emfV, double noiseV) {
+        return emfV > noiseV ? LAST : emfV < -noiseV ? FIRST : NONE;
+    }
 }

@@ -36,8 +36,9 @@ final class SceneWriter {
         try (JsonGenerator g = FACTORY.createGenerator(out)) {
             g.setPrettyPrinter(layout);
             new SceneWriter(g, layout).scene(scene);
-        } catch (IOException e) {
-            throw new UncheckedIOException("writing JSON to memory failed", e);
+        } catch (IOException | UncheckedIOException e) {
+            throw new UncheckedIOException("writing JSON to memory failed",
+                    e instanceof UncheckedIOException u ? u.getCause() : (IOException) e);
         }
         return out.append('\n').toString();
     }
@@ -86,41 +87,74 @@ final class SceneWriter {
 
     private void motion(Motion m) throws IOException {
         g.writeStartObject();
-        if (m instanceof Motion.Still) {
-            kind("still");
-        } else if (m instanceof Motion.Glide glide) {
-            kind("glide");
-            point("velocity", glide.velocity());
-        } else if (m instanceof Motion.Accelerate a) {
-            kind("accelerate");
-            point("initialVelocity", a.initialVelocity());
-            point("acceleration", a.acceleration());
-        } else if (m instanceof Motion.Oscillate o) {
-            kind("oscillate");
-            g.writeNumberField("amplitude", o.amplitudeM());
-            g.writeNumberField("frequency", o.frequencyHz());
-            g.writeNumberField("direction", o.directionRad());
-            g.writeNumberField("phase", o.phaseRad());
-        } else if (m instanceof Motion.Spin spin) {
-            kind("spin");
-            g.writeNumberField("omega", spin.omegaRadPerS());
-            g.writeNumberField("startAngle", spin.startAngleRad());
-        } else if (m instanceof Motion.Path path) {
-            kind("path");
-            g.writeStringField("blend", Vocabulary.BLEND.name(path.blend()));
-            g.writeArrayFieldStart("keys");
-            for (Motion.Path.Key k : path.keys()) {
-                g.writeStartObject();
-                g.writeNumberField("t", k.tS());
-                point("offset", k.offset());
-                g.writeNumberField("angle", k.angleRad());
-                g.writeEndObject();
+        m.match(new Motion.Cases<Void>() {
+            @Override
+            public Void still(Motion.Still still) {
+                return io(() -> kind("still"));
             }
-            g.writeEndArray();
-        } else if (m instanceof Motion.Free free) {
-            kind("free");
-            free(free);
-        }
+
+            @Override
+            public Void glide(Motion.Glide glide) {
+                return io(() -> {
+                    kind("glide");
+                    point("velocity", glide.velocity());
+                });
+            }
+
+            @Override
+            public Void accelerate(Motion.Accelerate a) {
+                return io(() -> {
+                    kind("accelerate");
+                    point("initialVelocity", a.initialVelocity());
+                    point("acceleration", a.acceleration());
+                });
+            }
+
+            @Override
+            public Void oscillate(Motion.Oscillate o) {
+                return io(() -> {
+                    kind("oscillate");
+                    g.writeNumberField("amplitude", o.amplitudeM());
+                    g.writeNumberField("frequency", o.frequencyHz());
+                    g.writeNumberField("direction", o.directionRad());
+                    g.writeNumberField("phase", o.phaseRad());
+                });
+            }
+
+            @Override
+            public Void spin(Motion.Spin spin) {
+                return io(() -> {
+                    kind("spin");
+                    g.writeNumberField("omega", spin.omegaRadPerS());
+                    g.writeNumberField("startAngle", spin.startAngleRad());
+                });
+            }
+
+            @Override
+            public Void path(Motion.Path path) {
+                return io(() -> {
+                    kind("path");
+                    g.writeStringField("blend", Vocabulary.BLEND.name(path.blend()));
+                    g.writeArrayFieldStart("keys");
+                    for (Motion.Path.Key k : path.keys()) {
+                        g.writeStartObject();
+                        g.writeNumberField("t", k.tS());
+                        point("offset", k.offset());
+                        g.writeNumberField("angle", k.angleRad());
+                        g.writeEndObject();
+                    }
+                    g.writeEndArray();
+                });
+            }
+
+            @Override
+            public Void free(Motion.Free free) {
+                return io(() -> {
+                    kind("free");
+                    SceneWriter.this.free(free);
+                });
+            }
+        });
         g.writeEndObject();
     }
 
@@ -150,44 +184,69 @@ final class SceneWriter {
 
     private void source(Source s) throws IOException {
         g.writeStartObject();
-        if (s instanceof Source.FieldPatch p) {
-            kind("field-patch");
-            idAndBody(p.id(), p.body());
-            points("outline", p.outline());
-            g.writeNumberField("bz", p.bzT());
-        } else if (s instanceof Source.UniformField u) {
-            kind("uniform-field");
-            g.writeStringField("id", u.id());
-            g.writeNumberField("bz", u.bzT());
-        } else if (s instanceof Source.BlockMagnet m) {
-            kind("block-magnet");
-            idAndBody(m.id(), m.body());
-            point("center", m.center());
-            g.writeFieldName("size");
-            layout.inlineNext();
-            g.writeArray(new double[] {m.sizeXM(), m.sizeYM(), m.heightM()}, 0, 3);
-            g.writeNumberField("angle", m.angleRad());
-            magnetPlacement(m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
-        } else if (s instanceof Source.CylinderMagnet m) {
-            kind("cylinder-magnet");
-            idAndBody(m.id(), m.body());
-            point("center", m.center());
-            g.writeNumberField("radius", m.radiusM());
-            g.writeNumberField("height", m.heightM());
-            magnetPlacement(m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
-        } else if (s instanceof Source.SourceCoil c) {
-            kind("source-coil");
-            idAndBody(c.id(), c.body());
-            coilShape(c.shape());
-            g.writeNumberField("turns", c.turns());
-            g.writeNumberField("z", c.planeZM());
-            g.writeObjectFieldStart("current");
-            g.writeNumberField("dc", c.drive().dcA());
-            g.writeNumberField("amplitude", c.drive().amplitudeA());
-            g.writeNumberField("frequency", c.drive().frequencyHz());
-            g.writeNumberField("phase", c.drive().phaseRad());
-            g.writeEndObject();
-        }
+        s.match(new Source.Cases<Void>() {
+            @Override
+            public Void patch(Source.FieldPatch p) {
+                return io(() -> {
+                    kind("field-patch");
+                    idAndBody(p.id(), p.body());
+                    points("outline", p.outline());
+                    g.writeNumberField("bz", p.bzT());
+                });
+            }
+
+            @Override
+            public Void uniform(Source.UniformField u) {
+                return io(() -> {
+                    kind("uniform-field");
+                    g.writeStringField("id", u.id());
+                    g.writeNumberField("bz", u.bzT());
+                });
+            }
+
+            @Override
+            public Void block(Source.BlockMagnet m) {
+                return io(() -> {
+                    kind("block-magnet");
+                    idAndBody(m.id(), m.body());
+                    point("center", m.center());
+                    g.writeFieldName("size");
+                    layout.inlineNext();
+                    g.writeArray(new double[] {m.sizeXM(), m.sizeYM(), m.heightM()}, 0, 3);
+                    g.writeNumberField("angle", m.angleRad());
+                    magnetPlacement(m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
+                });
+            }
+
+            @Override
+            public Void cylinder(Source.CylinderMagnet m) {
+                return io(() -> {
+                    kind("cylinder-magnet");
+                    idAndBody(m.id(), m.body());
+                    point("center", m.center());
+                    g.writeNumberField("radius", m.radiusM());
+                    g.writeNumberField("height", m.heightM());
+                    magnetPlacement(m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
+                });
+            }
+
+            @Override
+            public Void coil(Source.SourceCoil c) {
+                return io(() -> {
+                    kind("source-coil");
+                    idAndBody(c.id(), c.body());
+                    coilShape(c.shape());
+                    g.writeNumberField("turns", c.turns());
+                    g.writeNumberField("z", c.planeZM());
+                    g.writeObjectFieldStart("current");
+                    g.writeNumberField("dc", c.drive().dcA());
+                    g.writeNumberField("amplitude", c.drive().amplitudeA());
+                    g.writeNumberField("frequency", c.drive().frequencyHz());
+                    g.writeNumberField("phase", c.drive().phaseRad());
+                    g.writeEndObject();
+                });
+            }
+        });
         g.writeEndObject();
     }
 
@@ -199,20 +258,38 @@ final class SceneWriter {
         g.writeStringField("north", Vocabulary.NORTH.name(north));
     }
 
-    private void coilShape(Source.CoilShape shape) throws IOException {
-        if (shape instanceof Source.CoilShape.Polygon p) {
-            points("polygon", p.vertices());
-        } else if (shape instanceof Source.CoilShape.Circle c) {
-            g.writeObjectFieldStart("circle");
-            point("center", c.center());
-            g.writeNumberField("radius", c.radiusM());
-            g.writeEndObject();
-        }
+    private void coilShape(Source.CoilShape shape) {
+        shape.match(new Source.CoilShape.Cases<Void>() {
+            @Override
+            public Void polygon(Source.CoilShape.Polygon p) {
+                return io(() -> points("polygon", p.vertices()));
+            }
+
+            @Override
+            public Void circle(Source.CoilShape.Circle c) {
+                return io(() -> {
+                    g.writeObjectFieldStart("circle");
+                    point("center", c.center());
+                    g.writeNumberField("radius", c.radiusM());
+                    g.writeEndObject();
+                });
+            }
+        });
     }
 
     private void conductor(Conductor c) throws IOException {
         g.writeStartObject();
-        kind(c instanceof Conductor.Loop ? "loop" : "wire");
+        kind(c.match(new Conductor.Cases<>() {
+            @Override
+            public String wire(Conductor.Wire wire) {
+                return "wire";
+            }
+
+            @Override
+            public String loop(Conductor.Loop loop) {
+                return "loop";
+            }
+        }));
         idAndBody(c.id(), c.body());
         g.writeArrayFieldStart("vertices");
         for (Conductor.Vertex v : c.vertices()) {
@@ -227,17 +304,27 @@ final class SceneWriter {
             }
         }
         g.writeEndArray();
-        if (c instanceof Conductor.Loop loop) {
-            g.writeNumberField("turns", loop.turns());
-            wire(loop.wire());
-            g.writeBooleanField("open", loop.open());
-            g.writeNumberField("load", loop.loadOhm());
-            g.writeNumberField("temperature", loop.temperatureC());
-        }
+        c.match(new Conductor.Cases<Void>() {
+            @Override
+            public Void wire(Conductor.Wire wire) {
+                return null;
+            }
+
+            @Override
+            public Void loop(Conductor.Loop loop) {
+                return io(() -> {
+                    g.writeNumberField("turns", loop.turns());
+                    wireSpec(loop.wire());
+                    g.writeBooleanField("open", loop.open());
+                    g.writeNumberField("load", loop.loadOhm());
+                    g.writeNumberField("temperature", loop.temperatureC());
+                });
+            }
+        });
         g.writeEndObject();
     }
 
-    private void wire(WireSpec w) throws IOException {
+    private void wireSpec(WireSpec w) throws IOException {
         g.writeObjectFieldStart("wire");
         g.writeStringField("material", Vocabulary.MATERIAL.name(w.material()));
         if (w.awg() != null) {
@@ -246,6 +333,21 @@ final class SceneWriter {
             g.writeNumberField("diameter", w.diameterM());
         }
         g.writeEndObject();
+    }
+
+    /** A step of writing; the cases of the sealed families cannot throw checked exceptions. */
+    private interface Writing {
+        void run() throws IOException;
+    }
+
+    /** Runs {@code w}, carrying an {@link IOException} out as unchecked (caught in {@link #write}). */
+    private static Void io(Writing w) {
+        try {
+            w.run();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return null;
     }
 
     private void kind(String kind) throws IOException {

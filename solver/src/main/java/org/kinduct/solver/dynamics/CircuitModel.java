@@ -1,5 +1,8 @@
 package org.kinduct.solver.dynamics;
 
+import org.kinduct.scene.Scene;
+import org.kinduct.solver.circuit.InductanceAtStart;
+
 /**
  * How {@link CoupledSimulation} treats the currents of closed loops.
  *
@@ -12,8 +15,8 @@ package org.kinduct.solver.dynamics;
  *       Electrodynamics</i>, 4th ed., 2013, §7.2.2). The bodies still feel the braking force of
  *       these currents; stored magnetic energy and loop–loop forces, both of order L·I², are
  *       left out. Its error is of order L/R against the motion's time scale.</li>
- *   <li>{@link #AUTO}: {@link #INDUCTIVE} when the largest L/R of the closed loops (as drawn, at
- *       the start) exceeds 1/{@value #AUTO_STEP_FRACTION_DENOMINATOR} of the sampling step dt,
+ *   <li>{@link #AUTO}: {@link #INDUCTIVE} when the largest L/R of the closed loops (where they
+ *       are at the start) exceeds 1/{@value #AUTO_STEP_FRACTION_DENOMINATOR} of the sampling step dt,
  *       else {@link #QUASI_STATIC}. The sampling step stands for the time scale the user wants
  *       resolved: below that bound the current settles to EMF/R within a tenth of a step, and the
  *       quasi-static current differs from the inductive one by about L/R·dI/dt, under a tenth of
@@ -32,8 +35,19 @@ public enum CircuitModel {
     /** AUTO picks INDUCTIVE when max L/R &gt; dt / this. */
     public static final int AUTO_STEP_FRACTION_DENOMINATOR = 10;
 
+    /**
+     * The model to run {@code scene} with, sampled every {@code dtS} from {@code t0S}: this one,
+     * or for AUTO the choice by the largest L/R of its closed loops where they are at t0
+     * ({@link InductanceAtStart}). The one place the choice is made, for every run.
+     *
+     * @throws IllegalArgumentException for AUTO when a closed loop's inductance cannot be computed
+     */
+    public CircuitModel resolveFor(Scene scene, double t0S, double dtS) {
+        return this == AUTO ? resolve(InductanceAtStart.of(scene, t0S).largestTimeConstantS(), dtS) : this;
+    }
+
     /** The model to run: this one, or for AUTO the choice by the largest time constant. */
-    CircuitModel resolve(double largestTimeConstantS, double dtS) {
+    public CircuitModel resolve(double largestTimeConstantS, double dtS) {
         if (this != AUTO) {
             return this;
         }

@@ -16,6 +16,7 @@ import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.EdgeSums;
 import org.kinduct.solver.Kinematics;
+import org.kinduct.solver.LoopResistance;
 import org.kinduct.solver.SourceFields;
 import org.kinduct.solver.circuit.LoopInductance;
 import org.kinduct.solver.field.PlaneField;
@@ -70,9 +71,12 @@ final class CoupledModel {
 
     /**
      * @param timeStepS time step of the difference quotients of prescribed motion, seconds
-     * @param requested the circuit model; AUTO is resolved against {@code samplingStepS}
+     * @param circuitModel INDUCTIVE or QUASI_STATIC ({@link CircuitModel#resolveFor} resolves AUTO)
      */
-    CoupledModel(Scene scene, double timeStepS, CircuitModel requested, double samplingStepS) {
+    CoupledModel(Scene scene, double timeStepS, CircuitModel circuitModel) {
+        if (circuitModel == CircuitModel.AUTO) {
+            throw new IllegalArgumentException("the coupled model needs a resolved circuit model, not AUTO");
+        }
         this.scene = scene;
         this.timeStepS = timeStepS;
         bodies = scene.bodies();
@@ -93,8 +97,7 @@ final class CoupledModel {
         for (int s = 0; s < sources.size(); s++) {
             sourceBody[s] = bodyIndex.get(sources.get(s).body());
             varying |= !(bodies.get(sourceBody[s]).motion() instanceof Motion.Still);
-            if (sources.get(s) instanceof Source.SourceCoil coil && coil.drive().amplitudeA() != 0
-                    && coil.drive().frequencyHz() > 0) {
+            if (sources.get(s).alternates() && sources.get(s) instanceof Source.SourceCoil coil) {
                 unitCoils[s] = new Source.SourceCoil(coil.id(), coil.body(), coil.shape(), coil.turns(),
                         coil.planeZM(), Source.Drive.dc(1));
                 varying = true;
@@ -134,20 +137,9 @@ final class CoupledModel {
             }
         }
         anyVariableM = variable;
-        circuitModel = requested.resolve(largestTimeConstantS(drawnPoses), samplingStepS);
+        this.circuitModel = circuitModel;
         loopOffset = slot;
         auditOffset = slot + (inductive() ? n : 0);
-    }
-
-    /** The largest L_kk/R_k of the closed loops at these poses, seconds; 0 without loops. */
-    private double largestTimeConstantS(Pose[] poses) {
-        double largest = 0;
-        for (int k = 0; k < loops.size(); k++) {
-            double[][] xy = place(k, poses);
-            double l = Double.isNaN(constantM[k][k]) ? entry(k, k, poses) : constantM[k][k];
-            largest = Math.max(largest, l / resistance(loops.get(k).loop(), xy[0], xy[1]));
-        }
-        return largest;
     }
 
     /** The circuit model this run uses (never AUTO). */
@@ -712,19 +704,14 @@ final class CoupledModel {
         }
     }
 
-    /** R = N·perimeter·ρ(T)/A + R_load, as for the quasi-static solver. */
+    /** The loop's series resistance where it is now ({@link LoopResistance}). */
     private static double resistance(Conductor.Loop loop, double[] xs, double[] ys) {
         double perimeter = 0;
         for (int i = 0; i < xs.length; i++) {
             int j = (i + 1) % xs.length;
             perimeter += Math.hypot(xs[j] - xs[i], ys[j] - ys[i]);
         }
-        double r = loop.turns() * perimeter * loop.wire().material().resistivityAt(loop.temperatureC())
-                / loop.wire().crossSectionM2() + loop.loadOhm();
-        if (!(r > 0)) {
-            throw new IllegalArgumentException("loop '" + loop.id() + "' has no positive resistance (" + r + " Ω)");
-        }
-        return r;
+        return LoopResistance.ohms(loop, perimeter);
     }
 
     /** I = M⁻¹(Ψ − λ_ext); M is symmetric positive definite for any physical geometry. */

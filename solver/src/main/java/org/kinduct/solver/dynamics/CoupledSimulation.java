@@ -10,15 +10,10 @@ import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.hipparchus.ode.sampling.ODEStepHandler;
-import org.hipparchus.ode.sampling.StepNormalizer;
-import org.hipparchus.ode.sampling.StepNormalizerBounds;
-import org.hipparchus.ode.sampling.StepNormalizerMode;
 import org.kinduct.scene.Checks;
-import org.kinduct.scene.Polygons;
+import org.kinduct.scene.Motion;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
-import org.kinduct.scene.Vec2;
-import org.kinduct.solver.Circulation;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
@@ -26,13 +21,14 @@ import org.kinduct.solver.Snapshot;
 /**
  * Coupled simulation of the loop circuits and the free bodies of a scene over [t0, t1].
  *
- * <p><b>Use.</b> {@code Trajectory run = CoupledSimulation.run(scene, t0, t1, dt);} gives
- * {@link Trajectory#samples()} at t0 + i·dt, each a {@link Sample} with every body's
- * {@link org.kinduct.scene.Pose} (free bodies as integrated), every conductor's
- * {@link ConductorState} (flux, EMF by both methods and resistance as the quasi-static solver
- * reports them along the integrated motion; current, sense and force of closed loops from the
- * coupled circuit equations) and the self-inductance of every closed loop; and
- * {@link Trajectory#audit()}, the {@link EnergyAudit} of the whole run. Bad input (a loop whose
+ * <p><b>Use.</b> {@code CoupledRun run = CoupledSimulation.run(scene, t0, t1, dt);} gives
+ * {@link CoupledRun#samples()} at t0 + k·dt (k = 0, 1, … computed from the integer k, never by
+ * adding dt up), each a {@link Snapshot} with every free body's {@link org.kinduct.scene.Pose} as
+ * integrated and every conductor's {@link ConductorState} (flux, EMF by both methods and
+ * resistance as the quasi-static solver reports them along the integrated motion; current, sense
+ * and force of closed loops from the coupled circuit equations; the self-inductance of every
+ * closed loop); samples at further instants on request; and {@link CoupledRun#audit()}, the
+ * {@link EnergyAudit} of the whole run. Bad input (a loop whose
  * wires overlap, sides shorter than four wire radii) throws {@link IllegalArgumentException}.
  * A {@link RunMonitor} passed to {@link #simulate(Scene, double, double, double, RunMonitor)}
  * follows a long run's progress and can stop it ({@link SimulationCancelledException}).
@@ -92,14 +88,12 @@ public final class CoupledSimulation {
     private static final double CURRENT_SCALE_A = 1e-3;
     /** Time step for the difference quotients of prescribed motion, as a fraction of the sampling step. */
     private static final double DIFFERENCE_STEP_FRACTION = 1e-4;
-    /** Times within this fraction of a step of a grid point count as on it (rounding of t0 + i·dt). */
-    private static final double GRID_SLACK = 1e-9;
 
     private final double relTol;
     private final CircuitModel circuitModel;
 
     /** Simulates {@code scene} at the default tolerance with the AUTO circuit model; see {@link #simulate}. */
-    public static Trajectory run(Scene scene, double t0S, double t1S, double dtS) {
+    public static CoupledRun run(Scene scene, double t0S, double t1S, double dtS) {
         return new CoupledSimulation(DEFAULT_RELATIVE_TOLERANCE).simulate(scene, t0S, t1S, dtS);
     }
 
@@ -121,17 +115,20 @@ public final class CoupledSimulation {
      * Simulates {@code scene} from t0 to t1, sampling at t0 + i·dt up to t1 (t1 itself when it is
      * on that grid); the energy audit covers the whole of [t0, t1].
      */
-    public Trajectory simulate(Scene scene, double t0S, double t1S, double dtS) {
-        return simulate(scene, t0S, t1S, dtS, RunMonitor.NONE);
+    public CoupledRun simulate(Scene scene, double t0S, double t1S, double dtS) {
+        return simulate(scene, t0S, t1S, dtS, List.of(), RunMonitor.NONE);
     }
 
     /**
-     * As {@link #simulate(Scene, double, double, double)}, reporting its progress to {@code monitor}
-     * and stopping when it asks: the run then throws {@link SimulationCancelledException} before
-     * the next evaluation of the equations, so at most one integrator step is begun after the
-     * request. The monitor changes no number of the result.
+     * As {@link #simulate(Scene, double, double, double)}, with samples also at {@code extraS}
+     * (instants within [t0, t1] that need not lie on the grid; they change no other number), and
+     * reporting its progress to {@code monitor} and stopping when it asks: the run then throws
+     * {@link SimulationCancelledException} before the next evaluation of the equations, so at
+     * most one integrator step is begun after the request. The monitor changes no number of the
+     * result.
      */
-    public Trajectory simulate(Scene scene, double t0S, double t1S, double dtS, RunMonitor monitor) {
+    public CoupledRun simulate(Scene scene, double t0S, double t1S, double dtS, List<Double> extraS,
+                               RunMonitor monitor) {
         Checks.nonNull(scene, "scene");
         Checks.finite(t0S, "t0");
         Checks.positive(dtS, "dt");
@@ -139,9 +136,11 @@ public final class CoupledSimulation {
         if (!(t1S > t0S)) {
             throw new IllegalArgumentException("t1 must be after t0, got t0 = " + t0S + " s, t1 = " + t1S + " s");
         }
-        stopIfCancelled(monitor, t0S, t0S, t1S);
+        SampleTimes times = SampleTimes.of(t0S, t1S, dtS, extraS);
+        double endS = Math.max(t1S, times.last());
+        stopIfCancelled(monitor, t0S, t0S, endS);
         double hS = DIFFERENCE_STEP_FRACTION * dtS;
-        CoupledModel model = new CoupledModel(scene, hS, circuitModel, dtS);
+        CoupledModel model = new CoupledModel(scene, hS, circuitModel.resolveFor(scene, t0S, dtS));
         double[] y0 = model.initialState(t0S);
         OrdinaryDifferentialEquation equations = new OrdinaryDifferentialEquation() {
             @Override
@@ -151,28 +150,34 @@ public final class CoupledSimulation {
 
             @Override
             public double[] computeDerivatives(double t, double[] y) {
-                stopIfCancelled(monitor, t, t0S, t1S);
+                stopIfCancelled(monitor, t, t0S, endS);
                 return model.evaluate(t, y).derivative;
             }
         };
-        DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-12 * (t1S - t0S), dtS,
-                absoluteTolerances(model, y0, t0S, t1S), relativeTolerances(model));
-        List<Sample> samples = new ArrayList<>();
-        // Samples are made as the grid points are passed, so the progress counts their cost too.
-        // BOTH adds t1 itself; it is kept only when it is on the grid and not a rounding twin of the last grid point.
-        integrator.addStepHandler(new StepNormalizer(dtS, (ODEStateAndDerivative s, boolean isLast) -> {
-            double t = s.getTime();
-            double offGrid = Math.abs((t - t0S) / dtS - Math.rint((t - t0S) / dtS));
-            boolean twin = !samples.isEmpty() && t - samples.get(samples.size() - 1).tS() < GRID_SLACK * dtS;
-            if (offGrid < GRID_SLACK && !twin) {
-                samples.add(sample(model, t, s.getPrimaryState()));
+        DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-12 * (endS - t0S), dtS,
+                absoluteTolerances(model, y0, t0S, endS), relativeTolerances(model));
+        List<Snapshot> samples = new ArrayList<>(times.gridCount());
+        List<Snapshot> extras = new ArrayList<>();
+        // Samples are made as the integrator passes their times, so the progress counts their cost too.
+        integrator.addStepHandler(new ODEStepHandler() {
+            private int next;
+
+            @Override
+            public void handleStep(ODEStateInterpolator step) {
+                // The integrator ends exactly at the last sample time, so every one is reached.
+                double end = step.getCurrentState().getTime();
+                for (; next < times.count() && times.time(next) <= end; next++) {
+                    double t = times.time(next);
+                    Snapshot sample = sample(model, t, step.getInterpolatedState(t).getPrimaryState());
+                    (times.onGrid(next) ? samples : extras).add(sample);
+                }
             }
-        }, StepNormalizerMode.INCREMENT, StepNormalizerBounds.BOTH));
-        // Added after the normalizer, so a step's samples are made before its progress is reported.
+        });
+        // Added after the sampler, so a step's samples are made before its progress is reported.
         integrator.addStepHandler(new ODEStepHandler() {
             @Override
             public void handleStep(ODEStateInterpolator step) {
-                double fraction = (step.getCurrentState().getTime() - t0S) / (t1S - t0S);
+                double fraction = (step.getCurrentState().getTime() - t0S) / (endS - t0S);
                 monitor.progress(Math.min(fraction, 1));
             }
 
@@ -181,8 +186,8 @@ public final class CoupledSimulation {
                 monitor.progress(1);
             }
         });
-        ODEStateAndDerivative last = integrator.integrate(equations, new ODEState(t0S, y0), t1S);
-        return new Trajectory(samples, audit(model, t0S, y0, last.getTime(), last.getPrimaryState()),
+        ODEStateAndDerivative last = integrator.integrate(equations, new ODEState(t0S, y0), endS);
+        return new CoupledRun(samples, extras, audit(model, t0S, y0, last.getTime(), last.getPrimaryState()),
                 model.circuitModel());
     }
 
@@ -203,39 +208,33 @@ public final class CoupledSimulation {
     }
 
     /**
-     * The sample at t: poses from the state, conductor states from the quasi-static solver run on
-     * the integrated motion (EMF by both methods, flux, resistance, wires and open loops as
-     * there), with each closed loop's current, sense and force replaced by the coupled ones.
+     * The sample at t: free bodies' poses from the state, conductor states from the quasi-static
+     * solver run on the integrated motion (EMF by both methods, flux, resistance, wires and open
+     * loops as there), with each closed loop's current and force replaced by the coupled ones
+     * (its sense by the one rule, {@link ConductorState#withCurrent}), and every closed loop's
+     * self-inductance where it is now.
      */
-    private static Sample sample(CoupledModel model, double tS, double[] y) {
+    private static Snapshot sample(CoupledModel model, double tS, double[] y) {
         CoupledModel.Evaluation now = model.evaluate(tS, y);
-        Map<String, Pose> poses = new HashMap<>();
+        Map<String, Pose> free = new HashMap<>();
         for (int b = 0; b < model.bodies().size(); b++) {
-            poses.put(model.bodies().get(b).id(), now.poses[b]);
+            if (model.bodies().get(b).motion() instanceof Motion.Free) {
+                free.put(model.bodies().get(b).id(), now.poses[b]);
+            }
         }
         Map<String, Integer> loopIndex = new HashMap<>();
-        Map<String, Double> selfL = new HashMap<>();
-        double[][] inductance = model.inductance(now.poses);
         for (int k = 0; k < model.loops().size(); k++) {
-            String id = model.loops().get(k).loop().id();
-            loopIndex.put(id, k);
-            selfL.put(id, inductance[k][k]);
+            loopIndex.put(model.loops().get(k).loop().id(), k);
         }
+        double[][] inductance = model.inductance(now.poses);
         Snapshot quasiStatic = new SceneSolver(model.scene(), model.kinematicsAround(tS, y)).at(tS);
         List<ConductorState> states = new ArrayList<>();
         for (ConductorState c : quasiStatic.conductors()) {
             Integer k = loopIndex.get(c.id());
-            states.add(k == null ? c : coupled(c, now.current[k], now.loopForce[k]));
+            states.add(k == null ? c
+                    : c.withInductance(inductance[k][k]).withCurrent(now.current[k], now.loopForce[k]));
         }
-        return new Sample(tS, poses, states, selfL);
-    }
-
-    private static ConductorState coupled(ConductorState c, double currentA, Vec2 forceN) {
-        double sense = Math.signum(currentA) * Math.signum(Polygons.signedArea(c.vertices()));
-        Circulation direction = sense > 0 ? Circulation.CCW : sense < 0 ? Circulation.CW : Circulation.NONE;
-        return new ConductorState(c.id(), c.kind(), c.vertices(), c.fluxWb(), c.linkageWb(), c.emfFluxV(),
-                c.emfMotionalV(), c.emfV(), c.disagreement(), c.positiveEnd(), currentA, direction, forceN,
-                c.resistanceOhm(), c.inducedFieldIncluded());
+        return new Snapshot(tS, states, free);
     }
 
     private double[] relativeTolerances(CoupledModel model) {

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.kinduct.solver.Snapshot;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Material;
@@ -61,8 +62,8 @@ class CircuitModelTest {
         double peak = turns * B * W * amplitude * omega / r;
 
         double dt = 1 / (40 * f);
-        Trajectory inductive = new CoupledSimulation(1e-10, CircuitModel.INDUCTIVE).simulate(scene, 0, 3 / f, dt);
-        Trajectory quasiStatic = new CoupledSimulation(1e-10, CircuitModel.QUASI_STATIC).simulate(scene, 0, 3 / f, dt);
+        CoupledRun inductive = new CoupledSimulation(1e-10, CircuitModel.INDUCTIVE).simulate(scene, 0, 3 / f, dt);
+        CoupledRun quasiStatic = new CoupledSimulation(1e-10, CircuitModel.QUASI_STATIC).simulate(scene, 0, 3 / f, dt);
 
         assertEquals(CircuitModel.INDUCTIVE, inductive.circuitModel());
         assertEquals(CircuitModel.QUASI_STATIC, quasiStatic.circuitModel());
@@ -72,12 +73,12 @@ class CircuitModelTest {
             // Upward motion (v > 0) shrinks the flux of B_z > 0: Lenz drives a counter-clockwise, positive current.
             double iQs = peak * Math.cos(omega * t);
             double slope = -peak * omega * Math.sin(omega * t);
-            assertEquals(iQs, quasiStatic.samples().get(i).conductor("coil").currentA(), QUASI_STATIC_TOL * peak,
+            assertEquals(iQs, quasiStatic.samples().get(i).conductor("coil").orElseThrow().currentA(), QUASI_STATIC_TOL * peak,
                     "quasi-static, t = " + t);
             if (t < 30 * tau) {
                 continue; // the start-up transient e^{−t/τ}
             }
-            double iInd = inductive.samples().get(i).conductor("coil").currentA();
+            double iInd = inductive.samples().get(i).conductor("coil").orElseThrow().currentA();
             assertEquals(iQs - tau * slope, iInd, SECOND_ORDER_FACTOR * Math.pow(omega * tau, 2) * peak,
                     "inductive, t = " + t);
             largestLag = Math.max(largestLag, Math.abs(iInd - iQs));
@@ -101,9 +102,9 @@ class CircuitModelTest {
         double tauMech = m * r / (k * k);
 
         for (CircuitModel model : List.of(CircuitModel.INDUCTIVE, CircuitModel.QUASI_STATIC)) {
-            Trajectory run = new CoupledSimulation(1e-10, model).simulate(scene, 0, 10 * tauMech, tauMech / 10);
-            Sample last = run.samples().get(run.samples().size() - 1);
-            assertEquals(vTerminal, -last.pose("frame").velocity().y(), TERMINAL_TOL * vTerminal, model.name());
+            CoupledRun run = new CoupledSimulation(1e-10, model).simulate(scene, 0, 10 * tauMech, tauMech / 10);
+            Snapshot last = run.samples().get(run.samples().size() - 1);
+            assertEquals(vTerminal, -last.freeBody("frame").velocity().y(), TERMINAL_TOL * vTerminal, model.name());
         }
     }
 
@@ -137,8 +138,8 @@ class CircuitModelTest {
 
         double bound = CircuitModel.AUTO_STEP_FRACTION_DENOMINATOR * tau; // the step at which τ = dt / denominator
 
-        Trajectory fine = auto.simulate(scene, 0, 2 * bound, bound / 2);
-        Trajectory coarse = auto.simulate(scene, 0, 8 * bound, 2 * bound);
+        CoupledRun fine = auto.simulate(scene, 0, 2 * bound, bound / 2);
+        CoupledRun coarse = auto.simulate(scene, 0, 8 * bound, 2 * bound);
 
         assertEquals(CircuitModel.INDUCTIVE, fine.circuitModel());
         assertEquals(CircuitModel.QUASI_STATIC, coarse.circuitModel());
@@ -150,8 +151,8 @@ class CircuitModelTest {
         Scene scene = fallingLoop(20, 1, 0.01, 9.81);
         CoupledSimulation quasiStatic = new CoupledSimulation(1e-10, CircuitModel.QUASI_STATIC);
 
-        List<Sample> onGrid = quasiStatic.simulate(scene, 0, 0.03, 0.001).samples();
-        List<Sample> offGrid = quasiStatic.simulate(scene, 0, 0.0305, 0.001).samples();
+        List<Snapshot> onGrid = quasiStatic.simulate(scene, 0, 0.03, 0.001).samples();
+        List<Snapshot> offGrid = quasiStatic.simulate(scene, 0, 0.0305, 0.001).samples();
 
         assertEquals(31, onGrid.size());
         assertEquals(0.03, onGrid.get(30).tS(), 1e-15);

@@ -81,8 +81,8 @@ class CoupledRunMonitorTest {
         CoupledSimulation simulation = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE, circuitModel);
         Recorder watching = new Recorder(Double.POSITIVE_INFINITY);
 
-        Trajectory plain = simulation.simulate(fallingLoop(), 0, T1_S, DT_S);
-        Trajectory watched = simulation.simulate(fallingLoop(), 0, T1_S, DT_S, watching);
+        CoupledRun plain = simulation.simulate(fallingLoop(), 0, T1_S, DT_S);
+        CoupledRun watched = simulation.simulate(fallingLoop(), 0, T1_S, DT_S, List.of(), watching);
 
         // Records compare doubles bit for bit (Double.compare), so this is "the same numbers".
         assertEquals(plain, watched);
@@ -93,7 +93,7 @@ class CoupledRunMonitorTest {
     void progressRisesFromNearZeroToExactlyOneWithinTheUnitInterval() {
         Recorder watching = new Recorder(Double.POSITIVE_INFINITY);
 
-        new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE).simulate(fallingLoop(), 0, T1_S, DT_S,
+        new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE).simulate(fallingLoop(), 0, T1_S, DT_S, List.of(),
                 watching);
 
         List<Double> f = watching.fractions;
@@ -111,11 +111,11 @@ class CoupledRunMonitorTest {
     void aRunAskedToStopAtThirtyPercentThrowsBeforeItsNextEvaluation() {
         CoupledSimulation simulation = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE);
         Recorder complete = new Recorder(Double.POSITIVE_INFINITY);
-        simulation.simulate(fallingLoop(), 0, T1_S, DT_S, complete);
+        simulation.simulate(fallingLoop(), 0, T1_S, DT_S, List.of(), complete);
         Recorder stopping = new Recorder(STOP_AT);
 
         SimulationCancelledException e = assertThrows(SimulationCancelledException.class,
-                () -> simulation.simulate(fallingLoop(), 0, T1_S, DT_S, stopping));
+                () -> simulation.simulate(fallingLoop(), 0, T1_S, DT_S, List.of(), stopping));
 
         assertTrue(e.getMessage().startsWith("simulation cancelled at t = "), e.getMessage());
         assertEquals(1, stopping.pollsAfterStop, "evaluations after the request: the poll that stops is the last");
@@ -135,7 +135,7 @@ class CoupledRunMonitorTest {
         CoupledSimulation simulation = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE);
 
         SimulationCancelledException e = assertThrows(SimulationCancelledException.class,
-                () -> simulation.simulate(fallingLoop(), 0, T1_S, DT_S, stopped));
+                () -> simulation.simulate(fallingLoop(), 0, T1_S, DT_S, List.of(), stopped));
 
         assertEquals("simulation cancelled at t = 0.0 s of [0.0, " + T1_S + "] s", e.getMessage());
         assertEquals(1, stopped.polls);

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.kinduct.solver.Snapshot;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Material;
@@ -59,11 +60,11 @@ class CoupledSimulationTest {
         double r = turns * 2 * (w + h) * RHO_COPPER / (Math.PI * WIRE_D * WIRE_D / 4) + load;
         double l = LoopInductance.self(outline, WIRE_D / 2, turns);
         double tau = l / r;
-        Trajectory run = simulation.simulate(scene, 0, 6 * tau, tau / 4);
+        CoupledRun run = simulation.simulate(scene, 0, 6 * tau, tau / 4);
 
-        for (Sample s : run.samples()) {
+        for (Snapshot s : run.samples()) {
             double expected = -turns * B * w * v / r * (1 - Math.exp(-s.tS() / tau));
-            assertEquals(expected, s.conductor("coil").currentA(), CURVE_TOL * turns * B * w * v / r,
+            assertEquals(expected, s.conductor("coil").orElseThrow().currentA(), CURVE_TOL * turns * B * w * v / r,
                     "t = " + s.tS());
         }
     }
@@ -93,7 +94,7 @@ class CoupledSimulationTest {
         double k = turns * B * w;
         double vTerminal = m * g * r / (k * k);
         double tauMech = m * r / (k * k);
-        Trajectory run = simulation.simulate(scene, 0, 5 * tauMech, tauMech / 10);
+        CoupledRun run = simulation.simulate(scene, 0, 5 * tauMech, tauMech / 10);
 
         // x = (v, I): x' = A x + (g, 0), A = [[0, −k/m], [k/L, −R/L]]; x(0) = 0.
         double trace = -r / l;
@@ -102,19 +103,19 @@ class CoupledSimulationTest {
         double l1 = trace / 2 + disc;
         double l2 = trace / 2 - disc;
         double iTerminal = m * g / k;
-        for (Sample s : run.samples()) {
+        for (Snapshot s : run.samples()) {
             double t = s.tS();
             // v(t) = v∞ + c1 e^{λ1 t} + c2 e^{λ2 t}, v(0) = 0, v'(0) = g.
             double c1 = (g + l2 * vTerminal) / (l1 - l2);
             double c2 = -vTerminal - c1;
             double v = vTerminal + c1 * Math.exp(l1 * t) + c2 * Math.exp(l2 * t);
-            double fallSpeed = -s.pose("frame").velocity().y();
+            double fallSpeed = -s.freeBody("frame").velocity().y();
             assertEquals(v, fallSpeed, CURVE_TOL * vTerminal, "t = " + t);
             // Lenz: the current opposes the growing flux, clockwise, so negative.
             double current = -(m * (g - (l1 * c1 * Math.exp(l1 * t) + l2 * c2 * Math.exp(l2 * t))) / k);
-            assertEquals(current, s.conductor("coil").currentA(), STIFF_CURRENT_TOL * iTerminal, "t = " + t);
+            assertEquals(current, s.conductor("coil").orElseThrow().currentA(), STIFF_CURRENT_TOL * iTerminal, "t = " + t);
         }
-        double last = -run.samples().get(run.samples().size() - 1).pose("frame").velocity().y();
+        double last = -run.samples().get(run.samples().size() - 1).freeBody("frame").velocity().y();
         assertEquals(vTerminal, last, 0.01 * vTerminal);
     }
 
@@ -134,13 +135,13 @@ class CoupledSimulationTest {
         assertTrue(tau < 1e-6, "τ = " + tau);
 
         SceneSolver quasiStatic = new SceneSolver(scene);
-        Trajectory run = simulation.simulate(scene, 0, 0.04, 0.002);
-        for (Sample s : run.samples()) {
+        CoupledRun run = simulation.simulate(scene, 0, 0.04, 0.002);
+        for (Snapshot s : run.samples()) {
             if (s.tS() < 50 * tau) {
                 continue;
             }
             double expected = quasiStatic.at(s.tS()).conductor("coil").orElseThrow().currentA();
-            assertEquals(expected, s.conductor("coil").currentA(), STIFF_CURRENT_TOL * Math.abs(expected) + 1e-15,
+            assertEquals(expected, s.conductor("coil").orElseThrow().currentA(), STIFF_CURRENT_TOL * Math.abs(expected) + 1e-15,
                     "t = " + s.tS());
         }
     }
@@ -154,7 +155,7 @@ class CoupledSimulationTest {
                 WireSpec.of(Material.COPPER, WIRE_D), false, 1, 20);
         Motion.Free free = new Motion.Free(0.01, 0, new Vec2(0, -0.5), 0, 0, Vec2.ZERO, Vec2.ZERO, 0, List.of());
         Scene scene = scene(new Body("puck", null, new Vec2(w / 2, h / 2), free), loop);
-        Trajectory run = simulation.simulate(scene, 0, 0.3, 0.01);
+        CoupledRun run = simulation.simulate(scene, 0, 0.3, 0.01);
         EnergyAudit audit = run.audit();
         assertTrue(audit.jouleJ() > 0.5 * 0.5 * 0.01 * 0.25, "little braking: " + audit);
         assertEquals(0, audit.residualJ(), AUDIT_TOL * audit.jouleJ(), audit.toString());
@@ -192,14 +193,14 @@ class CoupledSimulationTest {
         double settle = 16 * m / (c + ce);
         double period = 1 / f0;
         int perPeriod = 64;
-        Trajectory run = simulation.simulate(scene, 0, settle + 4 * period, period / perPeriod);
+        CoupledRun run = simulation.simulate(scene, 0, settle + 4 * period, period / perPeriod);
 
         // RMS over the last four whole periods: exact for a sinusoid sampled uniformly.
-        List<Sample> samples = run.samples();
+        List<Snapshot> samples = run.samples();
         double sumSq = 0;
         int count = 4 * perPeriod;
         for (int i = samples.size() - count; i < samples.size(); i++) {
-            double v = samples.get(i).pose("mass").velocity().y();
+            double v = samples.get(i).freeBody("mass").velocity().y();
             sumSq += v * v;
         }
         double amplitude = Math.sqrt(2 * sumSq / count);

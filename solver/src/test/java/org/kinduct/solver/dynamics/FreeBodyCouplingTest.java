@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.kinduct.solver.Snapshot;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Material;
@@ -45,7 +46,7 @@ class FreeBodyCouplingTest {
         Motion.Free free = new Motion.Free(0.05, 2e-4, Vec2.ZERO, 20, 0, Vec2.ZERO, Vec2.ZERO, 0,
                 List.of(new Motion.Free.Spring(new Vec2(0, 0.03), null, 1000, 0)));
         Scene scene = scene(List.of(new Body("rotor", null, new Vec2(0, 0.03), free)), "fixed", loop);
-        Trajectory run = simulation.simulate(scene, 0, 0.5, 0.01);
+        CoupledRun run = simulation.simulate(scene, 0, 0.5, 0.01);
         EnergyAudit audit = run.audit();
         double spin = 0.5 * 2e-4 * 20 * 20;
         assertTrue(audit.jouleJ() > 0.05 * spin, "hardly braked: " + audit);
@@ -64,10 +65,10 @@ class FreeBodyCouplingTest {
         Motion.Free magnet = new Motion.Free(0.05, 0, new Vec2(0, 0.1), 0, 0, Vec2.ZERO, Vec2.ZERO, 0, List.of());
         Scene scene = scene(List.of(new Body("puck", null, new Vec2(0, 0.06), puck),
                 new Body("magnet", null, new Vec2(0, 0), magnet)), "magnet", shiftedLoop(loop, 0, 0.06));
-        Trajectory run = simulation.simulate(scene, 0, 0.3, 0.01);
+        CoupledRun run = simulation.simulate(scene, 0, 0.3, 0.01);
         double p0 = 0.02 * -0.4 + 0.05 * 0.1;
-        for (Sample s : run.samples()) {
-            double p = 0.02 * s.pose("puck").velocity().y() + 0.05 * s.pose("magnet").velocity().y();
+        for (Snapshot s : run.samples()) {
+            double p = 0.02 * s.freeBody("puck").velocity().y() + 0.05 * s.freeBody("magnet").velocity().y();
             assertEquals(p0, p, MOMENTUM_TOL, "t = " + s.tS());
         }
         EnergyAudit audit = run.audit();
@@ -92,10 +93,10 @@ class FreeBodyCouplingTest {
         Scene scene = new Scene("pair", "", List.of(cart, new Body("sled", null, new Vec2(0.12, 0.1), sled)),
                 List.of(regionSource(Body.FIXED)), List.of(shiftedLoop(driven, 0, 0.06), follower),
                 new TimeSpan(0, 1, 0.01));
-        Trajectory run = simulation.simulate(scene, 0, 0.2, 0.005);
+        CoupledRun run = simulation.simulate(scene, 0, 0.2, 0.005);
         EnergyAudit audit = run.audit();
         assertTrue(audit.holdingJ() > 0, audit.toString());
-        assertTrue(Math.abs(run.samples().get(run.samples().size() - 1).conductor("follower").currentA()) > 0,
+        assertTrue(Math.abs(run.samples().get(run.samples().size() - 1).conductor("follower").orElseThrow().currentA()) > 0,
                 "no induced current in the follower");
         assertEquals(0, audit.residualJ(), DIFFERENCED_AUDIT_TOL * audit.holdingJ(), audit.toString());
     }
@@ -118,11 +119,11 @@ class FreeBodyCouplingTest {
         Scene scene = new Scene("pair", "", List.of(new Body("first", null, new Vec2(0, 0), first),
                 new Body("second", null, new Vec2(0.1, 0), second)), List.of(), List.of(), new TimeSpan(0, 1, 0.01))
                 .withGravity(g);
-        Trajectory run = simulation.simulate(scene, 0, 1, 0.05);
+        CoupledRun run = simulation.simulate(scene, 0, 1, 0.05);
         double total = m1 + m2;
         Vec2 accel = push.plus(g.times(total)).times(1 / total);
-        for (Sample s : run.samples()) {
-            Vec2 centre = s.pose("first").offset().times(m1).plus(s.pose("second").offset().times(m2)).times(1 / total);
+        for (Snapshot s : run.samples()) {
+            Vec2 centre = s.freeBody("first").offset().times(m1).plus(s.freeBody("second").offset().times(m2)).times(1 / total);
             Vec2 expected = accel.times(0.5 * s.tS() * s.tS());
             assertTrue(centre.eq(expected, NEWTON_TOL), "t = " + s.tS() + ": " + centre + " vs " + expected);
         }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.kinduct.solver.Snapshot;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Material;
@@ -63,11 +64,11 @@ class SourceCouplingTest {
         assertTrue(tau < 0.1 / f, "τ = " + tau);
 
         int perPeriod = 64;
-        Trajectory run = simulation.simulate(scene, 0, 3.0 / f + 40 * tau, 1.0 / (f * perPeriod));
-        List<Sample> samples = run.samples();
+        CoupledRun run = simulation.simulate(scene, 0, 3.0 / f + 40 * tau, 1.0 / (f * perPeriod));
+        List<Snapshot> samples = run.samples();
         double sumSq = 0;
         for (int i = samples.size() - perPeriod; i < samples.size(); i++) {
-            double current = samples.get(i).conductor("pickup").currentA();
+            double current = samples.get(i).conductor("pickup").orElseThrow().currentA();
             sumSq += current * current;
         }
         assertEquals(expected, Math.sqrt(2 * sumSq / perPeriod), PHASOR_TOL * expected);
@@ -93,11 +94,11 @@ class SourceCouplingTest {
                 0.005, 0.002, Source.Side.BELOW, 1.2, Source.Magnetization.PLUS_Z);
         Scene scene = new Scene("puck", "", List.of(body), List.of(magnet), List.of(loop), new TimeSpan(0, 1, 0.01));
 
-        Trajectory run = simulation.simulate(scene, 0, 0.12, 0.002);
+        CoupledRun run = simulation.simulate(scene, 0, 0.12, 0.002);
         EnergyAudit audit = run.audit();
         assertTrue(audit.deltaKineticJ() < 0, audit.toString());
         assertEquals(0, audit.residualJ(), AUDIT_TOL * audit.jouleJ(), audit.toString());
-        double vEnd = run.samples().get(run.samples().size() - 1).pose("puck").velocity().x();
+        double vEnd = run.samples().get(run.samples().size() - 1).freeBody("puck").velocity().x();
         assertTrue(vEnd < 0.5, "not braked: " + vEnd);
     }
 }

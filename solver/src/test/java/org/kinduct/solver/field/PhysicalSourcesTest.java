@@ -1,8 +1,6 @@
 package org.kinduct.solver.field;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertThrows;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.SplittableRandom;
@@ -20,6 +18,7 @@ import org.kinduct.scene.Source.Drive;
 import org.kinduct.scene.Source.Magnetization;
 import org.kinduct.scene.Source.Side;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.SourceFields;
 
 class PhysicalSourcesTest {
 
@@ -50,8 +49,8 @@ class PhysicalSourcesTest {
         for (int c = 0; c < 10; c++) {
             Pose pose = new Pose(pivot, Vec2.of(r.nextDouble(-0.05, 0.05), r.nextDouble(-0.05, 0.05)),
                     r.nextDouble(-Math.PI, Math.PI), Vec2.ZERO, 0);
-            PlaneField posed = PhysicalSources.place(source, pose, t);
-            PlaneField drawn = PhysicalSources.place(source, Pose.rest(pivot), t);
+            PlaneField posed = SourceFields.place(source, pose, t);
+            PlaneField drawn = SourceFields.place(source, Pose.rest(pivot), t);
             Vec2 p = Vec2.of(r.nextDouble(-0.08, 0.08), r.nextDouble(-0.08, 0.08));
             // A rigid motion carries the field along: B_z(p) = B_z_drawn(g⁻¹p) and A(p) = R·A_drawn(g⁻¹p),
             // with g⁻¹p = pivot + R(−θ)(p − pivot − offset).
@@ -85,7 +84,7 @@ class PhysicalSourcesTest {
                 Source.BlockMagnet magnet = new Source.BlockMagnet("m", Body.FIXED, Vec2.of(0.01, 0.02), a, b,
                         thickness, 0.7, s, side, 1.2, m);
                 double sign = m == Magnetization.PLUS_Z ? 1 : -1;
-                double actual = PhysicalSources.place(magnet, Pose.rest(Vec2.ZERO), 0).bz(0.01, 0.02);
+                double actual = SourceFields.place(magnet, Pose.rest(Vec2.ZERO), 0).bz(0.01, 0.02);
                 assertEquals(sign * expected, actual, ULP_LEVEL * expected, side + " " + m);
             }
         }
@@ -101,7 +100,7 @@ class PhysicalSourcesTest {
         for (Side side : Side.values()) {
             Source.CylinderMagnet magnet = new Source.CylinderMagnet("m", Body.FIXED, Vec2.of(-0.01, 0.0), radius,
                     length, s, side, 1.1, Magnetization.PLUS_Z);
-            double actual = PhysicalSources.place(magnet, Pose.rest(Vec2.ZERO), 0).bz(-0.01, 0);
+            double actual = SourceFields.place(magnet, Pose.rest(Vec2.ZERO), 0).bz(-0.01, 0);
             assertEquals(expected, actual, ULP_LEVEL * expected, side.toString());
         }
     }
@@ -118,16 +117,7 @@ class PhysicalSourcesTest {
         double current = 0.5 + 2.0 * Math.sin(2 * Math.PI * 50 * t + 0.3);
         double expected = PhysicalConstants.MU_0 * turns * current * radius * radius
                 / (2 * Math.pow(radius * radius + z * z, 1.5));
-        double actual = PhysicalSources.place(coil, Pose.rest(Vec2.ZERO), t).bz(0, 0);
+        double actual = SourceFields.place(coil, Pose.rest(Vec2.ZERO), t).bz(0, 0);
         assertEquals(expected, actual, ULP_LEVEL * Math.abs(expected));
-    }
-
-    @Test
-    void idealizedSourcesAreRefusedByName() {
-        Source patch = new Source.UniformField("earth", 4e-5);
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> PhysicalSources.place(patch, Pose.rest(Vec2.ZERO), 0));
-        assertTrue(e.getMessage().contains("'earth'") && e.getMessage().contains("not a magnet or source coil"),
-                e.getMessage());
     }
 }

@@ -51,8 +51,31 @@ public final class CautionCheck {
     }
 
     private static boolean strongMagnet(Source s) {
-        double br = s instanceof Source.BlockMagnet b ? b.remanenceT()
-                : s instanceof Source.CylinderMagnet c ? c.remanenceT() : 0;
-        return br >= Cautions.STRONG_MAGNET_T;
+        return s.match(new Source.Cases<>() {
+            @Override
+            public Boolean patch(Source.FieldPatch patch) {
+                return false;
+            }
+
+            @Override
+            public Boolean uniform(Source.UniformField uniform) {
+                return false;
+            }
+
+            @Override
+            public Boolean block(Source.BlockMagnet block) {
+                return block.remanenceT() >= Cautions.STRONG_MAGNET_T;
+            }
+
+            @Override
+            public Boolean cylinder(Source.CylinderMagnet cylinder) {
+                return cylinder.remanenceT() >= Cautions.STRONG_MAGNET_T;
+            }
+
+            @Override
+            public Boolean coil(Source.SourceCoil coil) {
+                return false;
+            }
+        });
     }
 }

@@ -3,6 +3,7 @@ package org.kinduct.report;
 import org.kinduct.solver.dynamics.CircuitModel;
 import org.kinduct.solver.Circulation;
 import org.kinduct.solver.Terminal;
+import org.kinduct.solver.run.RunPlan;
 
 /** The words every output uses for terminals and current sense. */
 public final class Labels {
@@ -25,6 +26,14 @@ public final class Labels {
             case CW -> "cw";
             case CCW -> "ccw";
             case NONE -> "none";
+        };
+    }
+
+    /** {@code instants} (each solved on its own) or {@code coupled run}. */
+    public static String method(RunPlan plan) {
+        return switch (plan.method()) {
+            case INSTANTS -> "instants";
+            case COUPLED -> "coupled run";
         };
     }
 

@@ -2,10 +2,10 @@ package org.kinduct.report;
 
 import java.io.IOException;
 import java.io.Writer;
-import java.util.List;
 import java.util.Locale;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.run.RunResult;
 
 /**
  * Long-form CSV of a time series: one row per conductor per time, the same quantities and
@@ -20,19 +20,17 @@ public final class ResultsCsv {
     private ResultsCsv() {
     }
 
-    public static void write(SolveResults results, Writer out) throws IOException {
+    public static void write(RunResult results, Writer out) throws IOException {
         out.write(HEADER);
         out.write('\n');
-        List<Snapshot> series = results.series();
-        for (int i = 0; i < series.size(); i++) {
-            Snapshot s = series.get(i);
+        for (Snapshot s : results.samples()) {
             for (ConductorState c : s.conductors()) {
                 boolean loop = c.kind() == ConductorState.Kind.LOOP;
                 out.write(String.join(",", num(s.tS()), c.id(), loop ? "loop" : "wire", num(c.fluxWb()),
                         num(c.linkageWb()), num(c.emfFluxV()), num(c.emfMotionalV()), num(c.emfV()),
                         num(c.disagreement()), Labels.terminal(c.positiveEnd()), num(c.currentA()),
                         loop ? Labels.circulation(c.direction()) : "none", num(c.forceN().x()),
-                        num(c.forceN().y()), num(results.inductanceH(i, c.id()))));
+                        num(c.forceN().y()), num(c.inductanceH())));
                 out.write('\n');
             }
         }

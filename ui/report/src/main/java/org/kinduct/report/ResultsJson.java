@@ -4,12 +4,11 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import java.io.IOException;
 import java.io.Writer;
-import java.util.List;
-import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.EnergyAudit;
+import org.kinduct.solver.run.RunResult;
 
 /**
  * Machine-readable results: one object per conductor per time under {@code samples}, one per
@@ -25,39 +24,35 @@ public final class ResultsJson {
     private ResultsJson() {
     }
 
-    public static void write(Scene scene, SolveResults results, Writer out) throws IOException {
+    public static void write(RunResult results, Writer out) throws IOException {
         try (JsonGenerator g = new JsonFactory().createGenerator(out)) {
             g.useDefaultPrettyPrinter();
             g.writeStartObject();
             g.writeStringField("format", FORMAT);
             g.writeNumberField("version", VERSION);
-            g.writeStringField("scene", scene.name());
-            if (results.circuitModel() == null) {
-                g.writeNullField("circuit_model");
-            } else {
-                g.writeStringField("circuit_model", Labels.circuitModel(results.circuitModel()));
-            }
+            g.writeStringField("scene", results.scene().name());
+            g.writeStringField("method", Labels.method(results.plan()));
+            g.writeStringField("circuit_model", Labels.circuitModel(results.plan().circuit()));
             g.writeArrayFieldStart("samples");
-            List<Snapshot> series = results.series();
-            for (int i = 0; i < series.size(); i++) {
-                for (ConductorState c : series.get(i).conductors()) {
-                    writeSample(g, series.get(i).tS(), c, results.inductanceH(i, c.id()));
+            for (Snapshot s : results.samples()) {
+                for (ConductorState c : s.conductors()) {
+                    writeSample(g, s.tS(), c);
                 }
             }
             g.writeEndArray();
             g.writeArrayFieldStart("bodies");
-            for (int i = 0; i < series.size(); i++) {
-                for (SolveResults.BodyState b : results.freeBodies().get(i)) {
-                    writeBody(g, series.get(i).tS(), b);
+            for (Snapshot s : results.samples()) {
+                for (FreeBody b : FreeBody.of(results.scene(), s)) {
+                    writeBody(g, s.tS(), b);
                 }
             }
             g.writeEndArray();
-            writeAudit(g, results.audit());
+            writeAudit(g, results.audit().orElse(null));
             g.writeEndObject();
         }
     }
 
-    private static void writeBody(JsonGenerator g, double tS, SolveResults.BodyState b) throws IOException {
+    private static void writeBody(JsonGenerator g, double tS, FreeBody b) throws IOException {
         g.writeStartObject();
         g.writeNumberField("t", tS);
         g.writeStringField("id", b.id());
@@ -94,8 +89,7 @@ public final class ResultsJson {
         g.writeEndArray();
     }
 
-    private static void writeSample(JsonGenerator g, double tS, ConductorState c, double inductanceH)
-            throws IOException {
+    private static void writeSample(JsonGenerator g, double tS, ConductorState c) throws IOException {
         boolean loop = c.kind() == ConductorState.Kind.LOOP;
         g.writeStartObject();
         g.writeNumberField("t", tS);
@@ -115,7 +109,7 @@ public final class ResultsJson {
         g.writeNumber(c.forceN().y());
         g.writeEndArray();
         number(g, "resistance_Ohm", c.resistanceOhm());
-        number(g, "inductance_H", inductanceH);
+        number(g, "inductance_H", c.inductanceH());
         g.writeBooleanField("induced_e_included", c.inducedFieldIncluded());
         g.writeEndObject();
     }

@@ -3,7 +3,6 @@ package org.kinduct.report;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
-import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.units.Dimension;
 import org.kinduct.scene.units.Units;
@@ -11,6 +10,8 @@ import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.Terminal;
 import org.kinduct.solver.dynamics.EnergyAudit;
+import org.kinduct.solver.run.ResultScales;
+import org.kinduct.solver.run.RunResult;
 
 /** The readable per-conductor summary printed by {@code kinduct solve} by default. */
 public final class ResultsTable {
@@ -21,22 +22,24 @@ public final class ResultsTable {
     private ResultsTable() {
     }
 
-    public static void write(Scene scene, SolveResults results, PrintWriter out) {
-        List<Snapshot> series = results.series();
+    public static void write(RunResult results, PrintWriter out) {
+        Scene scene = results.scene();
+        List<Snapshot> series = results.samples();
         double t0 = series.get(0).tS();
         double t1 = series.get(series.size() - 1).tS();
         out.printf(Locale.ROOT, "Scene: %s%n", scene.name().isEmpty() ? "(unnamed)" : scene.name());
-        out.printf(Locale.ROOT, "Time: %s to %s, %d samples%s%n%n", Units.format(t0, Dimension.TIME),
-                Units.format(t1, Dimension.TIME), series.size(), results.circuitModel() == null ? ""
-                        : " (coupled run, " + Labels.circuitModel(results.circuitModel()) + " circuits)");
+        out.printf(Locale.ROOT, "Time: %s%s, %d sample%s (%s, %s circuits)%n%n", Units.format(t0, Dimension.TIME),
+                series.size() > 1 ? " to " + Units.format(t1, Dimension.TIME) : "", series.size(),
+                series.size() > 1 ? "s" : "", Labels.method(results.plan()),
+                Labels.circuitModel(results.plan().circuit()));
         List<ConductorSummary> rows = ConductorSummary.of(series);
-        ResultScales scales = ResultScales.of(series);
+        ResultScales scales = results.scales();
         int idWidth = Math.max("conductor".length(), rows.stream().mapToInt(r -> r.id().length()).max().orElse(0));
         String fmt = "%-" + idWidth + "s  %-5s %12s %10s %12s  %-26s %12s %11s  %s%n";
         out.printf(Locale.ROOT, fmt, "conductor", "kind", "peak EMF", "at", "RMS EMF", "polarity at peak",
                 "peak current", "L", "methods agree");
         for (ConductorSummary r : rows) {
-            double l = results.inductanceH(0, r.id());
+            double l = series.get(0).conductor(r.id()).orElseThrow().inductanceH();
             out.printf(Locale.ROOT, fmt, r.id(), r.kind() == ConductorState.Kind.LOOP ? "loop" : "wire",
                     Units.format(scales.emf(r.peakEmfV()), Dimension.VOLTAGE),
                     Units.format(r.peakTimeS(), Dimension.TIME),
@@ -46,11 +49,12 @@ public final class ResultsTable {
                     Double.isNaN(l) ? "-" : Units.format(l, Dimension.INDUCTANCE), agreement(r));
         }
         out.println();
-        if (scene.conductors().stream().filter(c -> c instanceof Conductor.Loop l && !l.open()).count() > 1) {
-            out.println(InductanceSummary.of(scene));
+        String inductance = InductanceSummary.of(results.inductanceAtStart());
+        if (results.inductanceAtStart().self().size() > 1 || !results.inductanceAtStart().allSelfKnown()) {
+            out.println(inductance);
         }
-        writeBodies(scene, results, out);
-        writeAudit(results.audit(), out);
+        writeBodies(results, out);
+        results.audit().ifPresent(a -> writeAudit(a, out));
         out.println("Signs: EMF and current are positive along each conductor's vertex order; for a wire,"
                 + " EMF > 0 means its last vertex is the + end.");
         if (rows.stream().anyMatch(r -> !r.inducedFieldIncluded())) {
@@ -66,21 +70,21 @@ public final class ResultsTable {
      * the accelerations whose sum a still body's velocity is); angular speeds against the fastest
      * turn in the run.
      */
-    private static void writeBodies(Scene scene, SolveResults results, PrintWriter out) {
+    private static void writeBodies(RunResult results, PrintWriter out) {
         if (!results.hasFreeBodies()) {
             return;
         }
-        List<Snapshot> series = results.series();
+        Scene scene = results.scene();
+        List<Snapshot> series = results.samples();
         double speedRef = scene.gravity().length() * (series.get(series.size() - 1).tS() - series.get(0).tS());
         double omegaRef = 0;
-        for (List<SolveResults.BodyState> bodies : results.freeBodies()) {
-            for (SolveResults.BodyState b : bodies) {
+        for (Snapshot s : series) {
+            for (FreeBody b : FreeBody.of(scene, s)) {
                 speedRef = Math.max(speedRef, b.velocityMps().length());
                 omegaRef = Math.max(omegaRef, Math.abs(b.omegaRadPerS()));
             }
         }
-        List<SolveResults.BodyState> last = results.freeBodies().get(results.freeBodies().size() - 1);
-        for (SolveResults.BodyState b : last) {
+        for (FreeBody b : FreeBody.of(scene, series.get(series.size() - 1))) {
             out.printf(Locale.ROOT, "Free body %s at the end: speed %s, velocity (%s, %s), ω %s%n", b.id(),
                     speed(b.velocityMps().length(), speedRef), speed(b.velocityMps().x(), speedRef),
                     speed(b.velocityMps().y(), speedRef),
@@ -95,9 +99,6 @@ public final class ResultsTable {
 
     /** Where the energy went, and what the balance leaves over. */
     private static void writeAudit(EnergyAudit a, PrintWriter out) {
-        if (a == null) {
-            return;
-        }
         out.printf(Locale.ROOT, "Energy: work in %s = Joule heat %s + damping heat %s + kinetic %s + potential %s"
                 + " + magnetic %s%n", energy(a.suppliedJ()), energy(a.jouleJ()), energy(a.dampingJ()),
                 energy(a.deltaKineticJ()), energy(a.deltaPotentialJ()), energy(a.deltaMagneticJ()));

@@ -14,6 +14,7 @@ import org.kinduct.scene.units.Units;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.run.ResultScales;
 
 /**
  * Values read against the run they belong to. The spinning-coil demo's rotor coil (20 rev/s) is

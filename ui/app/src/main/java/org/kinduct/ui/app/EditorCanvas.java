@@ -2,6 +2,7 @@ package org.kinduct.ui.app;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.function.UnaryOperator;
@@ -20,6 +21,8 @@ import javafx.scene.layout.Pane;
 import javafx.util.Duration;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.run.RunResult;
 import org.kinduct.scene.Vec2;
 import org.kinduct.ui.edit.DrawingTool;
 import org.kinduct.ui.edit.EditorViewModel;
@@ -103,7 +106,7 @@ final class EditorCanvas extends Pane {
         for (Observable o : new Observable[] {vm.rasterProperty(), vm.viewProperty(), vm.layers(), vm.rangeProperty()}) {
             o.addListener(x -> requestBackdrop());
         }
-        vm.poseSeriesProperty().addListener(x -> refitAfterRun());
+        vm.resultProperty().addListener(x -> refitAfterRun());
         vm.toolProperty().addListener((obs, old, t) -> {
             drawing = t == ToolKind.SELECT ? null : new DrawingTool(t);
             setCursor(t == ToolKind.SELECT ? Cursor.DEFAULT : Cursor.CROSSHAIR);
@@ -178,11 +181,10 @@ final class EditorCanvas extends Pane {
         String note = showFrameTime
                 ? String.format(java.util.Locale.ROOT, "paint: last %.1f ms, average %.1f ms", lastFrameMs, frameMs) : "";
         // Draw at the instant the solver's numbers are for, so overlays sit on their conductors.
-        org.kinduct.solver.Snapshot snap = dragPreview != null ? null : vm.snapshotProperty().get();
+        Snapshot snap = dragPreview != null ? null : vm.snapshotProperty().get();
         double t = snap != null ? snap.tS() : vm.timeProperty().get();
         return new Frame(scene, t, snap,
                 vm.rasterProperty().get(), vm.viewProperty().get(), vm.layers(), vm.rangeProperty().get(), marks, note,
-                dragPreview != null ? java.util.Map.of() : vm.posesProperty().get(),
                 vm.scalesNow());
     }
 
@@ -194,8 +196,8 @@ final class EditorCanvas extends Pane {
     /** Shows everything the scene holds over its whole time window, free bodies along their simulated path. */
     void zoomToFit() {
         // A run of the scene shown before (just after opening another) says nothing about this one.
-        SceneBounds b = SceneBounds.ofWindow(vm.scene(), vm.currentSeries(),
-                vm.seriesIsCurrent() ? vm.poseSeriesProperty().get() : List.of());
+        SceneBounds b = SceneBounds.ofWindow(vm.scene(),
+                vm.currentResult().map(RunResult::samples).orElse(List.of()));
         double padX = (b.maxX() - b.minX()) * 0.08;
         double padY = (b.maxY() - b.minY()) * 0.08;
         double legend = vm.layers().contains(Layer.LEGEND) ? ScenePainter.LEGEND_SPAN_PX : 0;
@@ -207,8 +209,8 @@ final class EditorCanvas extends Pane {
 
     /** A fitted view is fitted again once the free bodies' run is in, unless the user has moved it since. */
     private void refitAfterRun() {
-        if (fitted != null && fitted.equals(vm.viewProperty().get()) && vm.seriesIsCurrent()
-                && !vm.poseSeriesProperty().get().isEmpty()) {
+        if (fitted != null && fitted.equals(vm.viewProperty().get())
+                && vm.currentResult().map(RunResult::hasFreeBodies).orElse(false)) {
             zoomToFit();
         }
     }
@@ -230,7 +232,8 @@ final class EditorCanvas extends Pane {
 
     /** Where the user sees things: bodies where they are now, free ones where the run has them. */
     private Placement seen() {
-        return Placement.of(vm.scene(), vm.timeProperty().get(), vm.posesProperty().get());
+        Snapshot shown = vm.snapshotProperty().get();
+        return Placement.of(vm.scene(), vm.timeProperty().get(), shown == null ? Map.of() : shown.freeBodies());
     }
 
     private Snapper snapper() {

@@ -360,7 +360,7 @@ final class EditorWindow {
         return bar;
     }
 
-    /** Self- and mutual inductance of the closed loops as drawn, under the readout table. */
+    /** Self- and mutual inductance of the closed loops at the run's start (computed off this thread), under the readout table. */
     private Label inductanceLine() {
         Label line = new Label();
         line.setId("inductance");
@@ -368,11 +368,11 @@ final class EditorWindow {
         line.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
         line.setPadding(new Insets(2, 6, 2, 6));
         Runnable update = () -> {
-            line.setText(org.kinduct.report.InductanceSummary.of(vm.scene()));
+            line.setText(vm.inductanceLineProperty().get());
             line.setVisible(!line.getText().isEmpty());
             line.setManaged(line.isVisible());
         };
-        vm.sceneProperty().addListener(o -> update.run());
+        vm.inductanceLineProperty().addListener(o -> update.run());
         update.run();
         return line;
     }
@@ -385,11 +385,12 @@ final class EditorWindow {
         line.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
         line.setPadding(new Insets(2, 6, 2, 6));
         Runnable update = () -> {
-            line.setText(vm.auditProperty().get().map(org.kinduct.report.EnergyText::of).orElse(""));
-            line.setVisible(vm.auditProperty().get().isPresent());
+            var audit = vm.currentResult().flatMap(org.kinduct.solver.run.RunResult::audit);
+            line.setText(audit.map(org.kinduct.report.EnergyText::of).orElse(""));
+            line.setVisible(audit.isPresent());
             line.setManaged(line.isVisible());
         };
-        vm.auditProperty().addListener(o -> update.run());
+        vm.resultProperty().addListener(o -> update.run());
         update.run();
         return line;
     }

@@ -27,10 +27,9 @@ import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.ShapeFactory;
-import org.kinduct.render.field.Evaluators;
 import org.kinduct.render.field.FieldMapper;
 import org.kinduct.render.field.MapRequest;
-import org.kinduct.render.field.SceneEvaluator;
+import org.kinduct.solver.run.SceneRun;
 import org.kinduct.render.paint.ColourRange;
 import org.kinduct.render.paint.FieldBackdrop;
 import org.kinduct.render.paint.FieldRaster;
@@ -81,7 +80,7 @@ public final class FrameTimeProbe {
         List<Double> solving = new ArrayList<>();
         CompletableFuture<Void> done = new CompletableFuture<>();
         onFx(() -> {
-            EditorViewModel vm = new EditorViewModel(scene, Evaluators.solver(), work, Platform::runLater);
+            EditorViewModel vm = new EditorViewModel(scene, work, Platform::runLater);
             EditorCanvas canvas = new EditorCanvas(vm, text -> { });
             Stage stage = new Stage();
             stage.setScene(new javafx.scene.Scene(canvas, WIDTH, HEIGHT));
@@ -95,7 +94,7 @@ public final class FrameTimeProbe {
             long shown = System.nanoTime();
             canvas.onPainted(ms -> {
                 long now = System.nanoTime();
-                if (vm.currentSeries().isEmpty()) {
+                if (vm.currentResult().isEmpty()) {
                     // Playback proper is measured once the time series is solved; until then every
                     // frame's instant is solved on the workers, as right after an edit.
                     if (last[0] != 0) {
@@ -144,16 +143,16 @@ public final class FrameTimeProbe {
 
     /** Median and 95th percentile of the map + snapshot and of the backdrop, over {@code n} times of the window. */
     private static double[] offThreadWork(Scene scene, int n) {
-        SceneEvaluator evaluator = Evaluators.solver().apply(scene);
+        SceneRun run = new SceneRun(scene);
         ViewTransform view = new ViewTransform(0, 0, WIDTH / 0.32, WIDTH, HEIGHT);
-        FieldMapper mapper = new FieldMapper(Evaluators.solver(), Runnable::run, Runnable::run, r -> { }, e -> { });
+        FieldMapper mapper = new FieldMapper(Runnable::run, Runnable::run, r -> { }, e -> { });
         double[] compute = new double[n];
         double[] backdrop = new double[n];
         for (int i = 0; i < n; i++) {
             double t = scene.time().t1S() * i / n;
             long c0 = System.nanoTime();
-            FieldRaster raster = mapper.compute(new MapRequest(scene, 1, t, view, 4));
-            evaluator.at(t);
+            FieldRaster raster = mapper.compute(new MapRequest(run, 1, t, view, 4));
+            run.instant(t);
             long c1 = System.nanoTime();
             FieldBackdrop.render(raster, view, ColourRange.automatic().limitFor(raster), EnumSet.allOf(Layer.class));
             compute[i] = (c1 - c0) * 1e-6;

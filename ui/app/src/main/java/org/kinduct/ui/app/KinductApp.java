@@ -8,7 +8,6 @@ import javafx.application.Platform;
 import javafx.stage.Stage;
 import org.kinduct.scene.Scene;
 import org.kinduct.ui.edit.EditorViewModel;
-import org.kinduct.render.field.Evaluators;
 
 /** The JavaFX editor application. */
 public final class KinductApp extends Application {
@@ -26,7 +25,7 @@ public final class KinductApp extends Application {
             t.setDaemon(true);
             return t;
         });
-        EditorViewModel vm = new EditorViewModel(Scene.empty("untitled"), Evaluators.solver(), work, Platform::runLater);
+        EditorViewModel vm = new EditorViewModel(Scene.empty("untitled"), work, Platform::runLater);
         window = new EditorWindow(stage, vm, new JsonSceneStore(), AppHome.standard());
         Thread.setDefaultUncaughtExceptionHandler((thread, e) -> {
             e.printStackTrace();

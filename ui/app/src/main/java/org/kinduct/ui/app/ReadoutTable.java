@@ -7,7 +7,7 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
-import org.kinduct.report.ResultScales;
+import org.kinduct.solver.run.ResultScales;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
@@ -41,7 +41,7 @@ final class ReadoutTable extends TableView<ConductorState> {
             return Quantities.force(f.x()) + ", " + Quantities.force(f.y());
         }));
         vm.snapshotProperty().addListener((obs, old, snap) -> show(vm));
-        vm.seriesProperty().addListener((obs, old, run) -> show(vm));
+        vm.resultProperty().addListener((obs, old, run) -> show(vm));
         show(vm);
         getSelectionModel().selectedItemProperty().addListener((obs, old, row) -> {
             if (row != null && !vm.selection().contains(row.id())) {

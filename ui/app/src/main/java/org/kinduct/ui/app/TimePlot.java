@@ -37,8 +37,7 @@ final class TimePlot extends Pane {
         canvas.heightProperty().bind(heightProperty());
         widthProperty().addListener(o -> draw());
         heightProperty().addListener(o -> draw());
-        vm.seriesProperty().addListener(o -> draw());
-        vm.poseSeriesProperty().addListener(o -> draw());
+        vm.resultProperty().addListener(o -> draw());
         vm.sceneProperty().addListener(o -> draw());
         vm.timeProperty().addListener(o -> draw());
         vm.selection().addListener((javafx.collections.SetChangeListener<String>) c -> draw());
@@ -66,8 +65,9 @@ final class TimePlot extends Pane {
         double h = getHeight();
         g.setFill(Color.web("#fbfbf8"));
         g.fillRect(0, 0, w, h);
-        List<PlotSeries.Line> lines = PlotSeries.lines(vm.scene(), vm.seriesProperty().get(),
-                vm.poseSeriesProperty().get(), vm.selection(), quantity);
+        List<PlotSeries.Line> lines = PlotSeries.lines(vm.scene(),
+                vm.currentResult().map(org.kinduct.solver.run.RunResult::samples).orElse(List.of()), vm.selection(),
+                quantity);
         double t0 = vm.scene().time().t0S();
         double t1 = vm.scene().time().t1S();
         double pw = w - LEFT - 10;

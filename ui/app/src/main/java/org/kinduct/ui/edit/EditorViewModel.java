@@ -4,11 +4,10 @@ import java.nio.file.Path;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Executor;
-import java.util.function.Function;
+import java.util.function.BiFunction;
 import java.util.function.LongSupplier;
 import java.util.function.UnaryOperator;
 import javafx.beans.property.BooleanProperty;
@@ -29,18 +28,20 @@ import javafx.beans.property.SimpleDoubleProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableSet;
-import org.kinduct.report.ResultScales;
-import org.kinduct.scene.Pose;
+import org.kinduct.solver.run.ResultScales;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
+import org.kinduct.report.InductanceSummary;
+import org.kinduct.solver.SceneField;
 import org.kinduct.solver.Snapshot;
-import org.kinduct.solver.dynamics.EnergyAudit;
+import org.kinduct.solver.run.RunRequest;
+import org.kinduct.solver.run.RunResult;
+import org.kinduct.solver.run.SceneRun;
+import org.kinduct.solver.dynamics.RunMonitor;
 import org.kinduct.solver.dynamics.SimulationCancelledException;
 import org.kinduct.render.field.FieldMapper;
 import org.kinduct.render.field.LatestOnly;
 import org.kinduct.render.field.MapRequest;
-import org.kinduct.render.field.SceneEvaluator;
-import org.kinduct.render.field.TrajectoryEvaluator;
 import org.kinduct.render.paint.ColourRange;
 import org.kinduct.render.paint.FieldRaster;
 import org.kinduct.render.paint.Layer;
@@ -48,21 +49,23 @@ import org.kinduct.render.view.ViewTransform;
 
 /**
  * The editor's state and the only code that touches the scene and the solver: the current scene
- * with undo history, the selection, the time, the solved snapshot, the field map and time series.
+ * with undo history, the selection, the time, the shown snapshot, the field map and the run.
  * Uses JavaFX observable properties but needs no running toolkit (tests drive it directly).
  *
- * <p>Work runs on the {@code work} executor and its results arrive through the {@code ui} one,
- * tagged with the scene revision they belong to; results of an outdated revision are dropped. The
- * simulation of free bodies reports its progress to the status line and is stopped as soon as a
- * newer revision (an edit, undo, redo or another scene) appears, so its worker is free at once.
+ * <p>Numbers come from one {@link SceneRun} per scene revision, as the command line and the
+ * export make it, so the editor shows what they write. Work runs on the {@code work} executor and
+ * its results arrive through the {@code ui} one, tagged with the scene revision they belong to;
+ * results of an outdated revision are dropped. Nothing here waits for a solve on the calling
+ * (UI) thread: the cursor's B_z is read from the field delivered with the shown snapshot. A
+ * coupled run reports its progress to the status line and is stopped as soon as a newer revision
+ * (an edit, undo, redo or another scene) appears, so its worker is free at once.
  */
 public final class EditorViewModel {
 
-    /** Samples in a time plot. */
-    public static final int SERIES_SAMPLES = 241;
-    private static final String SIMULATING = "Simulating the free bodies…";
+    private static final String SIMULATING = "Running the coupled simulation…";
     private static final int UNDO_LIMIT = 200;
     private static final ResultScales NO_SCALES = ResultScales.of(List.of());
+    private static final SceneField NO_FIELD = new SceneField(List.of());
     /**
      * While playing, a coarse field map at most this often (seconds of wall-clock time): maps share
      * the two cores with painting, and a map that trails the sources by a few frames is fine to look at.
@@ -85,7 +88,7 @@ public final class EditorViewModel {
         }
     }
 
-    private final Function<Scene, SceneEvaluator> evaluators;
+    private final BiFunction<Scene, RunMonitor, SceneRun> runs;
     private final Executor ui;
     private final LongSupplier clockNs;
     private final UndoHistory history;
@@ -96,13 +99,11 @@ public final class EditorViewModel {
     private final ReadOnlyObjectWrapper<Scene> scene = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyLongWrapper revision = new ReadOnlyLongWrapper();
     private final ReadOnlyObjectWrapper<Snapshot> snapshot = new ReadOnlyObjectWrapper<>();
-    private final ReadOnlyObjectWrapper<List<Snapshot>> series = new ReadOnlyObjectWrapper<>(List.of());
+    private final ReadOnlyObjectWrapper<RunResult> result = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyObjectWrapper<FieldRaster> raster = new ReadOnlyObjectWrapper<>();
-    private final ReadOnlyObjectWrapper<Map<String, Pose>> poses = new ReadOnlyObjectWrapper<>(Map.of());
-    private final ReadOnlyObjectWrapper<Optional<EnergyAudit>> audit = new ReadOnlyObjectWrapper<>(Optional.empty());
+    private final ReadOnlyStringWrapper inductanceLine = new ReadOnlyStringWrapper("");
     private final ReadOnlyBooleanWrapper simulating = new ReadOnlyBooleanWrapper();
     private final ReadOnlyDoubleWrapper simulationProgress = new ReadOnlyDoubleWrapper(-1);
-    private final ReadOnlyObjectWrapper<List<Map<String, Pose>>> poseSeries = new ReadOnlyObjectWrapper<>(List.of());
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
     private final ReadOnlyBooleanWrapper dirty = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper();
@@ -119,10 +120,11 @@ public final class EditorViewModel {
     private final ObjectProperty<ToolKind> tool = new SimpleObjectProperty<>(ToolKind.SELECT);
     private final BooleanProperty snapToGrid = new SimpleBooleanProperty(true);
     private final BooleanProperty snapAngles = new SimpleBooleanProperty(true);
-    private SceneEvaluator evaluator;
-    private long evaluatorRevision = -1;
-    private long seriesRevision = -1;
-    private ResultScales runScales = NO_SCALES;
+    /** The run of the scene shown now; replaced with every revision. */
+    private SceneRun run;
+    private long resultRevision = -1;
+    /** The field of the instant shown, for the cursor readout: evaluated on the UI thread, never waited for. */
+    private SceneField shownField = NO_FIELD;
     private double sincePlaybackMap = Double.POSITIVE_INFINITY;
     /** Scene time the last playback frame moved on by. */
     private double playbackStepS;
@@ -133,21 +135,24 @@ public final class EditorViewModel {
     /** Watches the current revision's simulation; outdated (and so stopped) by the next revision. */
     private RunWatch watch;
 
-    public EditorViewModel(Scene initial, Function<Scene, SceneEvaluator> evaluators, Executor work, Executor ui) {
-        this(initial, evaluators, work, ui, System::nanoTime);
+    public EditorViewModel(Scene initial, Executor work, Executor ui) {
+        this(initial, EditorViewModel::run, work, ui, System::nanoTime);
     }
 
-    /** @param clockNs monotonic clock, nanoseconds, for the simulation's progress reports and duration */
-    EditorViewModel(Scene initial, Function<Scene, SceneEvaluator> evaluators, Executor work, Executor ui,
+    /**
+     * @param runs makes the run of each scene revision, watched by the monitor given (tests wrap it)
+     * @param clockNs monotonic clock, nanoseconds, for the simulation's progress reports and duration
+     */
+    EditorViewModel(Scene initial, BiFunction<Scene, RunMonitor, SceneRun> runs, Executor work, Executor ui,
                     LongSupplier clockNs) {
-        this.evaluators = evaluators;
+        this.runs = runs;
         this.ui = ui;
         this.clockNs = clockNs;
         this.history = new UndoHistory(initial, UNDO_LIMIT);
         this.snapshotJobs = new LatestOnly(work);
         this.seriesJobs = new LatestOnly(work);
         // A stopped simulation only ever belongs to an outdated revision: nothing to report.
-        this.mapper = new FieldMapper(evaluators, work, ui, this::acceptRaster, e -> {
+        this.mapper = new FieldMapper(work, ui, this::acceptRaster, e -> {
             if (!(e instanceof SimulationCancelledException)) {
                 status.set("Field map failed: " + e.getMessage());
             }
@@ -233,6 +238,7 @@ public final class EditorViewModel {
         revision.set(revision.get() + 1);
         long rev = revision.get();
         watch = new RunWatch(clockNs, percent -> ui.execute(() -> showProgress(rev, percent)));
+        run = runs.apply(s, watch);
         updateFlags();
         double t = clampTime(time.get());
         if (t != time.get()) {
@@ -315,51 +321,46 @@ public final class EditorViewModel {
 
     // ---- solving ----
 
-    private SceneEvaluator evaluator() {
-        if (evaluator == null || evaluatorRevision != revision.get()) {
-            evaluator = evaluators.apply(scene.get());
-            evaluator.monitor(watch);
-            evaluatorRevision = revision.get();
-        }
-        return evaluator;
+    /**
+     * The run of one revision: the scene's own window, as the command line and the export run it,
+     * its instants on one core: the editor's display keeps the other (measured: frames of 50 ms
+     * instead of 17 ms while the 20-object reference scene's series was solved on both).
+     */
+    static SceneRun run(Scene scene, RunMonitor monitor) {
+        return new SceneRun(scene, RunRequest.of(scene), monitor, false);
     }
 
     /**
      * Solves the current time off the UI thread; a result for an older scene is dropped. While
-     * playing, the time series' sample nearest in time is shown instead when the series is ready,
-     * so playback moves at frame rate instead of at the solver's pace; pausing solves exactly.
+     * playing, the run's sample nearest in time is shown instead when the run is ready, so
+     * playback moves at frame rate instead of at the solver's pace; pausing solves exactly (for a
+     * coupled run, the nearest sample is the exact answer the run has).
      */
     private void solveNow() {
         if (scene.get() == null) {
             return;
         }
-        if (playing.get() && showSeriesSample(time.get())) {
+        if (playing.get() && showRunSample(time.get())) {
             return;
         }
-        SceneEvaluator ev;
-        try {
-            ev = evaluator();
-        } catch (RuntimeException e) {
-            snapshot.set(null);
-            status.set("Solver: " + describe(e));
-            return;
-        }
+        SceneRun r = run;
         long rev = revision.get();
         double t = time.get();
         snapshotJobs.submit(() -> {
             try {
-                Snapshot result = ev.at(t);
-                Map<String, Pose> placed = ev.posesAt(result.tS());
+                Snapshot shown = r.instant(t);
+                SceneField field = r.fieldAt(shown.tS());
                 ui.execute(() -> {
                     if (revision.get() == rev) {
-                        snapshot.set(result);
-                        poses.set(placed);
+                        snapshot.set(shown);
+                        shownField = field;
                     }
                 });
             } catch (RuntimeException e) {
                 ui.execute(() -> {
-                    if (revision.get() == rev) {
+                    if (revision.get() == rev && !(e instanceof SimulationCancelledException)) {
                         snapshot.set(null);
+                        shownField = NO_FIELD;
                         status.set("Solver: " + describe(e));
                     }
                 });
@@ -367,100 +368,73 @@ public final class EditorViewModel {
         });
     }
 
-    /** Whether {@link #seriesProperty()} (and the simulated poses) belong to the scene shown now. */
-    public boolean seriesIsCurrent() {
-        return seriesRevision == revision.get();
+    /** Whether {@link #resultProperty()} belongs to the scene shown now. */
+    public boolean resultIsCurrent() {
+        return resultRevision == revision.get();
     }
 
-    /** The time series of the scene shown now; empty while it is being solved after an edit. */
-    public List<Snapshot> currentSeries() {
-        return seriesIsCurrent() ? series.get() : List.of();
+    /** The run of the scene shown now, or empty while it is being computed after an edit. */
+    public Optional<RunResult> currentResult() {
+        return resultIsCurrent() ? Optional.ofNullable(result.get()) : Optional.empty();
     }
 
     /**
-     * What values shown now are read against (noise reads 0): the current scene's run, taken once
-     * when it arrives, widened to the snapshot shown.
+     * What values shown now are read against (noise reads 0): the current scene's run, widened to
+     * the snapshot shown.
      */
     public ResultScales scalesNow() {
-        return (seriesIsCurrent() ? runScales : NO_SCALES).including(snapshot.get());
+        return currentResult().map(RunResult::scales).orElse(NO_SCALES).including(snapshot.get());
     }
 
     /**
-     * Shows the series sample nearest to {@code t}; false when the series is not for this scene,
-     * or when playback is so slow that several frames fall between two samples (slow motion would
-     * then move in visible steps: those frames are solved exactly).
+     * Shows the run's sample nearest to {@code t}; false when the run is not for this scene, or
+     * when playback is so slow that several frames fall between two samples of quasi-static
+     * instants (slow motion would then move in visible steps: those frames are solved exactly).
      */
-    private boolean showSeriesSample(double t) {
-        List<Snapshot> samples = series.get();
-        if (seriesRevision != revision.get() || samples.size() < 2) {
+    private boolean showRunSample(double t) {
+        Optional<RunResult> current = currentResult();
+        if (current.isEmpty() || current.get().samples().size() < 2) {
             return false;
         }
+        List<Snapshot> samples = current.get().samples();
         double sampleStep = (samples.get(samples.size() - 1).tS() - samples.get(0).tS()) / (samples.size() - 1);
-        if (playbackStepS < sampleStep * SLOW_MOTION_FRACTION) {
+        if (!current.get().plan().coupled() && playbackStepS < sampleStep * SLOW_MOTION_FRACTION) {
             return false;
         }
-        int i = nearestSample(samples, t);
-        List<Map<String, Pose>> placed = poseSeries.get();
-        snapshot.set(samples.get(i));
-        poses.set(placed.size() == samples.size() ? placed.get(i) : Map.of());
+        snapshot.set(current.get().nearest(t));
         return true;
     }
 
-    /** Index of the sample (in time order) nearest to {@code t}. */
-    static int nearestSample(List<Snapshot> samples, double t) {
-        int lo = 0;
-        int hi = samples.size() - 1;
-        while (hi - lo > 1) {
-            int mid = (lo + hi) >>> 1;
-            if (samples.get(mid).tS() <= t) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return Math.abs(samples.get(hi).tS() - t) < Math.abs(samples.get(lo).tS() - t) ? hi : lo;
-    }
-
     private void requestSeries() {
-        Scene s = scene.get();
+        SceneRun r = run;
         long rev = revision.get();
-        SceneEvaluator ev;
-        try {
-            ev = evaluator();
-        } catch (RuntimeException e) {
-            simulating.set(false);
-            status.set("Solver: " + describe(e));
-            return;
-        }
-        TimeSpan span = s.time();
-        double dt = (span.t1S() - span.t0S()) / (SERIES_SAMPLES - 1);
         // A simulated scene keeps showing the last good run until the new one is done.
-        boolean simulated = TrajectoryEvaluator.needsSimulation(s);
-        simulating.set(simulated);
+        inductanceLine.set("");
+        simulating.set(false);
         simulationProgress.set(-1);
-        if (simulated) {
-            status.set(SIMULATING);
-        } else {
-            audit.set(Optional.empty());
-        }
         seriesJobs.submit(() -> {
             try {
+                boolean coupled = r.plan().coupled();
+                String inductance = InductanceSummary.of(r.inductanceAtStart());
+                ui.execute(() -> {
+                    if (revision.get() == rev) {
+                        inductanceLine.set(inductance);
+                        simulating.set(coupled);
+                        if (coupled) {
+                            status.set(SIMULATING);
+                        }
+                    }
+                });
                 long started = clockNs.getAsLong();
-                List<Snapshot> result = ev.series(span.t0S(), span.t1S(), dt);
-                Optional<EnergyAudit> energy = ev.audit();
-                List<Map<String, Pose>> placed = simulated
-                        ? result.stream().map(sn -> ev.posesAt(sn.tS())).toList() : List.of();
+                RunResult done = r.result();
                 double seconds = (clockNs.getAsLong() - started) * 1e-9;
                 ui.execute(() -> {
                     if (revision.get() == rev) {
-                        seriesRevision = rev;
-                        runScales = ResultScales.of(result);
-                        series.set(result);
-                        poseSeries.set(placed);
-                        audit.set(energy);
-                        if (simulated) {
+                        resultRevision = rev;
+                        result.set(done);
+                        if (coupled) {
                             simulating.set(false);
-                            status.set(String.format(Locale.ROOT, "Free bodies simulated (%.1f s)", seconds));
+                            status.set(String.format(Locale.ROOT, "Coupled run done (%.1f s)", seconds));
                         }
                     }
                 });
@@ -469,7 +443,7 @@ public final class EditorViewModel {
                 ui.execute(() -> {
                     if (revision.get() == rev) {
                         simulating.set(false);
-                        status.set((simulated ? "Simulation: " : "Time series: ") + describe(e));
+                        status.set("Run: " + describe(e));
                     }
                 });
             }
@@ -495,7 +469,7 @@ public final class EditorViewModel {
                 && !layers.contains(Layer.CONTOURS) && !layers.contains(Layer.SYMBOLS)) {
             return;
         }
-        mapper.request(new MapRequest(scene.get(), revision.get(), tS, v, quality.stepPx));
+        mapper.request(new MapRequest(run, revision.get(), tS, v, quality.stepPx));
     }
 
     /** Takes a finished map unless the scene changed since it was asked for. */
@@ -509,13 +483,12 @@ public final class EditorViewModel {
         return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
     }
 
-    /** Exact B_z at a scene point at the current time (for the cursor readout); NaN if the solver fails. */
+    /**
+     * Exact B_z at a scene point at the instant shown (for the cursor readout), from the field
+     * delivered with the snapshot: one closed-form evaluation, never a wait. 0 while none is shown.
+     */
     public double bzAt(double x, double y) {
-        try {
-            return evaluator().fieldAt(time.get()).bz(x, y);
-        } catch (RuntimeException e) {
-            return Double.NaN;
-        }
+        return shownField.bz(x, y);
     }
 
     // ---- status ----
@@ -542,23 +515,17 @@ public final class EditorViewModel {
         return snapshot.getReadOnlyProperty();
     }
 
-    public ReadOnlyObjectProperty<List<Snapshot>> seriesProperty() {
-        return series.getReadOnlyProperty();
+    /**
+     * The run of the scene (samples, free bodies, energy audit); after an edit it keeps the last
+     * good run until the new one is done ({@link #resultIsCurrent()} tells which).
+     */
+    public ReadOnlyObjectProperty<RunResult> resultProperty() {
+        return result.getReadOnlyProperty();
     }
 
-    /** Integrated poses of the free bodies at the shown time; empty when every body follows a prescribed motion. */
-    public ReadOnlyObjectProperty<Map<String, Pose>> posesProperty() {
-        return poses.getReadOnlyProperty();
-    }
-
-    /** Simulated poses at the times of {@link #seriesProperty()}; empty when no body is simulated. */
-    public ReadOnlyObjectProperty<List<Map<String, Pose>>> poseSeriesProperty() {
-        return poseSeries.getReadOnlyProperty();
-    }
-
-    /** The energy audit of the simulated run, when the scene has free bodies. */
-    public ReadOnlyObjectProperty<Optional<EnergyAudit>> auditProperty() {
-        return audit.getReadOnlyProperty();
+    /** The loops' inductances at the start of the current scene's run, in words; empty without closed loops. */
+    public ReadOnlyStringProperty inductanceLineProperty() {
+        return inductanceLine.getReadOnlyProperty();
     }
 
     /** True while a simulation of the current scene is running (the last good result is shown meanwhile). */

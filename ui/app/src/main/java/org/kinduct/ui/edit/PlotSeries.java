@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.ToDoubleFunction;
-import org.kinduct.report.ResultScales;
+import org.kinduct.solver.run.ResultScales;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
@@ -74,12 +74,8 @@ public final class PlotSeries {
     private PlotSeries() {
     }
 
-    /**
-     * @param poses the simulated poses at each snapshot's time (same length as {@code series}), or
-     *        empty when no body is simulated
-     */
-    public static List<Line> lines(Scene scene, List<Snapshot> series, List<Map<String, Pose>> poses,
-                                   Set<String> selection, Quantity q) {
+    /** The lines of {@code q} over the run's samples; free bodies are read from the samples. */
+    public static List<Line> lines(Scene scene, List<Snapshot> series, Set<String> selection, Quantity q) {
         List<Line> lines = new ArrayList<>();
         if (series.isEmpty()) {
             return lines;
@@ -106,7 +102,7 @@ public final class PlotSeries {
             Body body = scene.body(bodyId).orElseThrow();
             double[] v = new double[t.length];
             for (int i = 0; i < t.length; i++) {
-                Pose p = i < poses.size() ? poses.get(i).get(bodyId) : null;
+                Pose p = series.get(i).freeBodies().get(bodyId);
                 v[i] = q.ofBody.applyAsDouble(p != null ? p : body.poseAt(t[i]));
             }
             lines.add(new Line(body.name().isEmpty() ? bodyId : body.name(), t, v));

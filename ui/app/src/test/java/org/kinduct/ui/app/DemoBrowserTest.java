@@ -16,7 +16,6 @@ import org.kinduct.demo.Demos;
 import org.kinduct.scene.Scene;
 import org.kinduct.ui.edit.DemoBrowserModel;
 import org.kinduct.ui.edit.EditorViewModel;
-import org.kinduct.render.field.Evaluators;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
@@ -35,7 +34,7 @@ class DemoBrowserTest {
 
     @Start
     void start(Stage stage) {
-        vm = new EditorViewModel(Scene.empty("test"), Evaluators.solver(), Runnable::run, Platform::runLater);
+        vm = new EditorViewModel(Scene.empty("test"), Runnable::run, Platform::runLater);
         EditorWindow window = new EditorWindow(stage, vm, new JsonSceneStore(), new AppHome(home));
         stage.setScene(new javafx.scene.Scene(window.root(), 1100, 760));
         stage.show();

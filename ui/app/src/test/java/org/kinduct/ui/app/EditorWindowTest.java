@@ -30,7 +30,6 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.SceneEdits;
-import org.kinduct.render.field.Evaluators;
 import org.kinduct.render.view.ViewTransform;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
@@ -51,7 +50,7 @@ class EditorWindowTest {
 
     @Start
     void start(Stage stage) {
-        vm = new EditorViewModel(Scene.empty("test"), Evaluators.solver(), Runnable::run, Platform::runLater);
+        vm = new EditorViewModel(Scene.empty("test"), Runnable::run, Platform::runLater);
         window = new EditorWindow(stage, vm, new JsonSceneStore(), new AppHome(home));
         stage.setScene(new javafx.scene.Scene(window.root(), 1100, 760));
         stage.show();
@@ -162,8 +161,7 @@ class EditorWindowTest {
             vm.load(drop, null);
             window.canvas().zoomToFit();
         });
-        WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> vm.seriesIsCurrent()
-                && !vm.poseSeriesProperty().get().isEmpty());
+        WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> vm.currentResult().map(org.kinduct.solver.run.RunResult::hasFreeBodies).orElse(false));
         WaitForAsyncUtils.waitForFxEvents();
         ViewTransform v = vm.viewProperty().get();
         assertTrue(v.minY() < -4.8 && v.maxY() > 0.1, "view " + v.minY() + " … " + v.maxY() + " m holds the fall");

@@ -15,7 +15,6 @@ import javafx.scene.control.ComboBox;
 import javafx.scene.control.TextField;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.Test;
-import org.kinduct.render.field.SolverEvaluator;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
 import org.kinduct.ui.edit.EditorViewModel;
@@ -37,7 +36,7 @@ class ExportDialogTest {
     @Start
     void start(Stage stage) {
         this.stage = stage;
-        vm = new EditorViewModel(org.kinduct.demo.Demos.load("drive-sense-wire"), s -> new SolverEvaluator(s), Runnable::run,
+        vm = new EditorViewModel(org.kinduct.demo.Demos.load("drive-sense-wire"), Runnable::run,
                 Runnable::run);
         stage.setScene(new javafx.scene.Scene(new javafx.scene.layout.Pane(), 400, 300));
         stage.show();

@@ -26,7 +26,6 @@ import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.ShapeFactory;
-import org.kinduct.render.field.Evaluators;
 import org.kinduct.render.paint.Quantities;
 import org.kinduct.render.view.ViewTransform;
 import org.testfx.api.FxRobot;
@@ -69,7 +68,7 @@ class PlaybackTest {
 
     @Start
     void start(Stage stage) {
-        vm = new EditorViewModel(enteringLoop(), Evaluators.solver(), Runnable::run, Platform::runLater);
+        vm = new EditorViewModel(enteringLoop(), Runnable::run, Platform::runLater);
         window = new EditorWindow(stage, vm, new JsonSceneStore(), new AppHome(home));
         stage.setScene(new javafx.scene.Scene(window.root(), 1100, 760));
         stage.show();

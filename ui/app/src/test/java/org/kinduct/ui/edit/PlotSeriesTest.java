@@ -36,14 +36,14 @@ class PlotSeriesTest {
         Motion.Glide g = (Motion.Glide) s.body(SceneEdits.bodyOf(s, "magnet")).orElseThrow().motion();
         Vec2 pivot = s.body(SceneEdits.bodyOf(s, "magnet")).orElseThrow().pivot();
         List<Snapshot> series = new SceneSolver(s).series(0, 1, 0.25);
-        List<PlotSeries.Line> lines = PlotSeries.lines(s, series, List.of(), Set.of("magnet"),
+        List<PlotSeries.Line> lines = PlotSeries.lines(s, series, Set.of("magnet"),
                 PlotSeries.Quantity.POSITION_X);
         assertEquals(1, lines.size());
         for (int i = 0; i < series.size(); i++) {
             // Uniform motion x = x0 + v·t (definition of constant velocity).
             assertEquals(pivot.x() + g.velocity().x() * series.get(i).tS(), lines.get(0).values()[i], TOL);
         }
-        List<PlotSeries.Line> speed = PlotSeries.lines(s, series, List.of(), Set.of(), PlotSeries.Quantity.SPEED);
+        List<PlotSeries.Line> speed = PlotSeries.lines(s, series, Set.of(), PlotSeries.Quantity.SPEED);
         assertEquals(g.velocity().length(), speed.get(0).values()[2], TOL);
     }
 
@@ -56,7 +56,7 @@ class PlotSeriesTest {
     void aConductorsRoundingNoiseIsPlottedAsZero() {
         Scene s = org.kinduct.demo.Demos.load("spinning-coil-generator");
         List<Snapshot> series = new SceneSolver(s).series(0, 0.025, 1.25e-3);
-        double[] emf = PlotSeries.lines(s, series, List.of(), Set.of(), PlotSeries.Quantity.EMF).get(0).values();
+        double[] emf = PlotSeries.lines(s, series, Set.of(), PlotSeries.Quantity.EMF).get(0).values();
         assertTrue(series.get(0).conductors().get(0).emfV() != 0, "the solver's value there is noise, not an exact 0");
         assertEquals(0, emf[0], 0.0);
         assertEquals(0, emf[emf.length - 1], 0.0);
@@ -71,10 +71,10 @@ class PlotSeriesTest {
     void simulatedPosesTakePrecedenceOverTheDrawnPose() {
         Scene s = glidingMagnet();
         String body = SceneEdits.bodyOf(s, "magnet");
-        List<Snapshot> series = new SceneSolver(s).series(0, 1, 0.5);
         Pose moved = new Pose(Vec2.ZERO, new Vec2(0.3, 0), 0, new Vec2(0, 2), 0);
-        List<Map<String, Pose>> poses = List.of(Map.of(body, moved), Map.of(body, moved), Map.of(body, moved));
-        PlotSeries.Line y = PlotSeries.lines(s, series, poses, Set.of(), PlotSeries.Quantity.SPEED).get(0);
+        List<Snapshot> series = new SceneSolver(s).series(0, 1, 0.5).stream()
+                .map(sn -> new Snapshot(sn.tS(), sn.conductors(), Map.of(body, moved))).toList();
+        PlotSeries.Line y = PlotSeries.lines(s, series, Set.of(), PlotSeries.Quantity.SPEED).get(0);
         assertEquals(2, y.values()[1], TOL);
     }
 
@@ -82,10 +82,10 @@ class PlotSeriesTest {
     void conductorQuantitiesFollowTheSelectionAndTheSnapshots() {
         Scene s = glidingMagnet();
         List<Snapshot> series = new SceneSolver(s).series(0, 1, 0.5);
-        PlotSeries.Line f = PlotSeries.lines(s, series, List.of(), Set.of("loop"), PlotSeries.Quantity.FORCE_X).get(0);
+        PlotSeries.Line f = PlotSeries.lines(s, series, Set.of("loop"), PlotSeries.Quantity.FORCE_X).get(0);
         assertEquals("loop", f.id());
         assertEquals(series.get(1).conductor("loop").orElseThrow().forceN().x(), f.values()[1], 0);
-        assertTrue(PlotSeries.lines(s, series, List.of(), Set.of("magnet"), PlotSeries.Quantity.EMF).isEmpty());
+        assertTrue(PlotSeries.lines(s, series, Set.of("magnet"), PlotSeries.Quantity.EMF).isEmpty());
     }
 
     @Test

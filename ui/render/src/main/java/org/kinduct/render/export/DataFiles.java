@@ -6,13 +6,10 @@ import java.io.UncheckedIOException;
 import java.util.List;
 import java.util.function.ToDoubleFunction;
 import org.kinduct.report.ResultsJson;
-import org.kinduct.report.SolveResults;
-import org.kinduct.scene.Scene;
-import org.kinduct.scene.TimeSpan;
 import org.kinduct.solver.ConductorState;
-import org.kinduct.render.field.SceneEvaluator;
+import org.kinduct.solver.SceneField;
 import org.kinduct.solver.Snapshot;
-import org.kinduct.solver.dynamics.CircuitModel;
+import org.kinduct.solver.run.RunResult;
 
 /**
  * The exported data as text: the time series in wide CSV form, the B_z map of a view as CSV, and
@@ -72,7 +69,7 @@ public final class DataFiles {
      * B_z at the centres of a {@link #FIELD_COLUMNS}-wide grid of square cells over {@code box},
      * evaluated exactly (not taken from the display raster); rows from bottom to top, x fastest.
      */
-    public static String fieldCsv(SceneEvaluator.BzField field, ViewChoice.Box box) {
+    public static String fieldCsv(SceneField field, ViewChoice.Box box) {
         double cell = (box.x1() - box.x0()) / FIELD_COLUMNS;
         int rows = Math.max(1, (int) Math.round((box.y1() - box.y0()) / cell));
         double cellY = (box.y1() - box.y0()) / rows;
@@ -87,15 +84,11 @@ public final class DataFiles {
         return out.toString();
     }
 
-    /**
-     * The same document as {@code kinduct solve --format json}: the coupled run over the scene's
-     * own time window (free bodies move, loop currents with the automatic circuit model).
-     */
-    public static String resultsJson(Scene scene) {
-        TimeSpan span = scene.time();
+    /** The results JSON of a run: the same document as {@code kinduct solve --format json}. */
+    public static String resultsJson(RunResult run) {
         StringWriter w = new StringWriter();
         try {
-            ResultsJson.write(scene, SolveResults.run(scene, span.t0S(), span.t1S(), span.dtS(), CircuitModel.AUTO), w);
+            ResultsJson.write(run, w);
         } catch (IOException e) {
             throw new UncheckedIOException("writing to memory failed", e);
         }

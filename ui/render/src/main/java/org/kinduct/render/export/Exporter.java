@@ -9,14 +9,15 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.report.CautionCheck;
-import org.kinduct.report.ResultScales;
+import org.kinduct.solver.run.ResultScales;
 import org.kinduct.scene.Scene;
-import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.io.SceneFiles;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.dynamics.RunMonitor;
+import org.kinduct.solver.run.RunRequest;
+import org.kinduct.solver.run.RunResult;
+import org.kinduct.solver.run.SceneRun;
 import org.kinduct.report.EnergyText;
-import org.kinduct.render.field.Evaluators;
-import org.kinduct.render.field.SceneEvaluator;
 import org.kinduct.render.field.FieldMapper;
 import org.kinduct.render.field.MapRequest;
 import org.kinduct.render.paint.FieldRaster;
@@ -27,8 +28,10 @@ import org.kinduct.render.view.ViewTransform;
 /**
  * Everything one export produces for a scene: the annotated snapshot as PNG and SVG, the time
  * series and field map as CSV, and the results JSON. JavaFX-free, so the command line can use it
- * without a display. Solves lazily and once: the snapshot at the chosen time, the series over
- * the scene's time window (for the data files and the voltage caution).
+ * without a display. Every file reads the one run of the scene ({@link SceneRun}): its window
+ * (the scene's own, stretched to reach the snapshot's instant if that lies beyond) sampled as
+ * {@code kinduct solve} samples it, with the snapshot's instant sampled exactly; solved lazily
+ * and once.
  */
 public final class Exporter {
 
@@ -46,17 +49,14 @@ public final class Exporter {
 
     private final Scene scene;
     private final SnapshotOptions options;
-    /** The editor's evaluator: instant solves, or the coupled run for scenes with free bodies. */
-    private final SceneEvaluator evaluator;
-    private Snapshot snapshot;
-    private List<Snapshot> series;
+    private final SceneRun run;
     private SnapshotPage page;
     private FieldRaster raster;
 
     public Exporter(Scene scene, SnapshotOptions options) {
         this.scene = scene;
         this.options = options;
-        this.evaluator = Evaluators.solver().apply(scene);
+        this.run = new SceneRun(scene, RunRequest.of(scene).alsoAt(options.tS()), RunMonitor.NONE, true);
     }
 
     /** Writes every target atomically; a target that fails is left as it was. Returns the files written. */
@@ -69,13 +69,14 @@ public final class Exporter {
             write(targets.svg(), svg().getBytes(StandardCharsets.UTF_8), written);
         }
         if (targets.seriesCsv() != null) {
-            write(targets.seriesCsv(), DataFiles.seriesCsv(series()).getBytes(StandardCharsets.UTF_8), written);
+            write(targets.seriesCsv(), DataFiles.seriesCsv(run.result().samples()).getBytes(StandardCharsets.UTF_8),
+                    written);
         }
         if (targets.fieldCsv() != null) {
             write(targets.fieldCsv(), fieldCsv().getBytes(StandardCharsets.UTF_8), written);
         }
         if (targets.json() != null) {
-            write(targets.json(), DataFiles.resultsJson(scene).getBytes(StandardCharsets.UTF_8), written);
+            write(targets.json(), DataFiles.resultsJson(run.result()).getBytes(StandardCharsets.UTF_8), written);
         }
         return written;
     }
@@ -121,33 +122,27 @@ public final class Exporter {
     /** B_z over the box the snapshot's map shows, exactly evaluated. */
     public String fieldCsv() {
         ViewTransform v = page().mapView();
-        return DataFiles.fieldCsv(evaluator.fieldAt(options.tS()), new ViewChoice.Box(v.minX(), v.minY(), v.maxX(),
+        return DataFiles.fieldCsv(run.fieldAt(options.tS()), new ViewChoice.Box(v.minX(), v.minY(), v.maxX(),
                 v.maxY()));
     }
 
+    /** The state the snapshot shows: the run's sample at exactly the chosen instant. */
     public Snapshot snapshot() {
-        if (snapshot == null) {
-            snapshot = evaluator.at(options.tS());
-        }
-        return snapshot;
+        return run.result().at(options.tS());
     }
 
-    /** States over the scene's own time window. */
-    public List<Snapshot> series() {
-        if (series == null) {
-            TimeSpan span = scene.time();
-            series = evaluator.series(span.t0S(), span.t1S(), span.dtS());
-        }
-        return series;
+    /** The run every exported file reads. */
+    public RunResult result() {
+        return run.result();
     }
 
     private SnapshotPage page() {
         if (page == null) {
-            List<Snapshot> checked = new ArrayList<>(series());
+            RunResult result = run.result();
+            List<Snapshot> checked = new ArrayList<>(result.samples());
             checked.add(snapshot());
-            page = SnapshotPage.layout(scene, snapshot(), evaluator.posesAt(options.tS()),
-                    evaluator.audit().map(EnergyText::of).stream().toList(), CautionCheck.lines(scene, checked),
-                    ResultScales.of(checked), options);
+            page = SnapshotPage.layout(scene, snapshot(), result.audit().map(EnergyText::of).stream().toList(),
+                    CautionCheck.lines(scene, checked), result.scales(), options);
         }
         return page;
     }
@@ -167,9 +162,8 @@ public final class Exporter {
                     v.heightPx() * k);
             int step = (int) Math.max(MAP_STEP_PX,
                     Math.ceil(Math.sqrt(device.widthPx() * device.heightPx() / MAX_MAP_SAMPLES)));
-            FieldMapper mapper = new FieldMapper(s -> evaluator, Runnable::run, Runnable::run, r -> { },
-                    e -> { });
-            raster = mapper.compute(new MapRequest(scene, 0, options.tS(), device, step));
+            FieldMapper mapper = new FieldMapper(Runnable::run, Runnable::run, r -> { }, e -> { });
+            raster = mapper.compute(new MapRequest(run, 0, options.tS(), device, step));
         }
         return raster;
     }

@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.kinduct.report.ResultScales;
+import org.kinduct.solver.run.ResultScales;
 import org.kinduct.report.ResultsTable;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Pose;
@@ -74,7 +74,6 @@ final class SnapshotPage {
 
     private final Scene scene;
     private final Snapshot snapshot;
-    private final Map<String, Pose> poses;
     private final SnapshotOptions options;
     private final ViewTransform mapView;
     private final List<String> description;
@@ -94,9 +93,8 @@ final class SnapshotPage {
     private record Table(List<String[]> rows, double[] left, double[] width, boolean[] right, double font) {
     }
 
-    private SnapshotPage(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> remarks,
-                         List<String> cautions, ResultScales scales, SnapshotOptions options) {
-        this.poses = Map.copyOf(poses);
+    private SnapshotPage(Scene scene, Snapshot snapshot, List<String> remarks, List<String> cautions,
+                         ResultScales scales, SnapshotOptions options) {
         this.scene = scene;
         this.snapshot = snapshot;
         this.options = options;
@@ -108,7 +106,7 @@ final class SnapshotPage {
         }
         description = desc;
         mapTop = MARGIN + TITLE + 8 + description.size() * LINE + LINE + 8;
-        ViewChoice.Box box = ViewChoice.box(options.view(), scene, options.tS(), poses);
+        ViewChoice.Box box = ViewChoice.box(options.view(), scene, options.tS(), snapshot.freeBodies());
         double aspect = (box.y1() - box.y0()) / (box.x1() - box.x0());
         // A chosen box is shown whole but, like a fitted scene, clear of the legend when there is one.
         if (options.view() instanceof ViewChoice.Fit || options.layers().contains(Layer.LEGEND)) {
@@ -160,17 +158,17 @@ final class SnapshotPage {
     }
 
     static SnapshotPage layout(Scene scene, Snapshot snapshot, List<String> cautions, SnapshotOptions options) {
-        return layout(scene, snapshot, Map.of(), List.of(), cautions, ResultScales.of(List.of(snapshot)), options);
+        return layout(scene, snapshot, List.of(), cautions, ResultScales.of(List.of(snapshot)), options);
     }
 
     /**
-     * A page whose free bodies are drawn at their simulated {@code poses} (body id → pose at the
-     * snapshot's time), with {@code remarks} (e.g. the run's energy audit) under the sign conventions,
-     * and table values read against {@code scales} (those of the run, so that rounding noise reads 0).
+     * A page with {@code remarks} (e.g. the run's energy audit) under the sign conventions, and
+     * table values read against {@code scales} (those of the run, so that rounding noise reads 0);
+     * free bodies are drawn where the snapshot has them.
      */
-    static SnapshotPage layout(Scene scene, Snapshot snapshot, Map<String, Pose> poses, List<String> remarks,
-                               List<String> cautions, ResultScales scales, SnapshotOptions options) {
-        return new SnapshotPage(scene, snapshot, poses, remarks, cautions, scales, options);
+    static SnapshotPage layout(Scene scene, Snapshot snapshot, List<String> remarks, List<String> cautions,
+                               ResultScales scales, SnapshotOptions options) {
+        return new SnapshotPage(scene, snapshot, remarks, cautions, scales, options);
     }
 
     double height() {
@@ -195,7 +193,7 @@ final class SnapshotPage {
         s.save();
         s.translate(0, mapTop);
         ScenePainter.draw(new Viewport(s, WIDTH, mapHeight), new Frame(scene, options.tS(), snapshot, raster, mapView,
-                options.layers(), options.range(), EditorMarks.none(), "", poses, scales));
+                options.layers(), options.range(), EditorMarks.none(), "", scales));
         s.restore();
         s.stroke(RULE);
         s.lineWidth(1);

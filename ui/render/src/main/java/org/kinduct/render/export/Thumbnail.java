@@ -8,11 +8,10 @@ import java.util.EnumSet;
 import java.util.Set;
 import org.kinduct.scene.Scene;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.run.SceneRun;
 import org.kinduct.render.field.FieldMapper;
 import org.kinduct.render.field.MapRequest;
 import org.kinduct.render.paint.ColourRange;
-import org.kinduct.render.field.Evaluators;
-import org.kinduct.render.field.SceneEvaluator;
 import org.kinduct.render.paint.Frame;
 import org.kinduct.render.paint.Java2dSurface;
 import org.kinduct.render.paint.Layer;
@@ -46,12 +45,12 @@ public final class Thumbnail {
         double pageH = heightPx * PAGE_PER_PX;
         ViewChoice.Box box = ViewChoice.box(new ViewChoice.Fit(), scene, t);
         ViewTransform view = new ViewTransform(0, 0, 1, pageW, pageH).fitting(box.x0(), box.y0(), box.x1(), box.y1(), 0);
-        SceneEvaluator evaluator = Evaluators.solver().apply(scene);
-        Snapshot snapshot = evaluator.at(t);
-        FieldMapper mapper = new FieldMapper(s -> evaluator, Runnable::run, Runnable::run, r -> { }, e -> { });
+        SceneRun run = new SceneRun(scene);
+        Snapshot snapshot = run.instant(t);
+        FieldMapper mapper = new FieldMapper(Runnable::run, Runnable::run, r -> { }, e -> { });
         ViewTransform device = new ViewTransform(view.centerX(), view.centerY(), view.pxPerM() / PAGE_PER_PX,
                 widthPx, heightPx);
-        var raster = mapper.compute(new MapRequest(scene, 0, t, device, MAP_STEP_PX));
+        var raster = mapper.compute(new MapRequest(run, 0, t, device, MAP_STEP_PX));
         BufferedImage img = new BufferedImage(widthPx, heightPx, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
@@ -60,7 +59,7 @@ public final class Thumbnail {
             g.fillRect(0, 0, widthPx, heightPx);
             g.scale(1 / PAGE_PER_PX, 1 / PAGE_PER_PX);
             ScenePainter.draw(new Java2dSurface(g, pageW, pageH), new Frame(scene, t, snapshot, raster, view, LAYERS,
-                    ColourRange.automatic(), null, "", evaluator.posesAt(t)));
+                    ColourRange.automatic(), null, ""));
         } finally {
             g.dispose();
         }

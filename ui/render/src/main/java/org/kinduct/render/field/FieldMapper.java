@@ -8,13 +8,14 @@ import java.util.Objects;
 import java.util.Set;
 import java.util.concurrent.Executor;
 import java.util.function.Consumer;
-import java.util.function.Function;
 import java.util.stream.IntStream;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
+import org.kinduct.solver.SceneField;
 import org.kinduct.solver.dynamics.SimulationCancelledException;
+import org.kinduct.solver.run.SceneRun;
 import org.kinduct.render.paint.FieldRaster;
 
 /**
@@ -34,16 +35,16 @@ public final class FieldMapper {
     private static final int MAX_CELLS = 1_200_000;
     private static final int PARALLEL_CELLS = 50_000;
 
-    private final Function<Scene, SceneEvaluator> evaluators;
     private final LatestOnly jobs;
     private final Executor deliverOn;
     private final Consumer<FieldRaster> deliver;
     private final Consumer<RuntimeException> failure;
     private StaticCache cache;
+    /** How often the still sources were evaluated on a grid (the cache missed): tests read it. */
+    int staticEvaluations;
 
-    public FieldMapper(Function<Scene, SceneEvaluator> evaluators, Executor work, Executor deliverOn,
-                       Consumer<FieldRaster> deliver, Consumer<RuntimeException> failure) {
-        this.evaluators = Objects.requireNonNull(evaluators);
+    public FieldMapper(Executor work, Executor deliverOn, Consumer<FieldRaster> deliver,
+                       Consumer<RuntimeException> failure) {
         this.jobs = new LatestOnly(work);
         this.deliverOn = Objects.requireNonNull(deliverOn);
         this.deliver = Objects.requireNonNull(deliver);
@@ -76,8 +77,8 @@ public final class FieldMapper {
         double minX = Math.floor(r.view().minX() / cell) * cell;
         double maxY = Math.ceil(r.view().maxY() / cell) * cell;
         Grid grid = new Grid(minX, maxY, cell, cols, rows);
-        // One evaluator for the whole scene, so a free magnet is mapped where the coupled run has it.
-        SceneEvaluator evaluator = evaluators.apply(r.scene());
+        // The run places every source, so a free magnet is mapped where the coupled run has it.
+        SceneRun run = r.run();
         List<Source> still = new ArrayList<>();
         Set<String> moving = new HashSet<>();
         for (Source s : r.scene().sources()) {
@@ -87,29 +88,30 @@ public final class FieldMapper {
                 moving.add(s.id());
             }
         }
-        float[] values = staticValues(evaluator, r.scene().bodies(), still, grid).clone();
+        float[] values = staticValues(run, r.scene().bodies(), still, grid).clone();
         if (!moving.isEmpty()) {
-            add(values, evaluator.fieldOf(r.tS(), moving), grid);
+            add(values, run.fieldOf(r.tS(), moving), grid);
         }
         return new FieldRaster(minX, maxY, cell, cols, rows, values, autoLimit(values), r.revision(), r.tS());
     }
 
-    private float[] staticValues(SceneEvaluator evaluator, List<Body> bodies, List<Source> still, Grid grid) {
+    private float[] staticValues(SceneRun run, List<Body> bodies, List<Source> still, Grid grid) {
         StaticCache c = cache;
         if (c != null && c.bodies.equals(bodies) && c.sources.equals(still) && c.grid.equals(grid)) {
             return c.values;
         }
         float[] values = new float[grid.cols * grid.rows];
+        staticEvaluations++;
         if (!still.isEmpty()) {
             Set<String> ids = new HashSet<>();
             still.forEach(s -> ids.add(s.id()));
-            add(values, evaluator.fieldOf(0, ids), grid);
+            add(values, run.fieldOf(0, ids), grid);
         }
         cache = new StaticCache(bodies, still, grid, values);
         return values;
     }
 
-    private static void add(float[] values, SceneEvaluator.BzField field, Grid g) {
+    private static void add(float[] values, SceneField field, Grid g) {
         IntStream rows = IntStream.range(0, g.rows);
         // Small maps (coarse ones while playing) stay on one thread and leave the other core to painting.
         (g.cols * g.rows >= PARALLEL_CELLS ? rows.parallel() : rows).forEach(row -> {
@@ -123,11 +125,7 @@ public final class FieldMapper {
 
     private static boolean isStatic(Scene scene, Source s) {
         Body body = scene.body(s.body()).orElseThrow();
-        boolean still = body.motion() instanceof Motion.Still;
-        if (s instanceof Source.SourceCoil coil) {
-            return still && (coil.drive().amplitudeA() == 0 || coil.drive().frequencyHz() == 0);
-        }
-        return still;
+        return body.motion() instanceof Motion.Still && !s.alternates();
     }
 
     /** A high percentile of |B_z|, so one hot spot next to a magnet does not wash out the rest. */

@@ -1,7 +1,7 @@
 package org.kinduct.render.paint;
 
 import java.util.List;
-import org.kinduct.report.ResultScales;
+import org.kinduct.solver.run.ResultScales;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
@@ -57,10 +57,21 @@ final class ConductorPainter {
         }
     }
 
+    /** The line a conductor runs along: a wire's polyline, a loop's polygon, an open loop's with its gap. */
     private static void outline(Surface s, ViewTransform v, Conductor c, List<Vec2> pts) {
-        boolean loop = c instanceof Conductor.Loop;
-        SourcePainter.polygon(s, v, pts, loop && !((Conductor.Loop) c).open());
-        if (loop && ((Conductor.Loop) c).open()) {
+        boolean gap = c.match(new Conductor.Cases<>() {
+            @Override
+            public Boolean wire(Conductor.Wire wire) {
+                return false;
+            }
+
+            @Override
+            public Boolean loop(Conductor.Loop loop) {
+                return loop.open();
+            }
+        });
+        SourcePainter.polygon(s, v, pts, c instanceof Conductor.Loop && !gap);
+        if (gap) {
             Vec2 last = pts.get(pts.size() - 1);
             Vec2 first = pts.get(0);
             Vec2 g1 = lerp(last, first, GAP_START);
@@ -246,32 +257,47 @@ final class ConductorPainter {
 
     /** Where a callout's leader points: a loop's upper-right-most vertex, a wire's middle. */
     private static Vec2 anchor(Conductor c, List<Vec2> pts) {
-        if (c instanceof Conductor.Loop) {
-            Vec2 best = pts.get(0);
-            for (Vec2 p : pts) {
-                if (p.x() + p.y() > best.x() + best.y()) {
-                    best = p;
-                }
+        return c.match(new Conductor.Cases<>() {
+            @Override
+            public Vec2 wire(Conductor.Wire wire) {
+                int mid = (pts.size() - 1) / 2;
+                return lerp(pts.get(mid), pts.get(mid + 1), 0.5);
             }
-            return best;
-        }
-        int mid = (pts.size() - 1) / 2;
-        return lerp(pts.get(mid), pts.get(mid + 1), 0.5);
+
+            @Override
+            public Vec2 loop(Conductor.Loop loop) {
+                Vec2 best = pts.get(0);
+                for (Vec2 p : pts) {
+                    if (p.x() + p.y() > best.x() + best.y()) {
+                        best = p;
+                    }
+                }
+                return best;
+            }
+        });
     }
 
     /** The callout's lines: id, EMF and current or flux or polarity, noise read as 0 against {@code scales}. */
     static String[] calloutLines(Conductor c, ConductorState st, ResultScales scales) {
         String emf = "ε " + Quantities.voltage(Math.abs(scales.emf(st.emfV())));
-        if (c instanceof Conductor.Loop loop) {
-            if (loop.open()) {
-                return new String[] {c.id(), emf + " across gap", "Φ " + Quantities.flux(scales.flux(st.linkageWb()))};
+        return c.match(new Conductor.Cases<>() {
+            @Override
+            public String[] wire(Conductor.Wire wire) {
+                String end = st.positiveEnd() == Terminal.LAST ? "+ at last end"
+                        : st.positiveEnd() == Terminal.FIRST ? "+ at first end" : "no polarity";
+                return new String[] {c.id(), emf, end};
             }
-            String sense = st.direction() == Circulation.CCW ? " ↺" : st.direction() == Circulation.CW ? " ↻" : "";
-            return new String[] {c.id(), emf, "I " + Quantities.current(Math.abs(scales.current(st.currentA()))) + sense};
-        }
-        String end = st.positiveEnd() == Terminal.LAST ? "+ at last end"
-                : st.positiveEnd() == Terminal.FIRST ? "+ at first end" : "no polarity";
-        return new String[] {c.id(), emf, end};
+
+            @Override
+            public String[] loop(Conductor.Loop loop) {
+                if (loop.open()) {
+                    return new String[] {c.id(), emf + " across gap", "Φ " + Quantities.flux(scales.flux(st.linkageWb()))};
+                }
+                String sense = st.direction() == Circulation.CCW ? " ↺" : st.direction() == Circulation.CW ? " ↻" : "";
+                return new String[] {c.id(), emf, "I " + Quantities.current(Math.abs(scales.current(st.currentA())))
+                        + sense};
+            }
+        });
     }
 
     static void drawMarks(Surface s, ViewTransform v, EditorMarks marks) {

@@ -4,7 +4,7 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import org.kinduct.report.ResultScales;
+import org.kinduct.solver.run.ResultScales;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.solver.Snapshot;
@@ -13,23 +13,20 @@ import org.kinduct.render.view.ViewTransform;
 /**
  * Everything one picture shows.
  *
- * @param snapshot solved values at {@code tS}, or null when there are none (solver error)
+ * @param snapshot solved values at {@code tS}, or null when there are none (solver error); its
+ *        free bodies are drawn where it has them, the other bodies by their prescribed motion
  * @param raster field map, or null while none has been computed
  * @param note small text for the top-right corner (frame time), or empty
- * @param poses integrated poses of the bodies at {@code tS} (free bodies); empty to place every
- *        body by its prescribed motion
  * @param scales what the value labels are read against so rounding noise prints as 0 (those of
  *        the whole run where there is one); null for those of the snapshot alone
  */
 public record Frame(Scene scene, double tS, Snapshot snapshot, FieldRaster raster, ViewTransform view,
-                    Set<Layer> layers, ColourRange range, EditorMarks marks, String note, Map<String, Pose> poses,
-                    ResultScales scales) {
+                    Set<Layer> layers, ColourRange range, EditorMarks marks, String note, ResultScales scales) {
 
     public Frame {
         layers = layers.isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(layers);
         marks = marks == null ? EditorMarks.none() : marks;
         note = note == null ? "" : note;
-        poses = poses == null ? Map.of() : Map.copyOf(poses);
         if (scales == null) {
             scales = ResultScales.of(snapshot == null ? List.of() : List.of(snapshot));
         }
@@ -37,14 +34,13 @@ public record Frame(Scene scene, double tS, Snapshot snapshot, FieldRaster raste
 
     /** A frame whose value labels are read against its own snapshot. */
     public Frame(Scene scene, double tS, Snapshot snapshot, FieldRaster raster, ViewTransform view,
-                 Set<Layer> layers, ColourRange range, EditorMarks marks, String note, Map<String, Pose> poses) {
-        this(scene, tS, snapshot, raster, view, layers, range, marks, note, poses, null);
+                 Set<Layer> layers, ColourRange range, EditorMarks marks, String note) {
+        this(scene, tS, snapshot, raster, view, layers, range, marks, note, null);
     }
 
-    /** A frame whose bodies all follow their prescribed motion. */
-    public Frame(Scene scene, double tS, Snapshot snapshot, FieldRaster raster, ViewTransform view,
-                 Set<Layer> layers, ColourRange range, EditorMarks marks, String note) {
-        this(scene, tS, snapshot, raster, view, layers, range, marks, note, Map.of());
+    /** Poses of the free bodies as the snapshot has them; empty without a snapshot. */
+    public Map<String, Pose> freeBodies() {
+        return snapshot == null ? Map.of() : snapshot.freeBodies();
     }
 
     public boolean shows(Layer layer) {

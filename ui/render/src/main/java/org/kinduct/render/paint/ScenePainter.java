@@ -65,7 +65,7 @@ public final class ScenePainter {
         }
         LabelPlacer placer = new LabelPlacer(s.width(), s.height());
         fixed.forEach(placer::reserve);
-        Placement placement = Placement.of(f.scene(), f.tS(), f.poses());
+        Placement placement = Placement.of(f.scene(), f.tS(), f.freeBodies());
         List<Runnable> patchMarks = f.shows(Layer.SOURCES)
                 ? SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer) : List.of();
         if (f.shows(Layer.CONDUCTORS)) {

@@ -27,44 +27,57 @@ public final class SourcePainter {
                                LabelPlacer placer) {
         List<Runnable> patchMarks = new ArrayList<>();
         for (Source src : scene.sources()) {
-            boolean selected = marks.selected().contains(src.id());
             List<Vec2> outline = outline(src, placement);
             if (outline.isEmpty()) {
                 continue;
             }
-            if (src instanceof Source.FieldPatch patch) {
-                polygon(s, v, outline, true);
-                s.fill(Palette.withAlpha(DivergingScale.argbAt(Math.signum(patch.bzT())), 0.25));
-                s.fillPath();
-                s.stroke(Palette.INK);
-                s.lineWidth(1.5);
-                s.dash(6, 4);
-                s.strokePath();
-                s.dash();
-                Vec2 c = centroid(outline);
-                patchMarks.add(() -> patchMark(s, placer, v.screenX(c.x()), v.screenY(c.y()), patch.bzT()));
-            } else if (src instanceof Source.SourceCoil coil) {
-                polygon(s, v, outline, true);
-                s.stroke(Palette.COIL);
-                s.lineWidth(3);
-                s.dash(10, 3, 2, 3);
-                s.strokePath();
-                s.dash();
-                coilArrows(s, v, outline, coil.drive().dcA() + coil.drive().amplitudeA() >= 0);
-                label(s, v, centroid(outline), coil.turns() + " turns", 0);
-            } else {
-                polygon(s, v, outline, true);
-                s.fill(Palette.MAGNET_FILL);
-                s.fillPath();
-                s.stroke(Palette.MAGNET_EDGE);
-                s.lineWidth(2);
-                s.dash();
-                s.strokePath();
-                Vec2 c = centroid(outline);
-                magnetHint(s, v, c, src);
-                placer.reserve(new LabelPlacer.Box(v.screenX(c.x()) - 16, v.screenY(c.y()) - 18, 32, 32));
-            }
-            if (selected) {
+            src.match(new Source.Cases<Void>() {
+                @Override
+                public Void patch(Source.FieldPatch patch) {
+                    polygon(s, v, outline, true);
+                    s.fill(Palette.withAlpha(DivergingScale.argbAt(Math.signum(patch.bzT())), 0.25));
+                    s.fillPath();
+                    s.stroke(Palette.INK);
+                    s.lineWidth(1.5);
+                    s.dash(6, 4);
+                    s.strokePath();
+                    s.dash();
+                    Vec2 c = centroid(outline);
+                    patchMarks.add(() -> patchMark(s, placer, v.screenX(c.x()), v.screenY(c.y()), patch.bzT()));
+                    return null;
+                }
+
+                @Override
+                public Void uniform(Source.UniformField uniform) {
+                    return null;
+                }
+
+                @Override
+                public Void block(Source.BlockMagnet block) {
+                    magnet(s, v, outline, block.magnetization(), placer);
+                    return null;
+                }
+
+                @Override
+                public Void cylinder(Source.CylinderMagnet cylinder) {
+                    magnet(s, v, outline, cylinder.magnetization(), placer);
+                    return null;
+                }
+
+                @Override
+                public Void coil(Source.SourceCoil coil) {
+                    polygon(s, v, outline, true);
+                    s.stroke(Palette.COIL);
+                    s.lineWidth(3);
+                    s.dash(10, 3, 2, 3);
+                    s.strokePath();
+                    s.dash();
+                    coilArrows(s, v, outline, coil.drive().dcA() + coil.drive().amplitudeA() >= 0);
+                    label(s, v, centroid(outline), coil.turns() + " turns", 0);
+                    return null;
+                }
+            });
+            if (marks.selected().contains(src.id())) {
                 polygon(s, v, outline, true);
                 s.stroke(Palette.SELECTION);
                 s.lineWidth(3);
@@ -74,6 +87,20 @@ public final class SourcePainter {
             }
         }
         return patchMarks;
+    }
+
+    private static void magnet(Surface s, ViewTransform v, List<Vec2> outline, Source.Magnetization north,
+                               LabelPlacer placer) {
+        polygon(s, v, outline, true);
+        s.fill(Palette.MAGNET_FILL);
+        s.fillPath();
+        s.stroke(Palette.MAGNET_EDGE);
+        s.lineWidth(2);
+        s.dash();
+        s.strokePath();
+        Vec2 c = centroid(outline);
+        magnetHint(s, v, c, north);
+        placer.reserve(new LabelPlacer.Box(v.screenX(c.x()) - 16, v.screenY(c.y()) - 18, 32, 32));
     }
 
     /** A patch's ⊙/⊗ and value in the free box nearest its centre (cx, cy). */
@@ -91,28 +118,49 @@ public final class SourcePainter {
 
     /** The source's outline in scene metres at this instant (empty for a field without outline). */
     public static List<Vec2> outline(Source src, Placement placement) {
-        if (src instanceof Source.FieldPatch p) {
-            return placement.place(p.body(), p.outline());
-        }
-        if (src instanceof Source.BlockMagnet m) {
-            List<Vec2> corners = new ArrayList<>(4);
-            double hx = m.sizeXM() / 2;
-            double hy = m.sizeYM() / 2;
-            for (double[] c : new double[][] {{-hx, -hy}, {hx, -hy}, {hx, hy}, {-hx, hy}}) {
-                corners.add(m.center().plus(new Vec2(c[0], c[1]).rotate(m.angleRad())));
+        return src.match(new Source.Cases<>() {
+            @Override
+            public List<Vec2> patch(Source.FieldPatch p) {
+                return placement.place(p.body(), p.outline());
             }
-            return placement.place(m.body(), corners);
-        }
-        if (src instanceof Source.CylinderMagnet m) {
-            return placement.place(m.body(), circle(m.center(), m.radiusM()));
-        }
-        if (src instanceof Source.SourceCoil c) {
-            List<Vec2> drawn = c.shape() instanceof Source.CoilShape.Circle circle
-                    ? circle(circle.center(), circle.radiusM())
-                    : ((Source.CoilShape.Polygon) c.shape()).vertices();
-            return placement.place(c.body(), drawn);
-        }
-        return List.of();
+
+            @Override
+            public List<Vec2> uniform(Source.UniformField uniform) {
+                return List.of();
+            }
+
+            @Override
+            public List<Vec2> block(Source.BlockMagnet m) {
+                List<Vec2> corners = new ArrayList<>(4);
+                double hx = m.sizeXM() / 2;
+                double hy = m.sizeYM() / 2;
+                for (double[] c : new double[][] {{-hx, -hy}, {hx, -hy}, {hx, hy}, {-hx, hy}}) {
+                    corners.add(m.center().plus(new Vec2(c[0], c[1]).rotate(m.angleRad())));
+                }
+                return placement.place(m.body(), corners);
+            }
+
+            @Override
+            public List<Vec2> cylinder(Source.CylinderMagnet m) {
+                return placement.place(m.body(), circle(m.center(), m.radiusM()));
+            }
+
+            @Override
+            public List<Vec2> coil(Source.SourceCoil c) {
+                List<Vec2> drawn = c.shape().match(new Source.CoilShape.Cases<>() {
+                    @Override
+                    public List<Vec2> polygon(Source.CoilShape.Polygon polygon) {
+                        return polygon.vertices();
+                    }
+
+                    @Override
+                    public List<Vec2> circle(Source.CoilShape.Circle circle) {
+                        return SourcePainter.circle(circle.center(), circle.radiusM());
+                    }
+                });
+                return placement.place(c.body(), drawn);
+            }
+        });
     }
 
     private static List<Vec2> circle(Vec2 center, double r) {
@@ -150,10 +198,8 @@ public final class SourcePainter {
     }
 
     /** The face the viewer sees (+z side): N for a magnet magnetized towards +z. */
-    private static void magnetHint(Surface s, ViewTransform v, Vec2 c, Source src) {
-        boolean plus = src instanceof Source.BlockMagnet b
-                ? b.magnetization() == Source.Magnetization.PLUS_Z
-                : ((Source.CylinderMagnet) src).magnetization() == Source.Magnetization.PLUS_Z;
+    private static void magnetHint(Surface s, ViewTransform v, Vec2 c, Source.Magnetization north) {
+        boolean plus = north == Source.Magnetization.PLUS_Z;
         double x = v.screenX(c.x());
         double y = v.screenY(c.y());
         s.fill(Palette.INK);

@@ -45,20 +45,15 @@ public record SceneBounds(double minX, double minY, double maxX, double maxY) {
      * prescribed motion at t0, the midpoint and t1, and at every sample of a simulated run, free
      * bodies where the run has them.
      *
-     * @param series the run's samples (only their times are read)
-     * @param poses the simulated poses at each sample's time (same length as {@code series}), or
-     *        empty when no body is simulated
-     * @throws IllegalArgumentException if {@code poses} is neither empty nor as long as {@code series}
+     * @param series the run's samples (their times and free bodies are read)
      */
-    public static SceneBounds ofWindow(Scene scene, List<Snapshot> series, List<Map<String, Pose>> poses) {
-        if (!poses.isEmpty() && poses.size() != series.size()) {
-            throw new IllegalArgumentException("simulated poses for " + poses.size() + " samples, but the run has "
-                    + series.size());
-        }
+    public static SceneBounds ofWindow(Scene scene, List<Snapshot> series) {
         TimeSpan w = scene.time();
         SceneBounds b = of(scene, w.t0S()).union(of(scene, w.t1S())).union(of(scene, (w.t0S() + w.t1S()) / 2));
-        for (int i = 0; i < poses.size(); i++) {
-            b = b.union(of(scene, Placement.of(scene, series.get(i).tS(), poses.get(i))));
+        for (Snapshot s : series) {
+            if (!s.freeBodies().isEmpty()) {
+                b = b.union(of(scene, Placement.of(scene, s.tS(), s.freeBodies())));
+            }
         }
         return b;
     }

@@ -45,7 +45,7 @@ class CautionCheckTest {
     void strongMagnetCautionFollowsTheRemanenceThreshold(double remanenceT, boolean cautioned) {
         Exporter export = new Exporter(magnet(remanenceT), ExportFixtures.options(0, 600, 96, new ViewChoice.Fit()));
 
-        assertEquals(cautioned, CautionCheck.lines(magnet(remanenceT), export.series()).contains(Cautions.MAGNETS));
+        assertEquals(cautioned, CautionCheck.lines(magnet(remanenceT), export.result().samples()).contains(Cautions.MAGNETS));
     }
 
     @ParameterizedTest
@@ -55,7 +55,7 @@ class CautionCheckTest {
         Exporter export = new Exporter(scene, ExportFixtures.options(0, 600, 96, new ViewChoice.Fit()));
 
         assertEquals(speed, export.snapshot().conductor("rod").orElseThrow().emfV(), 1e-9 * speed, "B·L·v");
-        assertEquals(cautioned, CautionCheck.lines(scene, export.series()).contains(Cautions.VOLTAGE));
+        assertEquals(cautioned, CautionCheck.lines(scene, export.result().samples()).contains(Cautions.VOLTAGE));
     }
 
     /** A 1 m rod oscillating across 1 T with peak speed {@code peak} m/s at 50 Hz: EMF = peak·cos(ωt) volts. */
@@ -75,10 +75,10 @@ class CautionCheckTest {
         Scene scene = oscillatingRod(peak);
         Exporter export = new Exporter(scene, ExportFixtures.options(0, 600, 96, new ViewChoice.Fit()));
 
-        double emfPeak = export.series().stream().mapToDouble(s -> Math.abs(s.conductors().get(0).emfV())).max()
+        double emfPeak = export.result().samples().stream().mapToDouble(s -> Math.abs(s.conductors().get(0).emfV())).max()
                 .orElseThrow();
         assertEquals(peak, emfPeak, 1e-3 * peak, "peak EMF B·L·v_max");
-        assertEquals(cautioned, CautionCheck.lines(scene, export.series()).contains(Cautions.VOLTAGE));
+        assertEquals(cautioned, CautionCheck.lines(scene, export.result().samples()).contains(Cautions.VOLTAGE));
     }
 
     @Test

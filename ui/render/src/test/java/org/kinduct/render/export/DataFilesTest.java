@@ -39,7 +39,7 @@ class DataFilesTest {
         Scene scene = ExportFixtures.frameEnteringPatch();
         Exporter export = new Exporter(scene, ExportFixtures.options(0, 600, 96, new ViewChoice.Fit()));
 
-        String header = DataFiles.seriesCsv(export.series()).lines().findFirst().orElseThrow();
+        String header = DataFiles.seriesCsv(export.result().samples()).lines().findFirst().orElseThrow();
 
         assertEquals("t_s,frame.flux_Wb,frame.linkage_Wb,frame.emf_V,frame.emf_flux_V,frame.current_A,"
                 + "frame.force_x_N,frame.force_y_N,rod.emf_V", header);
@@ -52,7 +52,7 @@ class DataFilesTest {
         List<Snapshot> expected = new SceneSolver(scene).series(scene.time().t0S(), scene.time().t1S(),
                 scene.time().dtS());
 
-        List<String> lines = DataFiles.seriesCsv(export.series()).lines().toList();
+        List<String> lines = DataFiles.seriesCsv(export.result().samples()).lines().toList();
 
         assertEquals(expected.size() + 1, lines.size(), "one row per time");
         for (int i = 0; i < expected.size(); i++) {
@@ -80,7 +80,7 @@ class DataFilesTest {
         ViewChoice.Box box = new ViewChoice.Box(-0.05, -0.1, 0.25, 0.2);
         SceneField field = new SceneSolver(scene).fieldAt(t);
 
-        List<String> lines = DataFiles.fieldCsv(field::bz, box).lines().toList();
+        List<String> lines = DataFiles.fieldCsv(field, box).lines().toList();
 
         assertEquals("x_m,y_m,Bz_T", lines.get(0));
         assertEquals(DataFiles.FIELD_COLUMNS * DataFiles.FIELD_COLUMNS + 1, lines.size(), "square cells on a square box");

@@ -7,7 +7,7 @@ import java.time.LocalDate;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.kinduct.demo.Demos;
-import org.kinduct.report.ResultScales;
+import org.kinduct.solver.run.ResultScales;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.WireSpec;
 import org.kinduct.scene.Body;
@@ -19,9 +19,7 @@ import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.CoupledSimulation;
-import org.kinduct.solver.dynamics.Sample;
-import org.kinduct.render.field.Evaluators;
-import org.kinduct.render.field.SceneEvaluator;
+import org.kinduct.solver.run.SceneRun;
 import org.kinduct.render.view.ViewTransform;
 
 /**
@@ -36,7 +34,7 @@ class FreeBodyExportTest {
     void fallingFrameIsExportedAtItsSimulatedPlaceAndCurrent() {
         Scene scene = Demos.load("frame-brake");
         double t = 0.5;
-        Sample sample = CoupledSimulation.run(scene, scene.time().t0S(), scene.time().t1S(), scene.time().dtS())
+        Snapshot sample = CoupledSimulation.run(scene, scene.time().t0S(), scene.time().t1S(), scene.time().dtS())
                 .samples().stream().filter(s -> Math.abs(s.tS() - t) < 1e-12).findFirst().orElseThrow();
         ConductorState expected = sample.conductors().get(0);
 
@@ -60,9 +58,8 @@ class FreeBodyExportTest {
         Scene scene = Scene.empty("drop").withBodies(List.of(cage)).withConductors(List.of(loop))
                 .withGravity(new Vec2(0, -9.81)).withTime(new TimeSpan(0, 1, 0.01));
         double t = 1;
-        SceneEvaluator ev = Evaluators.solver().apply(scene);
-        Snapshot snap = ev.at(t);
-        SnapshotPage page = SnapshotPage.layout(scene, snap, ev.posesAt(t), List.of(), List.of(),
+        Snapshot snap = new SceneRun(scene).instant(t);
+        SnapshotPage page = SnapshotPage.layout(scene, snap, List.of(), List.of(),
                 ResultScales.of(List.of(snap)), ExportFixtures.options(t, 800, 150, new ViewChoice.Fit()));
         ViewTransform v = page.mapView();
         List<Vec2> placed = snap.conductor("loop").orElseThrow().vertices();

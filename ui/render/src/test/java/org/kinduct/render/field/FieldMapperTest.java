@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Executor;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Motion;
@@ -14,6 +13,8 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 import org.kinduct.render.paint.FieldRaster;
+import org.kinduct.solver.SceneField;
+import org.kinduct.solver.run.SceneRun;
 import org.kinduct.render.view.ViewTransform;
 
 class FieldMapperTest {
@@ -24,21 +25,16 @@ class FieldMapperTest {
     private final List<FieldRaster> delivered = new ArrayList<>();
     private final List<RuntimeException> failures = new ArrayList<>();
 
-    @BeforeEach
-    void resetCounter() {
-        UniformOnlyEvaluator.FIELD_CALLS.set(0);
-    }
-
     private FieldMapper mapper(Executor work) {
-        return new FieldMapper(UniformOnlyEvaluator::new, work, SAME_THREAD, delivered::add, failures::add);
+        return new FieldMapper(work, SAME_THREAD, delivered::add, failures::add);
     }
 
-    private static Scene uniform(double... bz) {
+    private static SceneRun uniform(double... bz) {
         List<Source> sources = new ArrayList<>();
         for (int i = 0; i < bz.length; i++) {
             sources.add(new Source.UniformField("u" + i, bz[i]));
         }
-        return Scene.empty("u").withSources(sources);
+        return new SceneRun(Scene.empty("u").withSources(sources));
     }
 
     @Test
@@ -58,13 +54,13 @@ class FieldMapperTest {
     void staticSourcesAreEvaluatedOncePerGrid() {
         FieldMapper m = mapper(SAME_THREAD);
         ViewTransform view = new ViewTransform(0, 0, 1000, 200, 100);
-        Scene s = uniform(0.1);
+        SceneRun s = uniform(0.1);
         for (int i = 0; i < 5; i++) {
             m.compute(new MapRequest(s, 1, i * 0.1, view, 4));
         }
-        assertEquals(1, UniformOnlyEvaluator.FIELD_CALLS.get(), "a still uniform field does not change with time");
+        assertEquals(1, m.staticEvaluations, "a still uniform field does not change with time");
         m.compute(new MapRequest(s, 1, 0, view.zoomedAt(0, 0, 2), 4));
-        assertEquals(2, UniformOnlyEvaluator.FIELD_CALLS.get(), "a new grid needs a new evaluation");
+        assertEquals(2, m.staticEvaluations, "a new grid needs a new evaluation");
     }
 
     @Test
@@ -83,10 +79,10 @@ class FieldMapperTest {
 
     @Test
     void failuresAreReportedNotThrown() {
-        Scene notUniform = Scene.empty("x").withSources(List.of(new Source.BlockMagnet("m", "fixed",
-                org.kinduct.scene.Vec2.ZERO, 0.01, 0.01, 0.01, 0, 0.001, Source.Side.BELOW, 1, Source.Magnetization.PLUS_Z)));
-        mapper(SAME_THREAD).request(new MapRequest(notUniform, 1, 0, new ViewTransform(0, 0, 100, 10, 10), 5));
+        // A map of 4000 × 4000 one-pixel cells is more than the mapper takes.
+        mapper(SAME_THREAD).request(new MapRequest(uniform(0.1), 1, 0, new ViewTransform(0, 0, 100, 4000, 4000), 1));
         assertEquals(1, failures.size());
+        assertTrue(failures.get(0).getMessage().contains("too large"), failures.get(0).getMessage());
         assertTrue(delivered.isEmpty());
     }
 
@@ -98,7 +94,7 @@ class FieldMapperTest {
         assertEquals(0.01, FieldMapper.autoLimit(v), FIELD_TOL);
     }
 
-    /** A still field plus a magnet on a gliding body, mapped the way exports do (one evaluator for the scene). */
+    /** A still field plus a magnet on a gliding body: the cached still part and the moving part add up to the exact field. */
     @Test
     void stillAndMovingSourcesAreEachCountedOnce() {
         Scene scene = Scene.empty("mixed")
@@ -106,11 +102,11 @@ class FieldMapperTest {
                 .withSources(List.of(new Source.UniformField("earth", 0.02),
                         new Source.CylinderMagnet("disc", "cart", new Vec2(0, 0), 0.01, 0.005, 0.002,
                                 Source.Side.BELOW, 1.2, Source.Magnetization.PLUS_Z)));
-        SceneEvaluator evaluator = Evaluators.solver().apply(scene);
-        FieldMapper m = new FieldMapper(s -> evaluator, SAME_THREAD, SAME_THREAD, delivered::add, failures::add);
+        SceneRun run = new SceneRun(scene);
+        FieldMapper m = mapper(SAME_THREAD);
         double t = 0.1;
-        FieldRaster r = m.compute(new MapRequest(scene, 1, t, new ViewTransform(0.01, 0, 4000, 200, 100), 4));
-        SceneEvaluator.BzField exact = evaluator.fieldAt(t);
+        FieldRaster r = m.compute(new MapRequest(run, 1, t, new ViewTransform(0.01, 0, 4000, 200, 100), 4));
+        SceneField exact = run.fieldAt(t);
         for (int row = 0; row < r.rows(); row += 5) {
             for (int col = 0; col < r.cols(); col += 5) {
                 double want = exact.bz(r.centerX(col), r.centerY(row));
@@ -118,19 +114,5 @@ class FieldMapperTest {
                         "cell " + row + ", " + col);
             }
         }
-    }
-
-    /** The map must use the evaluator of the whole scene, so a free magnet sits where the coupled run has it. */
-    @Test
-    void theMapAsksForTheWholeScenesEvaluatorOnly() {
-        Scene scene = uniform(0.1, 0.2).withBodies(List.of(new Body("cart", "cart", Vec2.ZERO,
-                new Motion.Glide(new Vec2(1, 0)))));
-        List<Scene> asked = new ArrayList<>();
-        FieldMapper m = new FieldMapper(s -> {
-            asked.add(s);
-            return new UniformOnlyEvaluator(s);
-        }, SAME_THREAD, SAME_THREAD, delivered::add, failures::add);
-        m.compute(new MapRequest(scene, 1, 0, new ViewTransform(0, 0, 1000, 20, 10), 4));
-        assertEquals(List.of(scene), asked);
     }
 }

@@ -1,4 +1,4 @@
-package org.kinduct.report;
+package org.kinduct.solver.run;
 
 import java.util.Collection;
 import java.util.List;

@@ -1,0 +1,203 @@
+package org.kinduct.solver.run;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import java.util.stream.IntStream;
+import org.kinduct.scene.Checks;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.TimeSpan;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.SceneField;
+import org.kinduct.solver.SceneSolver;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.circuit.InductanceAtStart;
+import org.kinduct.solver.circuit.LoopInductance;
+import org.kinduct.solver.dynamics.CoupledRun;
+import org.kinduct.solver.dynamics.CoupledSimulation;
+import org.kinduct.solver.dynamics.RunMonitor;
+
+/**
+ * The one way Kinduct turns a scene into results, for the editor, the exports and the command
+ * line alike: it decides the {@link RunPlan} (quasi-static instants or one coupled run), makes
+ * the {@link RunResult} of the requested window, and answers for single instants by the same
+ * rule, so that any two outputs of one state agree by construction.
+ *
+ * <p>A single instant of an INSTANTS plan is solved exactly on its own (the same function each
+ * sample of the window comes from); in a COUPLED run an instant's state depends on the run from
+ * t0, so it is the run's sample: exactly, when asked for in the request ({@link RunRequest#alsoAt}),
+ * else the nearest grid sample.
+ *
+ * <p>Costly work (the plan needs the loops' inductances; the result needs every sample) is done
+ * on first use and kept; the methods may block while another thread computes, so an interactive
+ * caller calls them from a worker, never from its display thread. A coupled run reports to the
+ * run's {@link RunMonitor} and stops when it asks
+ * ({@link org.kinduct.solver.dynamics.SimulationCancelledException}; a later call starts it anew).
+ * Thread-safe.
+ */
+public final class SceneRun {
+
+    private final Scene scene;
+    private final RunRequest request;
+    private final SceneSolver prescribed;
+    private final RunMonitor monitor;
+    private final boolean parallel;
+    private InductanceAtStart inductance;
+    private RunPlan plan;
+    private RunResult result;
+
+    /** The scene's own window with the circuit model chosen automatically, instants on every core. */
+    public SceneRun(Scene scene) {
+        this(scene, RunRequest.of(Checks.nonNull(scene, "scene")), RunMonitor.NONE, true);
+    }
+
+    /**
+     * @param monitor follows a coupled run's progress and may stop it
+     * @param parallel whether quasi-static instants are solved on every core (an interactive
+     *        caller may keep cores free for its display)
+     */
+    public SceneRun(Scene scene, RunRequest request, RunMonitor monitor, boolean parallel) {
+        this.scene = Checks.nonNull(scene, "scene");
+        this.request = Checks.nonNull(request, "request");
+        this.monitor = Checks.nonNull(monitor, "monitor");
+        this.parallel = parallel;
+        this.prescribed = new SceneSolver(scene);
+    }
+
+    public Scene scene() {
+        return scene;
+    }
+
+    public RunRequest request() {
+        return request;
+    }
+
+    /** The loops' inductances at the start of the window. */
+    public synchronized InductanceAtStart inductanceAtStart() {
+        if (inductance == null) {
+            inductance = InductanceAtStart.of(scene, request.window().t0S());
+        }
+        return inductance;
+    }
+
+    /** How the window is computed; see {@link RunPlan}. */
+    public synchronized RunPlan plan() {
+        if (plan == null) {
+            plan = RunPlan.choose(scene, request, inductanceAtStart());
+        }
+        return plan;
+    }
+
+    /** The whole run, computed on first use. */
+    public synchronized RunResult result() {
+        if (result == null) {
+            result = plan().coupled() ? coupled() : instants();
+        }
+        return result;
+    }
+
+    /** True when {@link #result()} is computed, so asking for it does not block. */
+    public synchronized boolean done() {
+        return result != null;
+    }
+
+    /** The run's state at {@code tS}: exact for quasi-static instants, else as the class comment says. */
+    public Snapshot instant(double tS) {
+        Checks.finite(tS, "time");
+        if (!plan().coupled()) {
+            return solveInstant(tS, inductanceAtStart());
+        }
+        RunResult run = result();
+        return request.extraInstantsS().contains(tS) ? run.at(tS) : run.nearest(tS);
+    }
+
+    /**
+     * A result holding the one instant {@code tS} (as {@code kinduct solve --at} reports it): solved
+     * on its own for quasi-static instants, else from a coupled run of the window stretched to
+     * reach tS if need be, with tS sampled exactly.
+     */
+    public RunResult instantResult(double tS) {
+        if (!plan().coupled()) {
+            return new RunResult(scene, plan(), List.of(solveInstant(tS, inductanceAtStart())), List.of(), null,
+                    inductanceAtStart());
+        }
+        SceneRun stretched = new SceneRun(scene, request.alsoAt(tS), monitor, parallel);
+        Snapshot at = stretched.instant(tS);
+        return new RunResult(scene, stretched.plan(), List.of(at), List.of(), null, stretched.inductanceAtStart());
+    }
+
+    /** The summed field of all sources at {@code tS}, free bodies placed as the run moves them. */
+    public SceneField fieldAt(double tS) {
+        return placement().fieldAt(tS);
+    }
+
+    /**
+     * The summed field of the sources {@code sourceIds} at {@code tS}; needs no run when none of
+     * them rides a free body.
+     */
+    public SceneField fieldOf(double tS, Set<String> sourceIds) {
+        boolean free = scene.sources().stream().anyMatch(s -> sourceIds.contains(s.id())
+                && scene.body(s.body()).orElseThrow().motion() instanceof org.kinduct.scene.Motion.Free);
+        return (free ? placement() : prescribed).fieldOf(tS, sourceIds);
+    }
+
+    /** A solver placing free bodies where the run has them (prescribed placement when there are none). */
+    private SceneSolver placement() {
+        if (scene.bodies().stream().noneMatch(b -> b.motion() instanceof org.kinduct.scene.Motion.Free)) {
+            return prescribed;
+        }
+        return new SceneSolver(scene, result().kinematics());
+    }
+
+    private RunResult coupled() {
+        TimeSpan w = request.window();
+        CoupledRun run = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE, plan().circuit())
+                .simulate(scene, w.t0S(), w.t1S(), w.dtS(), request.extraInstantsS(), monitor);
+        return new RunResult(scene, plan(), run.samples(), run.extras(), run.audit(), inductanceAtStart());
+    }
+
+    private RunResult instants() {
+        TimeSpan w = request.window();
+        long n = (long) Math.floor((w.t1S() - w.t0S()) / w.dtS() + 1e-9);
+        IntStream steps = IntStream.rangeClosed(0, (int) n);
+        // Read once here: the instants may run on other threads, which must not wait for this one's lock.
+        InductanceAtStart start = inductanceAtStart();
+        List<Snapshot> samples = (parallel ? steps.parallel() : steps)
+                .mapToObj(k -> solveInstant(w.t0S() + k * w.dtS(), start)).toList();
+        List<Snapshot> extras = request.extraInstantsS().stream().sorted().map(t -> solveInstant(t, start)).toList();
+        return new RunResult(scene, plan(), samples, extras, null, start);
+    }
+
+    /**
+     * One quasi-static instant with each closed loop's self-inductance where it is: a loop whose
+     * vertices all ride one body keeps the inductance it has at the start (rigid motion leaves it
+     * unchanged); a loop that changes shape (a bar on rails) gets it computed anew.
+     */
+    private Snapshot solveInstant(double tS, InductanceAtStart start) {
+        Snapshot s = prescribed.at(tS);
+        List<ConductorState> states = new ArrayList<>(s.conductors().size());
+        for (int c = 0; c < s.conductors().size(); c++) {
+            ConductorState state = s.conductors().get(c);
+            Conductor conductor = scene.conductors().get(c);
+            if (conductor instanceof Conductor.Loop loop && !loop.open()) {
+                state = state.withInductance(rigid(loop) ? start.selfH(loop.id()) : selfNow(loop, state.vertices()));
+            }
+            states.add(state);
+        }
+        return new Snapshot(s.tS(), states, s.freeBodies());
+    }
+
+    private static boolean rigid(Conductor.Loop loop) {
+        return loop.vertices().stream().allMatch(v -> v.bodyOr(loop.body()).equals(loop.body()));
+    }
+
+    private static double selfNow(Conductor.Loop loop, List<Vec2> vertices) {
+        try {
+            return LoopInductance.self(vertices, loop.wire().diameterM() / 2, loop.turns());
+        } catch (IllegalArgumentException refused) {
+            return Double.NaN;
+        }
+    }
+}
