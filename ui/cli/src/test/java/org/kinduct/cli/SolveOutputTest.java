@@ -33,7 +33,7 @@ class SolveOutputTest {
         assertEquals(KinductMain.OK, r.code(), r.err());
         // 0.35 T · 20 mm · 2π·20 Hz·8 mm = 7.04 mV, upper (last) end + while moving right (Griffiths ch. 7).
         assertTrue(r.out().contains("7.04 mV"), r.out());
-        assertTrue(r.out().contains("+ at last vertex"), r.out());
+        assertTrue(r.out().contains("+ at last end"), r.out());
     }
 
     @Test

@@ -2,11 +2,19 @@ package org.kinduct.report;
 
 import org.kinduct.solver.dynamics.CircuitModel;
 import org.kinduct.solver.Circulation;
+import java.util.Locale;
 import org.kinduct.solver.Terminal;
 import org.kinduct.solver.run.RunPlan;
 
-/** The words every output uses for terminals and current sense. */
+/**
+ * The words every output uses for results: terminals and polarity, current sense, the agreement
+ * of the two EMF methods, circuit models. The one place result wording lives, so the table, the
+ * picture, its callouts and the editor say the same thing.
+ */
 public final class Labels {
+
+    /** Relative disagreement between the two EMF methods above which a result is flagged. */
+    public static final double AGREEMENT_FLAG = 1e-6;
 
     private Labels() {
     }
@@ -18,6 +26,48 @@ public final class Labels {
             case LAST -> "last";
             case NONE -> "none";
         };
+    }
+
+    /** Which end is positive, in words: "+ at last end", "+ at first end" or "no EMF"; {@code gap} adds " (gap)". */
+    public static String polarity(Terminal t, boolean gap) {
+        String across = gap ? " (gap)" : "";
+        return switch (t) {
+            case LAST -> "+ at last end" + across;
+            case FIRST -> "+ at first end" + across;
+            case NONE -> "no EMF";
+        };
+    }
+
+    /** The current's sense on screen in words, with its arrow: "↺ counter-clockwise", "↻ clockwise", "no current". */
+    public static String sense(Circulation c) {
+        return switch (c) {
+            case CCW -> "↺ counter-clockwise";
+            case CW -> "↻ clockwise";
+            case NONE -> "no current";
+        };
+    }
+
+    /** The sense's arrow alone, for tight places: "↺", "↻" or "". */
+    public static String senseArrow(Circulation c) {
+        return switch (c) {
+            case CCW -> "↺";
+            case CW -> "↻";
+            case NONE -> "";
+        };
+    }
+
+    /**
+     * The two EMF methods' agreement at one instant: "yes" (identical), "yes, 3e-09", "CHECK, 2e-04"
+     * above {@link #AGREEMENT_FLAG}, or "not comparable (field edge)" where the flux has a kink.
+     */
+    public static String agreement(double disagreement) {
+        if (Double.isNaN(disagreement)) {
+            return "not comparable (field edge)";
+        }
+        if (disagreement == 0) {
+            return "yes";
+        }
+        return String.format(Locale.ROOT, disagreement <= AGREEMENT_FLAG ? "yes, %.0e" : "CHECK, %.0e", disagreement);
     }
 
     /** {@code cw}, {@code ccw} or {@code none}, as seen on screen. */

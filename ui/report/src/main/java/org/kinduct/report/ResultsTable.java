@@ -16,9 +16,6 @@ import org.kinduct.solver.run.RunResult;
 /** The readable per-conductor summary printed by {@code kinduct solve} by default. */
 public final class ResultsTable {
 
-    /** Relative disagreement between the two EMF methods above which a line is flagged. */
-    public static final double AGREEMENT_FLAG = 1e-6;
-
     private ResultsTable() {
     }
 
@@ -113,18 +110,10 @@ public final class ResultsTable {
 
     private static String polarity(ConductorSummary r) {
         if (r.kind() == ConductorState.Kind.WIRE || r.positiveEndAtPeak() != Terminal.NONE) {
-            String mark = r.inducedFieldIncluded() ? "" : " *";
-            return switch (r.positiveEndAtPeak()) {
-                case LAST -> "+ at last vertex" + mark;
-                case FIRST -> "+ at first vertex" + mark;
-                case NONE -> "no EMF" + mark;
-            };
+            return Labels.polarity(r.positiveEndAtPeak(), r.kind() == ConductorState.Kind.LOOP)
+                    + (r.inducedFieldIncluded() ? "" : " *");
         }
-        return switch (r.directionAtPeak()) {
-            case CCW -> "current counter-clockwise";
-            case CW -> "current clockwise";
-            case NONE -> "no current";
-        };
+        return Labels.sense(r.directionAtPeak());
     }
 
     private static String agreement(ConductorSummary r) {
@@ -133,6 +122,6 @@ public final class ResultsTable {
         }
         String worst = String.format(Locale.ROOT, "%.1e", r.worstDisagreement());
         String kinks = r.kinkSamples() == 0 ? "" : "; " + r.kinkSamples() + " at field-edge crossings not comparable";
-        return (r.worstDisagreement() <= AGREEMENT_FLAG ? "yes (worst " + worst : "CHECK (differ by " + worst) + kinks + ")";
+        return (r.worstDisagreement() <= Labels.AGREEMENT_FLAG ? "yes (worst " + worst : "CHECK (differ by " + worst) + kinks + ")";
     }
 }

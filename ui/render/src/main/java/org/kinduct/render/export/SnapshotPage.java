@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.kinduct.solver.run.ResultScales;
-import org.kinduct.report.ResultsTable;
+import org.kinduct.report.Labels;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
@@ -354,20 +354,9 @@ final class SnapshotPage {
         boolean wire = st.kind() == ConductorState.Kind.WIRE;
         String flux = wire ? NOT_APPLICABLE : Quantities.flux(scales.flux(st.fluxWb()));
         String emf = Quantities.voltage(scales.emf(st.emfV())) + (wire && !st.inducedFieldIncluded() ? " *" : "");
-        String agree = wire ? NOT_APPLICABLE
-                : st.disagreement() == 0 ? "yes"
-                : String.format(Locale.ROOT, st.disagreement() <= ResultsTable.AGREEMENT_FLAG ? "yes, %.0e"
-                        : "CHECK, %.0e", st.disagreement());
+        String agree = wire ? NOT_APPLICABLE : Labels.agreement(st.disagreement());
         String current = closedLoop ? Quantities.current(scales.current(st.currentA())) : NOT_APPLICABLE;
-        String sense;
-        if (closedLoop) {
-            sense = st.direction() == Circulation.CCW ? "↺ counter-clockwise"
-                    : st.direction() == Circulation.CW ? "↻ clockwise" : "no current";
-        } else {
-            String gap = wire ? "" : " (gap)";
-            sense = st.positiveEnd() == Terminal.LAST ? "+ at last end" + gap
-                    : st.positiveEnd() == Terminal.FIRST ? "+ at first end" + gap : "no EMF";
-        }
+        String sense = closedLoop ? Labels.sense(st.direction()) : Labels.polarity(st.positiveEnd(), !wire);
         Vec2 forceN = scales.force(st.forceN());
         double f = forceN.length();
         String force = closedLoop && f > 0 ? Quantities.force(f) + " ∠ " + direction(forceN)

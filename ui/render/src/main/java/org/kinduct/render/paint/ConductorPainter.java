@@ -1,6 +1,7 @@
 package org.kinduct.render.paint;
 
 import java.util.List;
+import org.kinduct.report.Labels;
 import org.kinduct.solver.run.ResultScales;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
@@ -283,9 +284,7 @@ final class ConductorPainter {
         return c.match(new Conductor.Cases<>() {
             @Override
             public String[] wire(Conductor.Wire wire) {
-                String end = st.positiveEnd() == Terminal.LAST ? "+ at last end"
-                        : st.positiveEnd() == Terminal.FIRST ? "+ at first end" : "no polarity";
-                return new String[] {c.id(), emf, end};
+                return new String[] {c.id(), emf, Labels.polarity(st.positiveEnd(), false)};
             }
 
             @Override
@@ -293,9 +292,9 @@ final class ConductorPainter {
                 if (loop.open()) {
                     return new String[] {c.id(), emf + " across gap", "Φ " + Quantities.flux(scales.flux(st.linkageWb()))};
                 }
-                String sense = st.direction() == Circulation.CCW ? " ↺" : st.direction() == Circulation.CW ? " ↻" : "";
+                String arrow = Labels.senseArrow(st.direction());
                 return new String[] {c.id(), emf, "I " + Quantities.current(Math.abs(scales.current(st.currentA())))
-                        + sense};
+                        + (arrow.isEmpty() ? "" : " " + arrow)};
             }
         });
     }
