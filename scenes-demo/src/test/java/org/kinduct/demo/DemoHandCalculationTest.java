@@ -1,11 +1,13 @@
 package org.kinduct.demo;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
+import org.kinduct.solver.dynamics.CoupledRun;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Circulation;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.SceneSolver;
@@ -13,7 +15,6 @@ import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.Terminal;
 import org.kinduct.solver.dynamics.CoupledSimulation;
 import org.kinduct.solver.dynamics.EnergyAudit;
-import org.kinduct.solver.dynamics.CoupledRun;
 
 /**
  * Demo results against independent hand calculations. The straight-conductor cases use
@@ -22,11 +23,27 @@ import org.kinduct.solver.dynamics.CoupledRun;
  * walls with B normal to the plane, any profile (Shercliff, The Theory of Electromagnetic
  * Flow-Measurement, 1962). The falling frame uses the terminal speed v_t = m·g·R/(B²·w²) of a
  * loop falling with one edge in a field region (Griffiths, Introduction to Electrodynamics, 4th ed.,
- * 2013, Problem 7.11 setting).
+ * 2013, Problem 7.11 setting) and, for its approach, m·dv/dt = m·g − B·w·I, L·dI/dt + R·I = B·w·v
+ * with L of the rectangle from Rosa's formulas (Rosa, Bull. Bur. Stand. 4, 1908; Grover,
+ * Inductance Calculations, 1946). Magnet fields come from {@link DiscMagnetReference}.
+ *
+ * <p>Tolerances: each says what separates the hand value from the solver's and how large that is
+ * measured (the figures in the comments are from the run that set them).
  */
 class DemoHandCalculationTest {
 
-    private static final double TIGHT = 1e-9;
+    /**
+     * Ideal field patches and straight conductors: the solver's line geometry is exact, so hand
+     * and solver differ by rounding only (measured ≤ 2.2e-16 relative), relative.
+     */
+    private static final double EXACT = 1e-12;
+    /**
+     * The solver integrates magnet and coil fields with adaptive Gauss–Kronrod edge quadrature at
+     * a relative tolerance of 1e-10 (EdgeQuadrature.STANDARD); the hand references here converge
+     * to 1e-12 (doubling their nodes changes no digit of 12). Relative.
+     */
+    private static final double QUADRATURE = 1e-9;
+    private static final double MU0 = 1.25663706212e-6; // CODATA 2018
 
     @Test
     void senseTracePeakIsBLvWithUpperEndPositiveWhileMovingRight() {
@@ -34,23 +51,24 @@ class DemoHandCalculationTest {
         // Shuttle velocity is largest at t = 0: v = 2π f A = 2π · 20 Hz · 8 mm.
         double v = 2 * Math.PI * 20 * 0.008;
         ConductorState trace = new SceneSolver(scene).at(0).conductor("sense-trace").orElseThrow();
-        assertEquals(0.35 * 0.020 * v, trace.emfV(), TIGHT * 10 + 1e-9 * trace.emfV());
+        assertEquals(0.35 * 0.020 * v, trace.emfV(), EXACT * 0.35 * 0.020 * v);
         assertEquals(Terminal.LAST, trace.positiveEnd(), "v = +x, B into the board: upper (last) end is +");
     }
 
     @Test
     void senseTraceOutsideTheGapHasNoEmf() {
         Scene scene = Demos.load("drive-sense-wire");
-        // At t = 3/(4f) the trace is at x = 4 mm − 8 mm = −4 mm, left of the gap edge at x = 0.
+        // At t = 3/(4f) the trace is at x = 4 mm − 8 mm = −4 mm, left of the gap edge at x = 0: no
+        // field on it, so no EMF at all (the in-gap peak B·L·v is the scale).
         ConductorState trace = new SceneSolver(scene).at(0.75 / 20).conductor("sense-trace").orElseThrow();
-        assertEquals(0, trace.emfV(), 1e-12);
+        assertEquals(0, trace.emfV(), EXACT * 0.35 * 0.020 * 2 * Math.PI * 20 * 0.008);
     }
 
     @Test
     void flowElectrodesGiveBwvAndTheUpperElectrodeIsPositive() {
         Scene scene = Demos.load("flow-electrodes");
         ConductorState column = new SceneSolver(scene).at(0.005).conductor("lower-to-upper-electrode").orElseThrow();
-        assertEquals(0.2 * 0.030 * 2.0, column.emfV(), 1e-12);
+        assertEquals(0.2 * 0.030 * 2.0, column.emfV(), EXACT * 0.2 * 0.030 * 2.0);
         assertEquals(Terminal.LAST, column.positiveEnd());
     }
 
@@ -62,23 +80,27 @@ class DemoHandCalculationTest {
         double emf = 0.5 * 0.020 * 0.5; // B·w·v
         // The loop is drawn counter-clockwise; its flux (B out of the board) grows, so the EMF is negative
         // along the vertex order and the current circulates clockwise (Lenz's law).
-        assertEquals(-emf, loop.emfV(), 1e-9 * emf);
+        assertEquals(-emf, loop.emfV(), EXACT * emf);
         assertEquals(Circulation.CW, loop.direction());
         // R = ρ20 · perimeter / (π d²/4) + shunt, ρ20 = 1/58 Ω·mm²/m (IEC 60028), perimeter at t.
         double sledX = -0.040 + 0.5 * t;
         double perimeter = 2 * (sledX + 0.050) + 2 * 0.020;
         double r = (1.0 / 58 * 1e-6) * perimeter / (Math.PI * 0.003 * 0.003 / 4) + 0.1;
-        assertEquals(-emf / r, loop.currentA(), 1e-9 * emf / r);
+        assertEquals(-emf / r, loop.currentA(), EXACT * emf / r);
         // F = I·w·B on the sled edge, opposing the motion (−x); the fixed end bar sits outside the gap.
-        assertEquals(-(emf / r) * 0.020 * 0.5, loop.forceN().x(), 1e-9 * emf / r * 0.01);
-        assertEquals(0, loop.forceN().y(), 1e-12);
+        double force = (emf / r) * 0.020 * 0.5;
+        assertEquals(-force, loop.forceN().x(), EXACT * force);
+        // The rails carry equal and opposite currents in the same field: their forces cancel.
+        assertEquals(0, loop.forceN().y(), EXACT * force);
     }
 
     @Test
     void railSledOutsideTheGapCarriesNoCurrent() {
         List<Snapshot> series = new SceneSolver(Demos.load("rail-sled")).series(0, 0.018, 0.001);
+        // No part of the circuit is in the field yet: no flux, no EMF, no current (exactly; the
+        // in-gap current 5 mV/R, about 0.05 A, is the scale for EXACT).
         for (Snapshot s : series) {
-            assertTrue(Math.abs(s.conductors().get(0).currentA()) < 1e-12, "current before the sled reaches the gap");
+            assertEquals(0, s.conductors().get(0).currentA(), EXACT * 0.05, "current before the sled reaches the gap at t = " + s.tS());
         }
     }
 
@@ -87,13 +109,15 @@ class DemoHandCalculationTest {
         // 1200 rpm = 20 rev/s (definition of rpm); the magnet pair is antisymmetric under a half
         // turn about the shaft (N up at +25 mm, S up at −25 mm), so λ(θ + π) = −λ(θ) and the EMF
         // half a period (25 ms) later is the negative (symmetry; common practice for alternators).
+        // The rotated configurations are integrated by the same adaptive quadrature with mirrored
+        // nodes; measured agreement 2.4e-15 relative, bound QUADRATURE in case a panel split differs.
         SceneSolver solver = new SceneSolver(Demos.load("spinning-coil-generator"));
         for (double t : new double[] {0.0031, 0.0107, 0.0188}) {
             double now = solver.at(t).conductor("rotor-coil").orElseThrow().emfV();
             double half = solver.at(t + 0.025).conductor("rotor-coil").orElseThrow().emfV();
             double full = solver.at(t + 0.050).conductor("rotor-coil").orElseThrow().emfV();
-            assertEquals(-now, half, 1e-6 * Math.abs(now) + 1e-9, "half a turn later at t = " + t);
-            assertEquals(now, full, 1e-6 * Math.abs(now) + 1e-9, "a full turn later at t = " + t);
+            assertEquals(-now, half, QUADRATURE * Math.abs(now), "half a turn later at t = " + t);
+            assertEquals(now, full, QUADRATURE * Math.abs(now), "a full turn later at t = " + t);
         }
     }
 
@@ -105,20 +129,45 @@ class DemoHandCalculationTest {
         // Single-lobe estimate in the near-uniform field at the floor coil's axis:
         // B0 = μ0·N·I·a²/(2(a² + z²)^{3/2}) (on-axis field of a circular loop; Griffiths 2013, Ex. 5.6),
         // EMF amplitude of one 500 mm² lobe of 30 turns = 30 · ω · B0 · A at t = 0 (current ∝ sin ωt).
-        double mu0 = 1.25663706212e-6; // CODATA 2018
         double a = 0.5;
         double z = 0.3;
-        double b0PerAmp = mu0 * 10 * a * a / (2 * Math.pow(a * a + z * z, 1.5));
+        double b0PerAmp = MU0 * 10 * a * a / (2 * Math.pow(a * a + z * z, 1.5));
         double oneLobe = 30 * 2 * Math.PI * 50 * b0PerAmp * 5 * 500e-6;
+        // The coil is centred on the figure-eight's mirror line, so the two lobes, wound in opposite
+        // senses, link equal flux: zero up to rounding of two mirrored quadratures (measured 4.5e-17
+        // of one lobe's pickup, 1.9e-4 V).
         ConductorState stray = new SceneSolver(strayOnly).at(0).conductor("figure-eight").orElseThrow();
-        assertTrue(Math.abs(stray.emfV()) < 1e-6 * oneLobe,
-                "stray EMF " + stray.emfV() + " V against one lobe's " + oneLobe + " V");
-        double magnetPeak = 0;
-        for (Snapshot s : new SceneSolver(full).series(0.08, 0.12, 0.001)) {
-            magnetPeak = Math.max(magnetPeak, Math.abs(s.conductors().get(0).emfV()));
-        }
-        assertTrue(magnetPeak > 5 * oneLobe, "magnet pulse " + magnetPeak + " V should stand out over "
-                + oneLobe + " V of stray pickup per lobe");
+        assertEquals(0, stray.emfV(), EXACT * oneLobe, "stray EMF against one lobe's " + oneLobe + " V");
+    }
+
+    @Test
+    void gradiometerPulseIsTurnsTimesSpeedTimesFluxGradientOfBothLobes() {
+        // At t = 0.1 s the magnet (radius 3 mm, height 3 mm, 5 mm above, Br = 1.3 T, north +z) is over
+        // the crossing point x = 0, moving at v = 0.5 m/s. EMF = −N·dλ₁/dt = −N·v·∂Φ/∂x_c with Φ the
+        // winding-weighted flux; each lobe's ∂Φ/∂x_c = −∮ B_z dy (Faraday's law, Griffiths 2013 §7.1.3;
+        // DiscMagnetReference). Lobes as drawn: left counter-clockwise, right clockwise.
+        List<Vec2> leftLobe = List.of(new Vec2(-0.030, 0.010), new Vec2(-0.030, -0.010), new Vec2(-0.010, -0.010),
+                new Vec2(0, 0), new Vec2(-0.010, 0.010));
+        List<Vec2> rightLobe = List.of(new Vec2(0, 0), new Vec2(0.010, 0.010), new Vec2(0.030, 0.010),
+                new Vec2(0.030, -0.010), new Vec2(0.010, -0.010));
+        DiscMagnetReference magnet = new DiscMagnetReference(new Vec2(0, 0), 0.003, 0.005, 0.003, 1.3);
+        double expected = -30 * 0.5 * (magnet.fluxGradientX(leftLobe) + magnet.fluxGradientX(rightLobe));
+
+        ConductorState pickup = new SceneSolver(Demos.load("gradiometer")).at(0.1).conductor("figure-eight").orElseThrow();
+        // Measured 1.05e-10 relative: the solver's quadrature tolerance. The pulse, 8.66 mV, is 46
+        // times the stray pickup one lobe alone would see.
+        assertEquals(expected, pickup.emfV(), QUADRATURE * Math.abs(expected));
+    }
+
+    @Test
+    void discMagnetReferenceMatchesTheOnAxisClosedForm() {
+        // Check of the test's own reference: on the axis B_z = (Br/2)[(L+s)/√(R²+(L+s)²) − s/√(R²+s²)]
+        // (Camacho & Sosa, Rev. Mex. Fís. E 59, 8–17, 2013), and the parameter convention of
+        // Hipparchus' K(m): K(0.5) = 1.854074677301372 (Abramowitz & Stegun, Table 17.1, from memory).
+        DiscMagnetReference magnet = new DiscMagnetReference(new Vec2(0, 0), 0.005, 0.001, 0.005, 1.2);
+        double closed = 0.6 * (0.006 / Math.hypot(0.005, 0.006) - 0.001 / Math.hypot(0.005, 0.001));
+        assertEquals(closed, magnet.bz(0, 0), 1e-14 * closed);
+        assertEquals(1.854074677301372, org.hipparchus.special.elliptic.legendre.LegendreEllipticIntegral.bigK(0.5), 1e-15);
     }
 
     /** Frame of the frame-brake demo: rod centreline 100 mm × 500 mm, 10 mm hard-drawn aluminium rod. */
@@ -127,80 +176,241 @@ class DemoHandCalculationTest {
     private static final double ROD_D = 0.010;
     private static final double GAP_B = 0.6;
     private static final double G = 9.81;
+    /** The frame's lower bar starts 100 mm above the gap (scene file). */
+    private static final double FALL_BEFORE_GAP = 0.100;
     /** Hard-drawn aluminium, IEC 60889: ρ20 = 0.028264 Ω·mm²/m (from memory). */
     private static final double RHO_ALUMINIUM = 0.028264e-6;
     /** Aluminium density 2700 kg/m³ (common practice). */
     private static final double ALUMINIUM_DENSITY = 2700;
-    /** The run leaves ~28 mechanical time constants after entry: the approach is long over. */
-    private static final double TERMINAL_TOL = 1e-3;
-    /** ½·L·I² at the terminal current, about 1e-3 of the heat, is left out of the hand balance. */
-    private static final double HEAT_TOL = 3e-3;
+    /**
+     * The coupled run against the closed-form solution of the linear circuit–motion equations,
+     * relative. The run's integrator keeps a relative tolerance of 1e-10 per step and the approach
+     * is stable, so earlier errors decay; the slow mode (rate 34.9 /s) has 0.857 s to die out
+     * after entry, leaving e^{−29.9}·(v_entry − v_t)/v_t ≈ 4e-13. Measured: speed 5.0e-13, current
+     * 1.8e-13, drop 8e-15, heat 4e-15. (Before, 1e-3 and 3e-3 were allowed; the heat then left out
+     * ½·L·I², 6.5e-4 of it.)
+     */
+    private static final double DYNAMICS = 1e-10;
 
     private static CoupledRun frameBrakeRun() {
         Scene scene = Demos.load("frame-brake");
         return CoupledSimulation.run(scene, scene.time().t0S(), scene.time().t1S(), scene.time().dtS());
     }
 
+    private static double frameMass(Scene scene) {
+        return ((org.kinduct.scene.Motion.Free) scene.body("frame").orElseThrow().motion()).massKg();
+    }
+
+    /** R = ρ·perimeter/(π d²/4) (Pouillet; common practice), no load resistor, Ω. */
+    private static double frameResistance() {
+        return RHO_ALUMINIUM * 2 * (FRAME_W + FRAME_H) / (Math.PI * ROD_D * ROD_D / 4);
+    }
+
+    /**
+     * Self-inductance of the rectangular frame, a × b of round wire radius ρ, g = √(a² + b²):
+     * L = (μ0/π)[(a+b)·ln(2ab/ρ) − a·ln(a+g) − b·ln(b+g) + 2g − (7/4)(a+b)] (Rosa 1908; Grover 1946,
+     * uniform current, low frequency), H.
+     */
+    private static double frameInductance() {
+        double a = FRAME_W;
+        double b = FRAME_H;
+        double rho = ROD_D / 2;
+        double g = Math.hypot(a, b);
+        return MU0 / Math.PI * ((a + b) * Math.log(2 * a * b / rho) - a * Math.log(a + g) - b * Math.log(b + g)
+                + 2 * g - 1.75 * (a + b));
+    }
+
     @Test
     void frameBrakeMassIsThatOfItsAluminiumRod() {
-        Scene scene = Demos.load("frame-brake");
-        double mass = ((org.kinduct.scene.Motion.Free) scene.body("frame").orElseThrow().motion()).massKg();
         double rod = ALUMINIUM_DENSITY * 2 * (FRAME_W + FRAME_H) * Math.PI * ROD_D * ROD_D / 4;
-        assertEquals(rod, mass, 0.005 * rod);
+        // The scene states the mass in whole grams (254 g for 254.47 g): half a gram is the rounding.
+        assertEquals(rod, frameMass(Demos.load("frame-brake")), 0.5e-3);
     }
 
     @Test
     void frameBrakeFallsAtTheTerminalSpeedMgRoverB2w2() {
-        Scene scene = Demos.load("frame-brake");
-        double mass = ((org.kinduct.scene.Motion.Free) scene.body("frame").orElseThrow().motion()).massKg();
-        // R = ρ·perimeter/(π d²/4) (Pouillet; common practice), no load resistor.
-        double r = RHO_ALUMINIUM * 2 * (FRAME_W + FRAME_H) / (Math.PI * ROD_D * ROD_D / 4);
-        double vTerminal = mass * G * r / (GAP_B * GAP_B * FRAME_W * FRAME_W);
+        double mass = frameMass(Demos.load("frame-brake"));
+        double vTerminal = mass * G * frameResistance() / (GAP_B * GAP_B * FRAME_W * FRAME_W);
         List<Snapshot> samples = frameBrakeRun().samples();
         Snapshot last = samples.get(samples.size() - 1);
 
-        assertEquals(-vTerminal, last.freeBody("frame").velocity().y(), TERMINAL_TOL * vTerminal);
+        assertEquals(-vTerminal, last.freeBody("frame").velocity().y(), DYNAMICS * vTerminal);
         // The terminal current carries the weight: I·w·B = m·g, clockwise (Lenz: the flux out of the page grows).
         assertEquals(-mass * G / (GAP_B * FRAME_W), last.conductor("frame-loop").orElseThrow().currentA(),
-                TERMINAL_TOL * mass * G / (GAP_B * FRAME_W));
+                DYNAMICS * mass * G / (GAP_B * FRAME_W));
         assertEquals(Circulation.CW, last.conductor("frame-loop").orElseThrow().direction());
+        // The solver's loop inductance is Rosa's rectangle (measured to the last digit).
+        assertEquals(frameInductance(), last.conductor("frame-loop").orElseThrow().inductanceH(), 1e-12 * frameInductance());
+    }
+
+    /**
+     * Drop of the frame over the run, by hand: free fall to the gap (t_e = √(2h/g), v_e = g·t_e),
+     * then the linear system m·dv/dt = m·g − B·w·I, L·dI/dt + R·I = B·w·v from I = 0. Its deviations
+     * x = v − v_t, y = I − I_t obey d(x, y)/dt = A·(x, y) with A = [[0, −Bw/m], [Bw/L, −R/L]], a
+     * stable matrix, so ∫₀^∞ (x, y) dt = −A⁻¹·(x₀, y₀) and the extra drop is
+     * ∫ x dt = τ·(v_e − v_t) + v_t·L/R with τ = m·R/(B²w²): the inductance delays the approach by L/R
+     * (here 1.7 ms, 0.5 mm of drop). What remains of the transient at the end is ~1e-13 m.
+     */
+    private static double handDrop(double mass, double durationS) {
+        double r = frameResistance();
+        double tau = mass * r / (GAP_B * GAP_B * FRAME_W * FRAME_W);
+        double vTerminal = G * tau;
+        double tEntry = Math.sqrt(2 * FALL_BEFORE_GAP / G);
+        double vEntry = G * tEntry;
+        return FALL_BEFORE_GAP + vTerminal * (durationS - tEntry) + tau * (vEntry - vTerminal)
+                + vTerminal * frameInductance() / r;
     }
 
     @Test
-    void frameBrakeHeatIsTheLostPotentialEnergyLessTheKineticEnergy() {
+    void frameBrakeDropsAsTheLinearCircuitMotionEquationsSay() {
         Scene scene = Demos.load("frame-brake");
-        double mass = ((org.kinduct.scene.Motion.Free) scene.body("frame").orElseThrow().motion()).massKg();
         CoupledRun run = frameBrakeRun();
         Snapshot first = run.samples().get(0);
         Snapshot last = run.samples().get(run.samples().size() - 1);
         double drop = first.freeBody("frame").offset().y() - last.freeBody("frame").offset().y();
-        double speed = last.freeBody("frame").velocity().length();
-        double heat = mass * G * drop - 0.5 * mass * speed * speed;
+        double expected = handDrop(frameMass(scene), last.tS() - first.tS());
+        assertEquals(expected, drop, DYNAMICS * expected);
+    }
+
+    @Test
+    void frameBrakeHeatIsTheLostPotentialEnergyLessTheKineticAndMagneticEnergy() {
+        Scene scene = Demos.load("frame-brake");
+        double mass = frameMass(scene);
+        CoupledRun run = frameBrakeRun();
+        double duration = run.samples().get(run.samples().size() - 1).tS() - run.samples().get(0).tS();
+        double vTerminal = mass * G * frameResistance() / (GAP_B * GAP_B * FRAME_W * FRAME_W);
+        double iTerminal = mass * G / (GAP_B * FRAME_W);
+        // Energy conservation: heat = m·g·drop − ½·m·v_t² − ½·L·I_t² (the field of the frame's own
+        // current stores ½·L·I², 6.2e-4 J of 0.96 J), all by hand.
+        double magnetic = 0.5 * frameInductance() * iTerminal * iTerminal;
+        double heat = mass * G * handDrop(mass, duration) - 0.5 * mass * vTerminal * vTerminal - magnetic;
 
         EnergyAudit audit = run.audit();
-        assertTrue(drop > 0.1, "the frame falls into the gap: " + drop + " m");
-        assertEquals(heat, audit.jouleJ(), HEAT_TOL * heat, audit.toString());
+        assertEquals(heat, audit.jouleJ(), DYNAMICS * heat, audit.toString());
+        assertEquals(magnetic, audit.deltaMagneticJ(), DYNAMICS * magnetic, audit.toString());
+    }
+
+    /** Harvester scene: flexure tip mass, stiffness, damping, drive (scene file). */
+    private static final double TIP_MASS = 0.005;
+    private static final double STIFFNESS = 711;
+    private static final double FLEXURE_DAMPING = 0.075;
+    private static final double DRIVE_N = 0.1;
+    private static final double DRIVE_OMEGA = 2 * Math.PI * 60;
+    private static final int COIL_TURNS = 20;
+    private static final double LOAD_OHM = 20;
+    /**
+     * The harvester's stroke against the linear oscillator with the coil's energy-equivalent
+     * damping c_eq, relative. c_e(x) varies along the stroke (the magnet sweeps across the coil's
+     * edge), so the real motion carries harmonics and passes, during build-up, through smaller
+     * strokes whose c_eq differs by a few per cent; that acts on the 0.23 % share of c_e in the
+     * damping, a few 1e-5 of the stroke. Measured 2.8e-5. (Before, 3 % was allowed: the build-up
+     * left 1.4 %, the sampled crest 0.44 %, c_e 0.23 %.)
+     */
+    private static final double HARVESTER_AMPLITUDE = 1e-4;
+    /**
+     * Load power, relative: it goes with v², so it sees the stroke's error twice, and c_e(x) is
+     * evaluated along the hand trajectory. Measured 5.4e-5 (with the constant c_eq instead of
+     * c_e(x) it was 4.4e-3).
+     */
+    private static final double HARVESTER_POWER = 2e-4;
+
+    /** Coil resistance at 25 °C: ρ20·(1 + α20·5 K)·N·perimeter/(π d²/4) (IEC 60028), Ω. */
+    private static double coilResistance() {
+        double rho25 = 1.0 / 58 * 1e-6 * (1 + 0.00393 * 5);
+        return rho25 * COIL_TURNS * 4 * 0.012 / (Math.PI * 0.094e-3 * 0.094e-3 / 4);
+    }
+
+    /** The coil as drawn (counter-clockwise) and the magnet at the flexure's rest position. */
+    private static final List<Vec2> HARVESTER_COIL = List.of(new Vec2(-0.006, -0.006), new Vec2(0.006, -0.006),
+            new Vec2(0.006, 0.006), new Vec2(-0.006, 0.006));
+    private static final DiscMagnetReference HARVESTER_MAGNET =
+            new DiscMagnetReference(new Vec2(0.006, 0), 0.005, 0.001, 0.005, -1.2);
+
+    /**
+     * Electrical damping with the magnet displaced by x from rest: c_e(x) = (N·∂Φ/∂x_c)²/(R_coil + R_load)
+     * (Williams &amp; Yates, Sens. Actuators A 52, 8, 1996; quasi-static current EMF/R), N·s/m.
+     */
+    private static double electricalDampingAt(double x) {
+        double gradient = COIL_TURNS * HARVESTER_MAGNET.at(new Vec2(0.006 + x, 0)).fluxGradientX(HARVESTER_COIL);
+        return gradient * gradient / (coilResistance() + LOAD_OHM);
+    }
+
+    /**
+     * Energy-equivalent constant damping at stroke X, one cycle's dissipation for x = X·sin θ:
+     * c_eq = (2/π)∫_{−π/2}^{π/2} c_e(X sin θ)·cos²θ dθ (Gauss–Legendre, Hipparchus), N·s/m.
+     */
+    private static double electricalDamping(double strokeM) {
+        return 2 / Math.PI * new GaussIntegratorFactory().legendre(24, -Math.PI / 2, Math.PI / 2).integrate(
+                theta -> electricalDampingAt(strokeM * Math.sin(theta)) * Math.cos(theta) * Math.cos(theta));
+    }
+
+    /**
+     * Position and velocity of m·x'' + c·x' + k·x = F0·sin ωt from rest (the scene's drive), as
+     * steady state plus the homogeneous transient (Taylor, Classical Mechanics, 2005, §5.4–5.5).
+     */
+    private static double[] drivenOscillator(double c, double t) {
+        double m = TIP_MASS;
+        double k = STIFFNESS;
+        double w = DRIVE_OMEGA;
+        double beta = c / (2 * m);
+        double wd = Math.sqrt(k / m - beta * beta);
+        double d = Math.pow(k - m * w * w, 2) + Math.pow(c * w, 2);
+        double as = DRIVE_N * (k - m * w * w) / d;
+        double ac = -DRIVE_N * c * w / d;
+        double c1 = -ac;
+        double c2 = (beta * c1 - as * w) / wd;
+        double decay = Math.exp(-beta * t);
+        double x = as * Math.sin(w * t) + ac * Math.cos(w * t) + decay * (c1 * Math.cos(wd * t) + c2 * Math.sin(wd * t));
+        double v = as * w * Math.cos(w * t) - ac * w * Math.sin(w * t)
+                - beta * decay * (c1 * Math.cos(wd * t) + c2 * Math.sin(wd * t))
+                + decay * wd * (-c1 * Math.sin(wd * t) + c2 * Math.cos(wd * t));
+        return new double[] {x, v};
     }
 
     @Test
     void harvesterBuildsUpToTheResonanceAmplitudeAndFeedsItsLoad() {
         Scene scene = Demos.load("pcb-harvester");
         CoupledRun run = CoupledSimulation.run(scene, scene.time().t0S(), scene.time().t1S(), scene.time().dtS());
-        // Driven at its natural frequency ω0 = √(k/m) (711 N/m, 5 g: 60.0 Hz), a damped oscillator settles at
-        // X = F0/(c·ω0) (Taylor, Classical Mechanics, 2005, §5.5, resonance amplitude f0/(2βω0)); the coil's
-        // electrical damping is a fraction of a percent of the flexure's 0.075 N·s/m here. After 4.5 time
-        // constants 2m/c the build-up is 99 % complete.
-        double omega0 = Math.sqrt(711 / 0.005);
-        double expected = 0.1 / (0.075 * omega0);
+        // Driven at 60 Hz, next to its natural frequency ω0 = √(k/m) (60.016 Hz), a damped oscillator
+        // settles at X = F0/(c·ω0) (Taylor 2005, §5.5, resonance amplitude f0/(2βω0)), with c the
+        // flexure's 0.075 N·s/m plus the coil's equivalent damping c_e (0.23 % of it; c_e taken at the
+        // stroke it gives, two fixed-point rounds). The build-up from rest is not over (e^{−t/τ} =
+        // 1.4 % left at the end, τ = 2m/c) and the largest sample misses the crest by up to
+        // 1 − cos(ω·dt/2) = 0.44 %: so the hand value is the exact solution from rest, sampled at
+        // the run's own instants. Compared with X = F0/(c_flexure·ω0) alone the run is 1.3 % low.
+        double stroke = DRIVE_N / (FLEXURE_DAMPING * Math.sqrt(STIFFNESS / TIP_MASS));
+        double ce = 0;
+        for (int round = 0; round < 2; round++) {
+            ce = electricalDamping(stroke);
+            stroke = DRIVE_N / ((FLEXURE_DAMPING + ce) * Math.sqrt(STIFFNESS / TIP_MASS));
+        }
+        double damping = FLEXURE_DAMPING + ce;
+        double tail = scene.time().t1S() - 2 / 60.0;
         double amplitude = 0;
+        double expected = 0;
         for (Snapshot s : run.samples()) {
-            if (s.tS() > scene.time().t1S() - 2 / 60.0) {
+            if (s.tS() > tail) {
                 amplitude = Math.max(amplitude, Math.abs(s.freeBody("flexure").offset().x()));
+                expected = Math.max(expected, Math.abs(drivenOscillator(damping, s.tS())[0]));
             }
         }
-        assertEquals(expected, amplitude, 0.03 * expected, "steady amplitude at resonance");
+        assertEquals(expected, amplitude, HARVESTER_AMPLITUDE * expected, "amplitude over the last two periods");
+
+        // Load power over the last three whole periods (100 samples of 0.5 ms): ⟨I²⟩·R_L from the run
+        // against R_L/(R_coil + R_L)·⟨c_e(x)·v²⟩ along the hand trajectory (quasi-static current
+        // I = EMF/R, EMF = N·v·∂Φ/∂x_c, so I²·R_L = R_L/R·c_e(x)·v²).
+        List<Snapshot> last = run.samples().subList(run.samples().size() - 100, run.samples().size());
+        double loadPower = last.stream().mapToDouble(s -> Math.pow(s.conductor("board-coil").orElseThrow().currentA(), 2))
+                .average().orElseThrow() * LOAD_OHM;
+        double expectedPower = LOAD_OHM / (coilResistance() + LOAD_OHM) * last.stream().mapToDouble(s -> {
+            double[] xv = drivenOscillator(damping, s.tS());
+            return electricalDampingAt(xv[0]) * xv[1] * xv[1];
+        }).average().orElseThrow();
+        assertEquals(expectedPower, loadPower, HARVESTER_POWER * expectedPower, "load power");
+
+        // Supplied = dissipated + stored, to the integration's relative tolerance of the largest flow
+        // (the drive's work, 0.031 J). Measured residual 2.0e-14 J, 6.5e-13 of it.
         EnergyAudit audit = run.audit();
-        assertTrue(audit.jouleJ() > 0, "the load takes power: " + audit);
-        assertTrue(Math.abs(audit.residualJ()) < 1e-6 * audit.jouleJ(), "energy balance: " + audit);
+        assertEquals(0, audit.residualJ(), DYNAMICS * audit.suppliedJ(), "energy balance: " + audit);
     }
 }

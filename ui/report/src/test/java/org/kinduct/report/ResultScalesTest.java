@@ -55,8 +55,11 @@ class ResultScalesTest {
         List<Snapshot> run = rotorRun(strong.withSources(weak));
         ResultScales scales = ResultScales.of(run);
 
+        // Linearity: the weak run's peak is 1e-9 of the strong run's, to rounding (the quadrature
+        // sees the same integrands scaled, so its panels and their sums scale exactly but for rounding).
         double peak = peakEmf(run);
-        assertTrue(Math.abs(peak) > 1e-10 && Math.abs(peak) < 1e-8, "about a nanovolt: " + peak);
+        double strongPeak = peakEmf(rotorRun(strong));
+        assertEquals(1e-9 * strongPeak, peak, 1e-12 * Math.abs(1e-9 * strongPeak), "about a nanovolt: " + peak);
         assertEquals(peak, scales.emf(peak), "a nanovolt EMF is not noise in a nanovolt run");
         String shown = Units.format(scales.emf(peak), Dimension.VOLTAGE);
         assertTrue(shown.endsWith(" nV") && !shown.startsWith("0"), "shown as " + shown);
