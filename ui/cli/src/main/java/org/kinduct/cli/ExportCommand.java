@@ -34,6 +34,9 @@ final class ExportCommand implements Callable<Integer> {
     @Option(names = "--svg", paramLabel = "FILE", description = "Annotated snapshot as SVG.")
     Path svg;
 
+    @Option(names = "--pdf", paramLabel = "FILE", description = "Annotated snapshot as a vector PDF page (fonts embedded).")
+    Path pdf;
+
     @Option(names = "--width", paramLabel = "PX", description = "Image width in pixels (default: ${DEFAULT-VALUE}).",
             defaultValue = "" + SnapshotOptions.DEFAULT_WIDTH_PX)
     int widthPx;
@@ -57,10 +60,11 @@ final class ExportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Exporter.Targets targets = new Exporter.Targets(png, svg, seriesCsv, fieldCsv, json);
+        Exporter.Targets targets = Exporter.Targets.none().withPng(png).withSvg(svg).withPdf(pdf)
+                .withSeriesCsv(seriesCsv).withFieldCsv(fieldCsv).withJson(json);
         if (targets.isEmpty()) {
-            throw new BadInputException("nothing to export: give at least one of --png, --svg, --csv, --field-csv,"
-                    + " --json");
+            throw new BadInputException("nothing to export: give at least one of --png, --svg, --pdf, --csv,"
+                    + " --field-csv, --json");
         }
         Scene scene = input.load();
         SnapshotOptions options;

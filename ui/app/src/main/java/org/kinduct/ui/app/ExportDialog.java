@@ -98,7 +98,8 @@ public final class ExportDialog {
         grid.add(note, 0, 5, 2, 1);
         Runnable enable = () -> {
             boolean image = format.getValue() == ExportPreferences.Format.PNG
-                    || format.getValue() == ExportPreferences.Format.SVG;
+                    || format.getValue() == ExportPreferences.Format.SVG
+                    || format.getValue() == ExportPreferences.Format.PDF;
             width.setDisable(!image);
             dpi.setDisable(format.getValue() != ExportPreferences.Format.PNG);
         };
@@ -181,11 +182,12 @@ public final class ExportDialog {
 
     static Exporter.Targets targets(ExportPreferences.Format format, Path file) {
         return switch (format) {
-            case PNG -> new Exporter.Targets(file, null, null, null, null);
-            case SVG -> new Exporter.Targets(null, file, null, null, null);
-            case SERIES_CSV -> new Exporter.Targets(null, null, file, null, null);
-            case FIELD_CSV -> new Exporter.Targets(null, null, null, file, null);
-            case JSON -> new Exporter.Targets(null, null, null, null, file);
+            case PNG -> Exporter.Targets.none().withPng(file);
+            case SVG -> Exporter.Targets.none().withSvg(file);
+            case PDF -> Exporter.Targets.none().withPdf(file);
+            case SERIES_CSV -> Exporter.Targets.none().withSeriesCsv(file);
+            case FIELD_CSV -> Exporter.Targets.none().withFieldCsv(file);
+            case JSON -> Exporter.Targets.none().withJson(file);
         };
     }
 

@@ -23,6 +23,7 @@ public record ExportPreferences(Format format, int widthPx, int dpi, boolean who
     public enum Format {
         PNG("PNG image", "png"),
         SVG("SVG drawing", "svg"),
+        PDF("PDF page", "pdf"),
         SERIES_CSV("Time series (CSV)", "csv"),
         FIELD_CSV("Field map of the view (CSV)", "csv"),
         JSON("Results (JSON)", "json");

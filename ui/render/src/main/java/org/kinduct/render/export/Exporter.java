@@ -41,9 +41,45 @@ public final class Exporter {
     private static final double MAX_MAP_SAMPLES = 1.0e6;
 
     /** The files to write; null where none is wanted. */
-    public record Targets(Path png, Path svg, Path seriesCsv, Path fieldCsv, Path json) {
+    public record Targets(Path png, Path svg, Path pdf, Path seriesCsv, Path fieldCsv, Path json) {
+
+        /** No file yet; add them with the {@code withX} methods. */
+        public static Targets none() {
+            return new Targets(null, null, null, null, null, null);
+        }
+
+        public Targets withPng(Path file) {
+            return new Targets(file, svg, pdf, seriesCsv, fieldCsv, json);
+        }
+
+        public Targets withSvg(Path file) {
+            return new Targets(png, file, pdf, seriesCsv, fieldCsv, json);
+        }
+
+        public Targets withPdf(Path file) {
+            return new Targets(png, svg, file, seriesCsv, fieldCsv, json);
+        }
+
+        public Targets withSeriesCsv(Path file) {
+            return new Targets(png, svg, pdf, file, fieldCsv, json);
+        }
+
+        public Targets withFieldCsv(Path file) {
+            return new Targets(png, svg, pdf, seriesCsv, file, json);
+        }
+
+        public Targets withJson(Path file) {
+            return new Targets(png, svg, pdf, seriesCsv, fieldCsv, file);
+        }
+
+        /** The files named, in the order they are written. */
+        public List<Path> files() {
+            return java.util.stream.Stream.of(png, svg, pdf, seriesCsv, fieldCsv, json)
+                    .filter(java.util.Objects::nonNull).toList();
+        }
+
         public boolean isEmpty() {
-            return png == null && svg == null && seriesCsv == null && fieldCsv == null && json == null;
+            return files().isEmpty();
         }
     }
 
@@ -67,6 +103,9 @@ public final class Exporter {
         }
         if (targets.svg() != null) {
             write(targets.svg(), svg().getBytes(StandardCharsets.UTF_8), written);
+        }
+        if (targets.pdf() != null) {
+            write(targets.pdf(), pdf(), written);
         }
         if (targets.seriesCsv() != null) {
             write(targets.seriesCsv(), DataFiles.seriesCsv(run.result().samples()).getBytes(StandardCharsets.UTF_8),
@@ -115,8 +154,19 @@ public final class Exporter {
         SnapshotPage p = page();
         SvgSurface s = new SvgSurface(SnapshotPage.WIDTH, p.height());
         p.draw(s, raster());
-        String title = (scene.name().isEmpty() ? "Kinduct scene" : scene.name()) + " at t = " + options.tS() + " s";
-        return s.document(title, options.widthPx());
+        return s.document(title(), options.widthPx());
+    }
+
+    /** The snapshot as a one-page vector PDF with its fonts embedded, the page {@link SnapshotPage#WIDTH} points wide. */
+    public byte[] pdf() {
+        SnapshotPage p = page();
+        PdfSurface s = new PdfSurface(SnapshotPage.WIDTH, p.height(), title());
+        p.draw(s, raster());
+        return s.finish();
+    }
+
+    private String title() {
+        return (scene.name().isEmpty() ? "Kinduct scene" : scene.name()) + " at t = " + options.tS() + " s";
     }
 
     /** B_z over the box the snapshot's map shows, exactly evaluated. */

@@ -1,25 +1,51 @@
 package org.kinduct.render.paint;
 
 import java.awt.Font;
+import java.awt.FontFormatException;
 import java.awt.font.FontRenderContext;
 import java.awt.font.LineMetrics;
 import java.awt.geom.AffineTransform;
+import java.io.IOException;
+import java.io.InputStream;
 
 /**
- * Font choice and text measurement shared by the raster and the vector surface, so both lay out
- * text identically. Uses AWT fonts, which work with {@code java.awt.headless=true}.
+ * Font choice and text measurement shared by every surface (raster, SVG, PDF, the live view), so
+ * all lay out text identically. The faces are DejaVu Sans and DejaVu Sans Bold shipped with
+ * Kinduct (resources {@code org/kinduct/render/fonts}, Bitstream Vera licence, see
+ * {@code LICENSE-DejaVu.txt} there): the same metrics on every machine whatever fonts it has, and
+ * the files a PDF embeds. Uses AWT fonts, which work with {@code java.awt.headless=true}.
  */
 public final class TextMetrics {
 
-    /** The family the live canvas uses too; fontconfig falls back to a sans face when it is missing. */
+    /** The family name, as the SVG declares it. */
     public static final String FAMILY = "DejaVu Sans";
+    private static final String REGULAR_FILE = "/org/kinduct/render/fonts/DejaVuSans.ttf";
+    private static final String BOLD_FILE = "/org/kinduct/render/fonts/DejaVuSans-Bold.ttf";
+    private static final Font REGULAR = load(REGULAR_FILE);
+    private static final Font BOLD = load(BOLD_FILE);
     private static final FontRenderContext CONTEXT = new FontRenderContext(new AffineTransform(), true, true);
 
     private TextMetrics() {
     }
 
     public static Font font(double sizePx, boolean bold) {
-        return new Font(FAMILY, bold ? Font.BOLD : Font.PLAIN, 1).deriveFont((float) sizePx);
+        return (bold ? BOLD : REGULAR).deriveFont((float) sizePx);
+    }
+
+    /** The TrueType file of the regular or bold face, for surfaces that embed it. */
+    public static InputStream fontFile(boolean bold) {
+        return TextMetrics.class.getResourceAsStream(bold ? BOLD_FILE : REGULAR_FILE);
+    }
+
+    private static Font load(String resource) {
+        try (InputStream in = TextMetrics.class.getResourceAsStream(resource)) {
+            if (in == null) {
+                throw new IllegalStateException("font " + resource + " is missing from this build");
+            }
+            return Font.createFont(Font.TRUETYPE_FONT, in);
+        } catch (IOException | FontFormatException e) {
+            throw new IllegalStateException("font " + resource + " cannot be read: " + e.getMessage(), e);
+        }
     }
 
     public static double width(String text, double sizePx, boolean bold) {

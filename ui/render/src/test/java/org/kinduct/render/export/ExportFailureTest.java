@@ -30,7 +30,7 @@ class ExportFailureTest {
                 ExportFixtures.options(0.05, 600, 96, new ViewChoice.Fit()));
 
         IOException e = assertThrows(IOException.class,
-                () -> export.write(new Exporter.Targets(target, null, null, null, null)));
+                () -> export.write(Exporter.Targets.none().withPng(target)));
 
         assertTrue(e.getMessage().contains("snapshot.png") && e.getMessage().contains("cannot"), e.getMessage());
         assertFalse(Files.exists(target));

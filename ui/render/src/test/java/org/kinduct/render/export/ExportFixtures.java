@@ -13,6 +13,7 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import org.kinduct.render.view.ViewTransform;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Material;
@@ -24,6 +25,7 @@ import org.kinduct.scene.Vec2;
 import org.kinduct.scene.WireSpec;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
 /** Scenes with textbook answers, and helpers to look at rendered pixels. */
@@ -112,5 +114,59 @@ final class ExportFixtures {
             }
         }
         return sum / n;
+    }
+
+    private static final int INK_MAX = 70;
+    private static final int PAPER_MIN = 225;
+    /** The polarity discs sit just beyond a wire's ends: the strip searched, page units from the end. */
+    private static final double STRIP_START = 4;
+    private static final double STRIP_END = 32;
+    private static final double STRIP_HALF_WIDTH = 12;
+    /** A disc of radius 6 to 11 units covers more than this many units², even minus its glyph. */
+    private static final double MIN_DISC_AREA = 60;
+
+    /**
+     * The picture of {@link #rodInUniformField()} rendered from an export ({@code k} output pixels
+     * per page unit): the dark + disc beyond the rod's upper end and the white − disc beyond its
+     * lower end (v × B points up: upper end positive), amber inside the +B patch, blue in the −B
+     * field around it.
+     */
+    static void assertRodPicture(BufferedImage img, SnapshotPage page, double k, double rodX) {
+        ViewTransform v = page.mapView();
+        double[] upper = marks(img, page, k, rodX, ROD / 2, -1);
+        double[] lower = marks(img, page, k, rodX, -ROD / 2, +1);
+        assertTrue(upper[0] > MIN_DISC_AREA && upper[0] > 2 * lower[0],
+                "dark + disc beyond the upper end: ink areas upper " + upper[0] + ", lower " + lower[0]);
+        assertTrue(lower[1] > MIN_DISC_AREA && lower[1] > 2 * upper[1],
+                "white − disc beyond the lower end: paper areas lower " + lower[1] + ", upper " + upper[1]);
+
+        // Points off the grid lines (every 10 mm) and clear of the rod's marks and callout.
+        int out = img.getRGB((int) (v.screenX(0.137) * k), (int) ((page.mapTop() + v.screenY(0.123)) * k));
+        int in = img.getRGB((int) (v.screenX(rodX - 0.033) * k), (int) ((page.mapTop() + v.screenY(-0.027)) * k));
+        assertTrue((out >> 16 & 0xFF) > (out & 0xFF) + 40, "amber inside the +B patch: " + Integer.toHexString(out));
+        assertTrue((in & 0xFF) > (in >> 16 & 0xFF) + 40, "blue in the −B field: " + Integer.toHexString(in));
+    }
+
+    /**
+     * Areas (page units²) of ink-dark and of paper-white pixels just beyond a wire end (scene
+     * point x, y), in a strip along the screen direction {@code dirY} (−1 up, +1 down).
+     */
+    private static double[] marks(BufferedImage img, SnapshotPage page, double k, double x, double y, int dirY) {
+        ViewTransform v = page.mapView();
+        double sx = v.screenX(x) * k;
+        double sy = (page.mapTop() + v.screenY(y)) * k;
+        int ink = 0;
+        int paper = 0;
+        for (double d = STRIP_START * k; d <= STRIP_END * k; d++) {
+            for (double lateral = -STRIP_HALF_WIDTH * k; lateral <= STRIP_HALF_WIDTH * k; lateral++) {
+                int rgb = img.getRGB((int) (sx + lateral), (int) (sy + dirY * d));
+                int r = rgb >> 16 & 0xFF;
+                int g = rgb >> 8 & 0xFF;
+                int b = rgb & 0xFF;
+                ink += r < INK_MAX && g < INK_MAX && b < INK_MAX ? 1 : 0;
+                paper += r > PAPER_MIN && g > PAPER_MIN && b > PAPER_MIN ? 1 : 0;
+            }
+        }
+        return new double[] {ink / (k * k), paper / (k * k)};
     }
 }

@@ -36,15 +36,6 @@ class SvgExportTest {
 
     private static final double T = 0.05;
     private static final int WIDTH_PX = 1200;
-    /** Channel levels counted as the painter's ink (#1e1e1e) and as white paper; the field colours are neither. */
-    private static final int INK_MAX = 70;
-    private static final int PAPER_MIN = 225;
-    /** The polarity discs sit just beyond a wire's ends: the strip searched, page units from the end. */
-    private static final double STRIP_START = 4;
-    private static final double STRIP_END = 32;
-    private static final double STRIP_HALF_WIDTH = 12;
-    /** A disc of radius 6 to 11 units covers more than this many units², even minus its glyph. */
-    private static final double MIN_DISC_AREA = 60;
 
     @TempDir
     Path dir;
@@ -108,43 +99,6 @@ class SvgExportTest {
         BufferedImage img = ImageIO.read(rendered.toFile());
 
         SnapshotPage page = SnapshotPage.layout(scene, export.snapshot(), List.of(), options);
-        double k = WIDTH_PX / SnapshotPage.WIDTH;
-        ViewTransform v = page.mapView();
-        double rodX = SPEED * T;
-        double[] upper = marks(img, page, k, rodX, ROD / 2, -1);
-        double[] lower = marks(img, page, k, rodX, -ROD / 2, +1);
-        assertTrue(upper[0] > MIN_DISC_AREA && upper[0] > 2 * lower[0],
-                "dark + disc beyond the upper end: ink areas upper " + upper[0] + ", lower " + lower[0]);
-        assertTrue(lower[1] > MIN_DISC_AREA && lower[1] > 2 * upper[1],
-                "white − disc beyond the lower end: paper areas lower " + lower[1] + ", upper " + upper[1]);
-
-        // Points off the grid lines (every 10 mm) and clear of the rod's marks and callout.
-        int out = img.getRGB((int) (v.screenX(0.137) * k), (int) ((page.mapTop() + v.screenY(0.123)) * k));
-        int in = img.getRGB((int) (v.screenX(rodX - 0.033) * k), (int) ((page.mapTop() + v.screenY(-0.027)) * k));
-        assertTrue((out >> 16 & 0xFF) > (out & 0xFF) + 40, "amber inside the +B patch: " + Integer.toHexString(out));
-        assertTrue((in & 0xFF) > (in >> 16 & 0xFF) + 40, "blue in the −B field: " + Integer.toHexString(in));
-    }
-
-    /**
-     * Areas (page units²) of ink-dark and of paper-white pixels just beyond a wire end (scene
-     * point x, y), in a strip along the screen direction {@code dirY} (−1 up, +1 down).
-     */
-    private static double[] marks(BufferedImage img, SnapshotPage page, double k, double x, double y, int dirY) {
-        ViewTransform v = page.mapView();
-        double sx = v.screenX(x) * k;
-        double sy = (page.mapTop() + v.screenY(y)) * k;
-        int ink = 0;
-        int paper = 0;
-        for (double d = STRIP_START * k; d <= STRIP_END * k; d++) {
-            for (double lateral = -STRIP_HALF_WIDTH * k; lateral <= STRIP_HALF_WIDTH * k; lateral++) {
-                int rgb = img.getRGB((int) (sx + lateral), (int) (sy + dirY * d));
-                int r = rgb >> 16 & 0xFF;
-                int g = rgb >> 8 & 0xFF;
-                int b = rgb & 0xFF;
-                ink += r < INK_MAX && g < INK_MAX && b < INK_MAX ? 1 : 0;
-                paper += r > PAPER_MIN && g > PAPER_MIN && b > PAPER_MIN ? 1 : 0;
-            }
-        }
-        return new double[] {ink / (k * k), paper / (k * k)};
+        ExportFixtures.assertRodPicture(img, page, WIDTH_PX / SnapshotPage.WIDTH, SPEED * T);
     }
 }
