@@ -8,6 +8,7 @@ import org.kinduct.report.Version;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.units.Dimension;
 import org.kinduct.scene.units.Units;
+import org.kinduct.render.export.ExportInstant;
 import org.kinduct.render.export.Exporter;
 import org.kinduct.render.export.SnapshotOptions;
 import org.kinduct.render.export.ViewChoice;
@@ -25,7 +26,9 @@ final class ExportCommand implements Callable<Integer> {
     @Mixin
     SceneInput input;
 
-    @Option(names = "--at", paramLabel = "TIME", description = "Instant shown (default: the scene's start time).")
+    @Option(names = "--at", paramLabel = "peak|peak:ID|TIME", defaultValue = "peak",
+            description = {"Instant shown: the largest |EMF| of any conductor (default), of conductor ID,",
+                    "or a time (a coupled run is sampled there exactly)."})
     String at;
 
     @Option(names = "--png", paramLabel = "FILE", description = "Annotated snapshot as PNG.")
@@ -69,8 +72,8 @@ final class ExportCommand implements Callable<Integer> {
         Scene scene = input.load();
         SnapshotOptions options;
         try {
-            double t = at == null ? scene.time().t0S() : Units.parse(at, Dimension.TIME);
-            options = SnapshotOptions.standard(t, widthPx, dpi, viewChoice(view), LocalDate.now(), Version.text());
+            ExportInstant instant = ExportInstant.parse(at, text -> Units.parse(text, Dimension.TIME));
+            options = SnapshotOptions.standard(instant, widthPx, dpi, viewChoice(view), LocalDate.now(), Version.text());
         } catch (IllegalArgumentException e) {
             throw new BadInputException(e.getMessage());
         }
@@ -78,7 +81,7 @@ final class ExportCommand implements Callable<Integer> {
             for (Path written : new Exporter(scene, options).write(targets)) {
                 System.out.println("wrote " + written);
             }
-        } catch (IOException e) {
+        } catch (IOException | IllegalArgumentException e) {
             throw new BadInputException(e.getMessage());
         }
         return KinductMain.OK;

@@ -19,6 +19,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.kinduct.demo.Demos;
+import org.kinduct.render.paint.Quantities;
 import org.kinduct.report.Labels;
 import org.kinduct.scene.units.Dimension;
 import org.kinduct.scene.units.Units;
@@ -28,7 +29,8 @@ import org.w3c.dom.NodeList;
 
 /**
  * One export, one truth: {@code kinduct export --csv --json --svg} of one scene writes the same
- * EMFs, currents and senses in all three files, for every demo and for a loop whose inductance
+ * EMFs, currents and senses in all three files, and the picture shows the instant of the largest
+ * EMF (the default {@code --at peak}), for every demo and for a loop whose inductance
  * matters (200 turns, 100 × 100 mm, 1 mm copper wire, gliding at 1 m/s into a 0.5 T patch: L/R
  * of some milliseconds, so its current lags the EMF and the run is inductive). The picture's
  * table is read from the SVG, which is drawn from the same page as the PNG.
@@ -73,10 +75,10 @@ class OutputsAgreeTest {
         Path json = dir.resolve(name + ".json");
         Path csv = dir.resolve(name + ".csv");
         Path svg = dir.resolve(name + ".svg");
-        List<String> first = new ArrayList<>(List.of("export"));
-        first.addAll(source);
-        first.addAll(List.of("--json", json.toString(), "--csv", csv.toString()));
-        assertEquals(KinductMain.OK, KinductMain.run(first.toArray(String[]::new)));
+        List<String> args = new ArrayList<>(List.of("export"));
+        args.addAll(source);
+        args.addAll(List.of("--json", json.toString(), "--csv", csv.toString(), "--svg", svg.toString()));
+        assertEquals(KinductMain.OK, KinductMain.run(args.toArray(String[]::new)));
         JsonNode results = new ObjectMapper().readTree(json.toFile());
         JsonNode samples = results.get("samples");
         if (name.equals("inductive-loop")) {
@@ -104,13 +106,18 @@ class OutputsAgreeTest {
             }
         }
 
-        // The picture at a sampled instant a third of the way in: its table holds the JSON's values there.
-        double t = samples.get(samples.size() / 3).get("t").asDouble();
-        List<String> second = new ArrayList<>(List.of("export"));
-        second.addAll(source);
-        second.addAll(List.of("--at", Double.toString(t), "--svg", svg.toString()));
-        assertEquals(KinductMain.OK, KinductMain.run(second.toArray(String[]::new)));
-        Map<String, Map<String, String>> table = table(texts(Files.readString(svg)));
+        // The picture shows, by default, the earliest sample of largest |EMF|; its table holds the JSON's values there.
+        double t = samples.get(0).get("t").asDouble();
+        double peak = 0;
+        for (JsonNode s : samples) {
+            if (Math.abs(s.get("emf_V").asDouble()) > peak) {
+                peak = Math.abs(s.get("emf_V").asDouble());
+                t = s.get("t").asDouble();
+            }
+        }
+        List<String> texts = texts(Files.readString(svg));
+        assertTrue(texts.contains("t = " + Quantities.time(t)), name + ": the picture shows the peak at t = " + t);
+        Map<String, Map<String, String>> table = table(texts);
         for (JsonNode s : samples) {
             if (s.get("t").asDouble() != t) {
                 continue;

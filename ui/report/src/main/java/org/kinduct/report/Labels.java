@@ -58,11 +58,11 @@ public final class Labels {
 
     /**
      * The two EMF methods' agreement at one instant: "yes" (identical), "yes, 3e-09", "CHECK, 2e-04"
-     * above {@link #AGREEMENT_FLAG}, or "not comparable (field edge)" where the flux has a kink.
+     * above {@link #AGREEMENT_FLAG}, or "n/a (edge)" where the flux has a kink (a loop edge on a field edge).
      */
     public static String agreement(double disagreement) {
         if (Double.isNaN(disagreement)) {
-            return "not comparable (field edge)";
+            return "n/a (edge)";
         }
         if (disagreement == 0) {
             return "yes";

@@ -1,5 +1,6 @@
 package org.kinduct.ui.app;
 
+import org.kinduct.render.export.ExportInstant;
 import org.kinduct.render.export.Exporter;
 import org.kinduct.render.export.SnapshotOptions;
 import org.kinduct.render.export.ViewChoice;
@@ -78,7 +79,9 @@ public final class ExportDialog {
         width.setId("export-width");
         dpi.setText(Integer.toString(prefs.dpi()));
         dpi.setId("export-dpi");
-        time.setText(Quantities.time(vm.timeProperty().get()));
+        // The instant that answers "how many volts" by default; the time shown, or any time, on request.
+        time.setText("peak");
+        time.setPromptText("peak, peak:ID or a time");
         time.setId("export-time");
         ToggleGroup views = new ToggleGroup();
         currentView.setToggleGroup(views);
@@ -120,7 +123,7 @@ public final class ExportDialog {
         try {
             int w = Integer.parseInt(width.getText().strip());
             int r = Integer.parseInt(dpi.getText().strip());
-            double t = Units.parse(time.getText(), Dimension.TIME);
+            ExportInstant t = ExportInstant.parse(time.getText(), text -> Units.parse(text, Dimension.TIME));
             ViewChoice view = wholeScene.isSelected() ? new ViewChoice.Fit() : new ViewChoice.Current(vm.viewProperty().get());
             EnumSet<Layer> layers = vm.layers().isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(vm.layers());
             SnapshotOptions options = new SnapshotOptions(t, w, r, view, layers, vm.rangeProperty().get(),
@@ -195,14 +198,23 @@ public final class ExportDialog {
         return scene.name().isEmpty() ? "untitled" : scene.name();
     }
 
-    /** A file name from the scene's name and the time, e.g. {@code rod-on-a-cart-t50ms}. */
+    /** "-t50.0ms" for a time, "-peak" or "-peak-pickup" for a peak. */
+    private static String instantSuffix(ExportInstant instant) {
+        if (instant instanceof ExportInstant.At at) {
+            return "-t" + Quantities.time(at.tS()).replaceAll("[^A-Za-z0-9.]", "");
+        }
+        String id = ((ExportInstant.Peak) instant).conductorId();
+        return "-peak" + (id == null ? "" : "-" + id.replaceAll("[^A-Za-z0-9]+", "-"));
+    }
+
+    /** A file name from the scene's name and the instant, e.g. {@code rod-on-a-cart-t50ms}. */
     private static String baseName(Scene scene, Choice c) {
         String slug = sceneName(scene).toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-|-$", "");
         String suffix = switch (c.format()) {
             case SERIES_CSV -> "-series";
             case JSON -> "-results";
-            case FIELD_CSV -> "-field-t" + Quantities.time(c.options().tS()).replaceAll("[^A-Za-z0-9.]", "");
-            default -> "-t" + Quantities.time(c.options().tS()).replaceAll("[^A-Za-z0-9.]", "");
+            case FIELD_CSV -> "-field" + instantSuffix(c.options().instant());
+            default -> instantSuffix(c.options().instant());
         };
         return (slug.isEmpty() ? "scene" : slug) + suffix;
     }

@@ -92,7 +92,9 @@ public final class Exporter {
     public Exporter(Scene scene, SnapshotOptions options) {
         this.scene = scene;
         this.options = options;
-        this.run = new SceneRun(scene, RunRequest.of(scene).alsoAt(options.tS()), RunMonitor.NONE, true);
+        RunRequest window = RunRequest.of(scene);
+        this.run = new SceneRun(scene, options.instant() instanceof ExportInstant.At at ? window.alsoAt(at.tS()) : window,
+                RunMonitor.NONE, true);
     }
 
     /** Writes every target atomically; a target that fails is left as it was. Returns the files written. */
@@ -166,19 +168,19 @@ public final class Exporter {
     }
 
     private String title() {
-        return (scene.name().isEmpty() ? "Kinduct scene" : scene.name()) + " at t = " + options.tS() + " s";
+        return (scene.name().isEmpty() ? "Kinduct scene" : scene.name()) + " at t = " + snapshot().tS() + " s";
     }
 
     /** B_z over the box the snapshot's map shows, exactly evaluated. */
     public String fieldCsv() {
         ViewTransform v = page().mapView();
-        return DataFiles.fieldCsv(run.fieldAt(options.tS()), new ViewChoice.Box(v.minX(), v.minY(), v.maxX(),
+        return DataFiles.fieldCsv(run.fieldAt(snapshot().tS()), new ViewChoice.Box(v.minX(), v.minY(), v.maxX(),
                 v.maxY()));
     }
 
     /** The state the snapshot shows: the run's sample at exactly the chosen instant. */
     public Snapshot snapshot() {
-        return run.result().at(options.tS());
+        return options.instant().in(run.result());
     }
 
     /** The run every exported file reads. */
@@ -213,7 +215,7 @@ public final class Exporter {
             int step = (int) Math.max(MAP_STEP_PX,
                     Math.ceil(Math.sqrt(device.widthPx() * device.heightPx() / MAX_MAP_SAMPLES)));
             FieldMapper mapper = new FieldMapper(Runnable::run, Runnable::run, r -> { }, e -> { });
-            raster = mapper.compute(new MapRequest(run, 0, options.tS(), device, step));
+            raster = mapper.compute(new MapRequest(run, 0, snapshot().tS(), device, step));
         }
         return raster;
     }

@@ -5,18 +5,19 @@ import java.util.EnumSet;
 import java.util.Set;
 import org.kinduct.render.paint.ColourRange;
 import org.kinduct.render.paint.Layer;
+import org.kinduct.scene.Checks;
 
 /**
  * How to draw an annotated snapshot.
  *
- * @param tS time shown, seconds
+ * @param instant the instant shown: a time, or the peak of the EMF
  * @param widthPx width of the PNG in pixels (the SVG's nominal width)
  * @param dpi resolution written into the PNG, dots per inch
  * @param layers what the map shows
  * @param date date printed in the title block
  * @param version program version printed in the title block
  */
-public record SnapshotOptions(double tS, int widthPx, int dpi, ViewChoice view, Set<Layer> layers,
+public record SnapshotOptions(ExportInstant instant, int widthPx, int dpi, ViewChoice view, Set<Layer> layers,
                               ColourRange range, LocalDate date, String version) {
 
     /** Default width: 16 cm at about 280 dpi. */
@@ -28,9 +29,7 @@ public record SnapshotOptions(double tS, int widthPx, int dpi, ViewChoice view, 
     public static final int MAX_DPI = 2400;
 
     public SnapshotOptions {
-        if (!Double.isFinite(tS)) {
-            throw new IllegalArgumentException("time must be finite, got " + tS);
-        }
+        Checks.nonNull(instant, "instant");
         if (widthPx < MIN_WIDTH_PX || widthPx > MAX_WIDTH_PX) {
             throw new IllegalArgumentException("width must be " + MIN_WIDTH_PX + " to " + MAX_WIDTH_PX
                     + " pixels, got " + widthPx);
@@ -45,9 +44,15 @@ public record SnapshotOptions(double tS, int widthPx, int dpi, ViewChoice view, 
     }
 
     /** The editor's default layers (all but the ⊙/⊗ symbol grid) and an automatic colour range. */
+    public static SnapshotOptions standard(ExportInstant instant, int widthPx, int dpi, ViewChoice view,
+                                           LocalDate date, String version) {
+        return new SnapshotOptions(instant, widthPx, dpi, view, EnumSet.complementOf(EnumSet.of(Layer.SYMBOLS)),
+                ColourRange.automatic(), date, version);
+    }
+
+    /** {@link #standard(ExportInstant, int, int, ViewChoice, LocalDate, String)} at a given time. */
     public static SnapshotOptions standard(double tS, int widthPx, int dpi, ViewChoice view, LocalDate date,
                                            String version) {
-        return new SnapshotOptions(tS, widthPx, dpi, view, EnumSet.complementOf(EnumSet.of(Layer.SYMBOLS)),
-                ColourRange.automatic(), date, version);
+        return standard(new ExportInstant.At(tS), widthPx, dpi, view, date, version);
     }
 }

@@ -106,7 +106,7 @@ final class SnapshotPage {
         }
         description = desc;
         mapTop = MARGIN + TITLE + 8 + description.size() * LINE + LINE + 8;
-        ViewChoice.Box box = ViewChoice.box(options.view(), scene, options.tS(), snapshot.freeBodies());
+        ViewChoice.Box box = ViewChoice.box(options.view(), scene, snapshot.tS(), snapshot.freeBodies());
         double aspect = (box.y1() - box.y0()) / (box.x1() - box.x0());
         // A chosen box is shown whole but, like a fitted scene, clear of the legend when there is one.
         if (options.view() instanceof ViewChoice.Fit || options.layers().contains(Layer.LEGEND)) {
@@ -192,7 +192,7 @@ final class SnapshotPage {
         titleBlock(s);
         s.save();
         s.translate(0, mapTop);
-        ScenePainter.draw(new Viewport(s, WIDTH, mapHeight), new Frame(scene, options.tS(), snapshot, raster, mapView,
+        ScenePainter.draw(new Viewport(s, WIDTH, mapHeight), new Frame(scene, snapshot.tS(), snapshot, raster, mapView,
                 options.layers(), options.range(), EditorMarks.none(), "", scales));
         s.restore();
         s.stroke(RULE);
@@ -220,7 +220,7 @@ final class SnapshotPage {
             y += LINE;
         }
         s.fill(INK);
-        s.text("t = " + Quantities.time(options.tS()), MARGIN, y + LINE / 2, BODY, true, Surface.Anchor.LEFT);
+        s.text("t = " + Quantities.time(snapshot.tS()), MARGIN, y + LINE / 2, BODY, true, Surface.Anchor.LEFT);
         s.fill(MUTED);
         s.text(viewText() + " · " + options.date() + " · Kinduct " + options.version(), WIDTH - MARGIN,
                 y + LINE / 2, BODY, false, Surface.Anchor.RIGHT);

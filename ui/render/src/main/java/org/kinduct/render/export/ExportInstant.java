@@ -1,0 +1,79 @@
+package org.kinduct.render.export;
+
+import java.util.function.ToDoubleFunction;
+import org.kinduct.scene.Checks;
+import org.kinduct.scene.Conductor;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.run.RunResult;
+
+/** Which instant an annotated snapshot shows. */
+public sealed interface ExportInstant permits ExportInstant.At, ExportInstant.Peak {
+
+    /** The run's state at this instant. */
+    Snapshot in(RunResult run);
+
+    /** A given time, seconds: the run samples it exactly. */
+    record At(double tS) implements ExportInstant {
+        public At {
+            Checks.finite(tS, "time");
+        }
+
+        @Override
+        public Snapshot in(RunResult run) {
+            return run.at(tS);
+        }
+    }
+
+    /**
+     * The sample of the run where |EMF| is largest, over every conductor or over the one named
+     * {@code conductorId} (null: every conductor); the earliest such sample, the first sample when
+     * every EMF is zero.
+     */
+    record Peak(String conductorId) implements ExportInstant {
+
+        @Override
+        public Snapshot in(RunResult run) {
+            if (conductorId != null && run.scene().conductor(conductorId).isEmpty()) {
+                throw new IllegalArgumentException("no conductor '" + conductorId + "' to take the peak of; the scene"
+                        + " has " + run.scene().conductors().stream().map(Conductor::id).toList());
+            }
+            Snapshot best = run.samples().get(0);
+            double largest = 0;
+            for (Snapshot s : run.samples()) {
+                for (ConductorState c : s.conductors()) {
+                    if ((conductorId == null || c.id().equals(conductorId)) && Math.abs(c.emfV()) > largest) {
+                        largest = Math.abs(c.emfV());
+                        best = s;
+                    }
+                }
+            }
+            return best;
+        }
+    }
+
+    /** The peak over every conductor, the default: the instant that answers "how many volts". */
+    public static ExportInstant peak() {
+        return new Peak(null);
+    }
+
+    /**
+     * Reads {@code peak}, {@code peak:ID} or a time ({@code time} parses it, e.g. with units).
+     *
+     * @throws IllegalArgumentException naming what was expected
+     */
+    public static ExportInstant parse(String text, ToDoubleFunction<String> time) {
+        String t = text.strip();
+        if (t.equals("peak")) {
+            return peak();
+        }
+        if (t.startsWith("peak:")) {
+            String id = t.substring("peak:".length()).strip();
+            if (id.isEmpty()) {
+                throw new IllegalArgumentException("'peak:' needs a conductor id, e.g. peak:pickup");
+            }
+            return new Peak(id);
+        }
+        return new At(time.applyAsDouble(t));
+    }
+}
