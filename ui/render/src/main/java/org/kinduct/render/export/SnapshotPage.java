@@ -1,6 +1,7 @@
 package org.kinduct.render.export;
 
 import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -47,7 +48,8 @@ final class SnapshotPage {
     private static final double FIT_SLACK = 0.5;
     private static final double MIN_MAP_HEIGHT = 340;
     private static final double MAX_MAP_HEIGHT = 600;
-    private static final int MAX_DESCRIPTION_LINES = 4;
+    /** A chosen box is drawn at its own aspect down to this height (a very wide strip gets more above and below). */
+    private static final double MIN_BOX_HEIGHT = 100;
     /**
      * Room a fitted scene (or a chosen box, when the legend is shown) leaves free in the map for
      * the painter's overlays: its legend on the right, the time box and axis labels on top.
@@ -99,22 +101,18 @@ final class SnapshotPage {
         this.snapshot = snapshot;
         this.options = options;
         double text = WIDTH - 2 * MARGIN;
-        List<String> desc = wrap(scene.description(), BODY, false, text);
-        if (desc.size() > MAX_DESCRIPTION_LINES) {
-            desc = new ArrayList<>(desc.subList(0, MAX_DESCRIPTION_LINES));
-            desc.set(MAX_DESCRIPTION_LINES - 1, desc.get(MAX_DESCRIPTION_LINES - 1) + " …");
-        }
-        description = desc;
+        description = wrap(scene.description(), BODY, false, text);
         mapTop = MARGIN + TITLE + 8 + description.size() * LINE + LINE + 8;
         ViewChoice.Box box = ViewChoice.box(options.view(), scene, snapshot.tS(), snapshot.freeBodies());
         double aspect = (box.y1() - box.y0()) / (box.x1() - box.x0());
-        // A chosen box is shown whole but, like a fitted scene, clear of the legend when there is one.
-        if (options.view() instanceof ViewChoice.Fit || options.layers().contains(Layer.LEGEND)) {
+        // A fitted scene stays clear of the overlays; a chosen box is the map, edge to edge (exactly
+        // that box while it is no taller than wide; a taller one is shown whole with more on its sides).
+        if (options.view() instanceof ViewChoice.Fit) {
             double room = WIDTH - FIT_LEFT - FIT_RIGHT;
             mapHeight = clampMapHeight(room * aspect + FIT_TOP + FIT_BOTTOM);
             mapView = fitInto(box, FIT_LEFT, FIT_TOP, WIDTH - FIT_RIGHT, mapHeight - FIT_BOTTOM);
         } else {
-            mapHeight = clampMapHeight(WIDTH * aspect);
+            mapHeight = Math.max(MIN_BOX_HEIGHT, Math.min(MAX_MAP_HEIGHT, WIDTH * aspect));
             mapView = new ViewTransform(0, 0, 1, WIDTH, mapHeight).fitting(box.x0(), box.y0(), box.x1(), box.y1(), 0);
         }
         table = table(scene, snapshot, scales, text);
@@ -192,8 +190,11 @@ final class SnapshotPage {
         titleBlock(s);
         s.save();
         s.translate(0, mapTop);
+        // The title block states the time, so the map does not repeat it.
+        EnumSet<Layer> layers = EnumSet.copyOf(options.layers());
+        layers.remove(Layer.TIME);
         ScenePainter.draw(new Viewport(s, WIDTH, mapHeight), new Frame(scene, snapshot.tS(), snapshot, raster, mapView,
-                options.layers(), options.range(), EditorMarks.none(), "", scales));
+                layers, options.range(), EditorMarks.none(), "", scales));
         s.restore();
         s.stroke(RULE);
         s.lineWidth(1);

@@ -11,7 +11,9 @@ public enum Layer {
     LENZ("Polarity and current arrows"),
     CALLOUTS("Value labels"),
     LEGEND("Colour legend"),
-    SCALE_BAR("Scale bar");
+    SCALE_BAR("Scale bar"),
+    /** The time in the map's corner; a page with a title block states it there instead. */
+    TIME("Time");
 
     private final String label;
 

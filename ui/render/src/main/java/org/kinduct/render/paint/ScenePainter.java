@@ -52,7 +52,9 @@ public final class ScenePainter {
                 ? backdrop.drawOn(s, v) : FieldLayers.draw(s, v, f.raster(), limit, f.layers());
         // Boxes the header, scale bar and legend will cover: no label is drawn under them.
         List<LabelPlacer.Box> fixed = new ArrayList<>();
-        fixed.add(new LabelPlacer.Box(0, 0, HEADER.x() + HEADER.w() + 14, HEADER.y() + HEADER.h()));
+        if (f.shows(Layer.TIME)) {
+            fixed.add(new LabelPlacer.Box(0, 0, HEADER.x() + HEADER.w() + 14, HEADER.y() + HEADER.h()));
+        }
         if (f.shows(Layer.SCALE_BAR)) {
             fixed.add(new LabelPlacer.Box(8, s.height() - 44, 180, 40));
         }
@@ -227,10 +229,12 @@ public final class ScenePainter {
     }
 
     private static void header(Surface s, Frame f) {
-        s.fill(Palette.LABEL_BOX);
-        s.fillRect(HEADER.x(), HEADER.y(), HEADER.w(), HEADER.h());
-        s.fill(Palette.INK);
-        s.text("t = " + Quantities.time(f.tS()), 12, 16, FONT, true, Surface.Anchor.LEFT);
+        if (f.shows(Layer.TIME)) {
+            s.fill(Palette.LABEL_BOX);
+            s.fillRect(HEADER.x(), HEADER.y(), HEADER.w(), HEADER.h());
+            s.fill(Palette.INK);
+            s.text("t = " + Quantities.time(f.tS()), 12, 16, FONT, true, Surface.Anchor.LEFT);
+        }
         if (!f.note().isEmpty()) {
             double w = s.textWidth(f.note(), FONT, false) + 12;
             s.fill(0xE0202020);

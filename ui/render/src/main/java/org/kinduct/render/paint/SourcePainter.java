@@ -204,7 +204,7 @@ public final class SourcePainter {
         double y = v.screenY(c.y());
         s.fill(Palette.INK);
         s.text(plus ? "N" : "S", x, y - 1, 15, true, Surface.Anchor.BOTTOM_CENTER);
-        s.text(plus ? "M +z" : "M −z", x, y + 1, 10, false, Surface.Anchor.TOP_CENTER);
+        s.text(plus ? "M +z" : "M −z", x, y + 1, 11, false, Surface.Anchor.TOP_CENTER);
     }
 
     private static void coilArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward) {
