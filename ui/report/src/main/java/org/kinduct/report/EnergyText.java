@@ -11,7 +11,11 @@ public final class EnergyText {
     private EnergyText() {
     }
 
-    /** "Energy over the run: work in …, Joule heat …, damping …, Δ kinetic …, Δ potential …, Δ magnetic …, residual … (x %)". */
+    /**
+     * "Energy over the run: work in …, Joule heat …, damping …, Δ kinetic …, Δ potential …, Δ magnetic …,
+     * residual … (x of the energy turned over)"; the residual in joules reads 0 below a billionth of
+     * the energy turned over, where its ratio says all there is.
+     */
     public static String of(EnergyAudit a) {
         double scale = Math.max(Math.abs(a.suppliedJ()), a.jouleJ() + a.dampingJ());
         String share = scale > 0 ? String.format(Locale.ROOT, " (%.1e of the energy turned over)",
@@ -19,7 +23,7 @@ public final class EnergyText {
         return "Energy over the run: work in " + j(a.suppliedJ()) + ", Joule heat " + j(a.jouleJ())
                 + ", damping heat " + j(a.dampingJ()) + ", Δ kinetic " + j(a.deltaKineticJ())
                 + ", Δ potential " + j(a.deltaPotentialJ()) + ", Δ magnetic " + j(a.deltaMagneticJ())
-                + ", residual " + j(a.residualJ()) + share;
+                + ", residual " + j(Units.withoutNoise(a.residualJ(), scale)) + share;
     }
 
     private static String j(double joules) {

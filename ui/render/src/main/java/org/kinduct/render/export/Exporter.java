@@ -23,6 +23,8 @@ import org.kinduct.render.field.MapRequest;
 import org.kinduct.render.paint.FieldRaster;
 import org.kinduct.render.paint.Java2dSurface;
 import org.kinduct.render.paint.Layer;
+import org.kinduct.render.paint.LineChart;
+import org.kinduct.scene.units.Dimension;
 import org.kinduct.render.view.ViewTransform;
 
 /**
@@ -194,9 +196,27 @@ public final class Exporter {
             List<Snapshot> checked = new ArrayList<>(result.samples());
             checked.add(snapshot());
             page = SnapshotPage.layout(scene, snapshot(), result.audit().map(EnergyText::of).stream().toList(),
-                    CautionCheck.lines(scene, checked), result.scales(), options);
+                    CautionCheck.lines(scene, checked), result.scales(), waveform(result), options);
         }
         return page;
+    }
+
+    /** Every conductor's EMF over the run, noise read as 0, with the snapshot's instant marked; null without conductors. */
+    private LineChart.Content waveform(RunResult result) {
+        List<Snapshot> samples = result.samples();
+        if (samples.size() < 2 || scene.conductors().isEmpty()) {
+            return null;
+        }
+        double[] t = samples.stream().mapToDouble(Snapshot::tS).toArray();
+        List<LineChart.Series> lines = new ArrayList<>();
+        for (int c = 0; c < scene.conductors().size(); c++) {
+            double[] emf = new double[t.length];
+            for (int i = 0; i < t.length; i++) {
+                emf[i] = result.scales().emf(samples.get(i).conductors().get(c).emfV());
+            }
+            lines.add(new LineChart.Series(scene.conductors().get(c).id(), t, emf));
+        }
+        return new LineChart.Content("EMF over the run", lines, Dimension.TIME, Dimension.VOLTAGE, snapshot().tS());
     }
 
     /** Output pixels per page unit. */

@@ -18,6 +18,7 @@ import org.kinduct.solver.Terminal;
 import org.kinduct.render.paint.EditorMarks;
 import org.kinduct.render.paint.FieldRaster;
 import org.kinduct.render.paint.Layer;
+import org.kinduct.render.paint.LineChart;
 import org.kinduct.render.paint.Frame;
 import org.kinduct.render.paint.Quantities;
 import org.kinduct.render.paint.ScenePainter;
@@ -47,6 +48,7 @@ final class SnapshotPage {
     /** Rounding room when a shrunk table is checked against the width it was shrunk to, units. */
     private static final double FIT_SLACK = 0.5;
     private static final double MIN_MAP_HEIGHT = 340;
+    private static final double CHART_HEIGHT = 170;
     private static final double MAX_MAP_HEIGHT = 600;
     /** A chosen box is drawn at its own aspect down to this height (a very wide strip gets more above and below). */
     private static final double MIN_BOX_HEIGHT = 100;
@@ -83,6 +85,9 @@ final class SnapshotPage {
     private final double mapHeight;
     private final Table table;
     private final ResultScales scales;
+    /** The EMF over the run with the shown instant marked, or null for a page without one. */
+    private final LineChart.Content waveform;
+    private final double chartTop;
     private final double tableTop;
     private final List<Note> notes = new ArrayList<>();
     private final double height;
@@ -96,7 +101,7 @@ final class SnapshotPage {
     }
 
     private SnapshotPage(Scene scene, Snapshot snapshot, List<String> remarks, List<String> cautions,
-                         ResultScales scales, SnapshotOptions options) {
+                         ResultScales scales, LineChart.Content waveform, SnapshotOptions options) {
         this.scene = scene;
         this.snapshot = snapshot;
         this.options = options;
@@ -117,7 +122,9 @@ final class SnapshotPage {
         }
         table = table(scene, snapshot, scales, text);
         this.scales = scales;
-        tableTop = mapTop + mapHeight + 12;
+        this.waveform = waveform;
+        chartTop = mapTop + mapHeight + 8;
+        tableTop = chartTop + (waveform == null ? 4 : CHART_HEIGHT + 8);
         boolean motionalOnly = false;
         for (ConductorState c : snapshot.conductors()) {
             motionalOnly |= c.kind() == ConductorState.Kind.WIRE && !c.inducedFieldIncluded();
@@ -156,17 +163,18 @@ final class SnapshotPage {
     }
 
     static SnapshotPage layout(Scene scene, Snapshot snapshot, List<String> cautions, SnapshotOptions options) {
-        return layout(scene, snapshot, List.of(), cautions, ResultScales.of(List.of(snapshot)), options);
+        return layout(scene, snapshot, List.of(), cautions, ResultScales.of(List.of(snapshot)), null, options);
     }
 
     /**
      * A page with {@code remarks} (e.g. the run's energy audit) under the sign conventions, and
-     * table values read against {@code scales} (those of the run, so that rounding noise reads 0);
-     * free bodies are drawn where the snapshot has them.
+     * table values read against {@code scales} (those of the run, so that rounding noise reads 0),
+     * and under the map the {@code waveform} chart (null: none); free bodies are drawn where the
+     * snapshot has them.
      */
     static SnapshotPage layout(Scene scene, Snapshot snapshot, List<String> remarks, List<String> cautions,
-                               ResultScales scales, SnapshotOptions options) {
-        return new SnapshotPage(scene, snapshot, remarks, cautions, scales, options);
+                               ResultScales scales, LineChart.Content waveform, SnapshotOptions options) {
+        return new SnapshotPage(scene, snapshot, remarks, cautions, scales, waveform, options);
     }
 
     double height() {
@@ -200,6 +208,9 @@ final class SnapshotPage {
         s.lineWidth(1);
         s.dash();
         s.strokeRect(0.5, mapTop, WIDTH - 1, mapHeight);
+        if (waveform != null) {
+            LineChart.draw(s, MARGIN - 8, chartTop, WIDTH - 2 * MARGIN + 8, CHART_HEIGHT, waveform);
+        }
         drawTable(s);
         double y = tableTop + table.rows().size() * LINE + 10;
         for (Note n : notes) {

@@ -280,7 +280,7 @@ final class ConductorPainter {
 
     /** The callout's lines: id, EMF and current or flux or polarity, noise read as 0 against {@code scales}. */
     static String[] calloutLines(Conductor c, ConductorState st, ResultScales scales) {
-        String emf = "ε " + Quantities.voltage(Math.abs(scales.emf(st.emfV())));
+        String emf = "ε " + Quantities.voltage(scales.emf(st.emfV()));
         return c.match(new Conductor.Cases<>() {
             @Override
             public String[] wire(Conductor.Wire wire) {
@@ -290,10 +290,11 @@ final class ConductorPainter {
             @Override
             public String[] loop(Conductor.Loop loop) {
                 if (loop.open()) {
-                    return new String[] {c.id(), emf + " across gap", "Φ " + Quantities.flux(scales.flux(st.linkageWb()))};
+                    return new String[] {c.id(), emf + " across gap", "Φ " + Quantities.flux(scales.flux(st.fluxWb()))
+                            + (loop.turns() > 1 ? " per turn" : "")};
                 }
                 String arrow = Labels.senseArrow(st.direction());
-                return new String[] {c.id(), emf, "I " + Quantities.current(Math.abs(scales.current(st.currentA())))
+                return new String[] {c.id(), emf, "I " + Quantities.current(scales.current(st.currentA()))
                         + (arrow.isEmpty() ? "" : " " + arrow)};
             }
         });

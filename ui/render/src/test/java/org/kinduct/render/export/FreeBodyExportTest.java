@@ -60,7 +60,7 @@ class FreeBodyExportTest {
         double t = 1;
         Snapshot snap = new SceneRun(scene).instant(t);
         SnapshotPage page = SnapshotPage.layout(scene, snap, List.of(), List.of(),
-                ResultScales.of(List.of(snap)), ExportFixtures.options(t, 800, 150, new ViewChoice.Fit()));
+                ResultScales.of(List.of(snap)), null, ExportFixtures.options(t, 800, 150, new ViewChoice.Fit()));
         ViewTransform v = page.mapView();
         List<Vec2> placed = snap.conductor("loop").orElseThrow().vertices();
         assertEquals(-4.905, placed.get(0).y(), 0.01, "free fall over 1 s");

@@ -45,7 +45,7 @@ class PageGeometryTest {
         SnapshotOptions options = ExportFixtures.options(scene.time().t0S(), 1200, 150, new ViewChoice.Fit());
         Exporter export = new Exporter(scene, options);
         SnapshotPage page = SnapshotPage.layout(scene, export.snapshot(), List.of("remark"), List.of("caution"),
-                export.result().scales(), options);
+                export.result().scales(), null, options);
         Recorder texts = new Recorder(page.height());
         page.draw(texts, null);
         double mmPerUnit = PRINT_WIDTH_MM / SnapshotPage.WIDTH;

@@ -1,0 +1,172 @@
+package org.kinduct.render.paint;
+
+import java.util.List;
+import org.kinduct.render.view.NiceSteps;
+import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Units;
+
+/**
+ * A line chart on a {@link Surface}: one or more series of y against x, axes with round ticks,
+ * a key naming each line in its colour, and an optional marker at one x (the instant a picture
+ * shows). The y axis is symmetric about zero when the data change sign (an EMF that reverses
+ * reads at a glance), else it starts at zero. Stateless; every surface draws the same chart.
+ */
+public final class LineChart {
+
+    /** Distinct line colours, dark enough on paper; cycled. */
+    private static final int[] COLOURS = {0xFF1F5FA8, 0xFFC2410C, 0xFF2E7D32, 0xFF7B1FA2, 0xFF8D6E00, 0xFF00838F};
+    private static final int MARKER = 0xFFD6007A;
+    private static final double FONT = 11;
+    private static final double LEFT = 62;
+    private static final double BOTTOM = 30;
+    private static final double TOP = 20;
+    private static final double RIGHT = 10;
+    /** Ticks wanted at least this many screen units apart: across the time axis, and up the value axis. */
+    private static final double X_TICK_SPACING = 48;
+    private static final double Y_TICK_SPACING = 24;
+
+    /** One line: its name and its values at the x's (NaN leaves a gap). */
+    public record Series(String label, double[] x, double[] y) {
+        public Series {
+            if (x.length != y.length) {
+                throw new IllegalArgumentException("a series needs as many y as x values, got " + x.length + " and "
+                        + y.length);
+            }
+        }
+    }
+
+    /** What a chart shows: series, the units of both axes, a title, and a marker at {@code markerX} (NaN: none). */
+    public record Content(String title, List<Series> series, Dimension xUnit, Dimension yUnit, double markerX) {
+        public Content {
+            series = List.copyOf(series);
+        }
+    }
+
+    private LineChart() {
+    }
+
+    /** Draws {@code c} into the box at (x, y) of size w × h, screen units. */
+    public static void draw(Surface s, double x, double y, double w, double h, Content c) {
+        double px = x + LEFT;
+        double py = y + TOP;
+        double pw = w - LEFT - RIGHT;
+        double ph = h - TOP - BOTTOM;
+        if (pw < 20 || ph < 20) {
+            return;
+        }
+        double[] xr = range(c.series(), true);
+        double[] yr = range(c.series(), false);
+        double yLow = yr[0] < 0 ? -Math.max(-yr[0], yr[1]) : 0;
+        double yHigh = yr[0] < 0 ? -yLow : yr[1];
+        if (!(yHigh > yLow)) {
+            yLow = -1;
+            yHigh = 1;
+        }
+        double xLow = xr[0];
+        double xHigh = xr[1] > xr[0] ? xr[1] : xr[0] + 1;
+        s.save();
+        s.fill(Palette.INK);
+        s.text(c.title(), px, y + TOP / 2, FONT, true, Surface.Anchor.LEFT);
+        ticks(s, px, py, pw, ph, xLow, xHigh, c.xUnit(), true);
+        ticks(s, px, py, pw, ph, yLow, yHigh, c.yUnit(), false);
+        s.stroke(Palette.LABEL_EDGE);
+        s.lineWidth(1);
+        s.dash();
+        s.strokeRect(px, py, pw, ph);
+        s.clipRect(px, py, pw, ph);
+        for (int k = 0; k < c.series().size(); k++) {
+            line(s, c.series().get(k), COLOURS[k % COLOURS.length], px, py, pw, ph, xLow, xHigh, yLow, yHigh);
+        }
+        if (Double.isFinite(c.markerX())) {
+            double mx = px + (c.markerX() - xLow) / (xHigh - xLow) * pw;
+            s.stroke(MARKER);
+            s.lineWidth(1.5);
+            s.beginPath();
+            s.moveTo(mx, py);
+            s.lineTo(mx, py + ph);
+            s.strokePath();
+        }
+        s.restore();
+        key(s, c.series(), px + pw, y + TOP / 2);
+    }
+
+    /** Smallest and largest finite x (or y) over all series; {0, 0} without data. */
+    private static double[] range(List<Series> series, boolean ofX) {
+        double low = Double.POSITIVE_INFINITY;
+        double high = Double.NEGATIVE_INFINITY;
+        for (Series line : series) {
+            for (double v : ofX ? line.x() : line.y()) {
+                if (Double.isFinite(v)) {
+                    low = Math.min(low, v);
+                    high = Math.max(high, v);
+                }
+            }
+        }
+        return low <= high ? new double[] {low, high} : new double[] {0, 0};
+    }
+
+    private static void ticks(Surface s, double px, double py, double pw, double ph, double low, double high,
+                              Dimension unit, boolean alongX) {
+        double length = alongX ? pw : ph;
+        double step = NiceSteps.atLeast((high - low) * (alongX ? X_TICK_SPACING : Y_TICK_SPACING) / length);
+        s.lineWidth(1);
+        for (double v = Math.ceil(low / step) * step; v <= high + step * 1e-9; v += step) {
+            double at = (v - low) / (high - low) * length;
+            double value = Math.abs(v) < step * 1e-9 ? 0 : v;
+            s.stroke(value == 0 ? Palette.AXIS : Palette.GRID_MINOR);
+            s.beginPath();
+            if (alongX) {
+                s.moveTo(px + at, py);
+                s.lineTo(px + at, py + ph);
+            } else {
+                s.moveTo(px, py + ph - at);
+                s.lineTo(px + pw, py + ph - at);
+            }
+            s.strokePath();
+            s.fill(Palette.MUTED);
+            String label = Units.format(value, unit);
+            if (alongX) {
+                s.text(label, px + at, py + ph + 4, FONT, false, Surface.Anchor.TOP_CENTER);
+            } else {
+                s.text(label, px - 4, py + ph - at, FONT, false, Surface.Anchor.RIGHT);
+            }
+        }
+    }
+
+    private static void line(Surface s, Series line, int colour, double px, double py, double pw, double ph,
+                             double xLow, double xHigh, double yLow, double yHigh) {
+        s.stroke(colour);
+        s.lineWidth(1.6);
+        s.beginPath();
+        boolean drawing = false;
+        for (int i = 0; i < line.x().length; i++) {
+            double v = line.y()[i];
+            if (!Double.isFinite(v) || !Double.isFinite(line.x()[i])) {
+                drawing = false;
+                continue;
+            }
+            double sx = px + (line.x()[i] - xLow) / (xHigh - xLow) * pw;
+            double sy = py + ph - (v - yLow) / (yHigh - yLow) * ph;
+            if (drawing) {
+                s.lineTo(sx, sy);
+            } else {
+                s.moveTo(sx, sy);
+                drawing = true;
+            }
+        }
+        s.strokePath();
+    }
+
+    /** Each series' name in its colour, right-aligned along the top, last first. */
+    private static void key(Surface s, List<Series> series, double right, double centreY) {
+        double x = right;
+        for (int k = series.size() - 1; k >= 0; k--) {
+            String label = series.get(k).label();
+            double w = s.textWidth(label, FONT, false);
+            s.fill(COLOURS[k % COLOURS.length]);
+            s.fillRect(x - w - 14, centreY - 1.5, 10, 3);
+            s.text(label, x, centreY, FONT, false, Surface.Anchor.RIGHT);
+            x -= w + 24;
+        }
+    }
+}
