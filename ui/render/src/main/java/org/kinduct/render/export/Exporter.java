@@ -190,7 +190,8 @@ public final class Exporter {
         return run.result();
     }
 
-    private SnapshotPage page() {
+    /** The page every picture of this export draws (package-private: tests measure it). */
+    SnapshotPage page() {
         if (page == null) {
             RunResult result = run.result();
             List<Snapshot> checked = new ArrayList<>(result.samples());

@@ -35,7 +35,7 @@ class PdfExportTest {
         Scene scene = ExportFixtures.rodInUniformField();
         SnapshotOptions options = ExportFixtures.options(T, WIDTH_PX, 150, new ViewChoice.Fit());
         Exporter export = new Exporter(scene, options);
-        SnapshotPage page = SnapshotPage.layout(scene, export.snapshot(), List.of(), options);
+        SnapshotPage page = export.page();
 
         try (PDDocument pdf = Loader.loadPDF(export.pdf())) {
             assertEquals(1, pdf.getNumberOfPages());

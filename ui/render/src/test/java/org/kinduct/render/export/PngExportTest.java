@@ -95,7 +95,7 @@ class PngExportTest {
         try (ImageInputStream in = ImageIO.createImageInputStream(new ByteArrayInputStream(png))) {
             reader.setInput(in);
             assertEquals(widthPx, reader.getWidth(0));
-            SnapshotPage page = SnapshotPage.layout(scene, export.snapshot(), List.of(), options);
+            SnapshotPage page = export.page();
             assertEquals(Math.ceil(page.height() * widthPx / SnapshotPage.WIDTH), reader.getHeight(0), 1.0,
                     "height follows the page's aspect");
             Element phys = child(reader.getImageMetadata(0).getAsTree("javax_imageio_png_1.0"), "pHYs");

@@ -98,7 +98,7 @@ class SvgExportTest {
         Files.copy(rendered, Path.of("target", "export-rod-svg.png"), StandardCopyOption.REPLACE_EXISTING);
         BufferedImage img = ImageIO.read(rendered.toFile());
 
-        SnapshotPage page = SnapshotPage.layout(scene, export.snapshot(), List.of(), options);
+        SnapshotPage page = export.page();
         ExportFixtures.assertRodPicture(img, page, WIDTH_PX / SnapshotPage.WIDTH, SPEED * T);
     }
 }
