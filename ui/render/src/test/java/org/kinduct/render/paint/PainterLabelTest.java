@@ -95,7 +95,7 @@ class PainterLabelTest {
     @Test
     void axisAndContourLabelsAreLargeEnoughForPrintAndKeepOutOfTheTimeBox() {
         FieldRaster ramp = raster((x, y) -> x / 0.2 * 0.5);
-        List<Text> all = texts(ramp, EnumSet.of(Layer.CONTOURS, Layer.GRID));
+        List<Text> all = texts(ramp, EnumSet.of(Layer.CONTOURS, Layer.GRID, Layer.TIME));
         List<Text> labels = all.stream().filter(t -> t.text().endsWith("m") || t.text().endsWith("mT")).toList();
         assertFalse(labels.isEmpty());
         for (Text t : labels) {
