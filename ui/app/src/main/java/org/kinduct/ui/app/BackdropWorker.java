@@ -5,6 +5,7 @@ import java.util.concurrent.Executor;
 import java.util.concurrent.Executors;
 import java.util.function.BiConsumer;
 import org.kinduct.render.field.LatestOnly;
+import org.kinduct.render.paint.ColourScale;
 import org.kinduct.render.paint.FieldBackdrop;
 import org.kinduct.render.paint.FieldRaster;
 import org.kinduct.render.paint.Layer;
@@ -37,12 +38,12 @@ final class BackdropWorker {
     }
 
     /** Asks for the backdrop of {@code raster} in {@code view}; replaces any request still waiting. */
-    void request(FieldRaster raster, ViewTransform view, double limit, Set<Layer> layers) {
+    void request(FieldRaster raster, ViewTransform view, ColourScale scale, Set<Layer> layers) {
         Set<Layer> shown = Set.copyOf(layers);
         jobs.submit(() -> {
             FieldBackdrop b;
             try {
-                b = FieldBackdrop.render(raster, view, limit, shown);
+                b = FieldBackdrop.render(raster, view, scale, shown);
             } catch (RuntimeException e) {
                 b = null;
             }

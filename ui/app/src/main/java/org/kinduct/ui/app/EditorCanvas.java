@@ -154,7 +154,7 @@ final class EditorCanvas extends Pane {
         }
         ViewTransform v = view();
         if (v.widthPx() >= 1 && v.heightPx() >= 1) {
-            backdrops.request(raster, v, vm.rangeProperty().get().limitFor(raster), vm.layers());
+            backdrops.request(raster, v, vm.rangeProperty().get().scaleFor(raster), vm.layers());
         }
     }
 
@@ -447,7 +447,7 @@ final class EditorCanvas extends Pane {
         Vec2 p = view().toScene(sx, sy);
         // Read against the colour scale's limit: at a point of symmetry the exact sum is rounding noise.
         double bz = org.kinduct.scene.units.Units.withoutNoise(vm.bzAt(p.x(), p.y()),
-                vm.rangeProperty().get().limitFor(vm.rasterProperty().get()));
+                vm.rangeProperty().get().scaleFor(vm.rasterProperty().get()).limitT());
         String sense = bz > 0 ? " ⊙" : bz < 0 ? " ⊗" : "";
         String cursorText = "x " + org.kinduct.render.paint.Quantities.length(p.x()) + "   y "
                 + org.kinduct.render.paint.Quantities.length(p.y()) + "   B_z "

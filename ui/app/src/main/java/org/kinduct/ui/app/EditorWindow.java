@@ -221,9 +221,18 @@ final class EditorWindow {
         CheckMenuItem autoRange = new CheckMenuItem("Automatic colour range");
         autoRange.setSelected(vm.rangeProperty().get().auto());
         autoRange.selectedProperty().addListener((obs, was, on) -> vm.rangeProperty().set(
-                new org.kinduct.render.paint.ColourRange(on, vm.rangeProperty().get().manualLimitT())));
-        vm.rangeProperty().addListener((obs, old, r) -> autoRange.setSelected(r.auto()));
-        view.getItems().addAll(new SeparatorMenuItem(), autoRange, item("Fixed colour limit…", null, this::askLimit),
+                new org.kinduct.render.paint.ColourRange(on, vm.rangeProperty().get().manualLimitT(),
+                        vm.rangeProperty().get().kind())));
+        CheckMenuItem logScale = new CheckMenuItem("Logarithmic colour scale");
+        logScale.setSelected(vm.rangeProperty().get().kind() == org.kinduct.render.paint.ColourScale.Kind.LOG);
+        logScale.selectedProperty().addListener((obs, was, on) -> vm.rangeProperty().set(vm.rangeProperty().get()
+                .withKind(on ? org.kinduct.render.paint.ColourScale.Kind.LOG : org.kinduct.render.paint.ColourScale.Kind.LINEAR)));
+        vm.rangeProperty().addListener((obs, old, r) -> {
+            autoRange.setSelected(r.auto());
+            logScale.setSelected(r.kind() == org.kinduct.render.paint.ColourScale.Kind.LOG);
+        });
+        view.getItems().addAll(new SeparatorMenuItem(), autoRange, logScale,
+                item("Fixed colour limit…", null, this::askLimit),
                 new SeparatorMenuItem(), grid, angles, new SeparatorMenuItem(),
                 item("Paint time overlay", "F12", canvas::toggleFrameTime));
         Menu play = new Menu("Motion");
@@ -245,7 +254,7 @@ final class EditorWindow {
     /** Asks for a fixed symmetric colour limit ("5 mT", "20 G"); refuses anything but a positive flux density. */
     private void askLimit() {
         javafx.scene.control.TextInputDialog d = new javafx.scene.control.TextInputDialog(
-                Quantities.bz(vm.rangeProperty().get().limitFor(vm.rasterProperty().get())));
+                Quantities.bz(vm.rangeProperty().get().scaleFor(vm.rasterProperty().get()).limitT()));
         d.setTitle("Colour limit");
         d.setHeaderText("Colours saturate at ± this flux density");
         d.initOwner(stage);
@@ -253,7 +262,8 @@ final class EditorWindow {
             try {
                 double limit = org.kinduct.scene.units.Units.parse(text,
                         org.kinduct.scene.units.Dimension.FLUX_DENSITY);
-                vm.rangeProperty().set(new org.kinduct.render.paint.ColourRange(false, limit));
+                vm.rangeProperty().set(new org.kinduct.render.paint.ColourRange(false, limit,
+                        vm.rangeProperty().get().kind()));
             } catch (IllegalArgumentException e) {
                 vm.say("Colour limit: " + e.getMessage());
             }

@@ -154,7 +154,7 @@ public final class FrameTimeProbe {
             FieldRaster raster = mapper.compute(new MapRequest(run, 1, t, view, 4));
             run.instant(t);
             long c1 = System.nanoTime();
-            FieldBackdrop.render(raster, view, ColourRange.automatic().limitFor(raster), EnumSet.allOf(Layer.class));
+            FieldBackdrop.render(raster, view, ColourRange.automatic().scaleFor(raster), EnumSet.allOf(Layer.class));
             compute[i] = (c1 - c0) * 1e-6;
             backdrop[i] = (System.nanoTime() - c1) * 1e-6;
         }

@@ -65,7 +65,7 @@ class PainterPixelTest {
                 v[r * cols + c] = c < cols / 2 ? 0.1f : -0.1f;
             }
         }
-        return new FieldRaster(-0.2, 0.15, 0.01, cols, rows, v, 0.1, 1, 0);
+        return new FieldRaster(-0.2, 0.15, 0.01, cols, rows, v, 0.1, 0.1, 1, 0);
     }
 
     private static PixelReader render(Scene scene, Snapshot snap, String name) throws Exception {

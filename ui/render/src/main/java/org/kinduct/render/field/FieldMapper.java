@@ -92,7 +92,7 @@ public final class FieldMapper {
         if (!moving.isEmpty()) {
             add(values, run.fieldOf(r.tS(), moving), grid);
         }
-        return new FieldRaster(minX, maxY, cell, cols, rows, values, autoLimit(values), r.revision(), r.tS());
+        return new FieldRaster(minX, maxY, cell, cols, rows, values, autoLimit(values), peak(values), r.revision(), r.tS());
     }
 
     private float[] staticValues(SceneRun run, List<Body> bodies, List<Source> still, Grid grid) {
@@ -126,6 +126,17 @@ public final class FieldMapper {
     private static boolean isStatic(Scene scene, Source s) {
         Body body = scene.body(s.body()).orElseThrow();
         return body.motion() instanceof Motion.Still && !s.alternates();
+    }
+
+    /** The largest finite |B_z|, tesla (0 without finite values). */
+    static double peak(float[] values) {
+        double peak = 0;
+        for (float v : values) {
+            if (Float.isFinite(v)) {
+                peak = Math.max(peak, Math.abs(v));
+            }
+        }
+        return peak;
     }
 
     /** A high percentile of |B_z|, so one hot spot next to a magnet does not wash out the rest. */

@@ -28,11 +28,22 @@ public final class DivergingScale {
     /** Colour for {@code value} on a symmetric scale [−limit, +limit]; values beyond are clamped in colour only. */
     public static int argb(double value, double limit) {
         double f = limit > 0 ? value / limit : 0;
-        if (!(f == f)) {
+        if (Double.isNaN(f)) {
             return 0x00000000;
         }
         f = Math.max(-1, Math.min(1, f));
         return LUT[(int) Math.round((f + 1) * 0.5 * (SIZE - 1))];
+    }
+
+    /** L*, a*, b* beyond the ends: the end colours darker, for saturated values. */
+    private static final double[] NEGATIVE_BEYOND = {20, -4, -32};
+    private static final double[] POSITIVE_BEYOND = {24, 20, 30};
+    private static final int SATURATED_NEGATIVE = labToArgb(NEGATIVE_BEYOND);
+    private static final int SATURATED_POSITIVE = labToArgb(POSITIVE_BEYOND);
+
+    /** The colour of values beyond the scale's positive or negative end. */
+    public static int saturated(boolean positive) {
+        return positive ? SATURATED_POSITIVE : SATURATED_NEGATIVE;
     }
 
     /** Colour at fraction f ∈ [−1, 1] of the scale. */

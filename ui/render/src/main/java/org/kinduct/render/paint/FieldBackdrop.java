@@ -32,7 +32,7 @@ public record FieldBackdrop(int[] argb, int width, int height, ViewTransform vie
     }
 
     /** Draws the field layers of {@code shown} from {@code raster} for {@code view}. */
-    public static FieldBackdrop render(FieldRaster raster, ViewTransform view, double limit, Set<Layer> shown) {
+    public static FieldBackdrop render(FieldRaster raster, ViewTransform view, ColourScale scale, Set<Layer> shown) {
         int w = Math.max(1, (int) Math.ceil(view.widthPx()));
         int h = Math.max(1, (int) Math.ceil(view.heightPx()));
         // Pre-multiplied pixels draw fastest; the image is opaque, so they equal plain ARGB.
@@ -41,14 +41,14 @@ public record FieldBackdrop(int[] argb, int width, int height, ViewTransform vie
         Arrays.fill(pixels, Palette.BACKGROUND);
         Set<Layer> field = fieldLayersOf(shown);
         if (field.contains(Layer.HEAT_MAP) && raster != null) {
-            colours(pixels, w, h, view, raster, limit);
+            colours(pixels, w, h, view, raster, scale);
         }
         Set<Layer> lines = EnumSet.copyOf(field);
         lines.remove(Layer.HEAT_MAP);
         Graphics2D g = image.createGraphics();
         List<FieldLayers.ContourLabel> labels;
         try {
-            labels = FieldLayers.draw(new Java2dSurface(g, w, h), view, raster, limit, lines);
+            labels = FieldLayers.draw(new Java2dSurface(g, w, h), view, raster, scale, lines);
         } finally {
             g.dispose();
         }
@@ -60,7 +60,7 @@ public record FieldBackdrop(int[] argb, int width, int height, ViewTransform vie
      * centres and then coloured (so in-between colours are those of in-between fields). A loop of
      * our own because Java2D's general image scaling took three times as long for a 1280 × 800 view.
      */
-    private static void colours(int[] out, int w, int h, ViewTransform v, FieldRaster r, double limit) {
+    private static void colours(int[] out, int w, int h, ViewTransform v, FieldRaster r, ColourScale scale) {
         int[] c0 = new int[w];
         int[] c1 = new int[w];
         float[] wx = new float[w];
@@ -92,7 +92,7 @@ public record FieldBackdrop(int[] argb, int width, int height, ViewTransform vie
                 }
                 float top = bz[base0 + c0[px]] + (bz[base0 + c1[px]] - bz[base0 + c0[px]]) * wx[px];
                 float bottom = bz[base1 + c0[px]] + (bz[base1 + c1[px]] - bz[base1 + c0[px]]) * wx[px];
-                int argb = DivergingScale.argb(top + (bottom - top) * wy, limit);
+                int argb = scale.argb(top + (bottom - top) * wy);
                 if (argb >>> 24 != 0) {
                     out[at + px] = argb;
                 }

@@ -5,7 +5,6 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import org.kinduct.render.view.NiceSteps;
 import org.kinduct.render.view.ViewTransform;
 
 /**
@@ -21,7 +20,6 @@ public final class FieldLayers {
 
     private static final double SYMBOL_SPACING_PX = 42;
     private static final double SYMBOL_MIN_FRACTION = 0.04;
-    private static final int MAX_CONTOUR_LEVELS_PER_SIDE = 5;
     private static final double CONTOUR_CELL_PX = 4;
     /** A contour label needs this much room from the lines of other levels. */
     private static final double CONTOUR_CLEAR_PX = 10;
@@ -47,64 +45,60 @@ public final class FieldLayers {
      * Draws the field layers of {@code shown} from {@code raster}; returns the contour labels to
      * place once the rest of the picture has claimed its room (empty without contours).
      */
-    public static List<ContourLabel> draw(Surface s, ViewTransform v, FieldRaster raster, double limit,
+    public static List<ContourLabel> draw(Surface s, ViewTransform v, FieldRaster raster, ColourScale scale,
                                           Set<Layer> shown) {
         if (raster == null) {
             return List.of();
         }
         if (shown.contains(Layer.HEAT_MAP)) {
-            heatMap(s, v, raster, limit);
+            heatMap(s, v, raster, scale);
         }
         if (shown.contains(Layer.SYMBOLS)) {
-            symbols(s, v, raster, limit);
+            symbols(s, v, raster, scale);
         }
-        return shown.contains(Layer.CONTOURS) ? contours(s, v, raster, limit) : List.of();
+        return shown.contains(Layer.CONTOURS) ? contours(s, v, raster, scale) : List.of();
     }
 
-    /** Contour spacing for a colour limit: a round value giving at most five levels per sign. */
-    public static double contourStep(double limit) {
-        return NiceSteps.atLeast(limit / MAX_CONTOUR_LEVELS_PER_SIDE);
-    }
-
-    private static void heatMap(Surface s, ViewTransform v, FieldRaster r, double limit) {
+    private static void heatMap(Surface s, ViewTransform v, FieldRaster r, ColourScale scale) {
         int[] argb = new int[r.cols() * r.rows()];
         float[] bz = r.bzT();
         for (int i = 0; i < argb.length; i++) {
-            argb[i] = DivergingScale.argb(bz[i], limit);
+            argb[i] = scale.argb(bz[i]);
         }
         double x = v.screenX(r.minX());
         double y = v.screenY(r.maxY());
         s.image(argb, r.cols(), r.rows(), x, y, v.screenX(r.maxX()) - x, v.screenY(r.minY()) - y);
     }
 
-    private static void symbols(Surface s, ViewTransform v, FieldRaster r, double limit) {
+    private static void symbols(Surface s, ViewTransform v, FieldRaster r, ColourScale scale) {
         double r0 = 6;
         for (double sy = SYMBOL_SPACING_PX / 2; sy < s.height(); sy += SYMBOL_SPACING_PX) {
             for (double sx = SYMBOL_SPACING_PX / 2; sx < s.width(); sx += SYMBOL_SPACING_PX) {
                 double b = r.sample(v.sceneX(sx), v.sceneY(sy));
-                if (!(Math.abs(b) >= SYMBOL_MIN_FRACTION * limit)) {
+                double f = Math.abs(scale.fraction(b));
+                if (!(f >= SYMBOL_MIN_FRACTION)) {
                     continue;
                 }
-                double size = r0 * (0.6 + 0.4 * Math.min(1, Math.abs(b) / limit));
+                double size = r0 * (0.6 + 0.4 * Math.min(1, f));
                 Glyphs.fieldSymbol(s, sx, sy, size, b > 0, 0xB0202020);
             }
         }
     }
 
-    private static List<ContourLabel> contours(Surface s, ViewTransform v, FieldRaster fine, double limit) {
-        double step = contourStep(limit);
+    private static List<ContourLabel> contours(Surface s, ViewTransform v, FieldRaster fine, ColourScale scale) {
+        List<Double> levels = new ArrayList<>();
+        for (double level : scale.levels()) {
+            levels.add(-level);
+            levels.add(level);
+        }
         // Segments of about CONTOUR_CELL_PX keep the path short; the lines are for reading levels, not for numbers.
         FieldRaster r = fine.decimated((int) Math.round(CONTOUR_CELL_PX / (fine.cellM() * v.pxPerM())));
         s.dash();
         List<List<double[]>> mids = new ArrayList<>();
         List<String> texts = new ArrayList<>();
-        for (int k = -MAX_CONTOUR_LEVELS_PER_SIDE; k <= MAX_CONTOUR_LEVELS_PER_SIDE; k++) {
-            if (k == 0) {
-                continue;
-            }
-            double level = k * step;
+        for (double level : levels) {
             List<double[]> segs = new ArrayList<>();
-            s.stroke(k > 0 ? 0xC0402000 : 0xC0001A40);
+            s.stroke(level > 0 ? 0xC0402000 : 0xC0001A40);
             s.lineWidth(1);
             s.beginPath();
             Contours.lines(r, level, (xs, ys, n) -> {

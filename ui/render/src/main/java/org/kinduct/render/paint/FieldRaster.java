@@ -8,12 +8,15 @@ package org.kinduct.render.paint;
  * @param maxY top edge, metres
  * @param cellM cell size, metres
  * @param bzT B_z per cell, tesla, row-major
- * @param autoLimitT symmetric colour limit suggested by the data (a high percentile of |B_z|)
+ * @param autoLimitT symmetric colour limit suggested by the data for a linear scale (a high
+ *        percentile of |B_z|, so one hot spot does not wash out the rest)
+ * @param peakT the largest |B_z| of the map, tesla: the top of a logarithmic scale, which shows
+ *        the hot spot and its weak surroundings at once
  * @param revision scene revision the map was computed for
  * @param tS time the map was computed for
  */
 public record FieldRaster(double minX, double maxY, double cellM, int cols, int rows, float[] bzT,
-                          double autoLimitT, long revision, double tS) {
+                          double autoLimitT, double peakT, long revision, double tS) {
 
     public FieldRaster {
         if (cols < 1 || rows < 1 || bzT.length != cols * rows) {
@@ -62,7 +65,7 @@ public record FieldRaster(double minX, double maxY, double cellM, int cols, int 
         // Sample (r·k, c·k) sits at the centre of the new, k times larger cell (r, c) when the new
         // grid starts half a new cell minus half an old cell before the old one.
         double shift = (k - 1) * cellM / 2;
-        return new FieldRaster(minX - shift, maxY + shift, cellM * k, c2, r2, v, autoLimitT, revision, tS);
+        return new FieldRaster(minX - shift, maxY + shift, cellM * k, c2, r2, v, autoLimitT, peakT, revision, tS);
     }
 
     public double centerX(int col) {

@@ -21,7 +21,7 @@ public final class ScenePainter {
     /** The "t = …" box in the top-left corner; axis labels keep out of it. */
     private static final LabelPlacer.Box HEADER = new LabelPlacer.Box(6, 6, 150, 20);
     private static final double LEGEND_W = 178;
-    private static final double LEGEND_H = 218;
+    private static final double LEGEND_H = 236;
     private static final double LEGEND_GAP = 10;
     /** Width the colour legend takes from the right edge of the view, gap included. */
     public static final double LEGEND_SPAN_PX = LEGEND_W + LEGEND_GAP;
@@ -47,9 +47,9 @@ public final class ScenePainter {
         s.clipRect(0, 0, s.width(), s.height());
         s.fill(Palette.BACKGROUND);
         s.fillRect(0, 0, s.width(), s.height());
-        double limit = f.range().limitFor(f.raster());
+        ColourScale scale = f.range().scaleFor(f.raster());
         List<FieldLayers.ContourLabel> contourLabels = backdrop != null && backdrop.shows(f.layers())
-                ? backdrop.drawOn(s, v) : FieldLayers.draw(s, v, f.raster(), limit, f.layers());
+                ? backdrop.drawOn(s, v) : FieldLayers.draw(s, v, f.raster(), scale, f.layers());
         // Boxes the header, scale bar and legend will cover: no label is drawn under them.
         List<LabelPlacer.Box> fixed = new ArrayList<>();
         if (f.shows(Layer.TIME)) {
@@ -88,8 +88,7 @@ public final class ScenePainter {
             scaleBar(s, v);
         }
         if (legendBox != null) {
-            legend(s, legendBox, limit, f.shows(Layer.CONTOURS) ? FieldLayers.contourStep(limit) : 0,
-                    f.raster() != null);
+            legend(s, legendBox, scale, f.shows(Layer.CONTOURS), f.raster() != null);
         }
         header(s, f);
         s.restore();
@@ -192,7 +191,12 @@ public final class ScenePainter {
         return new LabelPlacer.Box(s.width() - LEGEND_SPAN_PX, s.height() - LEGEND_H - LEGEND_GAP, LEGEND_W, LEGEND_H);
     }
 
-    private static void legend(Surface s, LabelPlacer.Box box, double limit, double contourStep, boolean hasMap) {
+    /**
+     * The colour key: the scale's bar from ⊙ (out of the screen) to ⊗ (into it), its levels
+     * marked where the scale puts them (decades on a logarithmic scale), the darker ends beyond
+     * the limit that mark saturated field, and what kind of scale it is.
+     */
+    private static void legend(Surface s, LabelPlacer.Box box, ColourScale scale, boolean contours, boolean hasMap) {
         s.fill(Palette.LABEL_BOX);
         s.fillRect(box.x(), box.y(), box.w(), box.h());
         s.stroke(Palette.LABEL_EDGE);
@@ -200,7 +204,7 @@ public final class ScenePainter {
         s.dash();
         s.strokeRect(box.x(), box.y(), box.w(), box.h());
         double x = box.x() + 12;
-        double top = box.y() + 46;
+        double top = box.y() + 54;
         double barH = 120;
         s.fill(Palette.INK);
         s.text("B_z (normal to plane)", x, box.y() + 8, FONT, true, Surface.Anchor.TOP_LEFT);
@@ -212,20 +216,56 @@ public final class ScenePainter {
         s.image(bar, 1, n, x, top, 16, barH);
         s.stroke(Palette.INK);
         s.strokeRect(x, top, 16, barH);
+        saturationEnd(s, x, top, true);
+        saturationEnd(s, x, top + barH, false);
         double tx = x + 24;
         s.fill(Palette.INK);
-        s.text("+" + Quantities.bz(limit), tx, top, FONT, false, Surface.Anchor.LEFT);
-        s.text("0", tx, top + barH / 2, FONT, false, Surface.Anchor.LEFT);
-        s.text("−" + Quantities.bz(limit), tx, top + barH, FONT, false, Surface.Anchor.LEFT);
-        Glyphs.fieldSymbol(s, x + 8, top - 12, 6, true, Palette.INK);
+        s.text("0", tx, top + barH / 2, LABEL_FONT, false, Surface.Anchor.LEFT);
+        // Each level's label, skipping those that would crowd the one above (a log scale's decades near 0).
+        double lastY = Double.NEGATIVE_INFINITY;
+        for (double level : scale.levels()) {
+            double y = top + barH / 2 * (1 - scale.fraction(level));
+            if (y - lastY >= LABEL_FONT && barH / 2 - (y - top) >= LABEL_FONT) {
+                s.text("+" + Quantities.bz(level), tx, y, LABEL_FONT, false, Surface.Anchor.LEFT);
+                s.text("−" + Quantities.bz(level), tx, top + barH - (y - top), LABEL_FONT, false, Surface.Anchor.LEFT);
+                s.stroke(Palette.INK);
+                s.beginPath();
+                s.moveTo(x + 16, y);
+                s.lineTo(x + 20, y);
+                s.moveTo(x + 16, top + barH - (y - top));
+                s.lineTo(x + 20, top + barH - (y - top));
+                s.strokePath();
+                lastY = y;
+            }
+        }
+        Glyphs.fieldSymbol(s, x + 8, top - 18, 6, true, Palette.INK);
         s.fill(Palette.INK);
-        s.text("out of screen", x + 20, top - 12, 11, false, Surface.Anchor.LEFT);
-        Glyphs.fieldSymbol(s, x + 8, top + barH + 13, 6, false, Palette.INK);
+        s.text("out of screen", x + 20, top - 18, LABEL_FONT, false, Surface.Anchor.LEFT);
+        Glyphs.fieldSymbol(s, x + 8, top + barH + 19, 6, false, Palette.INK);
         s.fill(Palette.INK);
-        s.text("into screen", x + 20, top + barH + 13, 11, false, Surface.Anchor.LEFT);
+        s.text("into screen", x + 20, top + barH + 19, LABEL_FONT, false, Surface.Anchor.LEFT);
         s.fill(Palette.MUTED);
-        String foot = !hasMap ? "computing field…" : contourStep > 0 ? "contours every " + Quantities.bz(contourStep) : "";
-        s.text(foot, x, box.y() + box.h() - 8, 11, false, Surface.Anchor.BOTTOM_LEFT);
+        if (!hasMap) {
+            s.text("computing field…", x, box.y() + box.h() - 8, LABEL_FONT, false, Surface.Anchor.BOTTOM_LEFT);
+            return;
+        }
+        // The triangles past the bar's ends are the usual mark of a saturated key.
+        s.text(scale.description(), x, box.y() + box.h() - 22, LABEL_FONT, false, Surface.Anchor.BOTTOM_LEFT);
+        if (contours) {
+            s.text("contours at the marks", x, box.y() + box.h() - 8, LABEL_FONT, false, Surface.Anchor.BOTTOM_LEFT);
+        }
+    }
+
+    /** A small triangle past the bar's end in the saturated colour: field beyond the scale's limit. */
+    private static void saturationEnd(Surface s, double x, double endY, boolean positive) {
+        double dir = positive ? -1 : 1;
+        s.fill(DivergingScale.saturated(positive));
+        s.beginPath();
+        s.moveTo(x, endY);
+        s.lineTo(x + 16, endY);
+        s.lineTo(x + 8, endY + dir * 8);
+        s.closePath();
+        s.fillPath();
     }
 
     private static void header(Surface s, Frame f) {

@@ -24,20 +24,46 @@ public record SceneBounds(double minX, double minY, double maxX, double maxY) {
         return of(scene, Placement.of(scene, tS));
     }
 
-    /** Bounds of all outlines where {@code placement} puts them; a 0.2 m box around the origin for an empty scene. */
+    /**
+     * Bounds of what matters where {@code placement} puts it: the conductors, and the sources near
+     * enough and small enough to act on them as something to look at (within
+     * {@value #NEAR_SIZES} conductor sizes of them and at most {@value #LARGEST_SIZES} times their
+     * size: a metre-wide mains coil around a 20 mm pickup is context, not the subject). Without
+     * conductors, every source; a 0.2 m box around the origin for an empty scene.
+     */
     public static SceneBounds of(Scene scene, Placement placement) {
-        List<Vec2> pts = new ArrayList<>();
-        for (Source s : scene.sources()) {
-            pts.addAll(SourcePainter.outline(s, placement));
-        }
+        List<Vec2> conductors = new ArrayList<>();
         for (Conductor c : scene.conductors()) {
-            pts.addAll(placement.vertices(c));
+            conductors.addAll(placement.vertices(c));
+        }
+        List<Vec2> pts = new ArrayList<>(conductors);
+        Extent focus = conductors.isEmpty() ? null : Extent.of(conductors);
+        double size = focus == null ? 0 : Math.max(Math.max(focus.width(), focus.height()), MIN_FOCUS_M);
+        for (Source s : scene.sources()) {
+            List<Vec2> outline = SourcePainter.outline(s, placement);
+            if (!outline.isEmpty() && (focus == null || actsOnFocus(Extent.of(outline), focus, size))) {
+                pts.addAll(outline);
+            }
         }
         if (pts.isEmpty()) {
             return new SceneBounds(-0.1, -0.1, 0.1, 0.1);
         }
         Extent e = Extent.of(pts);
         return new SceneBounds(e.minX(), e.minY(), e.maxX(), e.maxY());
+    }
+
+    /** Conductor sizes within which a source counts as near. */
+    private static final double NEAR_SIZES = 2;
+    /** Largest source, in conductor sizes, that zoom-to-fit takes in whole. */
+    private static final double LARGEST_SIZES = 4;
+    /** Conductors smaller than this are taken as this big when judging sources, metres. */
+    private static final double MIN_FOCUS_M = 1e-3;
+
+    private static boolean actsOnFocus(Extent source, Extent focus, double size) {
+        double gapX = Math.max(0, Math.max(source.minX() - focus.maxX(), focus.minX() - source.maxX()));
+        double gapY = Math.max(0, Math.max(source.minY() - focus.maxY(), focus.minY() - source.maxY()));
+        return Math.hypot(gapX, gapY) <= NEAR_SIZES * size
+                && Math.max(source.width(), source.height()) <= LARGEST_SIZES * size;
     }
 
     /**

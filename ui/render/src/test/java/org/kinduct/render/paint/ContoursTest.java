@@ -14,7 +14,7 @@ class ContoursTest {
     /** B_z = a·x + b·y sampled exactly at cell centres. */
     private static FieldRaster linear(double a, double b, int cols, int rows, double cell) {
         float[] v = new float[cols * rows];
-        FieldRaster probe = new FieldRaster(-0.5, 0.5, cell, cols, rows, v, 0, 0, 0);
+        FieldRaster probe = new FieldRaster(-0.5, 0.5, cell, cols, rows, v, 0, 0, 0, 0);
         for (int r = 0; r < rows; r++) {
             for (int c = 0; c < cols; c++) {
                 v[r * cols + c] = (float) (a * probe.centerX(c) + b * probe.centerY(r));
@@ -66,7 +66,7 @@ class ContoursTest {
         // B_z = x² + y² has circles as contours; the level r² = 0.04 is a circle of radius 0.2 m.
         int n = 60;
         float[] v = new float[n * n];
-        FieldRaster r = new FieldRaster(-0.3, 0.3, 0.01, n, n, v, 0, 0, 0);
+        FieldRaster r = new FieldRaster(-0.3, 0.3, 0.01, n, n, v, 0, 0, 0, 0);
         for (int row = 0; row < n; row++) {
             for (int col = 0; col < n; col++) {
                 v[row * n + col] = (float) (Math.pow(r.centerX(col), 2) + Math.pow(r.centerY(row), 2));

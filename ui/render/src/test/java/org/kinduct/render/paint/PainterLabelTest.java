@@ -55,7 +55,7 @@ class PainterLabelTest {
                         VIEW.maxY() - (r + 0.5) * CELL_M);
             }
         }
-        return new FieldRaster(VIEW.minX(), VIEW.maxY(), CELL_M, cols, rows, v, 0.5, 0, 0);
+        return new FieldRaster(VIEW.minX(), VIEW.maxY(), CELL_M, cols, rows, v, 0.5, 0.5, 0, 0);
     }
 
     private static List<Text> contourLabels(List<Text> all) {

@@ -76,7 +76,7 @@ class SceneBoundsTest {
 
         SceneBounds b = SceneBounds.ofWindow(s, series);
 
-        // Every point of every sample lies inside; the box's edges are reached by some point.
+        // Every point that matters at every sample lies inside; the box's edges are reached by some point.
         double[] reached = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY,
                 Double.NEGATIVE_INFINITY};
         List<Placement> placements = new ArrayList<>();
@@ -120,11 +120,58 @@ class SceneBoundsTest {
                 .withSources(List.of(patch, magnet)).withTime(new TimeSpan(t0, t0 + r.nextDouble(0.1, 3), 0.01));
     }
 
+    /**
+     * The points zoom-to-fit must hold: every conductor vertex, and the outline of every source
+     * within two conductor sizes of the conductors and at most four times their size (the rule
+     * stated in {@link SceneBounds#of(Scene, Placement)}).
+     */
     private static List<Vec2> placedPoints(Scene s, Placement placement) {
         List<Vec2> pts = new ArrayList<>();
         s.conductors().forEach(c -> pts.addAll(placement.vertices(c)));
-        s.sources().forEach(src -> pts.addAll(SourcePainter.outline(src, placement)));
+        double[] box = box(pts);
+        double size = Math.max(box[2] - box[0], box[3] - box[1]);
+        for (Source src : s.sources()) {
+            List<Vec2> outline = SourcePainter.outline(src, placement);
+            double[] o = box(outline);
+            double gap = Math.hypot(Math.max(0, Math.max(o[0] - box[2], box[0] - o[2])),
+                    Math.max(0, Math.max(o[1] - box[3], box[1] - o[3])));
+            if (gap <= 2 * size && Math.max(o[2] - o[0], o[3] - o[1]) <= 4 * size) {
+                pts.addAll(outline);
+            }
+        }
         return pts;
+    }
+
+    private static double[] box(List<Vec2> pts) {
+        double[] b = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY,
+            Double.NEGATIVE_INFINITY};
+        for (Vec2 p : pts) {
+            b[0] = Math.min(b[0], p.x());
+            b[1] = Math.min(b[1], p.y());
+            b[2] = Math.max(b[2], p.x());
+            b[3] = Math.max(b[3], p.y());
+        }
+        return b;
+    }
+
+    /** A 20 mm pickup inside a metre-wide source coil, with a small magnet beside it: the view is the pickup and the magnet. */
+    @Test
+    void aPickupInsideAHugeCoilIsFittedWithWhatIsNearItNotTheCoil() {
+        Conductor.Loop pickup = Conductor.Loop.simple("pickup", Body.FIXED, List.of(Conductor.Vertex.at(0, 0),
+                Conductor.Vertex.at(0.02, 0), Conductor.Vertex.at(0.02, 0.02), Conductor.Vertex.at(0, 0.02)),
+                WireSpec.awg(Material.COPPER, 30));
+        Source.SourceCoil mains = new Source.SourceCoil("mains", Body.FIXED,
+                new Source.CoilShape.Circle(new Vec2(0.01, 0.01), 0.5), 10, -0.3, Source.Drive.dc(1));
+        Source.CylinderMagnet near = new Source.CylinderMagnet("near", Body.FIXED, new Vec2(0.03, 0.01), 0.003, 0.003,
+                0.005, Source.Side.ABOVE, 1.3, Source.Magnetization.PLUS_Z);
+        Scene s = Scene.empty("g").withConductors(List.of(pickup)).withSources(List.of(mains, near));
+
+        SceneBounds b = SceneBounds.of(s, 0);
+
+        assertEquals(0, b.minX(), GEOMETRY_TOL);
+        assertEquals(0, b.minY(), GEOMETRY_TOL);
+        assertEquals(0.033, b.maxX(), 1e-4, "the magnet's far edge (its outline is a 72-gon)");
+        assertEquals(0.02, b.maxY(), GEOMETRY_TOL);
     }
 
     private static Vec2 vec(SplittableRandom r, double half) {
