@@ -154,7 +154,8 @@ final class EditorCanvas extends Pane {
         }
         ViewTransform v = view();
         if (v.widthPx() >= 1 && v.heightPx() >= 1) {
-            backdrops.request(raster, v, vm.rangeProperty().get().scaleFor(raster), vm.layers());
+            backdrops.request(raster, v, vm.rangeProperty().get().scaleFor(raster),
+                    org.kinduct.render.paint.FieldLayers.applicable(vm.layers(), vm.scene()));
         }
     }
 

@@ -1,11 +1,14 @@
 package org.kinduct.render.paint;
 
 import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.kinduct.render.view.ViewTransform;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
 
 /**
  * The layers drawn from a field map alone: colours, contour lines and the ⊙/⊗ lattice. They
@@ -16,7 +19,15 @@ import org.kinduct.render.view.ViewTransform;
 public final class FieldLayers {
 
     /** The layers this class draws. */
-    public static final Set<Layer> LAYERS = Set.of(Layer.HEAT_MAP, Layer.CONTOURS, Layer.SYMBOLS);
+    public static final Set<Layer> LAYERS = Set.of(Layer.HEAT_MAP, Layer.CONTOURS, Layer.SYMBOLS, Layer.CAUTION);
+    /**
+     * |B_z| of the caution line around strong magnets, tesla: 0.5 mT, the line long used to mark
+     * where people with implanted medical devices should not go (ICNIRP, Health Phys. 96(4),
+     * 504–514, 2009, static-field guidance; lower levels may apply locally). Only the component
+     * normal to the drawing plane is known here; |B| is at least as large.
+     */
+    public static final double CAUTION_T = 0.5e-3;
+    private static final int CAUTION_COLOUR = 0xFFB00020;
 
     private static final double SYMBOL_SPACING_PX = 42;
     private static final double SYMBOL_MIN_FRACTION = 0.04;
@@ -56,7 +67,71 @@ public final class FieldLayers {
         if (shown.contains(Layer.SYMBOLS)) {
             symbols(s, v, raster, scale);
         }
+        if (shown.contains(Layer.CAUTION) && raster.peakT() >= CAUTION_T) {
+            caution(s, v, raster);
+        }
         return shown.contains(Layer.CONTOURS) ? contours(s, v, raster, scale) : List.of();
+    }
+
+    /**
+     * The layers of {@code shown} that apply to {@code scene}: the caution line only where there is
+     * a magnet (an ideal field patch's edge is no place to warn about).
+     */
+    public static Set<Layer> applicable(Set<Layer> shown, Scene scene) {
+        if (!shown.contains(Layer.CAUTION) || scene.sources().stream().anyMatch(FieldLayers::isMagnet)) {
+            return shown;
+        }
+        Set<Layer> without = shown.isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(shown);
+        without.remove(Layer.CAUTION);
+        return without;
+    }
+
+    private static boolean isMagnet(Source s) {
+        return s.match(new Source.Cases<>() {
+            @Override
+            public Boolean patch(Source.FieldPatch patch) {
+                return false;
+            }
+
+            @Override
+            public Boolean uniform(Source.UniformField uniform) {
+                return false;
+            }
+
+            @Override
+            public Boolean block(Source.BlockMagnet block) {
+                return true;
+            }
+
+            @Override
+            public Boolean cylinder(Source.CylinderMagnet cylinder) {
+                return true;
+            }
+
+            @Override
+            public Boolean coil(Source.SourceCoil coil) {
+                return false;
+            }
+        });
+    }
+
+    /** Dashed lines where |B_z| = {@link #CAUTION_T}, both signs. */
+    private static void caution(Surface s, ViewTransform v, FieldRaster fine) {
+        FieldRaster r = fine.decimated((int) Math.round(CONTOUR_CELL_PX / (fine.cellM() * v.pxPerM())));
+        s.stroke(CAUTION_COLOUR);
+        s.lineWidth(1.5);
+        s.dash(6, 3);
+        for (double level : new double[] {-CAUTION_T, CAUTION_T}) {
+            s.beginPath();
+            Contours.lines(r, level, (xs, ys, n) -> {
+                s.moveTo(v.screenX(xs[0]), v.screenY(ys[0]));
+                for (int i = 1; i < n; i++) {
+                    s.lineTo(v.screenX(xs[i]), v.screenY(ys[i]));
+                }
+            });
+            s.strokePath();
+        }
+        s.dash();
     }
 
     private static void heatMap(Surface s, ViewTransform v, FieldRaster r, ColourScale scale) {

@@ -13,7 +13,9 @@ public enum Layer {
     LEGEND("Colour legend"),
     SCALE_BAR("Scale bar"),
     /** The time in the map's corner; a page with a title block states it there instead. */
-    TIME("Time");
+    TIME("Time"),
+    /** The 0.5 mT line around magnets (drawn only where a scene has magnets). */
+    CAUTION("0.5 mT caution line");
 
     private final String label;
 

@@ -2,6 +2,7 @@ package org.kinduct.render.paint;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 import org.kinduct.render.view.NiceSteps;
 import org.kinduct.render.view.ViewTransform;
 
@@ -21,7 +22,7 @@ public final class ScenePainter {
     /** The "t = …" box in the top-left corner; axis labels keep out of it. */
     private static final LabelPlacer.Box HEADER = new LabelPlacer.Box(6, 6, 150, 20);
     private static final double LEGEND_W = 178;
-    private static final double LEGEND_H = 236;
+    private static final double LEGEND_H = 250;
     private static final double LEGEND_GAP = 10;
     /** Width the colour legend takes from the right edge of the view, gap included. */
     public static final double LEGEND_SPAN_PX = LEGEND_W + LEGEND_GAP;
@@ -48,8 +49,11 @@ public final class ScenePainter {
         s.fill(Palette.BACKGROUND);
         s.fillRect(0, 0, s.width(), s.height());
         ColourScale scale = f.range().scaleFor(f.raster());
-        List<FieldLayers.ContourLabel> contourLabels = backdrop != null && backdrop.shows(f.layers())
-                ? backdrop.drawOn(s, v) : FieldLayers.draw(s, v, f.raster(), scale, f.layers());
+        Set<Layer> field = FieldLayers.applicable(f.layers(), f.scene());
+        List<FieldLayers.ContourLabel> contourLabels = backdrop != null && backdrop.shows(field)
+                ? backdrop.drawOn(s, v) : FieldLayers.draw(s, v, f.raster(), scale, field);
+        boolean caution = field.contains(Layer.CAUTION) && f.raster() != null
+                && f.raster().peakT() >= FieldLayers.CAUTION_T;
         // Boxes the header, scale bar and legend will cover: no label is drawn under them.
         List<LabelPlacer.Box> fixed = new ArrayList<>();
         if (f.shows(Layer.TIME)) {
@@ -88,7 +92,7 @@ public final class ScenePainter {
             scaleBar(s, v);
         }
         if (legendBox != null) {
-            legend(s, legendBox, scale, f.shows(Layer.CONTOURS), f.raster() != null);
+            legend(s, legendBox, scale, f.shows(Layer.CONTOURS), caution, f.raster() != null);
         }
         header(s, f);
         s.restore();
@@ -196,7 +200,8 @@ public final class ScenePainter {
      * marked where the scale puts them (decades on a logarithmic scale), the darker ends beyond
      * the limit that mark saturated field, and what kind of scale it is.
      */
-    private static void legend(Surface s, LabelPlacer.Box box, ColourScale scale, boolean contours, boolean hasMap) {
+    private static void legend(Surface s, LabelPlacer.Box box, ColourScale scale, boolean contours, boolean caution,
+                               boolean hasMap) {
         s.fill(Palette.LABEL_BOX);
         s.fillRect(box.x(), box.y(), box.w(), box.h());
         s.stroke(Palette.LABEL_EDGE);
@@ -250,9 +255,22 @@ public final class ScenePainter {
             return;
         }
         // The triangles past the bar's ends are the usual mark of a saturated key.
-        s.text(scale.description(), x, box.y() + box.h() - 22, LABEL_FONT, false, Surface.Anchor.BOTTOM_LEFT);
+        s.text(scale.description(), x, box.y() + box.h() - 36, LABEL_FONT, false, Surface.Anchor.BOTTOM_LEFT);
         if (contours) {
-            s.text("contours at the marks", x, box.y() + box.h() - 8, LABEL_FONT, false, Surface.Anchor.BOTTOM_LEFT);
+            s.text("contours at the marks", x, box.y() + box.h() - 22, LABEL_FONT, false, Surface.Anchor.BOTTOM_LEFT);
+        }
+        if (caution) {
+            double y = box.y() + box.h() - 12;
+            s.stroke(0xFFB00020);
+            s.lineWidth(1.5);
+            s.dash(6, 3);
+            s.beginPath();
+            s.moveTo(x, y);
+            s.lineTo(x + 18, y);
+            s.strokePath();
+            s.dash();
+            s.fill(0xFFB00020);
+            s.text("0.5 mT caution line", x + 24, y, LABEL_FONT, false, Surface.Anchor.LEFT);
         }
     }
 

@@ -80,7 +80,7 @@ class PngExportTest {
     private static final Map<String, int[]> ERASURES = Map.of(
             "title line", new int[] {20, 24, 500, 54, 10, 10},
             "callout box", new int[] {360, 311, 492, 394, 520, 300},
-            "legend label 'out of screen'", new int[] {665, 402, 776, 422, 850, 450});
+            "legend label 'out of screen'", new int[] {665, 381, 776, 401, 850, 450});
 
     @ParameterizedTest
     @CsvSource({"600, 72", "1500, 300", "2400, 600"})
