@@ -27,8 +27,9 @@ public sealed interface ExportInstant permits ExportInstant.At, ExportInstant.Pe
 
     /**
      * The sample of the run where |EMF| is largest, over every conductor or over the one named
-     * {@code conductorId} (null: every conductor); the earliest such sample, the first sample when
-     * every EMF is zero.
+     * {@code conductorId} (null: every conductor): of the samples within {@value #TIE} of the peak
+     * (a plateau), the earliest where the flux rule is a check (no conductor at a field edge),
+     * else the earliest; the first sample when every EMF is zero.
      */
     record Peak(String conductorId) implements ExportInstant {
 
@@ -38,17 +39,33 @@ public sealed interface ExportInstant permits ExportInstant.At, ExportInstant.Pe
                 throw new IllegalArgumentException("no conductor '" + conductorId + "' to take the peak of; the scene"
                         + " has " + run.scene().conductors().stream().map(Conductor::id).toList());
             }
-            Snapshot best = run.samples().get(0);
-            double largest = 0;
+            double peak = 0;
             for (Snapshot s : run.samples()) {
-                for (ConductorState c : s.conductors()) {
-                    if ((conductorId == null || c.id().equals(conductorId)) && Math.abs(c.emfV()) > largest) {
-                        largest = Math.abs(c.emfV());
-                        best = s;
+                peak = Math.max(peak, largest(s));
+            }
+            Snapshot first = null;
+            for (Snapshot s : run.samples()) {
+                if (largest(s) >= (1 - TIE) * peak) {
+                    if (s.conductors().stream().noneMatch(c -> Double.isNaN(c.disagreement()))) {
+                        return s;
                     }
+                    first = first == null ? s : first;
                 }
             }
-            return best;
+            return first;
+        }
+
+        /** Relative nearness to the peak that counts as the peak (a flat top computed to rounding). */
+        private static final double TIE = 1e-6;
+
+        private double largest(Snapshot s) {
+            double m = 0;
+            for (ConductorState c : s.conductors()) {
+                if (conductorId == null || c.id().equals(conductorId)) {
+                    m = Math.max(m, Math.abs(c.emfV()));
+                }
+            }
+            return m;
         }
     }
 

@@ -371,8 +371,8 @@ final class SnapshotPage {
         String sense = closedLoop ? Labels.sense(st.direction()) : Labels.polarity(st.positiveEnd(), !wire);
         Vec2 forceN = scales.force(st.forceN());
         double f = forceN.length();
-        String force = closedLoop && f > 0 ? Quantities.force(f) + " ∠ " + direction(forceN)
-                : NOT_APPLICABLE;
+        // A closed loop's force is a result even when it is zero; only its direction is then undefined.
+        String force = closedLoop ? Quantities.force(f) + (f > 0 ? " ∠ " + direction(forceN) : "") : NOT_APPLICABLE;
         return new String[] {c.id(), flux, emf, agree, current, sense, force};
     }
 

@@ -44,6 +44,7 @@ final class ConductorPainter {
                 s.dash();
                 outline(s, v, c, pts);
             }
+            slidingContacts(s, v, c, pts);
             if (selected) {
                 for (Vec2 p : pts) {
                     double x = v.screenX(p.x());
@@ -54,6 +55,28 @@ final class ConductorPainter {
                     s.lineWidth(1.5);
                     s.strokeRect(x - 4, y - 4, 8, 8);
                 }
+            }
+        }
+    }
+
+    /**
+     * Where a conductor passes from one body to another (a bar riding fixed rails), a contact mark:
+     * the circuit closes through a sliding joint there, and a reader should see it.
+     */
+    private static void slidingContacts(Surface s, ViewTransform v, Conductor c, List<Vec2> pts) {
+        int n = pts.size();
+        for (int i = 0; i < n; i++) {
+            String here = c.vertices().get(i).bodyOr(c.body());
+            boolean closedAround = c instanceof Conductor.Loop || i > 0 && i < n - 1;
+            String before = c.vertices().get((i + n - 1) % n).bodyOr(c.body());
+            String after = c.vertices().get((i + 1) % n).bodyOr(c.body());
+            if (closedAround && (!here.equals(before) || !here.equals(after))) {
+                double x = v.screenX(pts.get(i).x());
+                double y = v.screenY(pts.get(i).y());
+                s.fill(Palette.INK);
+                s.fillOval(x, y, 5.5);
+                s.fill(0xFFFFFFFF);
+                s.fillOval(x, y, 2.5);
             }
         }
     }

@@ -9,6 +9,7 @@ public enum Layer {
     SOURCES("Sources"),
     CONDUCTORS("Conductors"),
     LENZ("Polarity and current arrows"),
+    MOTION("Velocity arrows"),
     CALLOUTS("Value labels"),
     LEGEND("Colour legend"),
     SCALE_BAR("Scale bar"),

@@ -40,6 +40,11 @@ public final class Placement {
         return out;
     }
 
+    /** Body {@code bodyId}'s pose now. */
+    public Pose pose(String bodyId) {
+        return poses.get(bodyId);
+    }
+
     /** Where a point now at {@code now} on body {@code bodyId} was drawn: the inverse of {@link Pose#place}. */
     public Vec2 drawn(String bodyId, Vec2 now) {
         return poses.get(bodyId).unplace(now);

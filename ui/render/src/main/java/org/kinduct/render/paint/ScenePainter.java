@@ -80,6 +80,9 @@ public final class ScenePainter {
         if (f.shows(Layer.LENZ) && f.snapshot() != null) {
             ConductorPainter.drawLenz(s, v, f.scene(), f.snapshot(), placer);
         }
+        if (f.shows(Layer.MOTION)) {
+            MotionPainter.draw(s, v, f.scene(), placement, placer);
+        }
         patchMarks.forEach(Runnable::run);
         List<Runnable> labels = new ArrayList<>();
         if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
