@@ -1,5 +1,7 @@
 package org.kinduct.solver.sheet;
 
+import java.util.Arrays;
+
 /**
  * Preconditioned conjugate gradients (Hestenes &amp; Stiefel 1952; Saad, <i>Iterative Methods for
  * Sparse Linear Systems</i>, 2nd ed., 2003, Algorithm 9.1) for the singular, consistent system of a
@@ -38,7 +40,7 @@ final class ConjugateGradient {
     static Outcome solve(CellOperator a, double[] b, double[] x, Preconditioner m, double tolerance,
                          int maxIterations, String method) {
         int n = b.length;
-        java.util.Arrays.fill(x, 0);
+        Arrays.fill(x, 0);
         double bNorm = Math.sqrt(CellOperator.dot(b, b));
         if (bNorm == 0) {
             return new Outcome(0, 0);

@@ -131,8 +131,8 @@ public record SheetShape(List<Vec2> outline, List<List<Vec2>> holes) {
             }
             for (Vec2 p : holes.get(h)) {
                 if (outerArea.classify(Vector2D.of(p.x(), p.y())) != RegionLocation.INSIDE) {
-                    throw new IllegalArgumentException("hole " + h + " must lie strictly inside the outline; its vertex "
-                            + p + " does not");
+                    throw new IllegalArgumentException("hole " + h + " must lie strictly inside the outline; its"
+                            + " vertex " + p + " does not");
                 }
             }
             checkApart("hole " + h, edges, "the outline", outer);

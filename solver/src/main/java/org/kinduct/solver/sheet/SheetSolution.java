@@ -7,7 +7,8 @@ import org.kinduct.scene.Vec2;
  * A solved sheet at one instant; immutable. Potentials are cell values with zero area-weighted
  * mean (the problem fixes φ only up to a constant); current densities are cell values; the stream
  * function is on the grid's nodes; forces and powers are totals over the sheet. See
- * {@link SheetSolver} for the physics and {@link Currents} for how the totals are summed.
+ * {@link SheetSolver} for the physics; the totals are summed over the same face filaments as the
+ * EMFs, so that Joule power and mechanical power balance exactly for rigid motion.
  */
 public final class SheetSolution {
 

@@ -1,8 +1,10 @@
 package org.kinduct.solver.sheet;
 
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.field.PhysicalConstants;
 
@@ -24,15 +26,15 @@ import org.kinduct.solver.field.PhysicalConstants;
  *
  * <p>Discretization: cell-centred finite volumes on the cut-cell grid of {@link SheetGrid}. The
  * current through each open face is σ·d·a_f·(φ_P − φ_nb + ε_f)/h with ε_f the EMF from one cell
- * centre to the next ({@link FaceEmfs}); zero through the edge. Current balance in every cell gives
- * the symmetric singular system A·φ = b of {@link CellOperator}; b sums to zero by construction (each
+ * centre to the next (<code>FaceEmfs</code>); zero through the edge. Current balance in every cell gives
+ * the symmetric singular system A·φ = b of <code>CellOperator</code>; b sums to zero by construction (each
  * face enters two cells with opposite signs) and is projected onto zero sum against rounding; φ is
  * shifted to zero area-weighted mean. Second-order accurate where B_z and v are smooth, away from
  * corners of the edge; first order near jumps of B_z. Cut faces use the two-point difference
  * across the full face, an O(h) error in the flux of a band of cells one cell wide along the edge,
  * whose effect on the potential is O(h²).
  *
- * <p>Linear solver: conjugate gradients preconditioned by one multigrid V-cycle ({@link Multigrid},
+ * <p>Linear solver: conjugate gradients preconditioned by one multigrid V-cycle (<code>Multigrid</code>,
  * work proportional to the number of cells), or by the diagonal (Jacobi, the baseline, iterations
  * growing like the number of cells along a side). Either stops at ‖b − A·φ‖₂ ≤ tolerance·‖b‖₂ or
  * throws {@link SheetConvergenceException} when the budget is spent.
@@ -175,7 +177,7 @@ public record SheetSolver(Method method, double relativeTolerance, int maxIterat
      */
     private static int[] hostCells(SheetGrid grid, List<Electrode> electrodes) {
         int[] hosts = new int[electrodes.size()];
-        java.util.Set<String> names = new java.util.HashSet<>();
+        Set<String> names = new HashSet<>();
         for (int e = 0; e < electrodes.size(); e++) {
             Electrode electrode = electrodes.get(e);
             if (!names.add(electrode.name())) {
@@ -193,23 +195,22 @@ public record SheetSolver(Method method, double relativeTolerance, int maxIterat
             int best = -1;
             double bestDistance = Double.POSITIVE_INFINITY;
             int fullest = -1;
+            double fullestFraction = 0;
             for (int j = Math.max(0, cj - 2); j <= Math.min(grid.ny() - 1, cj + 2); j++) {
                 for (int i = Math.max(0, ci - 2); i <= Math.min(grid.nx() - 1, ci + 2); i++) {
-                    if (!grid.active(i, j)) {
-                        continue;
-                    }
-                    int c = i + grid.nx() * j;
-                    if (fullest < 0 || grid.areaFraction(i, j) > grid.areaFraction(fullest % grid.nx(), fullest / grid.nx())) {
-                        fullest = c;
+                    double fraction = grid.areaFraction(i, j);
+                    if (fraction > fullestFraction) {
+                        fullest = i + grid.nx() * j;
+                        fullestFraction = fraction;
                     }
                     double distance = Math.hypot(grid.centreXM(i) - p.x(), grid.centreYM(j) - p.y());
-                    if (grid.areaFraction(i, j) >= HOST_FRACTION && distance < bestDistance) {
-                        best = c;
+                    if (fraction >= HOST_FRACTION && distance < bestDistance) {
+                        best = i + grid.nx() * j;
                         bestDistance = distance;
                     }
                 }
             }
-            if (best < 0 && fullest < 0) {
+            if (fullest < 0) {
                 throw new IllegalArgumentException("electrode '" + electrode.name() + "' at " + p
                         + " has no conducting cell within two cells; use smaller cells");
             }
@@ -220,7 +221,7 @@ public record SheetSolver(Method method, double relativeTolerance, int maxIterat
 
     /**
      * φ at an edge point e from its host cell P: φ(e) = φ_P + ∫_P^e ∇φ·dl with ∇φ = (v × B − ∂A/∂t)
-     * − J/σ, the EMF part exactly as for a face ({@link FaceEmfs#emf}) and J taken as the host
+     * − J/σ, the EMF part exactly as for a face (<code>FaceEmfs.emf</code>) and J taken as the host
      * cell's: second order, as |e − c_P| = O(h) and J is first-order accurate in a cut cell.
      */
     private static double electrodePotential(SheetGrid grid, SheetConductor conductor, SheetDrive drive,

@@ -116,8 +116,9 @@ class ChannelFlowTest {
             ChannelFlow channel = new ChannelFlow(new Vec2(-lengthM / 2, 0), new Vec2(lengthM / 2, 0), WIDTH_M,
                     SPEED_M_PER_S, profile);
             double half = lengthRatio * WIDTH_M / 2;
-            double ratio = channel.endShortingRatio(solve(channel, SheetGrid.withCellSize(channel.shape(), WIDTH_M / 20),
-                    (x, y) -> Math.abs(x) < half ? BZ_T : 0, lengthM / 2), BZ_T);
+            SheetGrid grid = SheetGrid.withCellSize(channel.shape(), WIDTH_M / 20);
+            double ratio = channel.endShortingRatio(solve(channel, grid, (x, y) -> Math.abs(x) < half ? BZ_T : 0,
+                    lengthM / 2), BZ_T);
             System.out.printf("          %4.1f   %.7f%n", lengthRatio, ratio);
             assertTrue(ratio > previous && ratio < 1, "monotone rise below the ideal voltage at Lb/w = " + lengthRatio);
             previous = ratio;

@@ -15,15 +15,15 @@ import org.kinduct.solver.field.PhysicalConstants;
  *
  * <p>Reitz (J. Appl. Phys. 41, 2067, 1970) gives, for a sheet whose currents' own field is kept,
  * F_L = (3μ0m²/(32πh⁴))·(1 − w/√(v² + w²)) and F_D = (w/v)·F_L with w = 2/(μ0·σ·d). For v ≪ w,
- * 1 − w/√(v² + w²) → v²/(2w²), so F_D → 3μ0m²·v/(64πh⁴·w) = 3μ0²m²·σ·d·v/(128π·h⁴), the resistive
- * limit this solver computes.
+ * 1 − w/√(v² + w²) → v²/(2w²), so F_D → 3μ0m²·v/(64πh⁴·w) = 3μ0²m²·σ·d·v/(128π·h⁴), the
+ * resistive limit this solver computes.
  *
  * <p>The same from any circularly symmetric B_z on an infinite sheet moving along x: with
  * E = (0, −vB), ∇·J = 0 gives in Fourier space φ̂ = i·v·k_y·B̂/k² and Ĵ_y = −σ·v·B̂·k_x²/k², so
  * by Parseval F_x = d∫J_y·B dA = −σ·d·v∫|B̂|²·(k_x²/k²) d²k/(2π)², and the angular mean of k_x²/k²
  * is ½: F = ½·σ·d·v·∫B_z² dA. For the dipole, B_z = μ0m(2h² − ρ²)/(4π(h² + ρ²)^{5/2}) and
- * ∫B_z² dA = π(μ0m/4π)²·h⁻⁴·∫₀^∞ (2 − t)²/(1 + t)⁵ dt = π(μ0m/4π)²·(3/4)/h⁴ = 3μ0²m²/(64π·h⁴)
- * (with ρ² = h²t, then s = 1 + t: ∫₁^∞ (9s⁻⁵ − 6s⁻⁴ + s⁻³) ds = 9/4 − 2 + 1/2).
+ * ∫B_z² dA = π(μ0m/4π)²·h⁻⁴·∫₀^∞ (2 − t)²/(1 + t)⁵ dt = π(μ0m/4π)²·(3/4)/h⁴
+ * = 3μ0²m²/(64π·h⁴) (with ρ² = h²t, then s = 1 + t: ∫₁^∞ (9s⁻⁵ − 6s⁻⁴ + s⁻³) ds = 9/4 − 2 + 1/2).
  */
 class DipoleDragTest {
 

@@ -111,7 +111,8 @@ class SheetConvergenceTest {
             sizes[k] = grid.cellM();
             potentialErrors[k] = Math.sqrt(squared / area);
             cutCurrentErrors[k] = cutCurrent;
-            System.out.printf("               %4d    %.3e       %.3e%n", cells[k], potentialErrors[k], cutCurrentErrors[k]);
+            System.out.printf("               %4d    %.3e       %.3e%n", cells[k], potentialErrors[k],
+                    cutCurrentErrors[k]);
         }
         double potentialOrder = SheetFixtures.observedOrder(sizes, potentialErrors);
         double currentOrder = SheetFixtures.observedOrder(sizes, cutCurrentErrors);
@@ -149,7 +150,8 @@ class SheetConvergenceTest {
         }
         int last = cells.length - 1;
         double limit = aligned[last] + (aligned[last] - aligned[last - 1]) / 3;
-        System.out.println("laminar channel under a dipole:  w/h   U aligned (V)      order   |error| turned   |error| aligned");
+        System.out.println("laminar channel under a dipole:  w/h   U aligned (V)      order   |error| turned"
+                + "   |error| aligned");
         for (int k = 0; k < cells.length; k++) {
             double order = k < 2 ? Double.NaN
                     : Math.log((aligned[k - 2] - aligned[k - 1]) / (aligned[k - 1] - aligned[k])) / Math.log(2);
@@ -179,8 +181,8 @@ class SheetConvergenceTest {
         for (int k = 0; k < perHeight.length; k++) {
             SheetGrid grid = SheetGrid.withCellSize(plate, height / perHeight[k]);
             drag[k] = -SheetSolver.multigrid().solve(grid, SheetConductor.plate(3.5e7, 0.001),
-                    SheetDrive.rigid(SheetFixtures.dipole(1, magnet[0], magnet[1], height), new Vec2(1, 0), 0, Vec2.ZERO),
-                    Vec2.ZERO, List.of()).forceN().x();
+                    SheetDrive.rigid(SheetFixtures.dipole(1, magnet[0], magnet[1], height), new Vec2(1, 0), 0,
+                            Vec2.ZERO), Vec2.ZERO, List.of()).forceN().x();
         }
         double[] sizes = new double[perHeight.length - 1];
         double[] changes = new double[perHeight.length - 1];
@@ -190,8 +192,8 @@ class SheetConvergenceTest {
                 sizes[k - 1] = 1.0 / perHeight[k - 1];
                 changes[k - 1] = drag[k] - drag[k - 1];
             }
-            System.out.printf("                                                       %3d     %.10e   %s%n", perHeight[k],
-                    drag[k], k > 0 ? String.format("%+.2e", changes[k - 1]) : "");
+            System.out.printf("%58d     %.10e   %s%n", perHeight[k], drag[k],
+                    k > 0 ? String.format("%+.2e", changes[k - 1]) : "");
         }
         double order = SheetFixtures.observedOrder(sizes, changes);
         System.out.printf("observed order %.3f%n", order);

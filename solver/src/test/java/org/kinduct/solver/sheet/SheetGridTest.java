@@ -128,8 +128,8 @@ class SheetGridTest {
         assertRejected("must lie strictly inside the outline",
                 () -> new SheetShape(square, List.of(points(0.2, 0.2, 0.8, 0.2, 0.5, 1))));
         // A U-shaped outline: the hole's corners are all inside, its top edge crosses the notch.
-        assertRejected("touches the outline", () -> new SheetShape(points(0, 0, 3, 0, 3, 3, 2, 3, 2, 1, 1, 1, 1, 3, 0, 3),
-                List.of(points(0.5, 2, 1.5, 0.5, 2.5, 2))));
+        List<Vec2> u = points(0, 0, 3, 0, 3, 3, 2, 3, 2, 1, 1, 1, 1, 3, 0, 3);
+        assertRejected("touches the outline", () -> new SheetShape(u, List.of(points(0.5, 2, 1.5, 0.5, 2.5, 2))));
         assertRejected("must not overlap or nest", () -> new SheetShape(square,
                 List.of(points(0.1, 0.1, 0.9, 0.1, 0.9, 0.9, 0.1, 0.9), points(0.3, 0.3, 0.6, 0.3, 0.6, 0.6))));
         assertRejected("touches hole 0", () -> new SheetShape(square,

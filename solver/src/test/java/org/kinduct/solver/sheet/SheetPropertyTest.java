@@ -69,7 +69,8 @@ class SheetPropertyTest {
                 Vec2 p = unplace.apply(new Vec2(x, y));
                 return original.applyAsDouble(p.x(), p.y());
             };
-            return new Case(new SheetShape(outline, holes), movedField, turn.apply(velocity), omega, place.apply(pivot));
+            return new Case(new SheetShape(outline, holes), movedField, turn.apply(velocity), omega,
+                    place.apply(pivot));
         }
     }
 
@@ -97,7 +98,8 @@ class SheetPropertyTest {
         for (int j = 0; j < grid.ny(); j++) {
             for (int i = 0; i < grid.nx(); i++) {
                 if (grid.active(i, j)) {
-                    assertEquals(-forward.potentialV(i, j), backward.potentialV(i, j), ROUNDING * phi, "φ, seed " + seed);
+                    assertEquals(-forward.potentialV(i, j), backward.potentialV(i, j), ROUNDING * phi,
+                            "φ, seed " + seed);
                     assertEquals(-forward.currentDensityXAPerM2(i, j), backward.currentDensityXAPerM2(i, j),
                             ROUNDING * current, "J_x, seed " + seed);
                 }
@@ -128,8 +130,8 @@ class SheetPropertyTest {
         for (int j = 0; j < grid.ny(); j++) {
             for (int i = 0; i < grid.nx(); i++) {
                 if (grid.active(i, j)) {
-                    assertEquals(first.potentialV(i, j) + second.potentialV(i, j), both.potentialV(i, j), ROUNDING * phi,
-                            "φ, seed " + seed);
+                    assertEquals(first.potentialV(i, j) + second.potentialV(i, j), both.potentialV(i, j),
+                            ROUNDING * phi, "φ, seed " + seed);
                     assertEquals(first.currentDensityXAPerM2(i, j) + second.currentDensityXAPerM2(i, j),
                             both.currentDensityXAPerM2(i, j), ROUNDING * current, "J_x, seed " + seed);
                     assertEquals(first.currentDensityYAPerM2(i, j) + second.currentDensityYAPerM2(i, j),
@@ -166,7 +168,8 @@ class SheetPropertyTest {
                 ROUNDING * drag, "shifted, seed " + seed);
 
         // A quarter turn, (x, y) → (−y, x) exactly, maps the grid onto itself.
-        Case quarter = c.moved(p -> new Vec2(-p.y(), p.x()), v -> new Vec2(-v.y(), v.x()), p -> new Vec2(p.y(), -p.x()));
+        Case quarter = c.moved(p -> new Vec2(-p.y(), p.x()), v -> new Vec2(-v.y(), v.x()),
+                p -> new Vec2(p.y(), -p.x()));
         assertEquals(drag, quarter.solve(SheetGrid.withCells(quarter.shape(), CELLS)).forceN().length(),
                 ROUNDING * drag, "quarter turn, seed " + seed);
 

@@ -18,8 +18,8 @@ class SheetSolverTest {
     private static final List<Vec2> OUTLINE = SheetShape.regularPolygon(Vec2.ZERO, 0.05, 96);
     private static final List<Vec2> HOLE = SheetShape.regularPolygon(new Vec2(0.015, 0.005), 0.012, 6);
     private static final SheetShape PLATE = new SheetShape(OUTLINE, List.of(HOLE));
-    private static final SheetDrive DRIVE = SheetDrive.rigid(SheetFixtures.dipole(1, -0.01, 0, 0.006), new Vec2(0.8, 0.3),
-            5, new Vec2(0.002, -0.004));
+    private static final SheetDrive DRIVE = SheetDrive.rigid(SheetFixtures.dipole(1, -0.01, 0, 0.006),
+            new Vec2(0.8, 0.3), 5, new Vec2(0.002, -0.004));
 
     private static SheetSolution solve(SheetGrid grid, SheetSolver solver) {
         return solver.solve(grid, SheetConductor.plate(SIGMA_S_PER_M, THICKNESS_M), DRIVE, Vec2.ZERO, List.of());
@@ -71,8 +71,8 @@ class SheetSolverTest {
                 }
                 if (i < grid.nx()) {
                     // Current up through a y face is the drop of ψ along it, times d.
-                    assertEquals(solution.faceCurrentYA(i, j) / THICKNESS_M, psi - solution.streamFunctionAPerM(i + 1, j),
-                            level, "y face " + i + ", " + j);
+                    assertEquals(solution.faceCurrentYA(i, j) / THICKNESS_M,
+                            psi - solution.streamFunctionAPerM(i + 1, j), level, "y face " + i + ", " + j);
                 }
             }
         }
@@ -96,11 +96,13 @@ class SheetSolverTest {
         for (int j = 0; j < grid.ny(); j++) {
             for (int i = 0; i < grid.nx(); i++) {
                 if (grid.active(i, j)) {
-                    assertEquals(multigrid.potentialV(i, j), jacobi.potentialV(i, j), 1e-9 * scale, "cell " + i + ", " + j);
+                    assertEquals(multigrid.potentialV(i, j), jacobi.potentialV(i, j), 1e-9 * scale,
+                            "cell " + i + ", " + j);
                 }
             }
         }
-        System.out.printf("64 cells: multigrid %d iterations, Jacobi %d%n", multigrid.iterations(), jacobi.iterations());
+        System.out.printf("64 cells: multigrid %d iterations, Jacobi %d%n", multigrid.iterations(),
+                jacobi.iterations());
         assertTrue(multigrid.iterations() < 20, "multigrid iterations " + multigrid.iterations());
     }
 
@@ -119,8 +121,8 @@ class SheetSolverTest {
         SheetGrid grid = SheetGrid.withCells(PLATE, 32);
         SheetSolver solver = SheetSolver.multigrid();
         SheetConductor plate = SheetConductor.plate(SIGMA_S_PER_M, THICKNESS_M);
-        IllegalArgumentException off = assertThrows(IllegalArgumentException.class, () -> solver.solve(grid, plate, DRIVE,
-                Vec2.ZERO, List.of(new Electrode("inside", new Vec2(0.01, 0.01)))));
+        IllegalArgumentException off = assertThrows(IllegalArgumentException.class, () -> solver.solve(grid, plate,
+                DRIVE, Vec2.ZERO, List.of(new Electrode("inside", new Vec2(0.01, 0.01)))));
         assertTrue(off.getMessage().contains("electrodes must lie on the edge"), off.getMessage());
         Vec2 onHole = HOLE.get(0).plus(HOLE.get(1)).times(0.5);
         IllegalArgumentException twice = assertThrows(IllegalArgumentException.class, () -> solver.solve(grid, plate,
@@ -184,7 +186,8 @@ class SheetSolverTest {
             System.out.printf("                         %3d   %.6f%n", cells / 2, ratio);
             assertEquals(0, solution.forceN().length(), 1e-9 * expected / rate, "no net force from a uniform field");
             if (!Double.isNaN(previous)) {
-                assertTrue(Math.abs(ratio - 1) < Math.abs(previous - 1) / 3, "error falls about fourfold, a/h = " + cells / 2);
+                assertTrue(Math.abs(ratio - 1) < Math.abs(previous - 1) / 3,
+                        "error falls about fourfold, a/h = " + cells / 2);
             }
             previous = ratio;
         }

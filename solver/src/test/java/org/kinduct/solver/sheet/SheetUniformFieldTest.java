@@ -37,8 +37,8 @@ class SheetUniformFieldTest {
         Vec2 pivot = new Vec2(-0.03, 0.015);
         SheetGrid grid = SheetGrid.withCells(plate, 96);
         SheetSolution solution = new SheetSolver(SheetSolver.Method.MULTIGRID, SOLVER_TOLERANCE, 100).solve(grid,
-                SheetConductor.plate(SIGMA_S_PER_M, THICKNESS_M), SheetDrive.rigid((x, y) -> BZ_T, new Vec2(vx, vy), omega,
-                        pivot), pivot, List.of());
+                SheetConductor.plate(SIGMA_S_PER_M, THICKNESS_M),
+                SheetDrive.rigid((x, y) -> BZ_T, new Vec2(vx, vy), omega, pivot), pivot, List.of());
         double speed = Math.hypot(vx, vy) + Math.abs(omega) * 0.1;
         double currentScale = SIGMA_S_PER_M * speed * BZ_T;
         double forceScale = currentScale * THICKNESS_M * BZ_T * grid.areaM2();

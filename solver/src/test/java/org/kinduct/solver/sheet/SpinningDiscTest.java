@@ -37,11 +37,12 @@ class SpinningDiscTest {
         double smythe = -0.5 * SIGMA_S_PER_M * THICKNESS_M * omega * BZ_T * BZ_T * Math.PI * POLE_M * POLE_M * r0 * r0
                 * (1 - POLE_M * POLE_M * DISC_M * DISC_M / Math.pow(DISC_M * DISC_M - r0 * r0, 2));
         Vec2 centre = Vec2.polar(r0, poleAngle);
-        SheetShape disc = SheetShape.of(SheetShape.regularPolygon(Vec2.ZERO, DISC_M, 1024));
+        SheetShape disc = SheetShape.of(SheetShape.regularPolygon(Vec2.ZERO, DISC_M, 256));
         System.out.printf("r0 = %s m, ω = %s rad/s:  R/h   τ/τ_Smythe   (P + τω)/P%n", r0, omega);
         for (int perPole : new int[] {10, 20, 40}) {
             SheetGrid grid = SheetGrid.withCellSize(disc, POLE_M / perPole);
-            SheetSolution solution = SheetSolver.multigrid().solve(grid, SheetConductor.plate(SIGMA_S_PER_M, THICKNESS_M),
+            SheetSolution solution = SheetSolver.multigrid().solve(grid,
+                    SheetConductor.plate(SIGMA_S_PER_M, THICKNESS_M),
                     SheetDrive.rigid(SheetFixtures.pole(BZ_T, centre.x(), centre.y(), POLE_M), Vec2.ZERO, omega,
                             Vec2.ZERO), Vec2.ZERO, List.of());
             double ratio = solution.torqueNm() / smythe;
