@@ -1,5 +1,7 @@
 package org.kinduct.solver.sheet;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.Map;
 import org.kinduct.scene.Vec2;
 
@@ -30,7 +32,7 @@ public final class SheetSolution {
         this.currents = currents;
         this.streamFunctionAPerM = streamFunctionAPerM;
         this.pivotM = pivotM;
-        this.electrodePotentialsV = Map.copyOf(electrodePotentialsV);
+        this.electrodePotentialsV = Collections.unmodifiableMap(new LinkedHashMap<>(electrodePotentialsV));
         this.magneticReynolds = magneticReynolds;
         this.iterations = iterations;
         this.relativeResidual = relativeResidual;
@@ -98,7 +100,7 @@ public final class SheetSolution {
         return currents.joulePowerW;
     }
 
-    /** Potential at each electrode by name, volts, on the same zero as the cell potentials. */
+    /** Potential at each electrode by name, in the order given, volts, on the same zero as the cell potentials. */
     public Map<String, Double> electrodePotentialsV() {
         return electrodePotentialsV;
     }

@@ -53,8 +53,10 @@ class ChannelFlowTest {
         SheetGrid grid = SheetGrid.withCellSize(channel.shape(), WIDTH_M / 12);
         SheetSolution solution = solve(channel, grid, (x, y) -> BZ_T, 0.061);
         // Shercliff 1962: U = B·w·v̄ whatever the profile.
-        assertEquals(1, channel.endShortingRatio(solution, BZ_T), SOLVER_LEVEL, profile + " at " + angleRad + " rad");
-        assertEquals(BZ_T * WIDTH_M * SPEED_M_PER_S, channel.idealVoltageV(BZ_T), 0);
+        double ideal = BZ_T * WIDTH_M * SPEED_M_PER_S;
+        assertEquals(ideal, ChannelFlow.voltageV(solution), SOLVER_LEVEL * ideal, profile + " at " + angleRad + " rad");
+        assertEquals(ideal, channel.idealVoltageV(BZ_T), 1e-16 * ideal);
+        assertEquals(ChannelFlow.voltageV(solution) / ideal, channel.endShortingRatio(solution, BZ_T), 1e-16);
         assertTrue(solution.peakCurrentDensityAPerM2() <= SOLVER_LEVEL * SIGMA_S_PER_M * SPEED_M_PER_S * BZ_T,
                 "no current: " + solution.peakCurrentDensityAPerM2() + " A/m²");
     }
@@ -86,10 +88,11 @@ class ChannelFlowTest {
                     SPEED_M_PER_S, ChannelFlow.Profile.PLUG);
             double half = lengthRatio * WIDTH_M / 2;
             java.util.function.DoubleBinaryOperator field = (x, y) -> Math.abs(x) < half ? BZ_T : 0;
-            double coarse = channel.endShortingRatio(
-                    solve(channel, SheetGrid.withCellSize(channel.shape(), WIDTH_M / 20), field, lengthM / 2), BZ_T);
-            double fine = channel.endShortingRatio(
-                    solve(channel, SheetGrid.withCellSize(channel.shape(), WIDTH_M / 40), field, lengthM / 2), BZ_T);
+            double ideal = BZ_T * WIDTH_M * SPEED_M_PER_S;
+            double coarse = ChannelFlow.voltageV(
+                    solve(channel, SheetGrid.withCellSize(channel.shape(), WIDTH_M / 20), field, lengthM / 2)) / ideal;
+            double fine = ChannelFlow.voltageV(
+                    solve(channel, SheetGrid.withCellSize(channel.shape(), WIDTH_M / 40), field, lengthM / 2)) / ideal;
             double extrapolated = (4 * fine - coarse) / 3;
             double series = endlessChannelRatio(lengthRatio);
             System.out.printf("                           %4.1f   %.7f     %.7f   %.7f    %.7f%n", lengthRatio, coarse,
@@ -117,8 +120,8 @@ class ChannelFlowTest {
                     SPEED_M_PER_S, profile);
             double half = lengthRatio * WIDTH_M / 2;
             SheetGrid grid = SheetGrid.withCellSize(channel.shape(), WIDTH_M / 20);
-            double ratio = channel.endShortingRatio(solve(channel, grid, (x, y) -> Math.abs(x) < half ? BZ_T : 0,
-                    lengthM / 2), BZ_T);
+            double ratio = ChannelFlow.voltageV(solve(channel, grid, (x, y) -> Math.abs(x) < half ? BZ_T : 0,
+                    lengthM / 2)) / (BZ_T * WIDTH_M * SPEED_M_PER_S);
             System.out.printf("          %4.1f   %.7f%n", lengthRatio, ratio);
             assertTrue(ratio > previous && ratio < 1, "monotone rise below the ideal voltage at Lb/w = " + lengthRatio);
             previous = ratio;

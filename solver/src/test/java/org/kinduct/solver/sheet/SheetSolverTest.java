@@ -130,7 +130,7 @@ class SheetSolverTest {
         assertTrue(twice.getMessage().contains("two electrodes are named 'e'"), twice.getMessage());
         SheetSolution solution = solver.solve(grid, plate, DRIVE, Vec2.ZERO,
                 List.of(new Electrode("hole", onHole), new Electrode("corner", OUTLINE.get(3))));
-        assertEquals(List.of("corner", "hole"), solution.electrodePotentialsV().keySet().stream().sorted().toList());
+        assertEquals(List.of("hole", "corner"), List.copyOf(solution.electrodePotentialsV().keySet()));
     }
 
     @Test
