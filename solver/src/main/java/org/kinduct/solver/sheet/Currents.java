@@ -3,8 +3,9 @@ package org.kinduct.solver.sheet;
 /**
  * Face currents of a solved potential and everything summed from them. The discrete current is a
  * network of filaments, one per open face, running from cell centre to cell centre (length h)
- * with current I_f = σ·d·a_f·(φ_P − φ_nb + ε_f)/h, a_f the open fraction of the face. Forces,
- * torque and Joule power are sums over the same filaments with the same B_z samples as the EMFs:
+ * with current I_f = σ·d·(a_f·h)·(φ_P − φ_nb + ε_f)/h = σ·d·a_f·(φ_P − φ_nb + ε_f), a_f the open
+ * fraction of the face. Forces, torque and Joule power are sums over the same filaments with the
+ * same B_z samples as the EMFs:
  * <ul>
  *   <li>force I·∫ dl × B = I·B_z·h·(d̂_y, −d̂_x) (Griffiths, <i>Introduction to Electrodynamics</i>,
  *       4th ed., 2013, §5.1.3), so d·∫ J × B dA with each face owning the area a_f·h;</li>

@@ -25,14 +25,16 @@ import org.kinduct.solver.field.PhysicalConstants;
  * d·∫ |J|²/σ dA; for rigid motion without −∂A/∂t the two balance, P = −F·V − τ·ω.
  *
  * <p>Discretization: cell-centred finite volumes on the cut-cell grid of {@link SheetGrid}. The
- * current through each open face is σ·d·a_f·(φ_P − φ_nb + ε_f)/h with ε_f the EMF from one cell
- * centre to the next (<code>FaceEmfs</code>); zero through the edge. Current balance in every cell gives
- * the symmetric singular system A·φ = b of <code>CellOperator</code>; b sums to zero by construction (each
- * face enters two cells with opposite signs) and is projected onto zero sum against rounding; φ is
- * shifted to zero area-weighted mean. Second-order accurate where B_z and v are smooth, away from
- * corners of the edge; first order near jumps of B_z. Cut faces use the two-point difference
- * across the full face, an O(h) error in the flux of a band of cells one cell wide along the edge,
- * whose effect on the potential is O(h²).
+ * current through each open face is σ·d·ℓ_f·(φ_P − φ_nb + ε_f)/h with ℓ_f its open length and
+ * ε_f the EMF from one cell centre to the next (<code>FaceEmfs</code>: B_z, v and −∂A/∂t taken at
+ * the segment's midpoint); zero through the edge. Current balance in every cell gives the
+ * symmetric singular system A·φ = b of <code>CellOperator</code>; b sums to zero by construction
+ * (each face enters two cells with opposite signs) and is projected onto zero sum against
+ * rounding; φ is shifted to zero area-weighted mean. Second-order accurate where B_z and v are
+ * smooth, away from corners of the edge; first order near jumps of B_z (a field patch's rim). Cut
+ * faces use the two-point difference across the full face: an O(h) error in the flux of the band
+ * of cells along the edge (the current density there converges at first order), whose effect on
+ * the potential is O(h²) (see the convergence tests).
  *
  * <p>Linear solver: conjugate gradients preconditioned by one multigrid V-cycle (<code>Multigrid</code>,
  * work proportional to the number of cells), or by the diagonal (Jacobi, the baseline, iterations
@@ -79,7 +81,7 @@ public record SheetSolver(Method method, double relativeTolerance, int maxIterat
         }
     }
 
-    /** Multigrid-preconditioned CG to {@value #DEFAULT_TOLERANCE}; a few dozen iterations at most. */
+    /** Multigrid-preconditioned CG to {@value #DEFAULT_TOLERANCE} within 100 iterations (it takes about 8). */
     public static SheetSolver multigrid() {
         return new SheetSolver(Method.MULTIGRID, DEFAULT_TOLERANCE, 100);
     }
