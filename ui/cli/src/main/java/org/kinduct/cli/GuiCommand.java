@@ -46,8 +46,36 @@ final class GuiCommand implements Callable<Integer> {
         EditorLauncher launcher = ServiceLoader.load(EditorLauncher.class).findFirst()
                 .orElseThrow(() -> new IllegalStateException("the editor is missing from this build"));
         started = true;
-        launcher.open(file, demo);
+        try {
+            launcher.open(file, demo);
+        } catch (RuntimeException | LinkageError e) {
+            started = false;
+            java.util.Optional<String> advice = missingDesktopLibrary(e);
+            if (advice.isPresent()) {
+                throw new BadInputException(advice.get());
+            }
+            throw e;
+        }
         return KinductMain.OK;
+    }
+
+    /**
+     * What to install when the editor's toolkit cannot start for want of a desktop library: on
+     * Linux JavaFX needs GTK 3 ("Unable to load glass GTK library", or no rendering pipeline);
+     * empty for any other failure.
+     */
+    static java.util.Optional<String> missingDesktopLibrary(Throwable failure) {
+        for (Throwable t = failure; t != null; t = t.getCause()) {
+            String m = String.valueOf(t.getMessage()).toLowerCase(Locale.ROOT);
+            if (m.contains("gtk") || m.contains("quantumrenderer") || m.contains("no suitable pipeline")) {
+                return java.util.Optional.of("the editor needs the GTK 3 desktop library, which this machine lacks"
+                        + " (" + t.getMessage() + "); install it (Debian/Ubuntu: apt-get install libgtk-3-0;"
+                        + " Fedora: dnf install gtk3), or use the commands that need no display: './kinduct solve"
+                        + " --demo " + Demos.defaultName() + "', './kinduct export --demo " + Demos.defaultName()
+                        + " --png snapshot.png'");
+            }
+        }
+        return java.util.Optional.empty();
     }
 
     /** On Linux and other X11/Wayland systems a display is announced in the environment. */
