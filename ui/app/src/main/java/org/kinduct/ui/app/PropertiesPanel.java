@@ -2,6 +2,7 @@ package org.kinduct.ui.app;
 
 import java.util.List;
 import java.util.Locale;
+import java.util.Set;
 import java.util.function.UnaryOperator;
 import javafx.collections.SetChangeListener;
 import javafx.geometry.Insets;
@@ -39,20 +40,21 @@ final class PropertiesPanel extends ScrollPane {
         setFitToWidth(true);
         setMinWidth(250);
         box.setPadding(new Insets(8));
-        vm.selection().addListener((SetChangeListener<String>) c -> rebuild());
-        vm.sceneProperty().addListener(o -> rebuild());
+        vm.document().selection().addListener((SetChangeListener<String>) c -> rebuild());
+        vm.document().sceneProperty().addListener(o -> rebuild());
         rebuild();
     }
 
     private void rebuild() {
         box.getChildren().clear();
         Scene scene = vm.scene();
-        if (vm.selection().size() > 1) {
-            heading(vm.selection().size() + " objects selected");
+        Set<String> selection = vm.document().selection();
+        if (selection.size() > 1) {
+            heading(selection.size() + " objects selected");
             note("Drag to move them together; Ctrl+D duplicates, Ctrl+R rotates, Delete removes.");
             return;
         }
-        String id = vm.selection().isEmpty() ? null : vm.selection().iterator().next();
+        String id = selection.isEmpty() ? null : selection.iterator().next();
         heading(id == null ? "Scene" : describe(scene, id));
         addAll(PropertySheet.of(scene, id));
         if (id != null) {
@@ -149,6 +151,6 @@ final class PropertiesPanel extends ScrollPane {
             vm.say(p.label() + ": " + e.getMessage());
             return;
         }
-        vm.apply("Set " + p.label().toLowerCase(Locale.ROOT), edit);
+        vm.document().apply("Set " + p.label().toLowerCase(Locale.ROOT), edit);
     }
 }

@@ -37,10 +37,10 @@ final class TimePlot extends Pane {
         canvas.heightProperty().bind(heightProperty());
         widthProperty().addListener(o -> draw());
         heightProperty().addListener(o -> draw());
-        vm.resultProperty().addListener(o -> draw());
-        vm.sceneProperty().addListener(o -> draw());
-        vm.timeProperty().addListener(o -> draw());
-        vm.selection().addListener((javafx.collections.SetChangeListener<String>) c -> draw());
+        vm.results().resultProperty().addListener(o -> draw());
+        vm.document().sceneProperty().addListener(o -> draw());
+        vm.clock().timeProperty().addListener(o -> draw());
+        vm.document().selection().addListener((javafx.collections.SetChangeListener<String>) c -> draw());
         setOnMouseClicked(e -> seek(e.getX()));
         setOnMouseDragged(e -> seek(e.getX()));
     }
@@ -55,7 +55,7 @@ final class TimePlot extends Pane {
         double t1 = vm.scene().time().t1S();
         double w = getWidth() - LEFT - 10;
         if (w > 0) {
-            vm.seek(t0 + (x - LEFT) / w * (t1 - t0));
+            vm.clock().seek(t0 + (x - LEFT) / w * (t1 - t0));
         }
     }
 
@@ -66,8 +66,8 @@ final class TimePlot extends Pane {
         g.setFill(Color.web("#fbfbf8"));
         g.fillRect(0, 0, w, h);
         List<PlotSeries.Line> lines = PlotSeries.lines(vm.scene(),
-                vm.currentResult().map(org.kinduct.solver.run.RunResult::samples).orElse(List.of()), vm.selection(),
-                quantity);
+                vm.results().currentResult().map(org.kinduct.solver.run.RunResult::samples).orElse(List.of()),
+                vm.document().selection(), quantity);
         double t0 = vm.scene().time().t0S();
         double t1 = vm.scene().time().t1S();
         double pw = w - LEFT - 10;
@@ -128,7 +128,7 @@ final class TimePlot extends Pane {
             g.setTextAlign(TextAlignment.RIGHT);
             g.fillText(line.id(), LEFT + pw - 4, top + 12 + 13 * k);
         }
-        double tx = LEFT + (vm.timeProperty().get() - t0) / (t1 - t0) * pw;
+        double tx = LEFT + (vm.clock().time() - t0) / (t1 - t0) * pw;
         g.setStroke(Color.web("#d6007a"));
         g.setLineWidth(1.5);
         g.strokeLine(tx, top, tx, top + ph);
