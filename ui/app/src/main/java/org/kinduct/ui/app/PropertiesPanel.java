@@ -67,13 +67,52 @@ final class PropertiesPanel extends ScrollPane {
     }
 
     private static String describe(Scene scene, String id) {
-        String kind = scene.source(id).map(s -> s instanceof Source.BlockMagnet ? "Block magnet"
-                : s instanceof Source.CylinderMagnet ? "Disc magnet"
-                : s instanceof Source.FieldPatch ? "Field patch"
-                : s instanceof Source.SourceCoil ? "Source coil" : "Uniform field")
-                .orElseGet(() -> scene.conductor(id).map(c -> c instanceof Conductor.Loop ? "Loop" : "Wire")
-                        .orElse("Object"));
+        String kind = scene.source(id).map(PropertiesPanel::kind)
+                .orElseGet(() -> scene.conductor(id).map(PropertiesPanel::kind).orElse("Object"));
         return kind + " “" + id + "”";
+    }
+
+    private static String kind(Source s) {
+        return s.match(new Source.Cases<>() {
+            @Override
+            public String patch(Source.FieldPatch patch) {
+                return "Field patch";
+            }
+
+            @Override
+            public String uniform(Source.UniformField uniform) {
+                return "Uniform field";
+            }
+
+            @Override
+            public String block(Source.BlockMagnet block) {
+                return "Block magnet";
+            }
+
+            @Override
+            public String cylinder(Source.CylinderMagnet cylinder) {
+                return "Disc magnet";
+            }
+
+            @Override
+            public String coil(Source.SourceCoil coil) {
+                return "Source coil";
+            }
+        });
+    }
+
+    private static String kind(Conductor c) {
+        return c.match(new Conductor.Cases<>() {
+            @Override
+            public String wire(Conductor.Wire wire) {
+                return "Wire";
+            }
+
+            @Override
+            public String loop(Conductor.Loop loop) {
+                return "Loop";
+            }
+        });
     }
 
     private void heading(String text) {

@@ -283,7 +283,7 @@ public final class CanvasGestures {
         Placement seen = vm.seen();
         Set<String> inside = new HashSet<>();
         // A uniform field fills the plane: no band holds it.
-        s.sources().stream().filter(src -> !(src instanceof Source.UniformField)).forEach(src -> inside.add(src.id()));
+        s.sources().stream().filter(Shapes::hasPlace).forEach(src -> inside.add(src.id()));
         s.conductors().forEach(c -> inside.add(c.id()));
         inside.removeIf(id -> {
             SceneBounds b = SceneBounds.ofObjects(s, Set.of(id), seen);
