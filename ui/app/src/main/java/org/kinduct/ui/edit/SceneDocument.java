@@ -44,7 +44,8 @@ public final class SceneDocument {
     /**
      * @param say     puts a message on the status line
      * @param revised told of each new scene and its revision before the scene property changes,
-     *                so the scene's listeners find the rest of the editor already on it
+     *                so the scene's listeners find the rest of the editor already on it (it gets
+     *                the new scene as its argument: {@link #scene()} is still the old one)
      */
     SceneDocument(Scene initial, Consumer<String> say, ObjLongConsumer<Scene> revised) {
         this.history = new UndoHistory(initial, UNDO_LIMIT);
@@ -190,9 +191,9 @@ public final class SceneDocument {
 
     // ---- properties ----
 
-    /** The scene now; during {@code revised} already the new one, while the property still holds the old. */
+    /** The scene shown (during {@code revised} still the one before). */
     public Scene scene() {
-        return history.current();
+        return scene.get();
     }
 
     public ReadOnlyObjectProperty<Scene> sceneProperty() {

@@ -157,6 +157,18 @@ class EditorViewModelTest {
         assertSame(vm.scene(), current.scene(), "the new revision's run");
     }
 
+    /** A view that rebuilds on every change of the scene, reading it through the document as the panels do. */
+    @Test
+    void everyEditReachesTheScenesListeners() {
+        EditorViewModel vm = vm(Fixtures.loopAndMagnet(), SAME_THREAD);
+        List<String> seen = new ArrayList<>();
+        vm.document().sceneProperty().addListener(o -> seen.add(vm.scene().name()));
+        vm.document().apply("Rename", s -> s.withText("one", ""));
+        vm.document().apply("Rename", s -> s.withText("two", ""));
+        vm.document().undo();
+        assertEquals(List.of("one", "two", "one"), seen);
+    }
+
     @Test
     void theShownInstantAndItsFieldAreTheRunsAndArriveTogether() {
         Queue<Runnable> work = new ArrayDeque<>();
