@@ -75,17 +75,27 @@ class PlaybackPacingTest {
         }
     }
 
-    /** A coupled run has no state between its samples but what it sampled: its nearest sample at any pace. */
+    /**
+     * A coupled run has no state between its samples but what it sampled: its nearest sample at
+     * any pace, shown at once (the workers are not even asked).
+     */
     @Test
-    void slowMotionOfACoupledRunStillShowsItsSamples() {
-        EditorViewModel vm = vm(Fixtures.springCart(false));
+    void slowMotionOfACoupledRunShowsItsSamplesAtOnce() {
+        Queue<Runnable> jobs = new ArrayDeque<>();
+        EditorViewModel vm = vm(Fixtures.springCart(false), jobs::add, System::nanoTime);
+        drain(jobs);
         RunResult run = vm.results().currentResult().orElseThrow();
+        // Just before the middle between two samples (2 ms apart): the first frames cross it.
+        vm.clock().seek(0.0489);
+        drain(jobs);
+        Snapshot before = vm.results().snapshot();
         vm.clock().speedProperty().set(0.01);
         vm.clock().playingProperty().set(true);
         for (int i = 0; i < 5; i++) {
             vm.clock().advance(0.0167);
-            assertSame(run.nearest(vm.clock().time()), vm.results().snapshot());
+            assertSame(run.nearest(vm.clock().time()), vm.results().snapshot(), "frame " + i);
         }
+        assertNotSame(before, vm.results().snapshot(), "playback reached the next sample");
     }
 
     @Test
