@@ -107,40 +107,25 @@ final class DocumentFiles {
 
     // ---- new, open ----
 
-    void newScene() {
+    /** Runs {@code action} once nothing unsaved is left to lose (see {@link #confirmDiscard()}). */
+    void afterAsking(Runnable action) {
         confirmDiscard().thenAccept(ok -> {
             if (ok) {
-                vm.load(Scene.empty("untitled"), null, false);
-                vm.zoomToFit();
+                action.run();
             }
+        });
+    }
+
+    void newScene() {
+        afterAsking(() -> {
+            vm.load(Scene.empty("untitled"), null, false);
+            vm.zoomToFit();
         });
     }
 
     /** File ▸ Open: asks about unsaved changes, then for the file. */
     void openChosen() {
-        confirmDiscard().thenAccept(ok -> {
-            if (ok) {
-                dialogs.fileToOpen(folder()).ifPresent(this::open);
-            }
-        });
-    }
-
-    /** Asks about unsaved changes, then opens {@code file}. */
-    void openAfterAsking(Path file) {
-        confirmDiscard().thenAccept(ok -> {
-            if (ok) {
-                open(file);
-            }
-        });
-    }
-
-    /** Asks about unsaved changes, then opens the demo. */
-    void openDemoAfterAsking(String resource) {
-        confirmDiscard().thenAccept(ok -> {
-            if (ok) {
-                openDemo(resource);
-            }
-        });
+        afterAsking(() -> dialogs.fileToOpen(folder()).ifPresent(this::open));
     }
 
     /** Opens a scene file; on failure the current scene stays and the user is told what is wrong. */

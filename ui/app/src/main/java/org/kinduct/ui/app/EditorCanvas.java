@@ -55,6 +55,9 @@ final class EditorCanvas extends Pane {
     private double lastFrameMs;
     private DoubleConsumer paintTimes = ms -> { };
     private long lastNanos;
+    /** Where the cursor was last seen over the canvas, pixels; NaN before. */
+    private double cursorX = Double.NaN;
+    private double cursorY = Double.NaN;
 
     EditorCanvas(EditorViewModel vm, Consumer<String> cursorSink) {
         this.vm = vm;
@@ -81,6 +84,12 @@ final class EditorCanvas extends Pane {
                 vm.view().rangeProperty()}) {
             o.addListener(x -> requestBackdrop());
         }
+        // The readout follows the field of the instant shown, also while the mouse rests.
+        vm.results().shownFieldProperty().addListener(o -> {
+            if (!Double.isNaN(cursorX)) {
+                showCursor(cursorX, cursorY);
+            }
+        });
         vm.view().toolProperty().addListener((obs, old, t) -> {
             setCursor(t == ToolKind.SELECT ? Cursor.DEFAULT : Cursor.CROSSHAIR);
             needsPaint = true;
@@ -218,6 +227,8 @@ final class EditorCanvas extends Pane {
 
     /** Position and B_z under the cursor; B_z is the field delivered with the snapshot shown. */
     private void showCursor(double sx, double sy) {
+        cursorX = sx;
+        cursorY = sy;
         Vec2 p = vm.view().view().toScene(sx, sy);
         // Read against the colour scale's limit: at a point of symmetry the exact sum is rounding noise.
         double bz = Units.withoutNoise(vm.results().bzAt(p.x(), p.y()),

@@ -302,7 +302,7 @@ final class EditorWindow {
                 vm.say("Could not read the demos: " + failure.getMessage());
                 return;
             }
-            browser.choose(stage).flatMap(e -> Demos.resource(e.name())).ifPresent(files::openDemoAfterAsking);
+            browser.choose(stage).flatMap(e -> Demos.resource(e.name())).ifPresent(r -> files.afterAsking(() -> files.openDemo(r)));
         }, Platform::runLater);
     }
 
@@ -435,7 +435,7 @@ final class EditorWindow {
     private void refreshRecent() {
         recentMenu.getItems().clear();
         for (Path p : files.recent()) {
-            recentMenu.getItems().add(item(p.toString(), null, () -> files.openAfterAsking(p)));
+            recentMenu.getItems().add(item(p.toString(), null, () -> files.afterAsking(() -> files.open(p))));
         }
         recentMenu.setDisable(files.recent().isEmpty());
     }

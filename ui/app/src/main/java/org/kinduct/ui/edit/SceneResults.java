@@ -61,7 +61,7 @@ public final class SceneResults {
     /** Counts what was asked to be shown, so a late answer never replaces a newer one. */
     private long asked;
     /** The field of the instant shown, delivered with its snapshot. */
-    private SceneField shownField = NO_FIELD;
+    private final ReadOnlyObjectWrapper<SceneField> shownField = new ReadOnlyObjectWrapper<>(NO_FIELD);
     /** Watches the current revision's run; outdated (and so stopped) by the next revision. */
     private RunWatch watch;
 
@@ -113,8 +113,8 @@ public final class SceneResults {
                 SceneField field = r.fieldAt(shown.tS());
                 ui.execute(() -> {
                     if (revision == rev && asked == ask) {
+                        shownField.set(field);
                         snapshot.set(shown);
-                        shownField = field;
                     }
                 });
             } catch (RuntimeException e) {
@@ -141,7 +141,7 @@ public final class SceneResults {
                 SceneField field = r.fieldAt(sample.tS());
                 ui.execute(() -> {
                     if (revision == rev && asked == ask) {
-                        shownField = field;
+                        shownField.set(field);
                     }
                 });
             } catch (RuntimeException e) {
@@ -155,7 +155,7 @@ public final class SceneResults {
         ui.execute(() -> {
             if (revision == rev && asked == ask && !(e instanceof SimulationCancelledException)) {
                 snapshot.set(null);
-                shownField = NO_FIELD;
+                shownField.set(NO_FIELD);
                 say.accept("Solver: " + describe(e));
             }
         });
@@ -241,7 +241,12 @@ public final class SceneResults {
      * with the snapshot: one closed-form sum, never a wait. 0 while none has arrived.
      */
     public double bzAt(double x, double y) {
-        return shownField.bz(x, y);
+        return shownField.get().bz(x, y);
+    }
+
+    /** The field {@link #bzAt} reads: it arrives with the snapshot shown, or just after a playback sample. */
+    public ReadOnlyObjectProperty<SceneField> shownFieldProperty() {
+        return shownField.getReadOnlyProperty();
     }
 
     public ReadOnlyObjectProperty<Snapshot> snapshotProperty() {
