@@ -10,6 +10,7 @@ import java.util.function.LongSupplier;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import org.kinduct.render.paint.Placement;
+import org.kinduct.render.view.SceneBounds;
 import org.kinduct.scene.Scene;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.RunMonitor;
@@ -106,10 +107,13 @@ public final class EditorViewModel {
         clock.resetTime();
     }
 
-    /** Shows everything the scene holds over its whole time window, free bodies along their run. */
+    /**
+     * Shows everything the scene holds over its whole time window, free bodies along their run
+     * once it is in (their drawn place until then).
+     */
     public void zoomToFit() {
         // A run of the scene shown before (just after opening another) says nothing about this one.
-        view.fit(document.scene(), results.currentResult().map(RunResult::samples).orElse(List.of()));
+        view.fit(results.extent().orElseGet(() -> SceneBounds.ofWindow(document.scene(), List.of())));
         maps.request(FieldMaps.Quality.FINE);
     }
 

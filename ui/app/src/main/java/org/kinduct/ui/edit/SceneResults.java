@@ -16,6 +16,7 @@ import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import org.kinduct.render.field.LatestOnly;
+import org.kinduct.render.view.SceneBounds;
 import org.kinduct.report.InductanceSummary;
 import org.kinduct.scene.Scene;
 import org.kinduct.solver.SceneField;
@@ -51,6 +52,8 @@ public final class SceneResults {
     private final LatestOnly runJobs;
     private final ReadOnlyObjectWrapper<Snapshot> snapshot = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyObjectWrapper<RunResult> result = new ReadOnlyObjectWrapper<>();
+    /** What the result's scene covers over its window, found with the result (it reads every sample). */
+    private SceneBounds extent;
     private final ReadOnlyStringWrapper inductanceLine = new ReadOnlyStringWrapper("");
     private final ReadOnlyBooleanWrapper simulating = new ReadOnlyBooleanWrapper();
     private final ReadOnlyDoubleWrapper simulationProgress = new ReadOnlyDoubleWrapper(-1);
@@ -184,9 +187,11 @@ public final class SceneResults {
                 long started = clockNs.getAsLong();
                 RunResult done = r.result();
                 double seconds = (clockNs.getAsLong() - started) * 1e-9;
+                SceneBounds covered = SceneBounds.ofWindow(done.scene(), done.samples());
                 ui.execute(() -> {
                     if (revision == rev) {
                         resultRevision = rev;
+                        extent = covered;
                         result.set(done);
                         if (coupled) {
                             simulating.set(false);
@@ -226,6 +231,14 @@ public final class SceneResults {
     /** The run of the scene shown now, or empty while it is being computed after an edit. */
     public Optional<RunResult> currentResult() {
         return resultIsCurrent() ? Optional.ofNullable(result.get()) : Optional.empty();
+    }
+
+    /**
+     * What the current scene's objects cover over its time window, free bodies along their run;
+     * empty while the run is being computed after an edit.
+     */
+    public Optional<SceneBounds> extent() {
+        return resultIsCurrent() ? Optional.ofNullable(extent) : Optional.empty();
     }
 
     /**

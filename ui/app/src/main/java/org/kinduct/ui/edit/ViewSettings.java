@@ -1,7 +1,6 @@
 package org.kinduct.ui.edit;
 
 import java.util.EnumSet;
-import java.util.List;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleBooleanProperty;
@@ -14,8 +13,6 @@ import org.kinduct.render.paint.ScenePainter;
 import org.kinduct.render.view.NiceSteps;
 import org.kinduct.render.view.SceneBounds;
 import org.kinduct.render.view.ViewTransform;
-import org.kinduct.scene.Scene;
-import org.kinduct.solver.Snapshot;
 
 /**
  * How the scene is looked at and drawn in: the view transform, the colour range, the layers
@@ -42,9 +39,8 @@ public final class ViewSettings {
     ViewSettings() {
     }
 
-    /** Shows everything {@code scene} holds over its time window, free bodies along {@code samples}. */
-    void fit(Scene scene, List<Snapshot> samples) {
-        SceneBounds b = SceneBounds.ofWindow(scene, samples);
+    /** Shows the box {@code b} (scene metres), with some room round it and beside the legend. */
+    void fit(SceneBounds b) {
         double padX = (b.maxX() - b.minX()) * FIT_PADDING;
         double padY = (b.maxY() - b.minY()) * FIT_PADDING;
         double legend = layers.contains(Layer.LEGEND) ? ScenePainter.LEGEND_SPAN_PX : 0;
