@@ -1,5 +1,6 @@
 package org.kinduct.ui.app;
 
+import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.CompletableFuture;
@@ -61,9 +62,15 @@ final class DocumentFiles {
         return opened.thenCompose(ok -> offerRecovery());
     }
 
-    /** Offers, newest first, each autosave an ended session left that is newer than its file, until one is recovered or put off. */
+    /**
+     * Offers, newest first, each autosave an ended session left that is newer than its file,
+     * until one is recovered or put off.
+     */
     CompletableFuture<Void> offerRecovery() {
-        return onIo(() -> Autosave.recoverable(home.dir())).thenCompose(this::offer);
+        return onIo(() -> Autosave.recoverable(home.dir())).thenCompose(this::offer).exceptionally(failure -> {
+            vm.say("Could not look for unsaved work of earlier sessions in " + home.dir() + ": " + message(failure));
+            return null;
+        });
     }
 
     private CompletableFuture<Void> offer(List<Autosave.Orphan> left) {
@@ -97,7 +104,7 @@ final class DocumentFiles {
                 try {
                     autosave.write(store, scene, o.origin());
                     Autosave.discard(o);
-                } catch (Exception e) {
+                } catch (IOException | SceneStore.LoadFailure e) {
                     ui.execute(() -> vm.say("Autosave failed: " + e.getMessage()));
                 }
             });
@@ -290,7 +297,8 @@ final class DocumentFiles {
     }
 
     private static String message(Throwable failure) {
-        Throwable t = failure instanceof CompletionException && failure.getCause() != null ? failure.getCause() : failure;
+        Throwable t = failure instanceof CompletionException && failure.getCause() != null
+                ? failure.getCause() : failure;
         return t.getMessage() != null ? t.getMessage() : t.getClass().getSimpleName();
     }
 }

@@ -302,7 +302,8 @@ final class EditorWindow {
                 vm.say("Could not read the demos: " + failure.getMessage());
                 return;
             }
-            browser.choose(stage).flatMap(e -> Demos.resource(e.name())).ifPresent(r -> files.afterAsking(() -> files.openDemo(r)));
+            browser.choose(stage).flatMap(e -> Demos.resource(e.name()))
+                    .ifPresent(r -> files.afterAsking(() -> files.openDemo(r)));
         }, Platform::runLater);
     }
 
@@ -395,7 +396,10 @@ final class EditorWindow {
         return bar;
     }
 
-    /** Self- and mutual inductance of the closed loops at the run's start (computed off this thread), under the readout table. */
+    /**
+     * Self- and mutual inductance of the closed loops at the run's start (the run's own, computed
+     * off this thread), under the readout table.
+     */
     private Label inductanceLine() {
         Label line = infoLine("inductance");
         Runnable update = () -> {

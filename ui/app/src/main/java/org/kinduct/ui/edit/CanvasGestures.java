@@ -71,7 +71,8 @@ public final class CanvasGestures {
     public CanvasGestures(EditorViewModel vm, Runnable viewMoving) {
         this.vm = vm;
         this.viewMoving = viewMoving;
-        vm.view().toolProperty().addListener((obs, old, t) -> drawing = t == ToolKind.SELECT ? null : new DrawingTool(t));
+        vm.view().toolProperty().addListener((obs, old, t) ->
+                drawing = t == ToolKind.SELECT ? null : new DrawingTool(t));
     }
 
     // ---- mouse ----

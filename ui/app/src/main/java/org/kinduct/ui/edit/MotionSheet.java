@@ -103,7 +103,8 @@ public final class MotionSheet {
                         new Property("Keys: t, x, y, angle; …", keysText(path), List.of(),
                                 text -> set(objectId, new Motion.Path(parseKeys(text), path.blend()), pivot)),
                         PropertySheet.choice("Between keys", BLENDS, path.blend().ordinal(),
-                                i -> set(objectId, new Motion.Path(path.keys(), Motion.Path.Blend.values()[i]), pivot)));
+                                i -> set(objectId, new Motion.Path(path.keys(), Motion.Path.Blend.values()[i]),
+                                        pivot)));
             }
 
             @Override
