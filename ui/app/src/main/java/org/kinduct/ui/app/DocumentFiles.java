@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.CompletionException;
 import java.util.concurrent.Executor;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
@@ -43,7 +42,7 @@ final class DocumentFiles {
         this.dialogs = dialogs;
         this.io = io;
         this.ui = ui;
-        onIo(home::recent).thenAccept(recent::setAll);
+        Futures.watched(onIo(home::recent).thenAccept(recent::setAll));
     }
 
     private SceneDocument document() {
@@ -59,7 +58,7 @@ final class DocumentFiles {
     CompletableFuture<Void> start(Path file, String demoResource) {
         CompletableFuture<Boolean> opened = file != null ? open(file)
                 : demoResource != null ? openDemo(demoResource) : CompletableFuture.completedFuture(true);
-        return opened.thenCompose(ok -> offerRecovery());
+        return Futures.watched(opened.thenCompose(ok -> offerRecovery()));
     }
 
     /**
@@ -116,11 +115,11 @@ final class DocumentFiles {
 
     /** Runs {@code action} once nothing unsaved is left to lose (see {@link #confirmDiscard()}). */
     void afterAsking(Runnable action) {
-        confirmDiscard().thenAccept(ok -> {
+        Futures.watched(confirmDiscard().thenAccept(ok -> {
             if (ok) {
                 action.run();
             }
-        });
+        }));
     }
 
     void newScene() {
@@ -137,7 +136,7 @@ final class DocumentFiles {
 
     /** Opens a scene file; on failure the current scene stays and the user is told what is wrong. */
     CompletableFuture<Boolean> open(Path file) {
-        return onIo(() -> store.read(file)).handle((scene, failure) -> {
+        return Futures.watched(onIo(() -> store.read(file)).handle((scene, failure) -> {
             if (failure != null) {
                 vm.say("Could not open " + file.getFileName() + " — your scene is unchanged");
                 dialogs.error("Could not open " + file.getFileName(), message(failure));
@@ -148,12 +147,12 @@ final class DocumentFiles {
             vm.say("Opened " + file.getFileName());
             remember(file);
             return true;
-        });
+        }));
     }
 
     /** Opens a demo scene shipped as the class-path resource {@code resource}. */
     CompletableFuture<Boolean> openDemo(String resource) {
-        return onIo(() -> store.readResource(resource)).handle((scene, failure) -> {
+        return Futures.watched(onIo(() -> store.readResource(resource)).handle((scene, failure) -> {
             if (failure != null) {
                 dialogs.error("Could not open the demo " + resource, message(failure));
                 return false;
@@ -161,7 +160,7 @@ final class DocumentFiles {
             vm.load(scene, null, false);
             vm.zoomToFit();
             return true;
-        });
+        }));
     }
 
     // ---- save ----
@@ -182,7 +181,7 @@ final class DocumentFiles {
      */
     CompletableFuture<Boolean> saveTo(Path file) {
         Scene scene = vm.scene();
-        return onIo(() -> {
+        return Futures.watched(onIo(() -> {
             store.write(scene, file);
             return null;
         }).handle((x, failure) -> {
@@ -197,7 +196,7 @@ final class DocumentFiles {
                 clearAutosave();
             }
             return true;
-        });
+        }));
     }
 
     /** True, once answered, when nothing unsaved is left to lose: there was none, or the user saved or discarded it. */
@@ -214,19 +213,15 @@ final class DocumentFiles {
 
     /** Quits once nothing unsaved is left to lose: removes this window's autosave, then {@code close}s. */
     void quit(Runnable close) {
-        confirmDiscard().thenAccept(ok -> {
-            if (ok) {
-                onIo(() -> {
-                    autosave.release();
-                    return null;
-                }).whenComplete((x, failure) -> {
-                    if (failure != null) {
-                        System.err.println("Kinduct: could not remove the autosave: " + message(failure));
-                    }
-                    close.run();
-                });
+        afterAsking(() -> Futures.watched(onIo(() -> {
+            autosave.release();
+            return null;
+        }).whenComplete((x, failure) -> {
+            if (failure != null) {
+                System.err.println("Kinduct: could not remove the autosave: " + message(failure));
             }
-        });
+            close.run();
+        })));
     }
 
     // ---- autosave ----
@@ -266,7 +261,7 @@ final class DocumentFiles {
     }
 
     private void remember(Path file) {
-        onIo(() -> home.remember(file)).thenAccept(recent::setAll);
+        Futures.watched(onIo(() -> home.remember(file)).thenAccept(recent::setAll));
     }
 
     /** Where file choosers start: the document's folder, if it has a file. */
@@ -297,8 +292,7 @@ final class DocumentFiles {
     }
 
     private static String message(Throwable failure) {
-        Throwable t = failure instanceof CompletionException && failure.getCause() != null
-                ? failure.getCause() : failure;
+        Throwable t = Futures.cause(failure);
         return t.getMessage() != null ? t.getMessage() : t.getClass().getSimpleName();
     }
 }

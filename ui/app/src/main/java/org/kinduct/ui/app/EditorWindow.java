@@ -296,15 +296,17 @@ final class EditorWindow {
             demoBrowser = CompletableFuture.supplyAsync(DemoBrowserModel::shipped, io)
                     .thenApplyAsync(DemoBrowser::new, Platform::runLater);
         }
-        demoBrowser.whenCompleteAsync((browser, failure) -> {
+        Futures.watched(demoBrowser.handleAsync((browser, failure) -> {
             if (failure != null) {
+                // Asked for again next time.
                 demoBrowser = null;
-                vm.say("Could not read the demos: " + failure.getMessage());
-                return;
+                vm.say("Could not read the demos: " + Futures.cause(failure).getMessage());
+                return null;
             }
             browser.choose(stage).flatMap(e -> Demos.resource(e.name()))
                     .ifPresent(r -> files.afterAsking(() -> files.openDemo(r)));
-        }, Platform::runLater);
+            return null;
+        }, Platform::runLater));
     }
 
     private static MenuItem item(String text, String accelerator, Runnable action) {

@@ -67,8 +67,8 @@ public final class ExportDialog {
      */
     public static void show(Window owner, EditorViewModel vm, Path home, Executor io) {
         ExportDialog dialog = new ExportDialog(owner, vm, home, io);
-        CompletableFuture.supplyAsync(() -> ExportPreferences.load(home), io)
-                .thenAcceptAsync(dialog::run, Platform::runLater);
+        Futures.watched(CompletableFuture.supplyAsync(() -> ExportPreferences.load(home), io)
+                .thenAcceptAsync(dialog::run, Platform::runLater));
     }
 
     private void run(ExportPreferences prefs) {
