@@ -8,8 +8,6 @@ import java.util.function.ObjLongConsumer;
 import java.util.function.UnaryOperator;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
-import javafx.beans.property.ReadOnlyLongProperty;
-import javafx.beans.property.ReadOnlyLongWrapper;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.collections.FXCollections;
@@ -34,12 +32,12 @@ public final class SceneDocument {
     private final Consumer<String> say;
     private final ObjLongConsumer<Scene> revised;
     private final ReadOnlyObjectWrapper<Scene> scene = new ReadOnlyObjectWrapper<>();
-    private final ReadOnlyLongWrapper revision = new ReadOnlyLongWrapper();
     private final ReadOnlyBooleanWrapper dirty = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper canRedo = new ReadOnlyBooleanWrapper();
     private final ReadOnlyObjectWrapper<Path> file = new ReadOnlyObjectWrapper<>();
     private final ObservableSet<String> selection = FXCollections.observableSet();
+    private long revision;
 
     /**
      * @param say     puts a message on the status line
@@ -131,8 +129,8 @@ public final class SceneDocument {
 
     private void show(Scene s) {
         selection.removeIf(id -> s.source(id).isEmpty() && s.conductor(id).isEmpty());
-        revision.set(revision.get() + 1);
-        revised.accept(s, revision.get());
+        revision++;
+        revised.accept(s, revision);
         scene.set(s);
         updateFlags();
     }
@@ -200,12 +198,9 @@ public final class SceneDocument {
         return scene.getReadOnlyProperty();
     }
 
+    /** The number of the scene shown, counting every scene shown since the document was made. */
     public long revision() {
-        return revision.get();
-    }
-
-    public ReadOnlyLongProperty revisionProperty() {
-        return revision.getReadOnlyProperty();
+        return revision;
     }
 
     public ReadOnlyBooleanProperty dirtyProperty() {
