@@ -9,7 +9,8 @@ import java.util.List;
 
 /**
  * The editor's own files under {@code ~/.kinduct} (or {@code -Dkinduct.home=DIR}): the
- * autosave for crash recovery and the recent-files list.
+ * windows' autosaves for crash recovery ({@link Autosave}) and the recent-files list. Reads and
+ * writes files: call it off the UI thread.
  */
 final class AppHome {
 
@@ -24,10 +25,6 @@ final class AppHome {
     static AppHome standard() {
         String override = System.getProperty("kinduct.home");
         return new AppHome(override != null ? Path.of(override) : Path.of(System.getProperty("user.home"), ".kinduct"));
-    }
-
-    Path autosave() {
-        return dir.resolve("autosave.json");
     }
 
     Path dir() {

@@ -43,9 +43,9 @@ final class DemoBrowser {
 
     private final DemoBrowserModel model;
 
-    /** The catalogue is read now; its thumbnails start rendering in the background at once. */
-    DemoBrowser() {
-        this.model = DemoBrowserModel.shipped();
+    /** Shows {@code model}'s demos; their thumbnails start rendering in the background at once. */
+    DemoBrowser(DemoBrowserModel model) {
+        this.model = model;
         model.renderThumbnails(s -> Thumbnail.render(s, THUMB_W, THUMB_H), RENDERER, Platform::runLater);
     }
 

@@ -3,12 +3,12 @@ package org.kinduct.ui.app;
 import javafx.scene.control.Label;
 import javafx.scene.control.TitledPane;
 import org.kinduct.scene.Scene;
-import org.kinduct.ui.edit.EditorViewModel;
+import org.kinduct.ui.edit.SceneDocument;
 
 /** A collapsible strip under the tool bar with the scene's description; hidden when there is none. */
 final class DescriptionStrip extends TitledPane {
 
-    DescriptionStrip(EditorViewModel vm) {
+    DescriptionStrip(SceneDocument document) {
         setId("description-strip");
         Label text = new Label();
         text.setId("scene-description");
@@ -18,13 +18,13 @@ final class DescriptionStrip extends TitledPane {
         setContent(text);
         setAnimated(false);
         Runnable update = () -> {
-            Scene s = vm.scene();
+            Scene s = document.scene();
             text.setText(s.description());
             setText(s.name().isEmpty() ? "About this scene" : s.name());
             setVisible(!s.description().isBlank());
             setManaged(isVisible());
         };
-        vm.sceneProperty().addListener(o -> update.run());
+        document.sceneProperty().addListener(o -> update.run());
         update.run();
     }
 }

@@ -1,31 +1,31 @@
 package org.kinduct.ui.app;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
-import java.util.Optional;
-import java.util.Set;
+import java.util.Locale;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.Executor;
 import javafx.animation.KeyFrame;
 import javafx.animation.Timeline;
+import javafx.application.Platform;
 import javafx.beans.binding.Bindings;
+import javafx.collections.ListChangeListener;
 import javafx.geometry.Insets;
 import javafx.geometry.Orientation;
 import javafx.geometry.Pos;
 import javafx.scene.control.Alert;
 import javafx.scene.control.Button;
-import javafx.scene.control.ButtonBar;
-import javafx.scene.control.ButtonType;
 import javafx.scene.control.CheckMenuItem;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.Menu;
 import javafx.scene.control.MenuBar;
 import javafx.scene.control.MenuItem;
+import javafx.scene.control.ProgressIndicator;
 import javafx.scene.control.SeparatorMenuItem;
 import javafx.scene.control.Slider;
 import javafx.scene.control.SplitPane;
-import javafx.scene.control.TextArea;
 import javafx.scene.control.TextField;
+import javafx.scene.control.TextInputDialog;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.control.ToolBar;
@@ -35,17 +35,29 @@ import javafx.scene.input.KeyCombination;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
-import javafx.stage.FileChooser;
 import javafx.stage.Stage;
 import javafx.util.Duration;
-import org.kinduct.scene.Scene;
-import org.kinduct.ui.edit.EditorViewModel;
-import org.kinduct.ui.edit.ToolKind;
-import org.kinduct.ui.app.ExportDialog;
+import org.kinduct.demo.Demos;
+import org.kinduct.render.paint.ColourRange;
+import org.kinduct.render.paint.ColourScale;
 import org.kinduct.render.paint.Layer;
 import org.kinduct.render.paint.Quantities;
+import org.kinduct.report.EnergyText;
+import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Units;
+import org.kinduct.solver.run.RunResult;
+import org.kinduct.ui.edit.DemoBrowserModel;
+import org.kinduct.ui.edit.EditorViewModel;
+import org.kinduct.ui.edit.FieldMaps;
+import org.kinduct.ui.edit.PlaybackClock;
+import org.kinduct.ui.edit.PlotSeries;
+import org.kinduct.ui.edit.SceneDocument;
+import org.kinduct.ui.edit.ShapeFactory;
+import org.kinduct.ui.edit.ToolKind;
+import org.kinduct.ui.edit.ViewSettings;
 
 /** The main window: menus, tool bar, canvas, properties, time controls, plot, table and status line. */
 final class EditorWindow {
@@ -55,62 +67,39 @@ final class EditorWindow {
 
     private final Stage stage;
     private final EditorViewModel vm;
-    private final SceneStore store;
     private final AppHome home;
+    private final Executor io;
+    private final DocumentFiles files;
     private final BorderPane root = new BorderPane();
     private final EditorCanvas canvas;
     private final Label cursorLabel = new Label();
     private final Label statusLabel = new Label();
     private final Menu recentMenu = new Menu("Recent files");
     private final TextField entry = new TextField();
-    private DemoBrowser demoBrowser;
+    private CompletableFuture<DemoBrowser> demoBrowser;
 
-    EditorWindow(Stage stage, EditorViewModel vm, SceneStore store, AppHome home) {
+    /**
+     * @param io runs file reading and writing, one job at a time, off the UI thread
+     */
+    EditorWindow(Stage stage, EditorViewModel vm, SceneStore store, AppHome home, Executor io) {
         this.stage = stage;
         this.vm = vm;
-        this.store = store;
         this.home = home;
+        this.io = io;
+        this.files = new DocumentFiles(vm, store, home, new Autosave(home.dir()), new FxFileDialogs(stage), io,
+                Platform::runLater);
         this.canvas = new EditorCanvas(vm, cursorLabel::setText);
         canvas.setId("editor-canvas");
         statusLabel.setId("status");
         statusLabel.textProperty().bind(vm.statusProperty());
         cursorLabel.setId("cursor-readout");
 
-        VBox top = new VBox(menuBar(), toolBar(), new DescriptionStrip(vm));
+        VBox top = new VBox(menuBar(), toolBar(), new DescriptionStrip(vm.document()));
         root.setTop(top);
 
-        entry.setId("numeric-entry");
-        entry.setPromptText("Type a length or x, y and press Enter");
-        entry.setMaxWidth(300);
-        entry.setOnAction(e -> {
-            String error = canvas.typed(entry.getText());
-            if (error.isEmpty()) {
-                entry.clear();
-                canvas.requestFocus();
-            } else {
-                vm.say("Entry: " + error);
-            }
-        });
-        // Shown only once the user types while drawing, so it never sits where the next click goes.
-        entry.visibleProperty().bind(vm.toolProperty().isNotEqualTo(ToolKind.SELECT)
-                .and(entry.focusedProperty().or(entry.textProperty().isNotEmpty())));
-        entry.setOnKeyPressed(e -> {
-            if (e.getCode() == javafx.scene.input.KeyCode.ESCAPE) {
-                entry.clear();
-                canvas.requestFocus();
-            }
-        });
-        StackPane canvasStack = new StackPane(canvas, entry);
+        StackPane canvasStack = new StackPane(canvas, numericEntry());
         StackPane.setAlignment(entry, Pos.BOTTOM_CENTER);
         StackPane.setMargin(entry, new Insets(0, 0, 50, 0));
-        canvas.setOnKeyTyped(e -> {
-            String ch = e.getCharacter();
-            if (canvas.isDrawing() && !ch.isEmpty() && "0123456789.-".indexOf(ch.charAt(0)) >= 0) {
-                entry.setText(ch);
-                entry.requestFocus();
-                entry.positionCaret(1);
-            }
-        });
 
         PropertiesPanel properties = new PropertiesPanel(vm);
         SplitPane centre = new SplitPane(canvasStack, properties);
@@ -118,10 +107,10 @@ final class EditorWindow {
         SplitPane.setResizableWithParent(properties, false);
 
         TimePlot plot = new TimePlot(vm);
-        ComboBox<org.kinduct.ui.edit.PlotSeries.Quantity> plotWhat = new ComboBox<>();
+        ComboBox<PlotSeries.Quantity> plotWhat = new ComboBox<>();
         plotWhat.setId("plot-quantity");
-        plotWhat.getItems().setAll(org.kinduct.ui.edit.PlotSeries.Quantity.values());
-        plotWhat.setValue(org.kinduct.ui.edit.PlotSeries.Quantity.EMF);
+        plotWhat.getItems().setAll(PlotSeries.Quantity.values());
+        plotWhat.setValue(PlotSeries.Quantity.EMF);
         plotWhat.setOnAction(e -> plot.setQuantity(plotWhat.getValue()));
         VBox plotBox = new VBox(2, plotWhat, plot);
         VBox.setVgrow(plot, Priority.ALWAYS);
@@ -142,12 +131,14 @@ final class EditorWindow {
         status.setStyle("-fx-background-color: #ecece8;");
         root.setBottom(new VBox(timeBar(), status));
 
-        Timeline autosave = new Timeline(new KeyFrame(AUTOSAVE_EVERY, e -> autosave()));
+        Timeline autosave = new Timeline(new KeyFrame(AUTOSAVE_EVERY, e -> files.autosave()));
         autosave.setCycleCount(Timeline.INDEFINITE);
         autosave.play();
-        vm.fileProperty().addListener(o -> updateTitle());
-        vm.dirtyProperty().addListener(o -> updateTitle());
+        SceneDocument document = vm.document();
+        document.fileProperty().addListener(o -> updateTitle());
+        document.dirtyProperty().addListener(o -> updateTitle());
         updateTitle();
+        files.recent().addListener((ListChangeListener<Path>) c -> refreshRecent());
         refreshRecent();
     }
 
@@ -159,127 +150,173 @@ final class EditorWindow {
         return canvas;
     }
 
+    DocumentFiles files() {
+        return files;
+    }
+
+    /** The box for typed lengths and coordinates while drawing. */
+    private TextField numericEntry() {
+        entry.setId("numeric-entry");
+        entry.setPromptText("Type a length or x, y and press Enter");
+        entry.setMaxWidth(300);
+        entry.setOnAction(e -> {
+            String error = canvas.gestures().typed(entry.getText());
+            if (error.isEmpty()) {
+                entry.clear();
+                canvas.requestFocus();
+            } else {
+                vm.say("Entry: " + error);
+            }
+        });
+        // Shown only once the user types while drawing, so it never sits where the next click goes.
+        entry.visibleProperty().bind(vm.view().toolProperty().isNotEqualTo(ToolKind.SELECT)
+                .and(entry.focusedProperty().or(entry.textProperty().isNotEmpty())));
+        entry.setOnKeyPressed(e -> {
+            if (e.getCode() == KeyCode.ESCAPE) {
+                entry.clear();
+                canvas.requestFocus();
+            }
+        });
+        canvas.setOnKeyTyped(e -> {
+            String ch = e.getCharacter();
+            if (canvas.gestures().isDrawing() && !ch.isEmpty() && "0123456789.-".indexOf(ch.charAt(0)) >= 0) {
+                entry.setText(ch);
+                entry.requestFocus();
+                entry.positionCaret(1);
+            }
+        });
+        return entry;
+    }
+
     private void updateTitle() {
-        Path f = vm.fileProperty().get();
+        Path f = vm.document().file();
         String name = f != null ? f.getFileName().toString()
                 : vm.scene().name().isEmpty() ? "untitled" : vm.scene().name();
-        stage.setTitle((vm.dirtyProperty().get() ? "• " : "") + name + " — Kinduct");
+        stage.setTitle((vm.document().isDirty() ? "• " : "") + name + " — Kinduct");
     }
 
     // ---- menus ----
 
     private MenuBar menuBar() {
+        SceneDocument document = vm.document();
+        ViewSettings view = vm.view();
+        PlaybackClock clock = vm.clock();
         Menu file = new Menu("File");
         file.getItems().addAll(
-                item("New scene", "Shortcut+N", this::newScene),
-                item("Open…", "Shortcut+O", this::openDialog),
+                item("New scene", "Shortcut+N", files::newScene),
+                item("Open…", "Shortcut+O", files::openChosen),
                 recentMenu,
                 item("Open demo…", null, this::browseDemos),
                 new SeparatorMenuItem(),
-                item("Save", "Shortcut+S", this::save),
-                item("Save as…", "Shortcut+Shift+S", this::saveAs),
-                item("Export…", "Shortcut+E", () -> ExportDialog.show(stage, vm, home.dir())),
+                item("Save", "Shortcut+S", files::save),
+                item("Save as…", "Shortcut+Shift+S", files::saveAs),
+                item("Export…", "Shortcut+E", () -> ExportDialog.show(stage, vm, home.dir(), io)),
                 new SeparatorMenuItem(),
-                item("Quit", "Shortcut+Q", () -> {
-                    if (confirmDiscard()) {
-                        stage.close();
-                    }
-                }));
-        MenuItem undo = item("Undo", "Shortcut+Z", vm::undo);
-        undo.disableProperty().bind(vm.canUndoProperty().not());
-        MenuItem redo = item("Redo", "Shortcut+Shift+Z", vm::redo);
-        redo.disableProperty().bind(vm.canRedoProperty().not());
+                item("Quit", "Shortcut+Q", () -> files.quit(stage::close)));
+        MenuItem undo = item("Undo", "Shortcut+Z", document::undo);
+        undo.disableProperty().bind(document.canUndoProperty().not());
+        MenuItem redo = item("Redo", "Shortcut+Shift+Z", document::redo);
+        redo.disableProperty().bind(document.canRedoProperty().not());
         Menu edit = new Menu("Edit");
         edit.getItems().addAll(undo, redo, new SeparatorMenuItem(),
-                item("Delete", null, canvas::deleteSelection),
-                item("Duplicate", "Shortcut+D", canvas::duplicateSelection),
-                item("Rotate 15° left", "Shortcut+R", () -> canvas.rotateSelection(ROTATE_STEP_RAD)),
-                item("Rotate 15° right", "Shortcut+Shift+R", () -> canvas.rotateSelection(-ROTATE_STEP_RAD)),
-                item("Select all", "Shortcut+A", this::selectAll),
+                item("Delete", null, document::deleteSelection),
+                item("Duplicate", "Shortcut+D", canvas.gestures()::duplicateSelection),
+                item("Rotate 15° left", "Shortcut+R", () -> document.rotateSelection(ROTATE_STEP_RAD, vm.seen())),
+                item("Rotate 15° right", "Shortcut+Shift+R",
+                        () -> document.rotateSelection(-ROTATE_STEP_RAD, vm.seen())),
+                item("Select all", "Shortcut+A", document::selectAll),
                 new SeparatorMenuItem(),
-                item("Add uniform background field", null, this::addBackground));
-        Menu view = new Menu("View");
-        view.getItems().add(item("Zoom to fit  (F)", null, canvas::zoomToFit));
-        view.getItems().add(new SeparatorMenuItem());
+                item("Add uniform background field", null,
+                        () -> document.add("Add background field", ShapeFactory::addBackground)));
+        Menu viewMenu = new Menu("View");
+        viewMenu.getItems().add(item("Zoom to fit  (F)", null, vm::zoomToFit));
+        viewMenu.getItems().add(new SeparatorMenuItem());
         for (Layer layer : Layer.values()) {
             CheckMenuItem c = new CheckMenuItem(layer.label());
-            c.setSelected(vm.layers().contains(layer));
+            c.setSelected(view.layers().contains(layer));
             c.selectedProperty().addListener((obs, was, on) -> {
                 if (on) {
-                    vm.layers().add(layer);
+                    view.layers().add(layer);
                 } else {
-                    vm.layers().remove(layer);
+                    view.layers().remove(layer);
                 }
-                vm.requestField(EditorViewModel.MapQuality.FINE);
+                vm.maps().request(FieldMaps.Quality.FINE);
             });
-            view.getItems().add(c);
+            viewMenu.getItems().add(c);
         }
         CheckMenuItem grid = new CheckMenuItem("Snap to grid");
-        grid.selectedProperty().bindBidirectional(vm.snapToGridProperty());
+        grid.selectedProperty().bindBidirectional(view.snapToGridProperty());
         CheckMenuItem angles = new CheckMenuItem("Snap to 15° steps");
-        angles.selectedProperty().bindBidirectional(vm.snapAnglesProperty());
+        angles.selectedProperty().bindBidirectional(view.snapAnglesProperty());
         CheckMenuItem autoRange = new CheckMenuItem("Automatic colour range");
-        autoRange.setSelected(vm.rangeProperty().get().auto());
-        autoRange.selectedProperty().addListener((obs, was, on) -> vm.rangeProperty().set(
-                new org.kinduct.render.paint.ColourRange(on, vm.rangeProperty().get().manualLimitT(),
-                        vm.rangeProperty().get().kind())));
+        autoRange.setSelected(view.rangeProperty().get().auto());
+        autoRange.selectedProperty().addListener((obs, was, on) -> view.rangeProperty().set(
+                new ColourRange(on, view.rangeProperty().get().manualLimitT(), view.rangeProperty().get().kind())));
         CheckMenuItem logScale = new CheckMenuItem("Logarithmic colour scale");
-        logScale.setSelected(vm.rangeProperty().get().kind() == org.kinduct.render.paint.ColourScale.Kind.LOG);
-        logScale.selectedProperty().addListener((obs, was, on) -> vm.rangeProperty().set(vm.rangeProperty().get()
-                .withKind(on ? org.kinduct.render.paint.ColourScale.Kind.LOG : org.kinduct.render.paint.ColourScale.Kind.LINEAR)));
-        vm.rangeProperty().addListener((obs, old, r) -> {
+        logScale.setSelected(view.rangeProperty().get().kind() == ColourScale.Kind.LOG);
+        logScale.selectedProperty().addListener((obs, was, on) -> view.rangeProperty().set(view.rangeProperty().get()
+                .withKind(on ? ColourScale.Kind.LOG : ColourScale.Kind.LINEAR)));
+        view.rangeProperty().addListener((obs, old, r) -> {
             autoRange.setSelected(r.auto());
-            logScale.setSelected(r.kind() == org.kinduct.render.paint.ColourScale.Kind.LOG);
+            logScale.setSelected(r.kind() == ColourScale.Kind.LOG);
         });
-        view.getItems().addAll(new SeparatorMenuItem(), autoRange, logScale,
-                item("Fixed colour limit…", null, this::askLimit),
-                new SeparatorMenuItem(), grid, angles, new SeparatorMenuItem(),
-                item("Paint time overlay", "F12", canvas::toggleFrameTime));
+        viewMenu.getItems().addAll(new SeparatorMenuItem(), autoRange, logScale,
+                item("Fixed colour limit…", null, this::askLimit), new SeparatorMenuItem(), grid, angles,
+                new SeparatorMenuItem(), item("Paint time overlay", "F12", canvas::toggleFrameTime));
         Menu play = new Menu("Motion");
         play.getItems().addAll(
-                item("Play / pause  (K)", null, () -> vm.playingProperty().set(!vm.playingProperty().get())),
-                item("Step forward  (.)", null, () -> vm.step(1)),
-                item("Step back  (,)", null, () -> vm.step(-1)),
-                item("Back to start  (Home)", null, vm::resetTime));
+                item("Play / pause  (K)", null, clock::togglePlaying),
+                item("Step forward  (.)", null, () -> clock.step(1)),
+                item("Step back  (,)", null, () -> clock.step(-1)),
+                item("Back to start  (Home)", null, clock::resetTime));
         Menu help = new Menu("Help");
         help.getItems().addAll(
                 item("Safety notes…", null, () -> info("Safety notes", HelpTexts.CAUTION)),
                 item("Signs and overlays…", null, () -> info("Signs and overlays", HelpTexts.CONVENTIONS)),
                 item("Mouse and keys…", null, () -> info("Mouse and keys", HelpTexts.KEYS)));
-        MenuBar bar = new MenuBar(file, edit, view, play, help);
+        MenuBar bar = new MenuBar(file, edit, viewMenu, play, help);
         bar.setId("menu-bar");
         return bar;
     }
 
     /** Asks for a fixed symmetric colour limit ("5 mT", "20 G"); refuses anything but a positive flux density. */
     private void askLimit() {
-        javafx.scene.control.TextInputDialog d = new javafx.scene.control.TextInputDialog(
-                Quantities.bz(vm.rangeProperty().get().scaleFor(vm.rasterProperty().get()).limitT()));
+        ViewSettings view = vm.view();
+        TextInputDialog d = new TextInputDialog(Quantities.bz(view.rangeProperty().get().scaleFor(vm.maps().raster())
+                .limitT()));
         d.setTitle("Colour limit");
         d.setHeaderText("Colours saturate at ± this flux density");
         d.initOwner(stage);
         d.showAndWait().ifPresent(text -> {
             try {
-                double limit = org.kinduct.scene.units.Units.parse(text,
-                        org.kinduct.scene.units.Dimension.FLUX_DENSITY);
-                vm.rangeProperty().set(new org.kinduct.render.paint.ColourRange(false, limit,
-                        vm.rangeProperty().get().kind()));
+                view.rangeProperty().set(new ColourRange(false, Units.parse(text, Dimension.FLUX_DENSITY),
+                        view.rangeProperty().get().kind()));
             } catch (IllegalArgumentException e) {
                 vm.say("Colour limit: " + e.getMessage());
             }
         });
     }
 
-    /** File ▸ Open demo…: the browser, made once so its thumbnails render only once. */
+    /**
+     * File ▸ Open demo…: the browser, made once (off this thread: it reads every demo) so its
+     * thumbnails render only once.
+     */
     private void browseDemos() {
         if (demoBrowser == null) {
-            demoBrowser = new DemoBrowser();
+            demoBrowser = CompletableFuture.supplyAsync(DemoBrowserModel::shipped, io)
+                    .thenApplyAsync(DemoBrowser::new, Platform::runLater);
         }
-        demoBrowser.choose(stage).flatMap(e -> org.kinduct.demo.Demos.resource(e.name())).ifPresent(r -> {
-            if (confirmDiscard()) {
-                openDemo(r);
+        Futures.watched(demoBrowser.handleAsync((browser, failure) -> {
+            if (failure != null) {
+                // Asked for again next time.
+                demoBrowser = null;
+                vm.say("Could not read the demos: " + Futures.cause(failure).getMessage());
+                return null;
             }
-        });
+            browser.choose(stage).flatMap(e -> Demos.resource(e.name()))
+                    .ifPresent(r -> files.afterAsking(() -> files.openDemo(r)));
+            return null;
+        }, Platform::runLater));
     }
 
     private static MenuItem item(String text, String accelerator, Runnable action) {
@@ -296,40 +333,41 @@ final class EditorWindow {
         ToggleGroup tools = new ToggleGroup();
         for (ToolKind kind : ToolKind.values()) {
             ToggleButton b = new ToggleButton(kind.label());
-            b.setId("tool-" + kind.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
+            b.setId("tool-" + kind.name().toLowerCase(Locale.ROOT).replace('_', '-'));
             b.setTooltip(new Tooltip(kind.help()));
             b.setToggleGroup(tools);
-            b.setSelected(vm.toolProperty().get() == kind);
+            b.setSelected(vm.view().toolProperty().get() == kind);
             b.setOnAction(e -> {
-                vm.toolProperty().set(kind);
+                vm.view().toolProperty().set(kind);
                 if (kind != ToolKind.SELECT) {
                     vm.say(kind.label() + ": " + kind.help() + ". Type a length, or x, y, to place a point exactly.");
                 }
                 canvas.requestFocus();
             });
-            vm.toolProperty().addListener((obs, old, t) -> b.setSelected(t == kind));
+            vm.view().toolProperty().addListener((obs, old, t) -> b.setSelected(t == kind));
             bar.getItems().add(b);
         }
         return bar;
     }
 
     private HBox timeBar() {
+        PlaybackClock clock = vm.clock();
         Button play = new Button();
         play.setId("play");
-        play.textProperty().bind(Bindings.when(vm.playingProperty()).then("Pause").otherwise("Play"));
-        play.setOnAction(e -> vm.playingProperty().set(!vm.playingProperty().get()));
+        play.textProperty().bind(Bindings.when(clock.playingProperty()).then("Pause").otherwise("Play"));
+        play.setOnAction(e -> clock.togglePlaying());
         Button back = new Button("◀ step");
-        back.setOnAction(e -> vm.step(-1));
+        back.setOnAction(e -> clock.step(-1));
         Button fwd = new Button("step ▶");
         fwd.setId("step");
-        fwd.setOnAction(e -> vm.step(1));
+        fwd.setOnAction(e -> clock.step(1));
         Button reset = new Button("Start");
-        reset.setOnAction(e -> vm.resetTime());
+        reset.setOnAction(e -> clock.resetTime());
         ComboBox<Double> speed = new ComboBox<>();
         speed.setId("speed");
         speed.getItems().setAll(0.01, 0.1, 0.25, 0.5, 1.0, 2.0, 5.0, 10.0);
         speed.setValue(1.0);
-        speed.setOnAction(e -> vm.speedProperty().set(speed.getValue()));
+        speed.setOnAction(e -> clock.speedProperty().set(speed.getValue()));
         speed.setTooltip(new Tooltip("Scene seconds per real second"));
         Slider scrubber = new Slider();
         scrubber.setId("scrubber");
@@ -339,261 +377,83 @@ final class EditorWindow {
             scrubber.setMax(vm.scene().time().t1S());
         };
         range.run();
-        vm.sceneProperty().addListener(o -> range.run());
-        scrubber.setValue(vm.timeProperty().get());
-        vm.timeProperty().addListener((obs, old, t) -> {
+        vm.document().sceneProperty().addListener(o -> range.run());
+        scrubber.setValue(clock.time());
+        clock.timeProperty().addListener((obs, old, t) -> {
             if (!scrubber.isValueChanging() && Math.abs(scrubber.getValue() - t.doubleValue()) > 0) {
                 scrubber.setValue(t.doubleValue());
             }
         });
         scrubber.valueProperty().addListener((obs, old, t) -> {
-            if (Math.abs(t.doubleValue() - vm.timeProperty().get()) > 0) {
-                vm.seek(t.doubleValue());
+            if (Math.abs(t.doubleValue() - clock.time()) > 0) {
+                clock.seek(t.doubleValue());
             }
         });
         Label time = new Label();
         time.setId("time-label");
         time.setMinWidth(140);
         time.textProperty().bind(Bindings.createStringBinding(
-                () -> "t = " + Quantities.time(vm.timeProperty().get()) + " of " + Quantities.time(vm.scene().time().t1S()),
-                vm.timeProperty(), vm.sceneProperty()));
-        javafx.scene.control.ProgressIndicator simulating = new javafx.scene.control.ProgressIndicator();
+                () -> "t = " + Quantities.time(clock.time()) + " of " + Quantities.time(vm.scene().time().t1S()),
+                clock.timeProperty(), vm.document().sceneProperty()));
+        ProgressIndicator simulating = new ProgressIndicator();
         simulating.setId("simulating");
         simulating.setPrefSize(18, 18);
         simulating.setTooltip(new Tooltip("Simulating the free bodies; the last result is shown meanwhile"));
-        simulating.visibleProperty().bind(vm.simulatingProperty());
-        simulating.managedProperty().bind(vm.simulatingProperty());
-        simulating.progressProperty().bind(vm.simulationProgressProperty());
+        simulating.visibleProperty().bind(vm.results().simulatingProperty());
+        simulating.managedProperty().bind(vm.results().simulatingProperty());
+        simulating.progressProperty().bind(vm.results().simulationProgressProperty());
         HBox bar = new HBox(8, play, back, fwd, reset, new Label("speed ×"), speed, scrubber, simulating, time);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(4, 8, 4, 8));
         return bar;
     }
 
-    /** Self- and mutual inductance of the closed loops at the run's start (computed off this thread), under the readout table. */
+    /**
+     * Self- and mutual inductance of the closed loops at the run's start (the run's own, computed
+     * off this thread), under the readout table.
+     */
     private Label inductanceLine() {
-        Label line = new Label();
-        line.setId("inductance");
-        line.setWrapText(true);
-        line.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
-        line.setPadding(new Insets(2, 6, 2, 6));
+        Label line = infoLine("inductance");
         Runnable update = () -> {
-            line.setText(vm.inductanceLineProperty().get());
+            line.setText(vm.results().inductanceLineProperty().get());
             line.setVisible(!line.getText().isEmpty());
             line.setManaged(line.isVisible());
         };
-        vm.inductanceLineProperty().addListener(o -> update.run());
+        vm.results().inductanceLineProperty().addListener(o -> update.run());
         update.run();
         return line;
     }
 
     /** The energy audit of a simulated run, under the readout table; hidden for prescribed motion. */
     private Label energyLine() {
-        Label line = new Label();
-        line.setId("energy-audit");
-        line.setWrapText(true);
-        line.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
-        line.setPadding(new Insets(2, 6, 2, 6));
+        Label line = infoLine("energy-audit");
         Runnable update = () -> {
-            var audit = vm.currentResult().flatMap(org.kinduct.solver.run.RunResult::audit);
-            line.setText(audit.map(org.kinduct.report.EnergyText::of).orElse(""));
+            var audit = vm.results().currentResult().flatMap(RunResult::audit);
+            line.setText(audit.map(EnergyText::of).orElse(""));
             line.setVisible(audit.isPresent());
             line.setManaged(line.isVisible());
         };
-        vm.resultProperty().addListener(o -> update.run());
+        vm.results().resultProperty().addListener(o -> update.run());
+        vm.document().sceneProperty().addListener(o -> update.run());
         update.run();
         return line;
     }
 
-    private void addBackground() {
-        if (vm.apply("Add background field", org.kinduct.ui.edit.ShapeFactory::addBackground)) {
-            List<org.kinduct.scene.Source> sources = vm.scene().sources();
-            vm.select(Set.of(sources.get(sources.size() - 1).id()));
-        }
-    }
-
-    private void selectAll() {
-        Set<String> ids = new java.util.HashSet<>();
-        vm.scene().sources().forEach(s -> ids.add(s.id()));
-        vm.scene().conductors().forEach(c -> ids.add(c.id()));
-        vm.select(ids);
-    }
-
-    // ---- files ----
-
-    void newScene() {
-        if (confirmDiscard()) {
-            vm.load(Scene.empty("untitled"), null);
-            canvas.zoomToFit();
-        }
-    }
-
-    private void openDialog() {
-        if (!confirmDiscard()) {
-            return;
-        }
-        FileChooser chooser = chooser();
-        java.io.File f = chooser.showOpenDialog(stage);
-        if (f != null) {
-            open(f.toPath());
-        }
-    }
-
-    /** Opens a scene file; on failure the current scene stays and the message says what is wrong. */
-    boolean open(Path file) {
-        try {
-            Scene s = store.read(file);
-            vm.load(s, file);
-            rememberRecent(file);
-            canvas.zoomToFit();
-            vm.say("Opened " + file.getFileName());
-            return true;
-        } catch (SceneStore.LoadFailure e) {
-            vm.say("Could not open " + file.getFileName() + " — your scene is unchanged");
-            error("Could not open " + file.getFileName(), e.getMessage());
-            return false;
-        }
-    }
-
-    void openDemo(String resource) {
-        try {
-            vm.load(store.readResource(resource), null);
-            canvas.zoomToFit();
-        } catch (SceneStore.LoadFailure e) {
-            error("Could not open the demo " + resource, e.getMessage());
-        }
-    }
-
-    private boolean save() {
-        Path f = vm.fileProperty().get();
-        return f == null ? saveAs() : saveTo(f);
-    }
-
-    private boolean saveAs() {
-        FileChooser chooser = chooser();
-        chooser.setInitialFileName(vm.scene().name().isEmpty() ? "scene.json" : vm.scene().name() + ".json");
-        java.io.File f = chooser.showSaveDialog(stage);
-        return f != null && saveTo(f.toPath());
-    }
-
-    boolean saveTo(Path file) {
-        try {
-            store.write(vm.scene(), file);
-            vm.markSaved(file);
-            rememberRecent(file);
-            vm.say("Saved " + file.getFileName());
-            return true;
-        } catch (SceneStore.LoadFailure e) {
-            error("Could not save " + file.getFileName(), e.getMessage());
-            return false;
-        }
-    }
-
-    private FileChooser chooser() {
-        FileChooser chooser = new FileChooser();
-        chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter("Kinduct scenes (*.json)", "*.json"));
-        Path f = vm.fileProperty().get();
-        if (f != null && f.toAbsolutePath().getParent() != null) {
-            chooser.setInitialDirectory(f.toAbsolutePath().getParent().toFile());
-        }
-        return chooser;
-    }
-
-    private void rememberRecent(Path file) {
-        home.remember(file);
-        refreshRecent();
+    private static Label infoLine(String id) {
+        Label line = new Label();
+        line.setId(id);
+        line.setWrapText(true);
+        line.setMinHeight(Region.USE_PREF_SIZE);
+        line.setPadding(new Insets(2, 6, 2, 6));
+        return line;
     }
 
     private void refreshRecent() {
-        List<Path> files = home.recent();
         recentMenu.getItems().clear();
-        for (Path p : files) {
-            recentMenu.getItems().add(item(p.toString(), null, () -> {
-                if (confirmDiscard()) {
-                    open(p);
-                }
-            }));
+        for (Path p : files.recent()) {
+            recentMenu.getItems().add(item(p.toString(), null, () -> files.afterAsking(() -> files.open(p))));
         }
-        recentMenu.setDisable(files.isEmpty());
-    }
-
-    /** True when there is nothing unsaved, or the user saved or chose to discard it. */
-    boolean confirmDiscard() {
-        if (!vm.dirtyProperty().get()) {
-            return true;
-        }
-        ButtonType saveIt = new ButtonType("Save", ButtonBar.ButtonData.YES);
-        ButtonType discard = new ButtonType("Discard changes", ButtonBar.ButtonData.NO);
-        Alert a = new Alert(Alert.AlertType.CONFIRMATION, "The scene has unsaved changes.", saveIt, discard,
-                ButtonType.CANCEL);
-        a.setHeaderText("Save changes first?");
-        a.initOwner(stage);
-        Optional<ButtonType> answer = a.showAndWait();
-        if (answer.isEmpty() || answer.get() == ButtonType.CANCEL) {
-            return false;
-        }
-        return answer.get() == discard || save();
-    }
-
-    /** Writes the scene to the autosave file when it has unsaved changes. */
-    void autosave() {
-        if (!vm.dirtyProperty().get()) {
-            return;
-        }
-        try {
-            Files.createDirectories(home.dir());
-            store.write(vm.scene(), home.autosave());
-        } catch (java.io.IOException | SceneStore.LoadFailure e) {
-            vm.say("Autosave failed: " + e.getMessage());
-        }
-    }
-
-    /** Removes the autosave after a clean exit. */
-    void clearAutosave() {
-        try {
-            Files.deleteIfExists(home.autosave());
-        } catch (java.io.IOException e) {
-            System.err.println("Kinduct: could not remove " + home.autosave() + ": " + e.getMessage());
-        }
-    }
-
-    /** Offers to restore an autosave left by a session that did not end cleanly. */
-    void offerRecovery() {
-        Path auto = home.autosave();
-        if (!Files.isRegularFile(auto)) {
-            return;
-        }
-        Alert a = new Alert(Alert.AlertType.CONFIRMATION,
-                "Kinduct found unsaved work from a session that did not close normally (" + auto + ").",
-                new ButtonType("Recover", ButtonBar.ButtonData.YES), new ButtonType("Discard", ButtonBar.ButtonData.NO));
-        a.setHeaderText("Recover unsaved work?");
-        a.initOwner(stage);
-        Optional<ButtonType> answer = a.showAndWait();
-        if (answer.isPresent() && answer.get().getButtonData() == ButtonBar.ButtonData.YES) {
-            try {
-                vm.load(store.read(auto), null, true);
-                canvas.zoomToFit();
-                vm.say("Recovered unsaved work — save it under a name of your choice");
-            } catch (SceneStore.LoadFailure e) {
-                error("Could not recover the autosave", e.getMessage());
-            }
-        } else {
-            clearAutosave();
-        }
-    }
-
-    void error(String header, String details) {
-        Alert a = new Alert(Alert.AlertType.ERROR);
-        a.setTitle("Kinduct");
-        a.setHeaderText(header);
-        TextArea text = new TextArea(details);
-        text.setId("error-details");
-        text.setEditable(false);
-        text.setWrapText(true);
-        text.setPrefRowCount(8);
-        a.getDialogPane().setContent(text);
-        a.initOwner(stage);
-        a.show();
+        recentMenu.setDisable(files.recent().isEmpty());
     }
 
     private void info(String title, String text) {

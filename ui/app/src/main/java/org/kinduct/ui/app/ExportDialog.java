@@ -12,6 +12,8 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.EnumSet;
 import java.util.Locale;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.Executor;
 import javafx.application.Platform;
 import javafx.geometry.Insets;
 import javafx.scene.control.ButtonBar;
@@ -36,14 +38,15 @@ import org.kinduct.render.paint.Quantities;
 
 /**
  * The editor's export dialog: format, size, resolution, view and time, then a file chooser. It
- * remembers the last choices ({@link ExportPreferences}) and exports off the UI thread, reporting
- * in the editor's status line.
+ * remembers the last choices ({@link ExportPreferences}, read and written on the {@code io}
+ * executor) and exports off the UI thread, reporting in the editor's status line.
  */
 public final class ExportDialog {
 
     private final Window owner;
     private final EditorViewModel vm;
     private final Path home;
+    private final Executor io;
     private final ComboBox<ExportPreferences.Format> format = new ComboBox<>();
     private final TextField width = new TextField();
     private final TextField dpi = new TextField();
@@ -52,19 +55,24 @@ public final class ExportDialog {
     private final RadioButton wholeScene = new RadioButton("Whole scene");
     private Choice chosen;
 
-    private ExportDialog(Window owner, EditorViewModel vm, Path home) {
+    private ExportDialog(Window owner, EditorViewModel vm, Path home, Executor io) {
         this.owner = owner;
         this.vm = vm;
         this.home = home;
+        this.io = io;
     }
 
-    /** Shows the dialog for the editor's scene, view and time; {@code home} keeps the choices. */
-    public static void show(Window owner, EditorViewModel vm, Path home) {
-        new ExportDialog(owner, vm, home).run();
+    /**
+     * Shows the dialog for the editor's scene, view and time, once the choices kept in
+     * {@code home} are read (on {@code io}).
+     */
+    public static void show(Window owner, EditorViewModel vm, Path home, Executor io) {
+        ExportDialog dialog = new ExportDialog(owner, vm, home, io);
+        Futures.watched(CompletableFuture.supplyAsync(() -> ExportPreferences.load(home), io)
+                .thenAcceptAsync(dialog::run, Platform::runLater));
     }
 
-    private void run() {
-        ExportPreferences prefs = ExportPreferences.load(home);
+    private void run(ExportPreferences prefs) {
         Dialog<ButtonType> d = new Dialog<>();
         d.initOwner(owner);
         d.setTitle("Export");
@@ -124,9 +132,10 @@ public final class ExportDialog {
             int w = Integer.parseInt(width.getText().strip());
             int r = Integer.parseInt(dpi.getText().strip());
             ExportInstant t = ExportInstant.parse(time.getText(), text -> Units.parse(text, Dimension.TIME));
-            ViewChoice view = wholeScene.isSelected() ? new ViewChoice.Fit() : new ViewChoice.Current(vm.viewProperty().get());
-            EnumSet<Layer> layers = vm.layers().isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(vm.layers());
-            SnapshotOptions options = new SnapshotOptions(t, w, r, view, layers, vm.rangeProperty().get(),
+            ViewChoice view = wholeScene.isSelected() ? new ViewChoice.Fit() : new ViewChoice.Current(vm.view().view());
+            EnumSet<Layer> layers = vm.view().layers().isEmpty() ? EnumSet.noneOf(Layer.class)
+                    : EnumSet.copyOf(vm.view().layers());
+            SnapshotOptions options = new SnapshotOptions(t, w, r, view, layers, vm.view().rangeProperty().get(),
                     LocalDate.now(), Version.text());
             return new Choice(format.getValue(), options);
         } catch (NumberFormatException e) {
@@ -145,8 +154,8 @@ public final class ExportDialog {
         chooser.setTitle("Export " + c.format());
         String ext = c.format().extension();
         chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter(c.format().toString(), "*." + ext));
-        Path folder = lastFolder != null ? lastFolder : vm.fileProperty().get() != null
-                ? vm.fileProperty().get().toAbsolutePath().getParent() : null;
+        Path folder = lastFolder != null ? lastFolder : vm.document().file() != null
+                ? vm.document().file().toAbsolutePath().getParent() : null;
         if (folder != null && Files.isDirectory(folder)) {
             chooser.setInitialDirectory(folder.toFile());
         }
@@ -175,12 +184,15 @@ public final class ExportDialog {
     }
 
     private void remember(Choice c, Path folder) {
-        try {
-            new ExportPreferences(c.format(), c.options().widthPx(), c.options().dpi(),
-                    c.options().view() instanceof ViewChoice.Fit, folder).save(home);
-        } catch (IOException e) {
-            vm.say("Could not keep the export settings: " + e.getMessage());
-        }
+        ExportPreferences prefs = new ExportPreferences(c.format(), c.options().widthPx(), c.options().dpi(),
+                c.options().view() instanceof ViewChoice.Fit, folder);
+        io.execute(() -> {
+            try {
+                prefs.save(home);
+            } catch (IOException e) {
+                Platform.runLater(() -> vm.say("Could not keep the export settings: " + e.getMessage()));
+            }
+        });
     }
 
     static Exporter.Targets targets(ExportPreferences.Format format, Path file) {

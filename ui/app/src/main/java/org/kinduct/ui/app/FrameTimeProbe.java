@@ -85,16 +85,16 @@ public final class FrameTimeProbe {
             Stage stage = new Stage();
             stage.setScene(new javafx.scene.Scene(canvas, WIDTH, HEIGHT));
             stage.show();
-            vm.viewProperty().set(new ViewTransform(0, 0, WIDTH / 0.32, WIDTH, HEIGHT));
-            vm.layers().addAll(EnumSet.allOf(Layer.class));
-            vm.speedProperty().set(0.25);
-            vm.playingProperty().set(true);
+            vm.view().viewProperty().set(new ViewTransform(0, 0, WIDTH / 0.32, WIDTH, HEIGHT));
+            vm.view().layers().addAll(EnumSet.allOf(Layer.class));
+            vm.clock().speedProperty().set(0.25);
+            vm.clock().playingProperty().set(true);
             int[] count = {-WARM_UP_FRAMES};
             long[] last = {0};
             long shown = System.nanoTime();
             canvas.onPainted(ms -> {
                 long now = System.nanoTime();
-                if (vm.currentResult().isEmpty()) {
+                if (vm.results().currentResult().isEmpty()) {
                     // Playback proper is measured once the time series is solved; until then every
                     // frame's instant is solved on the workers, as right after an edit.
                     if (last[0] != 0) {
@@ -115,7 +115,7 @@ public final class FrameTimeProbe {
                     paint[i] = ms;
                 } else if (i == frames) {
                     cpu.stop();
-                    vm.playingProperty().set(false);
+                    vm.clock().playingProperty().set(false);
                     stage.close();
                     done.complete(null);
                 }

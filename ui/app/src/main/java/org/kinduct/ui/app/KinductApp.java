@@ -1,8 +1,8 @@
 package org.kinduct.ui.app;
 
-import java.nio.file.Path;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
+import java.util.concurrent.ThreadFactory;
 import javafx.application.Application;
 import javafx.application.Platform;
 import javafx.stage.Stage;
@@ -16,52 +16,49 @@ public final class KinductApp extends Application {
     static final double HEIGHT = 800;
 
     private ExecutorService work;
-    private EditorWindow window;
+    private ExecutorService files;
 
     @Override
     public void start(Stage stage) {
-        work = Executors.newFixedThreadPool(2, r -> {
-            Thread t = new Thread(r, "kinduct-worker");
-            t.setDaemon(true);
-            return t;
-        });
+        work = Executors.newFixedThreadPool(2, daemon("kinduct-worker"));
+        files = Executors.newSingleThreadExecutor(daemon("kinduct-files"));
         EditorViewModel vm = new EditorViewModel(Scene.empty("untitled"), work, Platform::runLater);
-        window = new EditorWindow(stage, vm, new JsonSceneStore(), AppHome.standard());
+        EditorWindow window = new EditorWindow(stage, vm, new JsonSceneStore(), AppHome.standard(), files);
         Thread.setDefaultUncaughtExceptionHandler((thread, e) -> {
             e.printStackTrace();
             Platform.runLater(() -> {
-                window.autosave();
+                window.files().autosave();
                 vm.say("Internal error (" + e + "); your scene is kept and autosaved. Please save and report it.");
             });
         });
-        javafx.scene.Scene fx = new javafx.scene.Scene(window.root(), WIDTH, HEIGHT);
-        stage.setScene(fx);
+        stage.setScene(new javafx.scene.Scene(window.root(), WIDTH, HEIGHT));
+        // Closing asks about unsaved work first; the window closes itself once that is settled.
         stage.setOnCloseRequest(e -> {
-            if (!window.confirmDiscard()) {
-                e.consume();
-            }
+            e.consume();
+            window.files().quit(stage::close);
         });
         stage.show();
-        Path file = GuiLauncher.initialFile();
-        String demo = GuiLauncher.initialDemo();
-        if (file != null) {
-            window.open(file);
-        } else if (demo != null) {
-            window.openDemo(demo);
-        } else {
-            window.offerRecovery();
-        }
-        window.canvas().zoomToFit();
+        vm.zoomToFit();
+        window.files().start(GuiLauncher.initialFile(), GuiLauncher.initialDemo());
         window.canvas().requestFocus();
+    }
+
+    private static ThreadFactory daemon(String name) {
+        return r -> {
+            Thread t = new Thread(r, name);
+            t.setDaemon(true);
+            return t;
+        };
     }
 
     @Override
     public void stop() {
-        if (window != null) {
-            window.clearAutosave();
-        }
         if (work != null) {
             work.shutdownNow();
+        }
+        if (files != null) {
+            // Lets a write under way (the autosave's release on quitting) finish.
+            files.shutdown();
         }
     }
 }

@@ -2,6 +2,7 @@ package org.kinduct.ui.app;
 
 import java.util.List;
 import java.util.Locale;
+import java.util.Set;
 import java.util.function.UnaryOperator;
 import javafx.collections.SetChangeListener;
 import javafx.geometry.Insets;
@@ -39,20 +40,21 @@ final class PropertiesPanel extends ScrollPane {
         setFitToWidth(true);
         setMinWidth(250);
         box.setPadding(new Insets(8));
-        vm.selection().addListener((SetChangeListener<String>) c -> rebuild());
-        vm.sceneProperty().addListener(o -> rebuild());
+        vm.document().selection().addListener((SetChangeListener<String>) c -> rebuild());
+        vm.document().sceneProperty().addListener(o -> rebuild());
         rebuild();
     }
 
     private void rebuild() {
         box.getChildren().clear();
         Scene scene = vm.scene();
-        if (vm.selection().size() > 1) {
-            heading(vm.selection().size() + " objects selected");
+        Set<String> selection = vm.document().selection();
+        if (selection.size() > 1) {
+            heading(selection.size() + " objects selected");
             note("Drag to move them together; Ctrl+D duplicates, Ctrl+R rotates, Delete removes.");
             return;
         }
-        String id = vm.selection().isEmpty() ? null : vm.selection().iterator().next();
+        String id = selection.isEmpty() ? null : selection.iterator().next();
         heading(id == null ? "Scene" : describe(scene, id));
         addAll(PropertySheet.of(scene, id));
         if (id != null) {
@@ -65,13 +67,52 @@ final class PropertiesPanel extends ScrollPane {
     }
 
     private static String describe(Scene scene, String id) {
-        String kind = scene.source(id).map(s -> s instanceof Source.BlockMagnet ? "Block magnet"
-                : s instanceof Source.CylinderMagnet ? "Disc magnet"
-                : s instanceof Source.FieldPatch ? "Field patch"
-                : s instanceof Source.SourceCoil ? "Source coil" : "Uniform field")
-                .orElseGet(() -> scene.conductor(id).map(c -> c instanceof Conductor.Loop ? "Loop" : "Wire")
-                        .orElse("Object"));
+        String kind = scene.source(id).map(PropertiesPanel::kind)
+                .orElseGet(() -> scene.conductor(id).map(PropertiesPanel::kind).orElse("Object"));
         return kind + " “" + id + "”";
+    }
+
+    private static String kind(Source s) {
+        return s.match(new Source.Cases<>() {
+            @Override
+            public String patch(Source.FieldPatch patch) {
+                return "Field patch";
+            }
+
+            @Override
+            public String uniform(Source.UniformField uniform) {
+                return "Uniform field";
+            }
+
+            @Override
+            public String block(Source.BlockMagnet block) {
+                return "Block magnet";
+            }
+
+            @Override
+            public String cylinder(Source.CylinderMagnet cylinder) {
+                return "Disc magnet";
+            }
+
+            @Override
+            public String coil(Source.SourceCoil coil) {
+                return "Source coil";
+            }
+        });
+    }
+
+    private static String kind(Conductor c) {
+        return c.match(new Conductor.Cases<>() {
+            @Override
+            public String wire(Conductor.Wire wire) {
+                return "Wire";
+            }
+
+            @Override
+            public String loop(Conductor.Loop loop) {
+                return "Loop";
+            }
+        });
     }
 
     private void heading(String text) {
@@ -149,6 +190,6 @@ final class PropertiesPanel extends ScrollPane {
             vm.say(p.label() + ": " + e.getMessage());
             return;
         }
-        vm.apply("Set " + p.label().toLowerCase(Locale.ROOT), edit);
+        vm.document().apply("Set " + p.label().toLowerCase(Locale.ROOT), edit);
     }
 }

@@ -12,6 +12,7 @@ import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.edit.EditorViewModel;
+import org.kinduct.ui.edit.SceneResults;
 import org.kinduct.render.paint.Quantities;
 
 /** One row per conductor: flux, both EMF methods and how well they agree, current, direction, force. */
@@ -40,23 +41,24 @@ final class ReadoutTable extends TableView<ConductorState> {
             Vec2 f = scales.force(s.forceN());
             return Quantities.force(f.x()) + ", " + Quantities.force(f.y());
         }));
-        vm.snapshotProperty().addListener((obs, old, snap) -> show(vm));
-        vm.resultProperty().addListener((obs, old, run) -> show(vm));
-        show(vm);
+        SceneResults results = vm.results();
+        results.snapshotProperty().addListener((obs, old, snap) -> show(results));
+        results.resultProperty().addListener((obs, old, run) -> show(results));
+        show(results);
         getSelectionModel().selectedItemProperty().addListener((obs, old, row) -> {
-            if (row != null && !vm.selection().contains(row.id())) {
-                vm.select(java.util.Set.of(row.id()));
+            if (row != null && !vm.document().selection().contains(row.id())) {
+                vm.document().select(java.util.Set.of(row.id()));
             }
         });
     }
 
-    private void show(EditorViewModel vm) {
-        Snapshot snap = vm.snapshotProperty().get();
+    private void show(SceneResults results) {
+        Snapshot snap = results.snapshot();
         if (snap == null) {
             rows.clear();
             return;
         }
-        scales = vm.scalesNow();
+        scales = results.scalesNow();
         if (rows.size() == snap.conductors().size()) {
             for (int i = 0; i < rows.size(); i++) {
                 rows.set(i, snap.conductors().get(i));

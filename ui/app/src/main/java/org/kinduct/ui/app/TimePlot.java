@@ -27,6 +27,9 @@ final class TimePlot extends Pane {
     private final EditorViewModel vm;
     private final Canvas canvas = new Canvas();
     private PlotSeries.Quantity quantity = PlotSeries.Quantity.EMF;
+    /** The lines of the current run, selection and quantity; a move of the time cursor only redraws them. */
+    private List<PlotSeries.Line> lines = List.of();
+    private double peak;
 
     TimePlot(EditorViewModel vm) {
         this.vm = vm;
@@ -37,16 +40,32 @@ final class TimePlot extends Pane {
         canvas.heightProperty().bind(heightProperty());
         widthProperty().addListener(o -> draw());
         heightProperty().addListener(o -> draw());
-        vm.resultProperty().addListener(o -> draw());
-        vm.sceneProperty().addListener(o -> draw());
-        vm.timeProperty().addListener(o -> draw());
-        vm.selection().addListener((javafx.collections.SetChangeListener<String>) c -> draw());
+        vm.results().resultProperty().addListener(o -> relines());
+        vm.document().sceneProperty().addListener(o -> relines());
+        vm.clock().timeProperty().addListener(o -> draw());
+        vm.document().selection().addListener((javafx.collections.SetChangeListener<String>) c -> relines());
         setOnMouseClicked(e -> seek(e.getX()));
         setOnMouseDragged(e -> seek(e.getX()));
+        relines();
     }
 
     void setQuantity(PlotSeries.Quantity q) {
         quantity = q;
+        relines();
+    }
+
+    /** Takes the lines from the current scene's run (none while it is computed). */
+    private void relines() {
+        lines = vm.results().currentResult().map(run -> PlotSeries.lines(run, vm.document().selection(), quantity))
+                .orElse(List.of());
+        peak = 0;
+        for (PlotSeries.Line line : lines) {
+            for (double v : line.values()) {
+                if (Double.isFinite(v)) {
+                    peak = Math.max(peak, Math.abs(v));
+                }
+            }
+        }
         draw();
     }
 
@@ -55,7 +74,7 @@ final class TimePlot extends Pane {
         double t1 = vm.scene().time().t1S();
         double w = getWidth() - LEFT - 10;
         if (w > 0) {
-            vm.seek(t0 + (x - LEFT) / w * (t1 - t0));
+            vm.clock().seek(t0 + (x - LEFT) / w * (t1 - t0));
         }
     }
 
@@ -65,9 +84,6 @@ final class TimePlot extends Pane {
         double h = getHeight();
         g.setFill(Color.web("#fbfbf8"));
         g.fillRect(0, 0, w, h);
-        List<PlotSeries.Line> lines = PlotSeries.lines(vm.scene(),
-                vm.currentResult().map(org.kinduct.solver.run.RunResult::samples).orElse(List.of()), vm.selection(),
-                quantity);
         double t0 = vm.scene().time().t0S();
         double t1 = vm.scene().time().t1S();
         double pw = w - LEFT - 10;
@@ -75,15 +91,7 @@ final class TimePlot extends Pane {
         if (pw <= 10 || ph <= 10) {
             return;
         }
-        double max = 0;
-        for (PlotSeries.Line line : lines) {
-            for (double v : line.values()) {
-                if (Double.isFinite(v)) {
-                    max = Math.max(max, Math.abs(v));
-                }
-            }
-        }
-        double lim = max > 0 ? max * 1.1 : 1;
+        double lim = peak > 0 ? peak * 1.1 : 1;
         double top = 18;
         g.setStroke(Color.web("#bbbbbb"));
         g.setLineWidth(1);
@@ -93,9 +101,9 @@ final class TimePlot extends Pane {
         g.setFill(Color.web("#333333"));
         g.setFont(Font.font("DejaVu Sans", 11));
         g.setTextAlign(TextAlignment.RIGHT);
-        g.fillText(max > 0 ? "+" + Units.format(lim, quantity.dimension) : "", LEFT - 4, top + 10);
+        g.fillText(peak > 0 ? "+" + Units.format(lim, quantity.dimension) : "", LEFT - 4, top + 10);
         g.fillText("0", LEFT - 4, top + ph / 2 + 4);
-        g.fillText(max > 0 ? "−" + Units.format(lim, quantity.dimension) : "", LEFT - 4, top + ph);
+        g.fillText(peak > 0 ? "−" + Units.format(lim, quantity.dimension) : "", LEFT - 4, top + ph);
         g.setTextAlign(TextAlignment.LEFT);
         g.fillText(quantity + (lines.isEmpty() ? quantity.ofBodies() ? " — no moving bodies" : " — no conductors" : ""),
                 LEFT, 13);
@@ -128,7 +136,7 @@ final class TimePlot extends Pane {
             g.setTextAlign(TextAlignment.RIGHT);
             g.fillText(line.id(), LEFT + pw - 4, top + 12 + 13 * k);
         }
-        double tx = LEFT + (vm.timeProperty().get() - t0) / (t1 - t0) * pw;
+        double tx = LEFT + (vm.clock().time() - t0) / (t1 - t0) * pw;
         g.setStroke(Color.web("#d6007a"));
         g.setLineWidth(1.5);
         g.strokeLine(tx, top, tx, top + ph);

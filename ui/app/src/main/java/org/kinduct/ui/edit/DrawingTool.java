@@ -12,8 +12,8 @@ import org.kinduct.render.paint.Quantities;
 
 /**
  * The state of drawing one new object: clicked points, the snapped cursor, and typed input.
- * Finishing yields the edit that adds the object; the view applies it through the
- * {@link EditorViewModel} so it can be undone.
+ * Finishing yields the edit that adds the object; {@link CanvasGestures} applies it through the
+ * {@link SceneDocument} so it can be undone.
  */
 public final class DrawingTool {
 

@@ -41,35 +41,7 @@ public final class MotionSheet {
             }
             return s -> SceneEdits.setMotion(s, objectId, defaultMotion(i, s), pivot);
         }));
-        if (m instanceof Motion.Glide g) {
-            p.add(vector("Velocity", Dimension.VELOCITY, g.velocity(), v -> set(objectId, new Motion.Glide(v), pivot)));
-        } else if (m instanceof Motion.Accelerate a) {
-            p.add(vector("Initial velocity", Dimension.VELOCITY, a.initialVelocity(),
-                    v -> set(objectId, new Motion.Accelerate(v, a.acceleration()), pivot)));
-            p.add(vector("Acceleration", Dimension.ACCELERATION, a.acceleration(),
-                    v -> set(objectId, new Motion.Accelerate(a.initialVelocity(), v), pivot)));
-        } else if (m instanceof Motion.Oscillate o) {
-            p.add(PropertySheet.quantity("Amplitude", Dimension.LENGTH, o.amplitudeM(), v -> set(objectId,
-                    new Motion.Oscillate(v, o.frequencyHz(), o.directionRad(), o.phaseRad()), pivot)));
-            p.add(PropertySheet.quantity("Frequency", Dimension.FREQUENCY, o.frequencyHz(), v -> set(objectId,
-                    new Motion.Oscillate(o.amplitudeM(), v, o.directionRad(), o.phaseRad()), pivot)));
-            p.add(PropertySheet.quantity("Direction", Dimension.ANGLE, o.directionRad(), v -> set(objectId,
-                    new Motion.Oscillate(o.amplitudeM(), o.frequencyHz(), v, o.phaseRad()), pivot)));
-            p.add(PropertySheet.quantity("Phase", Dimension.ANGLE, o.phaseRad(), v -> set(objectId,
-                    new Motion.Oscillate(o.amplitudeM(), o.frequencyHz(), o.directionRad(), v), pivot)));
-        } else if (m instanceof Motion.Spin sp) {
-            p.add(PropertySheet.quantity("Angular speed (+ anticlockwise)", Dimension.ANGULAR_SPEED, sp.omegaRadPerS(),
-                    v -> set(objectId, new Motion.Spin(v, sp.startAngleRad()), pivot)));
-            p.add(PropertySheet.quantity("Start angle", Dimension.ANGLE, sp.startAngleRad(),
-                    v -> set(objectId, new Motion.Spin(sp.omegaRadPerS(), v), pivot)));
-        } else if (m instanceof Motion.Free free) {
-            p.addAll(FreeMotionSheet.of(free, f -> set(objectId, f, pivot)));
-        } else if (m instanceof Motion.Path path) {
-            p.add(new Property("Keys: t, x, y, angle; …", keysText(path), List.of(),
-                    text -> set(objectId, new Motion.Path(parseKeys(text), path.blend()), pivot)));
-            p.add(PropertySheet.choice("Between keys", BLENDS, path.blend().ordinal(),
-                    i -> set(objectId, new Motion.Path(path.keys(), Motion.Path.Blend.values()[i]), pivot)));
-        }
+        p.addAll(parameters(m, objectId, pivot));
         if (!Body.FIXED.equals(body.id())) {
             p.add(vector("Pivot", Dimension.LENGTH, body.pivot(), v -> s -> {
                 List<Body> bodies = new ArrayList<>(s.bodies());
@@ -80,21 +52,106 @@ public final class MotionSheet {
         return p;
     }
 
+    /** The parameters of motion {@code m} of the body {@code objectId} rides, pivoting about {@code pivot}. */
+    private static List<Property> parameters(Motion m, String objectId, Vec2 pivot) {
+        return m.match(new Motion.Cases<>() {
+            @Override
+            public List<Property> still(Motion.Still still) {
+                return List.of();
+            }
+
+            @Override
+            public List<Property> glide(Motion.Glide g) {
+                return List.of(vector("Velocity", Dimension.VELOCITY, g.velocity(),
+                        v -> set(objectId, new Motion.Glide(v), pivot)));
+            }
+
+            @Override
+            public List<Property> accelerate(Motion.Accelerate a) {
+                return List.of(
+                        vector("Initial velocity", Dimension.VELOCITY, a.initialVelocity(),
+                                v -> set(objectId, new Motion.Accelerate(v, a.acceleration()), pivot)),
+                        vector("Acceleration", Dimension.ACCELERATION, a.acceleration(),
+                                v -> set(objectId, new Motion.Accelerate(a.initialVelocity(), v), pivot)));
+            }
+
+            @Override
+            public List<Property> oscillate(Motion.Oscillate o) {
+                return List.of(
+                        PropertySheet.quantity("Amplitude", Dimension.LENGTH, o.amplitudeM(), v -> set(objectId,
+                                new Motion.Oscillate(v, o.frequencyHz(), o.directionRad(), o.phaseRad()), pivot)),
+                        PropertySheet.quantity("Frequency", Dimension.FREQUENCY, o.frequencyHz(), v -> set(objectId,
+                                new Motion.Oscillate(o.amplitudeM(), v, o.directionRad(), o.phaseRad()), pivot)),
+                        PropertySheet.quantity("Direction", Dimension.ANGLE, o.directionRad(), v -> set(objectId,
+                                new Motion.Oscillate(o.amplitudeM(), o.frequencyHz(), v, o.phaseRad()), pivot)),
+                        PropertySheet.quantity("Phase", Dimension.ANGLE, o.phaseRad(), v -> set(objectId,
+                                new Motion.Oscillate(o.amplitudeM(), o.frequencyHz(), o.directionRad(), v), pivot)));
+            }
+
+            @Override
+            public List<Property> spin(Motion.Spin sp) {
+                return List.of(
+                        PropertySheet.quantity("Angular speed (+ anticlockwise)", Dimension.ANGULAR_SPEED,
+                                sp.omegaRadPerS(), v -> set(objectId, new Motion.Spin(v, sp.startAngleRad()), pivot)),
+                        PropertySheet.quantity("Start angle", Dimension.ANGLE, sp.startAngleRad(),
+                                v -> set(objectId, new Motion.Spin(sp.omegaRadPerS(), v), pivot)));
+            }
+
+            @Override
+            public List<Property> path(Motion.Path path) {
+                return List.of(
+                        new Property("Keys: t, x, y, angle; …", keysText(path), List.of(),
+                                text -> set(objectId, new Motion.Path(parseKeys(text), path.blend()), pivot)),
+                        PropertySheet.choice("Between keys", BLENDS, path.blend().ordinal(),
+                                i -> set(objectId, new Motion.Path(path.keys(), Motion.Path.Blend.values()[i]),
+                                        pivot)));
+            }
+
+            @Override
+            public List<Property> free(Motion.Free free) {
+                return FreeMotionSheet.of(free, f -> set(objectId, f, pivot));
+            }
+        });
+    }
+
+    /** The menu entry of {@code m} in {@link #KINDS}. */
     static String kindOf(Motion m) {
-        if (m instanceof Motion.Glide) {
-            return KINDS.get(1);
-        } else if (m instanceof Motion.Accelerate) {
-            return KINDS.get(2);
-        } else if (m instanceof Motion.Oscillate) {
-            return KINDS.get(3);
-        } else if (m instanceof Motion.Spin) {
-            return KINDS.get(4);
-        } else if (m instanceof Motion.Path) {
-            return KINDS.get(5);
-        } else if (m instanceof Motion.Free) {
-            return KINDS.get(6);
-        }
-        return KINDS.get(0);
+        return KINDS.get(m.match(new Motion.Cases<Integer>() {
+            @Override
+            public Integer still(Motion.Still still) {
+                return 0;
+            }
+
+            @Override
+            public Integer glide(Motion.Glide glide) {
+                return 1;
+            }
+
+            @Override
+            public Integer accelerate(Motion.Accelerate accelerate) {
+                return 2;
+            }
+
+            @Override
+            public Integer oscillate(Motion.Oscillate oscillate) {
+                return 3;
+            }
+
+            @Override
+            public Integer spin(Motion.Spin spin) {
+                return 4;
+            }
+
+            @Override
+            public Integer path(Motion.Path path) {
+                return 5;
+            }
+
+            @Override
+            public Integer free(Motion.Free free) {
+                return 6;
+            }
+        }));
     }
 
     /** A starting point for each kind, scaled to the scene's time window. */

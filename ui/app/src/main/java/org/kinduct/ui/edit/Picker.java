@@ -29,7 +29,7 @@ public final class Picker {
         List<Conductor> conductors = scene.conductors();
         for (int i = conductors.size() - 1; i >= 0; i--) {
             Conductor c = conductors.get(i);
-            if (distanceToPath(p, placement.vertices(c), c instanceof Conductor.Loop) <= reach) {
+            if (distanceToPath(p, placement.vertices(c), closed(c)) <= reach) {
                 return Optional.of(c.id());
             }
         }
@@ -58,6 +58,21 @@ public final class Picker {
             }
         }
         return Optional.empty();
+    }
+
+    /** Whether a conductor runs round a closed outline (a loop, with a gap or not) rather than end to end. */
+    private static boolean closed(Conductor c) {
+        return c.match(new Conductor.Cases<>() {
+            @Override
+            public Boolean wire(Conductor.Wire wire) {
+                return false;
+            }
+
+            @Override
+            public Boolean loop(Conductor.Loop loop) {
+                return true;
+            }
+        });
     }
 
     static double distanceToPath(Vec2 p, List<Vec2> pts, boolean closed) {

@@ -3,10 +3,10 @@ package org.kinduct.ui.edit;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
 import java.util.function.ToDoubleFunction;
 import org.kinduct.solver.run.ResultScales;
+import org.kinduct.solver.run.RunResult;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
@@ -75,16 +75,15 @@ public final class PlotSeries {
     }
 
     /** The lines of {@code q} over the run's samples; free bodies are read from the samples. */
-    public static List<Line> lines(Scene scene, List<Snapshot> series, Set<String> selection, Quantity q) {
+    public static List<Line> lines(RunResult run, Set<String> selection, Quantity q) {
         List<Line> lines = new ArrayList<>();
-        if (series.isEmpty()) {
-            return lines;
-        }
+        Scene scene = run.scene();
+        List<Snapshot> series = run.samples();
         double[] t = series.stream().mapToDouble(Snapshot::tS).toArray();
         if (!q.ofBodies()) {
-            // Read against the largest value of any conductor in the run, so a conductor with no
-            // EMF plots flat at zero instead of its rounding noise stretched to full height.
-            double reference = q.runScale(ResultScales.of(series));
+            // Read against the run's largest value of any conductor, so a conductor with no EMF
+            // plots flat at zero instead of its rounding noise stretched to full height.
+            double reference = q.runScale(run.scales());
             for (ConductorState first : series.get(0).conductors()) {
                 if (selection.isEmpty() || selection.contains(first.id())) {
                     double[] v = new double[t.length];

@@ -81,11 +81,11 @@ public final class PropertySheet {
                         v -> s -> s.withTime(new TimeSpan(s.time().t0S(), s.time().t1S(), v))),
                 MotionSheet.vector("Gravity on free bodies", Dimension.ACCELERATION,
                         scene.gravity(), g -> s -> s.withGravity(g))));
-        // Uniform fields have no outline to click on, so they are edited here.
+        // Sources without a place in the plane (uniform fields) have nothing to click on, so they are edited here.
         for (Source src : scene.sources()) {
-            if (src instanceof Source.UniformField u) {
-                p.addAll(sourceProperties(u).stream().map(q -> new Property("“" + u.id() + "”: " + q.label(), q.text(),
-                        q.options(), q.edit())).toList());
+            if (!Shapes.hasPlace(src)) {
+                p.addAll(sourceProperties(src).stream().map(q -> new Property("“" + src.id() + "”: " + q.label(),
+                        q.text(), q.options(), q.edit())).toList());
             }
         }
         return p;
@@ -100,24 +100,38 @@ public final class PropertySheet {
     }
 
     private static List<Property> sourceProperties(Source src) {
-        List<Property> p = new ArrayList<>();
-        if (src instanceof Source.FieldPatch f) {
-            p.add(quantity("B_z inside (+ out of screen)", Dimension.FLUX_DENSITY, f.bzT(),
-                    v -> replace(new Source.FieldPatch(f.id(), f.body(), f.outline(), v))));
-        } else if (src instanceof Source.UniformField u) {
-            p.add(quantity("B_z everywhere (+ out of screen)", Dimension.FLUX_DENSITY, u.bzT(),
-                    v -> replace(new Source.UniformField(u.id(), v))));
-        } else if (src instanceof Source.BlockMagnet m) {
-            blockProperties(m, p);
-        } else if (src instanceof Source.CylinderMagnet m) {
-            cylinderProperties(m, p);
-        } else if (src instanceof Source.SourceCoil c) {
-            coilProperties(c, p);
-        }
-        return p;
+        return src.match(new Source.Cases<>() {
+            @Override
+            public List<Property> patch(Source.FieldPatch f) {
+                return List.of(quantity("B_z inside (+ out of screen)", Dimension.FLUX_DENSITY, f.bzT(),
+                        v -> replace(new Source.FieldPatch(f.id(), f.body(), f.outline(), v))));
+            }
+
+            @Override
+            public List<Property> uniform(Source.UniformField u) {
+                return List.of(quantity("B_z everywhere (+ out of screen)", Dimension.FLUX_DENSITY, u.bzT(),
+                        v -> replace(new Source.UniformField(u.id(), v))));
+            }
+
+            @Override
+            public List<Property> block(Source.BlockMagnet m) {
+                return blockProperties(m);
+            }
+
+            @Override
+            public List<Property> cylinder(Source.CylinderMagnet m) {
+                return cylinderProperties(m);
+            }
+
+            @Override
+            public List<Property> coil(Source.SourceCoil c) {
+                return coilProperties(c);
+            }
+        });
     }
 
-    private static void blockProperties(Source.BlockMagnet m, List<Property> p) {
+    private static List<Property> blockProperties(Source.BlockMagnet m) {
+        List<Property> p = new ArrayList<>();
         p.add(coordinate("Centre x", m.center().x(), m.center(), v -> replace(block(m, new Vec2(v, m.center().y()),
                 m.sizeXM(), m.sizeYM(), m.heightM(), m.angleRad(), m.standoffM(), m.side(), m.remanenceT(),
                 m.magnetization()))));
@@ -141,6 +155,7 @@ public final class PropertySheet {
         p.add(choice("Poles", NORTH, m.magnetization().ordinal(), i -> replace(block(m, m.center(), m.sizeXM(),
                 m.sizeYM(), m.heightM(), m.angleRad(), m.standoffM(), m.side(), m.remanenceT(),
                 Source.Magnetization.values()[i]))));
+        return p;
     }
 
     private static Source.BlockMagnet block(Source.BlockMagnet m, Vec2 c, double sx, double sy, double h, double a,
@@ -148,7 +163,8 @@ public final class PropertySheet {
         return new Source.BlockMagnet(m.id(), m.body(), c, sx, sy, h, a, gap, side, br, north);
     }
 
-    private static void cylinderProperties(Source.CylinderMagnet m, List<Property> p) {
+    private static List<Property> cylinderProperties(Source.CylinderMagnet m) {
+        List<Property> p = new ArrayList<>();
         p.add(coordinate("Centre x", m.center().x(), m.center(), v -> replace(disc(m, new Vec2(v, m.center().y()),
                 m.radiusM(), m.heightM(), m.standoffM(), m.side(), m.remanenceT(), m.magnetization()))));
         p.add(coordinate("Centre y", m.center().y(), m.center(), v -> replace(disc(m, new Vec2(m.center().x(), v),
@@ -165,6 +181,7 @@ public final class PropertySheet {
                 m.radiusM(), m.heightM(), m.standoffM(), m.side(), v, m.magnetization()))));
         p.add(choice("Poles", NORTH, m.magnetization().ordinal(), i -> replace(disc(m, m.center(), m.radiusM(),
                 m.heightM(), m.standoffM(), m.side(), m.remanenceT(), Source.Magnetization.values()[i]))));
+        return p;
     }
 
     private static Source.CylinderMagnet disc(Source.CylinderMagnet m, Vec2 c, double r, double h, double gap,
@@ -172,16 +189,27 @@ public final class PropertySheet {
         return new Source.CylinderMagnet(m.id(), m.body(), c, r, h, gap, side, br, north);
     }
 
-    private static void coilProperties(Source.SourceCoil c, List<Property> p) {
+    private static List<Property> coilProperties(Source.SourceCoil c) {
+        List<Property> p = new ArrayList<>();
         Source.Drive d = c.drive();
         p.add(whole("Turns", c.turns(), n -> replace(new Source.SourceCoil(c.id(), c.body(), c.shape(), n,
                 c.planeZM(), d))));
         p.add(quantity("Plane z (− below)", Dimension.LENGTH, c.planeZM(), v -> replace(new Source.SourceCoil(c.id(),
                 c.body(), c.shape(), c.turns(), v, d))));
-        if (c.shape() instanceof Source.CoilShape.Circle circle) {
-            p.add(quantity("Radius", Dimension.LENGTH, circle.radiusM(), v -> replace(new Source.SourceCoil(c.id(),
-                    c.body(), new Source.CoilShape.Circle(circle.center(), v), c.turns(), c.planeZM(), d))));
-        }
+        p.addAll(c.shape().match(new Source.CoilShape.Cases<>() {
+            @Override
+            public List<Property> polygon(Source.CoilShape.Polygon polygon) {
+                // Its vertices are edited on the canvas.
+                return List.of();
+            }
+
+            @Override
+            public List<Property> circle(Source.CoilShape.Circle circle) {
+                return List.of(quantity("Radius", Dimension.LENGTH, circle.radiusM(), v -> replace(
+                        new Source.SourceCoil(c.id(), c.body(), new Source.CoilShape.Circle(circle.center(), v),
+                                c.turns(), c.planeZM(), d))));
+            }
+        }));
         p.add(quantity("DC current", Dimension.CURRENT, d.dcA(), v -> replace(coil(c, new Source.Drive(v,
                 d.amplitudeA(), d.frequencyHz(), d.phaseRad())))));
         p.add(quantity("AC amplitude", Dimension.CURRENT, d.amplitudeA(), v -> replace(coil(c, new Source.Drive(d.dcA(),
@@ -190,6 +218,7 @@ public final class PropertySheet {
                 new Source.Drive(d.dcA(), d.amplitudeA(), v, d.phaseRad())))));
         p.add(quantity("AC phase", Dimension.ANGLE, d.phaseRad(), v -> replace(coil(c, new Source.Drive(d.dcA(),
                 d.amplitudeA(), d.frequencyHz(), v)))));
+        return p;
     }
 
     private static Source.SourceCoil coil(Source.SourceCoil c, Source.Drive drive) {
@@ -197,9 +226,21 @@ public final class PropertySheet {
     }
 
     private static List<Property> conductorProperties(Conductor c) {
-        if (!(c instanceof Conductor.Loop l)) {
-            return List.of();
-        }
+        return c.match(new Conductor.Cases<>() {
+            @Override
+            public List<Property> wire(Conductor.Wire wire) {
+                // A wire is its vertices alone, edited on the canvas.
+                return List.of();
+            }
+
+            @Override
+            public List<Property> loop(Conductor.Loop l) {
+                return loopProperties(l);
+            }
+        });
+    }
+
+    private static List<Property> loopProperties(Conductor.Loop l) {
         List<Property> p = new ArrayList<>();
         p.add(whole("Turns", l.turns(), n -> replace(new Conductor.Loop(l.id(), l.body(), l.vertices(), n, l.wire(),
                 l.open(), l.loadOhm(), l.temperatureC()))));

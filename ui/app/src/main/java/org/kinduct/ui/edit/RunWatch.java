@@ -19,7 +19,7 @@ final class RunWatch implements RunMonitor {
     private final LongSupplier clockNs;
     private final IntConsumer percentDone;
     private volatile boolean outdated;
-    // Touched only by the simulating thread; runs of one evaluator never overlap.
+    // Touched only by the simulating thread; runs of one SceneRun never overlap (it runs under its lock).
     private long reportedAtNs;
     private int reportedPercent = -1;
 

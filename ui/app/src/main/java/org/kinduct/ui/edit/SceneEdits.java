@@ -75,7 +75,7 @@ public final class SceneEdits {
     public static Scene duplicate(Scene scene, Set<String> ids, Vec2 offset) {
         Scene out = scene;
         for (Source s : scene.sources()) {
-            if (ids.contains(s.id()) && !(s instanceof Source.UniformField)) {
+            if (ids.contains(s.id()) && Shapes.hasPlace(s)) {
                 Source copy = Shapes.withId(Shapes.map(s, p -> p.plus(offset), 0), uniqueId(out, s.id()));
                 out = addSource(out, copy);
             }

@@ -8,32 +8,91 @@ import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 
-/** Copies of sources and conductors with one thing changed: geometry, id, body or vertices. */
+/**
+ * Copies of sources and conductors with one thing changed: geometry, id, body or vertices. Each
+ * handles every kind ({@code Cases}), so a new kind does not compile until it is handled here.
+ */
 public final class Shapes {
 
     private Shapes() {
     }
 
-    /** Applies {@code f} to every drawn point; magnets also turn by {@code turnRad}. */
+    /** Applies {@code f} to every drawn point; magnets also turn by {@code turnRad}. A uniform field has no points. */
     public static Source map(Source s, UnaryOperator<Vec2> f, double turnRad) {
-        if (s instanceof Source.FieldPatch p) {
-            return new Source.FieldPatch(p.id(), p.body(), points(p.outline(), f), p.bzT());
-        }
-        if (s instanceof Source.BlockMagnet m) {
-            return new Source.BlockMagnet(m.id(), m.body(), f.apply(m.center()), m.sizeXM(), m.sizeYM(),
-                    m.heightM(), m.angleRad() + turnRad, m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
-        }
-        if (s instanceof Source.CylinderMagnet m) {
-            return new Source.CylinderMagnet(m.id(), m.body(), f.apply(m.center()), m.radiusM(), m.heightM(),
-                    m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
-        }
-        if (s instanceof Source.SourceCoil c) {
-            Source.CoilShape shape = c.shape() instanceof Source.CoilShape.Circle circle
-                    ? new Source.CoilShape.Circle(f.apply(circle.center()), circle.radiusM())
-                    : new Source.CoilShape.Polygon(points(((Source.CoilShape.Polygon) c.shape()).vertices(), f));
-            return new Source.SourceCoil(c.id(), c.body(), shape, c.turns(), c.planeZM(), c.drive());
-        }
-        return s;
+        return s.match(new Source.Cases<>() {
+            @Override
+            public Source patch(Source.FieldPatch p) {
+                return new Source.FieldPatch(p.id(), p.body(), points(p.outline(), f), p.bzT());
+            }
+
+            @Override
+            public Source uniform(Source.UniformField u) {
+                return u;
+            }
+
+            @Override
+            public Source block(Source.BlockMagnet m) {
+                return new Source.BlockMagnet(m.id(), m.body(), f.apply(m.center()), m.sizeXM(), m.sizeYM(),
+                        m.heightM(), m.angleRad() + turnRad, m.standoffM(), m.side(), m.remanenceT(),
+                        m.magnetization());
+            }
+
+            @Override
+            public Source cylinder(Source.CylinderMagnet m) {
+                return new Source.CylinderMagnet(m.id(), m.body(), f.apply(m.center()), m.radiusM(), m.heightM(),
+                        m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
+            }
+
+            @Override
+            public Source coil(Source.SourceCoil c) {
+                Source.CoilShape shape = c.shape().match(new Source.CoilShape.Cases<>() {
+                    @Override
+                    public Source.CoilShape polygon(Source.CoilShape.Polygon polygon) {
+                        return new Source.CoilShape.Polygon(points(polygon.vertices(), f));
+                    }
+
+                    @Override
+                    public Source.CoilShape circle(Source.CoilShape.Circle circle) {
+                        return new Source.CoilShape.Circle(f.apply(circle.center()), circle.radiusM());
+                    }
+                });
+                return new Source.SourceCoil(c.id(), c.body(), shape, c.turns(), c.planeZM(), c.drive());
+            }
+        });
+    }
+
+    /**
+     * Whether the source has a place in the plane (an outline or a centre) that can be picked,
+     * framed, moved and copied; a uniform field fills the whole plane instead and is edited with
+     * the scene.
+     */
+    public static boolean hasPlace(Source s) {
+        return s.match(new Source.Cases<>() {
+            @Override
+            public Boolean patch(Source.FieldPatch patch) {
+                return true;
+            }
+
+            @Override
+            public Boolean uniform(Source.UniformField uniform) {
+                return false;
+            }
+
+            @Override
+            public Boolean block(Source.BlockMagnet block) {
+                return true;
+            }
+
+            @Override
+            public Boolean cylinder(Source.CylinderMagnet cylinder) {
+                return true;
+            }
+
+            @Override
+            public Boolean coil(Source.SourceCoil coil) {
+                return true;
+            }
+        });
     }
 
     public static Conductor map(Conductor c, UnaryOperator<Vec2> f) {
@@ -50,27 +109,29 @@ public final class Shapes {
     }
 
     public static Conductor withVertices(Conductor c, List<Conductor.Vertex> vs) {
-        if (c instanceof Conductor.Loop l) {
-            return new Conductor.Loop(l.id(), l.body(), vs, l.turns(), l.wire(), l.open(), l.loadOhm(),
-                    l.temperatureC());
-        }
-        return new Conductor.Wire(c.id(), c.body(), vs);
+        return rebuild(c, c.id(), c.body(), vs);
     }
 
     public static Conductor withId(Conductor c, String id) {
-        if (c instanceof Conductor.Loop l) {
-            return new Conductor.Loop(id, l.body(), l.vertices(), l.turns(), l.wire(), l.open(), l.loadOhm(),
-                    l.temperatureC());
-        }
-        return new Conductor.Wire(id, c.body(), c.vertices());
+        return rebuild(c, id, c.body(), c.vertices());
     }
 
     public static Conductor withBody(Conductor c, String body) {
-        if (c instanceof Conductor.Loop l) {
-            return new Conductor.Loop(l.id(), body, l.vertices(), l.turns(), l.wire(), l.open(), l.loadOhm(),
-                    l.temperatureC());
-        }
-        return new Conductor.Wire(c.id(), body, c.vertices());
+        return rebuild(c, c.id(), body, c.vertices());
+    }
+
+    private static Conductor rebuild(Conductor c, String id, String body, List<Conductor.Vertex> vs) {
+        return c.match(new Conductor.Cases<>() {
+            @Override
+            public Conductor wire(Conductor.Wire wire) {
+                return new Conductor.Wire(id, body, vs);
+            }
+
+            @Override
+            public Conductor loop(Conductor.Loop l) {
+                return new Conductor.Loop(id, body, vs, l.turns(), l.wire(), l.open(), l.loadOhm(), l.temperatureC());
+            }
+        });
     }
 
     public static Source withId(Source s, String id) {
@@ -82,25 +143,37 @@ public final class Shapes {
     }
 
     private static Source rebuild(Source s, String id, String body) {
-        if (s instanceof Source.FieldPatch p) {
-            return new Source.FieldPatch(id, body, p.outline(), p.bzT());
-        }
-        if (s instanceof Source.BlockMagnet m) {
-            return new Source.BlockMagnet(id, body, m.center(), m.sizeXM(), m.sizeYM(), m.heightM(), m.angleRad(),
-                    m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
-        }
-        if (s instanceof Source.CylinderMagnet m) {
-            return new Source.CylinderMagnet(id, body, m.center(), m.radiusM(), m.heightM(), m.standoffM(), m.side(),
-                    m.remanenceT(), m.magnetization());
-        }
-        if (s instanceof Source.SourceCoil c) {
-            return new Source.SourceCoil(id, body, c.shape(), c.turns(), c.planeZM(), c.drive());
-        }
-        Source.UniformField u = (Source.UniformField) s;
-        if (!body.equals(u.body())) {
-            throw new IllegalArgumentException("a uniform field belongs to the fixed frame");
-        }
-        return new Source.UniformField(id, u.bzT());
+        return s.match(new Source.Cases<>() {
+            @Override
+            public Source patch(Source.FieldPatch p) {
+                return new Source.FieldPatch(id, body, p.outline(), p.bzT());
+            }
+
+            @Override
+            public Source uniform(Source.UniformField u) {
+                if (!body.equals(u.body())) {
+                    throw new IllegalArgumentException("a uniform field belongs to the fixed frame");
+                }
+                return new Source.UniformField(id, u.bzT());
+            }
+
+            @Override
+            public Source block(Source.BlockMagnet m) {
+                return new Source.BlockMagnet(id, body, m.center(), m.sizeXM(), m.sizeYM(), m.heightM(),
+                        m.angleRad(), m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
+            }
+
+            @Override
+            public Source cylinder(Source.CylinderMagnet m) {
+                return new Source.CylinderMagnet(id, body, m.center(), m.radiusM(), m.heightM(), m.standoffM(),
+                        m.side(), m.remanenceT(), m.magnetization());
+            }
+
+            @Override
+            public Source coil(Source.SourceCoil c) {
+                return new Source.SourceCoil(id, body, c.shape(), c.turns(), c.planeZM(), c.drive());
+            }
+        });
     }
 
     private static List<Vec2> points(List<Vec2> pts, UnaryOperator<Vec2> f) {

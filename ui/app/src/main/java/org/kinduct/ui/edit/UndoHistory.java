@@ -94,8 +94,19 @@ public final class UndoHistory {
         savedIndex = -1;
     }
 
-    public void markSaved() {
-        savedIndex = index;
+    /**
+     * Marks the entry holding {@code saved}, the very scene written, as the state on file: a save
+     * finishes after its write, when the user may have edited on meanwhile. False, and nothing
+     * marked, when no entry holds it any more (the history was reset or dropped it).
+     */
+    public boolean markSaved(Scene saved) {
+        for (int i = entries.size() - 1; i >= 0; i--) {
+            if (entries.get(i).scene() == saved) {
+                savedIndex = i;
+                return true;
+            }
+        }
+        return false;
     }
 
     public boolean isDirty() {

@@ -35,7 +35,7 @@ class DemoBrowserTest {
     @Start
     void start(Stage stage) {
         vm = new EditorViewModel(Scene.empty("test"), Runnable::run, Platform::runLater);
-        EditorWindow window = new EditorWindow(stage, vm, new JsonSceneStore(), new AppHome(home));
+        EditorWindow window = new EditorWindow(stage, vm, new JsonSceneStore(), new AppHome(home), Runnable::run);
         stage.setScene(new javafx.scene.Scene(window.root(), 1100, 760));
         stage.show();
     }

@@ -10,7 +10,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.TimeUnit;
+import java.util.function.Supplier;
 import javafx.application.Platform;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
@@ -51,14 +53,14 @@ class EditorWindowTest {
     @Start
     void start(Stage stage) {
         vm = new EditorViewModel(Scene.empty("test"), Runnable::run, Platform::runLater);
-        window = new EditorWindow(stage, vm, new JsonSceneStore(), new AppHome(home));
+        window = new EditorWindow(stage, vm, new JsonSceneStore(), new AppHome(home), Runnable::run);
         stage.setScene(new javafx.scene.Scene(window.root(), 1100, 760));
         stage.show();
-        vm.viewProperty().set(new ViewTransform(0, 0, 2000, window.canvas().getWidth(), window.canvas().getHeight()));
+        vm.view().viewProperty().set(new ViewTransform(0, 0, 2000, window.canvas().getWidth(), window.canvas().getHeight()));
     }
 
     private javafx.geometry.Point2D screenOf(FxRobot robot, double x, double y) {
-        ViewTransform v = vm.viewProperty().get();
+        ViewTransform v = vm.view().view();
         return robot.point(window.canvas()).atOffset(new javafx.geometry.Point2D(
                 v.screenX(x) - window.canvas().getWidth() / 2, v.screenY(y) - window.canvas().getHeight() / 2)).query();
     }
@@ -92,28 +94,28 @@ class EditorWindowTest {
         WaitForAsyncUtils.waitForFxEvents();
         assertEquals(1, vm.scene().conductors().size());
         assertEquals(3, vm.scene().conductors().get(0).vertices().size());
-        assertTrue(vm.selection().contains(vm.scene().conductors().get(0).id()), "the new loop is selected");
+        assertTrue(vm.document().selection().contains(vm.scene().conductors().get(0).id()), "the new loop is selected");
     }
 
     @Test
     void draggingASelectedObjectMovesItAsOneUndoableEdit(FxRobot robot) {
-        interact(() -> vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("w", Body.FIXED,
+        interact(() -> vm.document().apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("w", Body.FIXED,
                 List.of(Conductor.Vertex.at(-0.05, 0), Conductor.Vertex.at(0.05, 0))))));
         robot.drag(screenOf(robot, 0.01, 0), MouseButton.PRIMARY).dropTo(screenOf(robot, 0.03, 0.02));
         WaitForAsyncUtils.waitForFxEvents();
         Vec2 first = vm.scene().conductor("w").orElseThrow().vertices().get(0).at();
         assertTrue(first.eq(new Vec2(-0.03, 0.02), 1e-3), "moved by the drag: " + first);
-        interact(vm::undo);
+        interact(vm.document()::undo);
         assertTrue(vm.scene().conductor("w").orElseThrow().vertices().get(0).at().eq(new Vec2(-0.05, 0), 0));
     }
 
     @Test
     void draggingAVertexHandleOfTheSelectedLoopReshapesIt(FxRobot robot) {
         interact(() -> {
-            vm.apply("add", s -> SceneEdits.addConductor(s, Conductor.Loop.simple("sq", Body.FIXED, List.of(
+            vm.document().apply("add", s -> SceneEdits.addConductor(s, Conductor.Loop.simple("sq", Body.FIXED, List.of(
                     Conductor.Vertex.at(0, 0), Conductor.Vertex.at(0.04, 0), Conductor.Vertex.at(0.04, 0.04),
                     Conductor.Vertex.at(0, 0.04)), org.kinduct.ui.edit.ShapeFactory.DEFAULT_WIRE)));
-            vm.select(java.util.Set.of("sq"));
+            vm.document().select(java.util.Set.of("sq"));
         });
         robot.drag(screenOf(robot, 0.04, 0.04), MouseButton.PRIMARY).dropTo(screenOf(robot, 0.06, 0.05));
         WaitForAsyncUtils.waitForFxEvents();
@@ -126,10 +128,10 @@ class EditorWindowTest {
     void wheelZoomKeepsThePointUnderTheCursor(FxRobot robot) {
         javafx.geometry.Point2D at = screenOf(robot, 0.03, -0.02);
         robot.moveTo(at);
-        double before = vm.viewProperty().get().pxPerM();
+        double before = vm.view().view().pxPerM();
         robot.scroll(3, javafx.geometry.VerticalDirection.UP);
         WaitForAsyncUtils.waitForFxEvents();
-        ViewTransform v = vm.viewProperty().get();
+        ViewTransform v = vm.view().view();
         assertTrue(v.pxPerM() != before, "the wheel zooms");
         javafx.geometry.Point2D local = window.canvas().screenToLocal(at);
         assertEquals(0.03, v.sceneX(local.getX()), 2 / v.pxPerM());
@@ -158,12 +160,12 @@ class EditorWindowTest {
         Scene drop = Scene.empty("drop").withBodies(List.of(cage)).withConductors(List.of(loop))
                 .withGravity(new Vec2(0, -9.81)).withTime(new org.kinduct.scene.TimeSpan(0, 1, 0.01));
         interact(() -> {
-            vm.load(drop, null);
-            window.canvas().zoomToFit();
+            vm.load(drop, null, false);
+            vm.zoomToFit();
         });
-        WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> vm.currentResult().map(org.kinduct.solver.run.RunResult::hasFreeBodies).orElse(false));
+        WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> vm.results().currentResult().map(org.kinduct.solver.run.RunResult::hasFreeBodies).orElse(false));
         WaitForAsyncUtils.waitForFxEvents();
-        ViewTransform v = vm.viewProperty().get();
+        ViewTransform v = vm.view().view();
         assertTrue(v.minY() < -4.8 && v.maxY() > 0.1, "view " + v.minY() + " … " + v.maxY() + " m holds the fall");
     }
 
@@ -184,24 +186,24 @@ class EditorWindowTest {
     @Test
     void rubberBandSelectsEverythingInsideIt(FxRobot robot) {
         interact(() -> {
-            vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("a", Body.FIXED,
+            vm.document().apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("a", Body.FIXED,
                     List.of(Conductor.Vertex.at(-0.02, 0), Conductor.Vertex.at(0, 0.01)))));
-            vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("b", Body.FIXED,
+            vm.document().apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("b", Body.FIXED,
                     List.of(Conductor.Vertex.at(0.01, -0.01), Conductor.Vertex.at(0.02, 0.01)))));
-            vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("outside", Body.FIXED,
+            vm.document().apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("outside", Body.FIXED,
                     List.of(Conductor.Vertex.at(0.08, 0), Conductor.Vertex.at(0.09, 0)))));
         });
         robot.drag(screenOf(robot, -0.03, 0.03), MouseButton.PRIMARY).dropTo(screenOf(robot, 0.03, -0.03));
         WaitForAsyncUtils.waitForFxEvents();
-        assertEquals(java.util.Set.of("a", "b"), vm.selection());
+        assertEquals(java.util.Set.of("a", "b"), vm.document().selection());
     }
 
     @Test
     void motionIsSetInThePropertiesPanel(FxRobot robot) {
         interact(() -> {
-            vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("rod", Body.FIXED,
+            vm.document().apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("rod", Body.FIXED,
                     List.of(Conductor.Vertex.at(0, -0.02), Conductor.Vertex.at(0, 0.02)))));
-            vm.select(java.util.Set.of("rod"));
+            vm.document().select(java.util.Set.of("rod"));
         });
         ComboBox<String> motion = robot.lookup("#prop-motion").queryComboBox();
         interact(() -> motion.getSelectionModel().select("glide"));
@@ -218,7 +220,7 @@ class EditorWindowTest {
 
     @Test
     void invalidPropertyInputIsMarkedInlineAndChangesNothing(FxRobot robot) {
-        interact(() -> vm.select(java.util.Set.of()));
+        interact(() -> vm.document().select(java.util.Set.of()));
         Scene before = vm.scene();
         TextField end = robot.lookup("#prop-end-time").queryAs(TextField.class);
         robot.doubleClickOn(end);
@@ -233,14 +235,12 @@ class EditorWindowTest {
 
     @Test
     void malformedFileShowsWhereItIsWrongAndKeepsTheCurrentScene(FxRobot robot) throws Exception {
-        interact(() -> vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("keep", Body.FIXED,
+        interact(() -> vm.document().apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("keep", Body.FIXED,
                 List.of(Conductor.Vertex.at(0, 0), Conductor.Vertex.at(0.01, 0))))));
         Scene before = vm.scene();
         Path bad = home.resolve("bad.json");
         Files.writeString(bad, "{\n  \"format\": \"kinduct-scene\",\n  \"version\": 1,\n  \"bodies\": 7\n}\n");
-        boolean[] opened = {true};
-        interact(() -> opened[0] = window.open(bad));
-        assertFalse(opened[0]);
+        assertFalse(onFx(() -> window.files().open(bad)), "the malformed file is not opened");
         assertSame(before, vm.scene(), "the user's scene stays");
         TextArea details = robot.lookup("#error-details").queryAs(TextArea.class);
         // The reader names file, line and column, and the JSON path at fault.
@@ -249,27 +249,21 @@ class EditorWindowTest {
     }
 
     @Test
-    void savedFileOpensAgainUnchanged(FxRobot robot) {
-        interact(() -> vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("w", Body.FIXED,
+    void savedFileOpensAgainUnchanged(FxRobot robot) throws Exception {
+        interact(() -> vm.document().apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("w", Body.FIXED,
                 List.of(Conductor.Vertex.at(0, 0), Conductor.Vertex.at(0.012, 0.003))))));
         Path file = home.resolve("saved.json");
-        interact(() -> assertTrue(window.saveTo(file)));
-        assertFalse(vm.dirtyProperty().get());
+        assertTrue(onFx(() -> window.files().saveTo(file)));
+        assertFalse(vm.document().isDirty());
         Scene saved = vm.scene();
-        interact(() -> vm.load(Scene.empty("other"), null));
-        interact(() -> assertTrue(window.open(file)));
+        interact(() -> vm.load(Scene.empty("other"), null, false));
+        assertTrue(onFx(() -> window.files().open(file)));
         assertEquals(saved, vm.scene());
     }
 
-    @Test
-    void autosaveKeepsUnsavedWorkAndACleanExitRemovesIt(FxRobot robot) throws Exception {
-        interact(() -> vm.apply("add", s -> SceneEdits.addConductor(s, new Conductor.Wire("unsaved", Body.FIXED,
-                List.of(Conductor.Vertex.at(0, 0), Conductor.Vertex.at(0.02, 0))))));
-        interact(window::autosave);
-        Path auto = new AppHome(home).autosave();
-        assertEquals(vm.scene(), new JsonSceneStore().read(auto), "the autosave holds the current scene");
-        interact(window::clearAutosave);
-        assertFalse(Files.exists(auto));
+    /** Starts a file action on the UI thread and waits for its outcome. */
+    private static boolean onFx(Supplier<CompletableFuture<Boolean>> action) throws Exception {
+        return WaitForAsyncUtils.asyncFx(action::get).get(20, TimeUnit.SECONDS).get(20, TimeUnit.SECONDS);
     }
 
     private static void interact(Runnable r) {

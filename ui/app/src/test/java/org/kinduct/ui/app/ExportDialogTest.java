@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
 import javafx.application.Platform;
 import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.control.DialogPane;
@@ -42,16 +43,17 @@ class ExportDialogTest {
         stage.show();
     }
 
-    private void open() {
-        Platform.runLater(() -> ExportDialog.show(stage, vm, home));
-        WaitForAsyncUtils.waitForFxEvents();
+    /** Opens the dialog; it shows once the remembered choices are read. */
+    private void open(FxRobot robot) throws TimeoutException {
+        Platform.runLater(() -> ExportDialog.show(stage, vm, home, Runnable::run));
+        WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> robot.lookup("#export-dialog").tryQuery().isPresent());
     }
 
     @Test
     void dialogStartsFromTheRememberedChoices(FxRobot robot) throws Exception {
         new ExportPreferences(ExportPreferences.Format.SVG, 2222, 150, true, null).save(home);
 
-        open();
+        open(robot);
 
         assertEquals(ExportPreferences.Format.SVG, robot.lookup("#export-format").queryAs(ComboBox.class).getValue());
         assertEquals("2222", robot.lookup("#export-width").queryAs(TextField.class).getText());
@@ -64,7 +66,7 @@ class ExportDialogTest {
 
     @Test
     void invalidWidthKeepsTheDialogOpenAndSaysWhy(FxRobot robot) throws Exception {
-        open();
+        open(robot);
         TextField width = robot.lookup("#export-width").queryAs(TextField.class);
         WaitForAsyncUtils.asyncFx(() -> width.setText("wide")).get(10, TimeUnit.SECONDS);
 

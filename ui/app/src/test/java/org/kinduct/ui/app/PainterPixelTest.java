@@ -100,8 +100,8 @@ class PainterPixelTest {
     }
 
     private static ConductorState wireState(List<Vec2> pts, Terminal plus) {
-        return new ConductorState("w", ConductorState.Kind.WIRE, pts, Double.NaN, Double.NaN, Double.NaN, 1, 1, 0,
-                plus, 0, Circulation.NONE, Vec2.ZERO, Double.NaN, true);
+        return new ConductorState("w", ConductorState.Kind.WIRE, pts, Double.NaN, Double.NaN, Double.NaN, 1, 1, 0, 0,
+                plus, 0, Circulation.NONE, Vec2.ZERO, Double.NaN, Double.NaN, true);
     }
 
     @ParameterizedTest(name = "from a backdrop: {0}")
@@ -143,8 +143,8 @@ class PainterPixelTest {
         int cy = (int) VIEW.screenY(-0.05);
         for (Circulation sense : List.of(Circulation.CCW, Circulation.CW)) {
             double current = sense == Circulation.CCW ? 0.5 : -0.5;
-            ConductorState st = new ConductorState("l", ConductorState.Kind.LOOP, pts, 1e-3, 1e-3, -1, -1, -1, 0,
-                    Terminal.NONE, current, sense, Vec2.ZERO, 2, true);
+            ConductorState st = new ConductorState("l", ConductorState.Kind.LOOP, pts, 1e-3, 1e-3, -1, -1, -1, 0, 0,
+                    Terminal.NONE, current, sense, Vec2.ZERO, 2, Double.NaN, true);
             PixelReader px = render(scene, new Snapshot(0, List.of(st)), "pixel-loop-" + sense);
             // ⊙ has a filled centre dot; ⊗ has a cross whose arms pass 3 px diagonally off the centre.
             int centre = px.getArgb(cx, cy);

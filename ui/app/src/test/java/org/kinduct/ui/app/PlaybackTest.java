@@ -22,7 +22,7 @@ import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Circulation;
 import org.kinduct.solver.ConductorState;
-import org.kinduct.solver.SceneSolver;
+import org.kinduct.solver.run.SceneRun;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.ShapeFactory;
@@ -69,28 +69,28 @@ class PlaybackTest {
     @Start
     void start(Stage stage) {
         vm = new EditorViewModel(enteringLoop(), Runnable::run, Platform::runLater);
-        window = new EditorWindow(stage, vm, new JsonSceneStore(), new AppHome(home));
+        window = new EditorWindow(stage, vm, new JsonSceneStore(), new AppHome(home), Runnable::run);
         stage.setScene(new javafx.scene.Scene(window.root(), 1100, 760));
         stage.show();
-        vm.viewProperty().set(new ViewTransform(0, 0, 2500, window.canvas().getWidth(), window.canvas().getHeight()));
+        vm.view().viewProperty().set(new ViewTransform(0, 0, 2500, window.canvas().getWidth(), window.canvas().getHeight()));
     }
 
     @Test
     void playingShowsTheSolverValuesAndTheInducedFieldOpposingTheChange(FxRobot robot) throws Exception {
-        interact(() -> vm.speedProperty().set(0.1));
+        interact(() -> vm.clock().speedProperty().set(0.1));
         robot.clickOn("#play");
-        WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, () -> vm.timeProperty().get() > 0.2);
+        WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, () -> vm.clock().time() > 0.2);
         robot.clickOn("#play");
         WaitForAsyncUtils.waitForFxEvents();
-        double t = vm.timeProperty().get();
+        double t = vm.clock().time();
         assertTrue(t > 0.1 && t < 0.5, "paused while one edge is inside: t = " + t);
         // Snapshots are solved off the UI thread; the one for the paused time follows shortly.
         WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS,
-                () -> vm.snapshotProperty().get() != null && vm.snapshotProperty().get().tS() == t);
+                () -> vm.results().snapshot() != null && vm.results().snapshot().tS() == t);
 
-        Snapshot expected = new SceneSolver(vm.scene()).at(t);
+        Snapshot expected = new SceneRun(vm.scene()).instant(t);
         ConductorState st = expected.conductor("loop").orElseThrow();
-        assertEquals(expected, vm.snapshotProperty().get(), "the editor shows the solver's snapshot for t");
+        assertEquals(expected, vm.results().snapshot(), "the editor shows the run's instant t, as solve --at does");
         // Rod or edge of length w moving at v across B: |EMF| = B·w·v (Griffiths, Introduction to
         // Electrodynamics, ch. 7). Flux into the screen grows, so the induced current runs
         // counter-clockwise, making its own field out of the screen (Lenz).
@@ -108,7 +108,7 @@ class PlaybackTest {
             window.canvas().paint();
             return window.canvas().snapshot(null, null).getPixelReader();
         }).get(20, TimeUnit.SECONDS);
-        ViewTransform v = vm.viewProperty().get();
+        ViewTransform v = vm.view().view();
         int argb = px.getArgb((int) Math.round(v.screenX(centre.x())), (int) Math.round(v.screenY(centre.y())));
         double lum = 0.299 * ((argb >> 16) & 0xFF) + 0.587 * ((argb >> 8) & 0xFF) + 0.114 * (argb & 0xFF);
         assertTrue(lum < 90, "⊙ dot at the loop centre, got " + Integer.toHexString(argb));

@@ -5,13 +5,12 @@ import static java.util.concurrent.TimeUnit.SECONDS;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
-import java.util.Optional;
 import java.util.Queue;
 import java.util.concurrent.BlockingQueue;
 import java.util.concurrent.CountDownLatch;
@@ -21,18 +20,15 @@ import java.util.concurrent.LinkedBlockingQueue;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.BooleanSupplier;
-import java.util.function.Function;
+import java.util.function.BiFunction;
 import java.util.function.LongSupplier;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
-import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
-import org.kinduct.solver.Snapshot;
-import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.dynamics.RunMonitor;
-import org.kinduct.render.field.Evaluators;
-import org.kinduct.render.field.SceneEvaluator;
+import org.kinduct.solver.run.RunResult;
+import org.kinduct.solver.run.SceneRun;
 
 /** The editor's simulation of free bodies: an outdated run stops at once, its progress reaches the status line. */
 class EditorViewModelSimulationTest {
@@ -42,12 +38,15 @@ class EditorViewModelSimulationTest {
     private static final double EDIT_AT = 0.1;
     /**
      * Polls of the outdated run's monitor after the edit: the run's next one, which stops it, and
-     * one by the other job that was waiting for the same run, before it would start it again.
+     * one by the job that was waiting for the same run's instant, which starts it again and is
+     * stopped at its first poll. (The map request waiting behind them is replaced by the new
+     * revision's before it starts.)
      */
     private static final int POLLS_AFTER_EDIT_MAX = 2;
-    private static final Pattern PROGRESS = Pattern.compile("Simulating the free bodies… (\\d+) %");
+    private static final Pattern PROGRESS = Pattern.compile("Running the coupled simulation… (\\d+) %");
+    private static final String DONE = "Coupled run done";
 
-    /** Watches the runs of one scene's evaluator between the editor and the simulation; holds the run at {@code holdAt} until the edit. */
+    /** Watches the runs of one scene between the editor and the simulation; holds the run at {@code holdAt} until the edit. */
     private static final class Watched {
         final Scene scene;
         final double holdAt;
@@ -93,48 +92,10 @@ class EditorViewModelSimulationTest {
         }
     }
 
-    /** The editor's evaluators, with the monitor the editor attaches to {@code watched}'s scene wrapped by it. */
-    private static Function<Scene, SceneEvaluator> watching(Watched watched) {
-        Function<Scene, SceneEvaluator> solver = Evaluators.solver();
-        return scene -> {
-            SceneEvaluator ev = solver.apply(scene);
-            return scene.equals(watched.scene) ? new SceneEvaluator() {
-                @Override
-                public Snapshot at(double tS) {
-                    return ev.at(tS);
-                }
-
-                @Override
-                public List<Snapshot> series(double t0S, double t1S, double dtS) {
-                    return ev.series(t0S, t1S, dtS);
-                }
-
-                @Override
-                public BzField fieldAt(double tS) {
-                    return ev.fieldAt(tS);
-                }
-
-                @Override
-                public BzField fieldOf(double tS, java.util.Set<String> sourceIds) {
-                    return ev.fieldOf(tS, sourceIds);
-                }
-
-                @Override
-                public Map<String, Pose> posesAt(double tS) {
-                    return ev.posesAt(tS);
-                }
-
-                @Override
-                public Optional<EnergyAudit> audit() {
-                    return ev.audit();
-                }
-
-                @Override
-                public void monitor(RunMonitor monitor) {
-                    ev.monitor(watched.around(monitor));
-                }
-            } : ev;
-        };
+    /** The editor's runs, with the monitor the editor attaches to {@code watched}'s scene wrapped by it. */
+    private static BiFunction<Scene, RunMonitor, SceneRun> watching(Watched watched) {
+        return (scene, monitor) -> EditorViewModel.run(scene, scene.equals(watched.scene) ? watched.around(monitor)
+                : monitor);
     }
 
     @Test
@@ -144,24 +105,25 @@ class EditorViewModelSimulationTest {
         BlockingQueue<Runnable> uiQueue = new LinkedBlockingQueue<>();
         ExecutorService work = Executors.newFixedThreadPool(2);
         try {
-            EditorViewModel vm = new EditorViewModel(slow, watching(watched), work, uiQueue::add);
+            EditorViewModel vm = new EditorViewModel(slow, watching(watched), work, uiQueue::add, System::nanoTime);
             List<String> statuses = new ArrayList<>();
             vm.statusProperty().addListener((obs, old, now) -> statuses.add(now));
             assertTrue(watched.reached.await(WAIT_S, SECONDS), "the first run did not reach " + EDIT_AT);
 
-            vm.apply("Delete the loop", s -> s.withConductors(List.of()));
+            vm.document().apply("Delete the loop", s -> s.withConductors(List.of()));
             watched.edited.countDown();
-            drainUntil(uiQueue, () -> !vm.simulatingProperty().get());
+            drainUntil(uiQueue, () -> vm.results().currentResult().isPresent());
 
             assertTrue(watched.pollsAfterEdit.get() >= 1, "the outdated run was not asked again");
             assertTrue(watched.pollsAfterEdit.get() <= POLLS_AFTER_EDIT_MAX, "polls after the edit: "
                     + watched.pollsAfterEdit.get());
             assertEquals(0, watched.reportsAfterEdit.get(), "the outdated run went on");
             assertTrue(watched.furthest < 1, "the outdated run finished");
-            List<Snapshot> series = vm.seriesProperty().get();
-            assertFalse(series.isEmpty(), "no result for the new revision");
-            assertTrue(series.get(0).conductor("loop").isEmpty(), "the result is the new revision's, without the loop");
-            assertTrue(vm.statusProperty().get().startsWith("Free bodies simulated"), vm.statusProperty().get());
+            RunResult result = vm.results().currentResult().orElseThrow();
+            assertSame(vm.scene(), result.scene(), "the result is the new revision's");
+            assertTrue(result.samples().get(0).conductor("loop").isEmpty(), "without the loop");
+            assertFalse(vm.results().simulatingProperty().get());
+            assertTrue(vm.statusProperty().get().startsWith(DONE), vm.statusProperty().get());
             assertTrue(statuses.stream().noneMatch(s -> s.contains("cancel")), statuses.toString());
         } finally {
             work.shutdownNow();
@@ -174,10 +136,10 @@ class EditorViewModelSimulationTest {
         long tickNs = 20_000_000L;
         LongSupplier clock = () -> readings.incrementAndGet() * tickNs;
         Queue<Runnable> uiQueue = new ArrayDeque<>();
-        EditorViewModel vm = new EditorViewModel(Fixtures.springCart(false), Evaluators.solver(), Runnable::run,
+        EditorViewModel vm = new EditorViewModel(Fixtures.springCart(false), EditorViewModel::run, Runnable::run,
                 uiQueue::add, clock);
         // The run is done (same-thread work), but its reports wait on the UI executor.
-        assertEquals("Simulating the free bodies…", vm.statusProperty().get());
+        assertTrue(vm.results().currentResult().isEmpty());
         List<String> statuses = new ArrayList<>();
         vm.statusProperty().addListener((obs, old, now) -> statuses.add(now));
 
@@ -194,8 +156,8 @@ class EditorViewModelSimulationTest {
         // One report per RunWatch.INTERVAL_NS of the clock at most, none in the first interval.
         assertTrue(percents.size() <= readings.get() * tickNs / RunWatch.INTERVAL_NS,
                 percents.size() + " reports in " + readings.get() * tickNs * 1e-9 + " s");
-        assertTrue(vm.statusProperty().get().startsWith("Free bodies simulated"), vm.statusProperty().get());
-        assertEquals(percents.get(percents.size() - 1) / 100.0, vm.simulationProgressProperty().get());
+        assertTrue(vm.statusProperty().get().startsWith(DONE), vm.statusProperty().get());
+        assertEquals(percents.get(percents.size() - 1) / 100.0, vm.results().simulationProgressProperty().get());
     }
 
     @Test
@@ -204,7 +166,7 @@ class EditorViewModelSimulationTest {
         LongSupplier clock = () -> readings.incrementAndGet() * 1000;
         List<String> statuses = new ArrayList<>();
         Queue<Runnable> uiQueue = new ArrayDeque<>();
-        EditorViewModel vm = new EditorViewModel(Fixtures.springCart(false), Evaluators.solver(), Runnable::run,
+        EditorViewModel vm = new EditorViewModel(Fixtures.springCart(false), EditorViewModel::run, Runnable::run,
                 uiQueue::add, clock);
         vm.statusProperty().addListener((obs, old, now) -> statuses.add(now));
 
@@ -214,8 +176,8 @@ class EditorViewModelSimulationTest {
 
         assertTrue(readings.get() * 1000 < RunWatch.INTERVAL_NS, "the run took " + readings.get() + " readings");
         assertTrue(percents(statuses).isEmpty(), statuses.toString());
-        assertEquals(-1, vm.simulationProgressProperty().get());
-        assertTrue(vm.statusProperty().get().startsWith("Free bodies simulated"), vm.statusProperty().get());
+        assertEquals(-1, vm.results().simulationProgressProperty().get());
+        assertTrue(vm.statusProperty().get().startsWith(DONE), vm.statusProperty().get());
     }
 
     private static List<Integer> percents(List<String> statuses) {

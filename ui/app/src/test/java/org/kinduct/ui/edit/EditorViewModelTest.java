@@ -6,126 +6,234 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Queue;
 import java.util.Set;
 import java.util.concurrent.Executor;
+import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
+import org.kinduct.render.paint.FieldRaster;
+import org.kinduct.render.view.ViewTransform;
+import org.kinduct.report.InductanceSummary;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
-import org.kinduct.solver.Snapshot;
-import org.kinduct.render.field.SceneEvaluator;
+import org.kinduct.solver.dynamics.RunMonitor;
+import org.kinduct.solver.run.RunResult;
+import org.kinduct.solver.run.SceneRun;
 
+/** The coordinator and its parts on small real scenes: editing, time, revisions, and who waits for what. */
 class EditorViewModelTest {
 
     private static final double TIME_TOL = 1e-12;
     private static final Executor SAME_THREAD = Runnable::run;
-
-    /** Field-free evaluator: these tests are about editing state, not numbers. */
-    private static SceneEvaluator quiet(Scene s) {
-        return new SceneEvaluator() {
-            @Override
-            public Snapshot at(double tS) {
-                return new Snapshot(tS, List.of());
-            }
-
-            @Override
-            public List<Snapshot> series(double t0S, double t1S, double dtS) {
-                return List.of(at(t0S), at(t1S));
-            }
-
-            @Override
-            public BzField fieldAt(double tS) {
-                return (x, y) -> 0;
-            }
-
-            @Override
-            public BzField fieldOf(double tS, java.util.Set<String> sourceIds) {
-                return (x, y) -> 0;
-            }
-        };
-    }
+    /** A small view keeps the field maps of these tests cheap. */
+    private static final ViewTransform SMALL_VIEW = new ViewTransform(0.05, 0, 1000, 80, 60);
 
     private static EditorViewModel vm(Scene s, Executor work) {
-        return new EditorViewModel(s, EditorViewModelTest::quiet, work, SAME_THREAD);
+        EditorViewModel vm = new EditorViewModel(s, work, SAME_THREAD);
+        vm.view().viewProperty().set(SMALL_VIEW);
+        return vm;
+    }
+
+    private static void drain(Queue<Runnable> jobs) {
+        for (Runnable r; (r = jobs.poll()) != null; ) {
+            r.run();
+        }
     }
 
     @Test
     void rejectedEditKeepsTheSceneAndSaysWhy() {
         EditorViewModel vm = vm(Fixtures.loopAndMagnet(), SAME_THREAD);
         Scene before = vm.scene();
-        boolean applied = vm.apply("Add coil", s -> SceneEdits.addSource(s,
+        boolean applied = vm.document().apply("Add coil", s -> SceneEdits.addSource(s,
                 new Source.UniformField("loop", 0.1)));
         assertFalse(applied);
         assertSame(before, vm.scene());
         assertTrue(vm.statusProperty().get().contains("used twice"), vm.statusProperty().get());
-        assertFalse(vm.canUndoProperty().get());
+        assertFalse(vm.document().canUndoProperty().get());
     }
 
     @Test
     void editsCanBeUndoneAndRedoneAndMarkTheSceneDirty() {
         EditorViewModel vm = vm(Fixtures.loopAndMagnet(), SAME_THREAD);
         Scene before = vm.scene();
-        vm.apply("Delete", s -> SceneEdits.delete(s, Set.of("magnet")));
-        assertTrue(vm.dirtyProperty().get());
+        vm.document().apply("Delete", s -> SceneEdits.delete(s, Set.of("magnet")));
+        assertTrue(vm.document().isDirty());
         assertTrue(vm.scene().sources().isEmpty());
-        vm.undo();
+        vm.document().undo();
         assertEquals(before, vm.scene());
-        assertFalse(vm.dirtyProperty().get());
-        assertTrue(vm.canRedoProperty().get());
-        vm.redo();
+        assertFalse(vm.document().isDirty());
+        assertTrue(vm.document().canRedoProperty().get());
+        vm.document().redo();
         assertTrue(vm.scene().sources().isEmpty());
     }
 
     @Test
     void deletingASelectedObjectDropsItFromTheSelection() {
         EditorViewModel vm = vm(Fixtures.loopAndMagnet(), SAME_THREAD);
-        vm.select(Set.of("loop", "magnet"));
-        vm.apply("Delete", s -> SceneEdits.delete(s, Set.of("loop")));
-        assertEquals(Set.of("magnet"), vm.selection());
+        vm.document().select(Set.of("loop", "magnet"));
+        vm.document().apply("Delete", s -> SceneEdits.delete(s, Set.of("loop")));
+        assertEquals(Set.of("magnet"), vm.document().selection());
     }
 
     @Test
     void playbackWrapsAtTheEndOfTheTimeWindow() {
         Scene s = Fixtures.loopAndMagnet().withTime(new TimeSpan(0, 1, 0.01));
         EditorViewModel vm = vm(s, SAME_THREAD);
-        vm.speedProperty().set(2);
-        vm.advance(0.3);
-        assertEquals(0.6, vm.timeProperty().get(), TIME_TOL);
-        vm.advance(0.3);
-        assertEquals(0.2, vm.timeProperty().get(), TIME_TOL);
-        vm.step(3);
-        assertEquals(0.23, vm.timeProperty().get(), TIME_TOL);
-        vm.resetTime();
-        assertEquals(0, vm.timeProperty().get(), TIME_TOL);
+        vm.clock().speedProperty().set(2);
+        vm.clock().advance(0.3);
+        assertEquals(0.6, vm.clock().time(), TIME_TOL);
+        vm.clock().advance(0.3);
+        assertEquals(0.2, vm.clock().time(), TIME_TOL);
+        vm.clock().step(3);
+        assertEquals(0.23, vm.clock().time(), TIME_TOL);
+        vm.clock().resetTime();
+        assertEquals(0, vm.clock().time(), TIME_TOL);
+    }
+
+    @Test
+    void aShorterWindowBringsTheTimeIntoItAndShowsThatInstant() {
+        EditorViewModel vm = vm(Fixtures.loopAndMagnet(), SAME_THREAD);
+        vm.clock().seek(0.9);
+        vm.document().apply("End time", s -> s.withTime(new TimeSpan(0, 0.5, 0.01)));
+        assertEquals(0.5, vm.clock().time(), 0);
+        assertEquals(0.5, vm.results().snapshot().tS(), 0);
     }
 
     @Test
     void mapsComputedForAnEarlierSceneAreDropped() {
-        List<Runnable> queue = new ArrayList<>();
+        Queue<Runnable> queue = new ArrayDeque<>();
         EditorViewModel vm = vm(Fixtures.loopAndMagnet(), queue::add);
-        vm.apply("Delete", s -> SceneEdits.delete(s, Set.of("magnet")));
+        vm.document().apply("Delete", s -> SceneEdits.delete(s, Set.of("magnet")));
         // The first queued map was asked for the scene before the edit; run every queued job.
-        while (!queue.isEmpty()) {
-            queue.remove(0).run();
-        }
-        assertNotNull(vm.rasterProperty().get());
-        assertEquals(vm.revisionProperty().get(), vm.rasterProperty().get().revision());
-        org.kinduct.render.paint.FieldRaster stale = new org.kinduct.render.paint.FieldRaster(0, 0, 1, 1, 1, new float[1], 0,
-                vm.revisionProperty().get() - 1, 0);
-        vm.acceptRaster(stale);
-        assertEquals(vm.revisionProperty().get(), vm.rasterProperty().get().revision(), "the stale map is ignored");
+        drain(queue);
+        assertNotNull(vm.maps().raster());
+        assertEquals(vm.document().revision(), vm.maps().raster().revision());
+        FieldRaster stale = new FieldRaster(0, 0, 1, 1, 1, new float[1], 0, vm.document().revision() - 1, 0);
+        vm.maps().accept(stale);
+        assertEquals(vm.document().revision(), vm.maps().raster().revision(), "the stale map is ignored");
     }
 
     @Test
-    void loadingAFileClearsHistoryAndSelection() {
+    void loadingAFileClearsHistoryAndSelectionAndStartsItsTimeAfresh() {
         EditorViewModel vm = vm(Fixtures.loopAndMagnet(), SAME_THREAD);
-        vm.select(Set.of("loop"));
-        vm.apply("Delete", s -> SceneEdits.delete(s, Set.of("magnet")));
-        vm.load(Scene.empty("other"), null);
-        assertFalse(vm.canUndoProperty().get());
-        assertTrue(vm.selection().isEmpty());
-        assertFalse(vm.dirtyProperty().get());
+        vm.document().select(Set.of("loop"));
+        vm.document().apply("Delete", s -> SceneEdits.delete(s, Set.of("magnet")));
+        vm.clock().seek(0.4);
+        vm.clock().playingProperty().set(true);
+        vm.load(Scene.empty("other"), null, false);
+        assertFalse(vm.document().canUndoProperty().get());
+        assertTrue(vm.document().selection().isEmpty());
+        assertFalse(vm.document().isDirty());
+        assertFalse(vm.clock().isPlaying());
+        assertEquals(0, vm.clock().time(), 0);
+    }
+
+    @Test
+    void recoveredWorkLoadsUnsaved() {
+        EditorViewModel vm = vm(Fixtures.loopAndMagnet(), SAME_THREAD);
+        vm.load(Scene.empty("recovered"), null, true);
+        assertTrue(vm.document().isDirty());
+        assertFalse(vm.document().canUndoProperty().get());
+    }
+
+    @Test
+    void listenersOfTheSceneFindTheResultsAlreadyOnTheNewRevision() {
+        Queue<Runnable> work = new ArrayDeque<>();
+        EditorViewModel vm = vm(Fixtures.loopAndMagnet(), work::add);
+        drain(work);
+        assertTrue(vm.results().currentResult().isPresent());
+        List<Boolean> staleSeen = new ArrayList<>();
+        vm.document().sceneProperty().addListener(o -> staleSeen.add(vm.results().currentResult().isPresent()));
+
+        vm.document().apply("Delete", s -> SceneEdits.delete(s, Set.of("magnet")));
+
+        assertEquals(List.of(false), staleSeen, "the last scene's run is not offered as the new scene's");
+        drain(work);
+        RunResult current = vm.results().currentResult().orElseThrow();
+        assertSame(vm.scene(), current.scene(), "the new revision's run");
+    }
+
+    /** A view that rebuilds on every change of the scene, reading it through the document as the panels do. */
+    @Test
+    void everyEditReachesTheScenesListeners() {
+        EditorViewModel vm = vm(Fixtures.loopAndMagnet(), SAME_THREAD);
+        List<String> seen = new ArrayList<>();
+        vm.document().sceneProperty().addListener(o -> seen.add(vm.scene().name()));
+        vm.document().apply("Rename", s -> s.withText("one", ""));
+        vm.document().apply("Rename", s -> s.withText("two", ""));
+        vm.document().undo();
+        assertEquals(List.of("one", "two", "one"), seen);
+    }
+
+    @Test
+    void theShownInstantAndItsFieldAreTheRunsAndArriveTogether() {
+        Queue<Runnable> work = new ArrayDeque<>();
+        Scene s = Fixtures.glidingMagnet();
+        EditorViewModel vm = vm(s, work::add);
+        drain(work);
+        double t = s.time().t0S() + 30 * s.time().dtS();
+        double x = 0.06;
+        double y = 0.01;
+        vm.clock().seek(t);
+        assertEquals(s.time().t0S(), vm.results().snapshot().tS(), 0, "until t is solved, t0 is shown");
+        assertEquals(new SceneRun(s).fieldAt(s.time().t0S()).bz(x, y), vm.results().bzAt(x, y), 0,
+                "and the cursor reads t0's field with it");
+
+        drain(work);
+
+        SceneRun reference = new SceneRun(s);
+        // What solve --at and the export write for this state is what the editor shows.
+        assertEquals(reference.instant(t), vm.results().snapshot());
+        assertEquals(reference.result().at(t), vm.results().snapshot(), "the run's own sample of t");
+        assertEquals(reference.fieldAt(t).bz(x, y), vm.results().bzAt(x, y), 0);
+        assertEquals(InductanceSummary.of(reference.inductanceAtStart()),
+                vm.results().inductanceLineProperty().get());
+    }
+
+    /**
+     * Nothing the UI thread calls waits for the run: with a coupled scene and no worker ever
+     * running, every call returns, and the run's monitor is never polled on this thread. Once a
+     * worker runs the queued jobs, the run happens there.
+     */
+    @Test
+    void theCallingThreadNeverRunsOrWaitsForTheRun() throws InterruptedException {
+        Thread caller = Thread.currentThread();
+        AtomicInteger pollsHere = new AtomicInteger();
+        AtomicInteger pollsElsewhere = new AtomicInteger();
+        Queue<Runnable> work = new ArrayDeque<>();
+        EditorViewModel vm = new EditorViewModel(Fixtures.springCart(true), (scene, monitor) ->
+                EditorViewModel.run(scene, new RunMonitor() {
+                    @Override
+                    public boolean cancelled() {
+                        (Thread.currentThread() == caller ? pollsHere : pollsElsewhere).incrementAndGet();
+                        return monitor.cancelled();
+                    }
+                }), work::add, SAME_THREAD, System::nanoTime);
+        vm.view().viewProperty().set(SMALL_VIEW);
+
+        vm.clock().seek(0.2);
+        vm.clock().step(1);
+        vm.clock().playingProperty().set(true);
+        vm.clock().advance(0.1);
+        vm.clock().playingProperty().set(false);
+        vm.results().bzAt(0.1, 0);
+        vm.results().scalesNow();
+        vm.zoomToFit();
+        vm.seen();
+        vm.maps().request(FieldMaps.Quality.FINE);
+        vm.document().apply("Rename", s -> s.withText("renamed", ""));
+        vm.document().undo();
+        assertEquals(0, pollsHere.get(), "the UI thread ran the simulation");
+        assertTrue(vm.results().currentResult().isEmpty());
+
+        Thread worker = new Thread(() -> drain(work));
+        worker.start();
+        worker.join();
+        assertEquals(0, pollsHere.get());
+        assertTrue(pollsElsewhere.get() > 0, "the worker ran it");
     }
 }

@@ -29,6 +29,11 @@ final class Fixtures {
         return Scene.empty("fixture").withConductors(List.of(loop)).withSources(List.of(magnet));
     }
 
+    /** {@link #loopAndMagnet()} with the magnet gliding towards the loop at 50 mm/s, over 1 s. */
+    static Scene glidingMagnet() {
+        return SceneEdits.setMotion(loopAndMagnet(), "magnet", new Motion.Glide(new Vec2(-0.05, 0)), new Vec2(0.1, 0));
+    }
+
     /**
      * A magnet on a free cart held by a spring along x (anchor 100 mm to the left, rest length
      * 100 mm), starting at rest length with speed {@link #CART_V0_M_PER_S}, over 0.5 s; with the

@@ -1,6 +1,8 @@
 package org.kinduct.ui.edit;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotSame;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayDeque;
@@ -10,156 +12,162 @@ import java.util.Queue;
 import java.util.concurrent.Executor;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
+import org.kinduct.render.paint.FieldRaster;
+import org.kinduct.render.view.ViewTransform;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.solver.Snapshot;
-import org.kinduct.render.field.SceneEvaluator;
-import org.kinduct.render.paint.FieldRaster;
+import org.kinduct.solver.run.RunResult;
 
 /**
- * Playback pace: while playing, the view shows the precomputed time series instead of solving
- * every frame, and asks for field maps at a wall-clock pace, so painting keeps the cores.
+ * Playback pace: while playing, the view shows the run's samples instead of solving every frame,
+ * and asks for field maps at a wall-clock pace, so painting keeps the cores. A sample shown is
+ * the very object of the run's result; an exact solve makes a new snapshot at the exact time.
  */
 class PlaybackPacingTest {
 
     private static final Executor SAME_THREAD = Runnable::run;
     private static final TimeSpan WINDOW = new TimeSpan(0, 1, 0.01);
-
-    /** Counts exact solves; its series samples every {@code dtS} from t0. */
-    private static final class CountingEvaluator implements SceneEvaluator {
-        final AtomicInteger solves = new AtomicInteger();
-
-        @Override
-        public Snapshot at(double tS) {
-            solves.incrementAndGet();
-            return new Snapshot(tS, List.of());
-        }
-
-        @Override
-        public List<Snapshot> series(double t0S, double t1S, double dtS) {
-            List<Snapshot> out = new ArrayList<>();
-            for (int i = 0; t0S + i * dtS <= t1S + dtS * 1e-9; i++) {
-                out.add(new Snapshot(t0S + i * dtS, List.of()));
-            }
-            return out;
-        }
-
-        @Override
-        public BzField fieldAt(double tS) {
-            return (x, y) -> 0;
-        }
-
-        @Override
-        public BzField fieldOf(double tS, java.util.Set<String> sourceIds) {
-            return (x, y) -> 0;
-        }
-    }
+    private static final ViewTransform SMALL_VIEW = new ViewTransform(0.05, 0, 1000, 80, 60);
 
     private static Scene scene() {
-        return Fixtures.loopAndMagnet().withTime(WINDOW);
+        return Fixtures.glidingMagnet().withTime(WINDOW);
+    }
+
+    private static EditorViewModel vm(Scene s, Executor work, java.util.function.LongSupplier clockNs) {
+        EditorViewModel vm = new EditorViewModel(s, EditorViewModel::run, work, SAME_THREAD, clockNs);
+        vm.view().viewProperty().set(SMALL_VIEW);
+        return vm;
+    }
+
+    private static EditorViewModel vm(Scene s) {
+        return vm(s, SAME_THREAD, System::nanoTime);
+    }
+
+    private static double sampleStep(RunResult run) {
+        return run.samples().get(1).tS() - run.samples().get(0).tS();
     }
 
     @Test
-    void playingShowsTheNearestSeriesSampleWithoutSolving() {
-        CountingEvaluator ev = new CountingEvaluator();
-        EditorViewModel vm = new EditorViewModel(scene(), s -> ev, SAME_THREAD, SAME_THREAD);
-        double step = vm.seriesProperty().get().get(1).tS() - vm.seriesProperty().get().get(0).tS();
-        int before = ev.solves.get();
-        vm.playingProperty().set(true);
+    void playingShowsTheNearestSampleWithoutSolving() {
+        EditorViewModel vm = vm(scene());
+        RunResult run = vm.results().currentResult().orElseThrow();
+        vm.clock().playingProperty().set(true);
         for (int i = 0; i < 20; i++) {
-            vm.advance(0.0137);
-            double t = vm.timeProperty().get();
-            double shown = vm.snapshotProperty().get().tS();
-            assertTrue(Math.abs(shown - t) <= step / 2 + 1e-12, "t " + t + " shown " + shown);
+            vm.clock().advance(0.0137);
+            double t = vm.clock().time();
+            Snapshot shown = vm.results().snapshot();
+            assertSame(run.nearest(t), shown, "t " + t + ": the run's own sample, not a solve");
+            assertTrue(Math.abs(shown.tS() - t) <= sampleStep(run) / 2 + 1e-12, "t " + t + " shown " + shown.tS());
         }
-        assertEquals(before, ev.solves.get(), "no exact solve while the series can be played");
     }
 
     @Test
-    void slowMotionBetweenSeriesSamplesIsSolvedExactly() {
-        CountingEvaluator ev = new CountingEvaluator();
-        EditorViewModel vm = new EditorViewModel(scene(), s -> ev, SAME_THREAD, SAME_THREAD);
-        double sampleStep = vm.seriesProperty().get().get(1).tS() - vm.seriesProperty().get().get(0).tS();
-        vm.speedProperty().set(0.01);
-        vm.playingProperty().set(true);
+    void slowMotionBetweenSamplesIsSolvedExactly() {
+        EditorViewModel vm = vm(scene());
+        double sampleStep = sampleStep(vm.results().currentResult().orElseThrow());
+        vm.clock().speedProperty().set(0.01);
+        vm.clock().playingProperty().set(true);
         for (int i = 0; i < 5; i++) {
-            vm.advance(0.0167);
-            assertTrue(0.0167 * 0.01 < sampleStep * EditorViewModel.SLOW_MOTION_FRACTION, "frames fall between samples");
-            assertEquals(vm.timeProperty().get(), vm.snapshotProperty().get().tS(), 0, "moves smoothly, not in steps");
+            vm.clock().advance(0.0167);
+            assertTrue(0.0167 * 0.01 < sampleStep * PlaybackClock.SLOW_MOTION_FRACTION, "frames fall between samples");
+            assertEquals(vm.clock().time(), vm.results().snapshot().tS(), 0, "moves smoothly, not in steps");
         }
+    }
+
+    /**
+     * A coupled run has no state between its samples but what it sampled: its nearest sample at
+     * any pace, shown at once (the workers are not even asked).
+     */
+    @Test
+    void slowMotionOfACoupledRunShowsItsSamplesAtOnce() {
+        Queue<Runnable> jobs = new ArrayDeque<>();
+        EditorViewModel vm = vm(Fixtures.springCart(false), jobs::add, System::nanoTime);
+        drain(jobs);
+        RunResult run = vm.results().currentResult().orElseThrow();
+        // Just before the middle between two samples (2 ms apart): the first frames cross it.
+        vm.clock().seek(0.0489);
+        drain(jobs);
+        Snapshot before = vm.results().snapshot();
+        vm.clock().speedProperty().set(0.01);
+        vm.clock().playingProperty().set(true);
+        for (int i = 0; i < 5; i++) {
+            vm.clock().advance(0.0167);
+            assertSame(run.nearest(vm.clock().time()), vm.results().snapshot(), "frame " + i);
+        }
+        assertNotSame(before, vm.results().snapshot(), "playback reached the next sample");
     }
 
     @Test
     void pausingSolvesAtTheExactTime() {
-        CountingEvaluator ev = new CountingEvaluator();
-        EditorViewModel vm = new EditorViewModel(scene(), s -> ev, SAME_THREAD, SAME_THREAD);
-        vm.playingProperty().set(true);
-        vm.advance(0.0137);
-        vm.playingProperty().set(false);
-        assertEquals(vm.timeProperty().get(), vm.snapshotProperty().get().tS(), 0);
+        EditorViewModel vm = vm(scene());
+        vm.clock().playingProperty().set(true);
+        vm.clock().advance(0.0137);
+        Snapshot sample = vm.results().snapshot();
+        vm.clock().playingProperty().set(false);
+        assertNotSame(sample, vm.results().snapshot());
+        assertEquals(vm.clock().time(), vm.results().snapshot().tS(), 0);
     }
 
     @Test
-    void aSeriesOfAnEarlierSceneIsNotPlayed() {
+    void theRunOfAnEarlierSceneIsNotPlayed() {
         Queue<Runnable> jobs = new ArrayDeque<>();
-        CountingEvaluator ev = new CountingEvaluator();
-        EditorViewModel vm = new EditorViewModel(scene(), s -> ev, jobs::add, SAME_THREAD);
+        EditorViewModel vm = vm(scene(), jobs::add, System::nanoTime);
         drain(jobs);
-        vm.apply("Rename", s -> s.withText("edited", ""));
-        vm.playingProperty().set(true);
-        vm.advance(0.0137);
-        // The edited scene's series is still queued: the frame must be solved, not taken from the old series.
+        vm.document().apply("Rename", s -> s.withText("edited", ""));
+        vm.clock().playingProperty().set(true);
+        vm.clock().advance(0.0137);
+        // The edited scene's run is still queued: the frame must be solved, not taken from the old run.
         drain(jobs);
-        assertEquals(vm.timeProperty().get(), vm.snapshotProperty().get().tS(), 0);
+        assertEquals(vm.clock().time(), vm.results().snapshot().tS(), 0);
     }
 
     @Test
     void playbackAsksForMapsAtAWallClockPace() {
-        EditorViewModel vm = new EditorViewModel(scene(), s -> new CountingEvaluator(), SAME_THREAD, SAME_THREAD);
+        EditorViewModel vm = vm(scene());
         AtomicInteger maps = new AtomicInteger();
-        vm.rasterProperty().addListener((o, a, b) -> maps.incrementAndGet());
-        vm.playingProperty().set(true);
+        vm.maps().rasterProperty().addListener((o, a, b) -> maps.incrementAndGet());
+        vm.clock().playingProperty().set(true);
         double frame = 0.02;
         int frames = 10;
         for (int i = 0; i < frames; i++) {
-            vm.advance(frame);
+            vm.clock().advance(frame);
         }
         // One map on the first frame, then one each time PLAYBACK_MAP_INTERVAL_S of frames has passed.
-        int expected = 1 + (int) Math.floor((frames - 1) / Math.ceil(EditorViewModel.PLAYBACK_MAP_INTERVAL_S / frame));
+        int expected = 1 + (int) Math.floor((frames - 1) / Math.ceil(FieldMaps.PLAYBACK_MAP_INTERVAL_S / frame));
         assertEquals(expected, maps.get());
     }
 
     @Test
     void playbackMapsAreAskedAheadByTheMeasuredDelay() {
         long[] nowNs = {0};
+        EditorViewModel vm = vm(scene(), SAME_THREAD, () -> nowNs[0]);
         List<double[]> asked = new ArrayList<>();
-        EditorViewModel vm = new EditorViewModel(scene(), s -> new CountingEvaluator(), SAME_THREAD, SAME_THREAD,
-                () -> nowNs[0]);
         List<FieldRaster> maps = new ArrayList<>();
-        vm.rasterProperty().addListener((o, a, r) -> {
+        vm.maps().rasterProperty().addListener((o, a, r) -> {
             maps.add(r);
-            asked.add(new double[] {vm.timeProperty().get(), r.tS()});
+            asked.add(new double[] {vm.clock().time(), r.tS()});
         });
         double speed = 0.5;
-        vm.speedProperty().set(speed);
-        vm.playingProperty().set(true);
-        vm.advance(0.01);
-        double guess = vm.mapLatencyS();
+        vm.clock().speedProperty().set(speed);
+        vm.clock().playingProperty().set(true);
+        vm.clock().advance(0.01);
+        double guess = vm.maps().mapLatencyS();
         double[] first = asked.get(asked.size() - 1);
-        assertEquals(first[0] + (guess + EditorViewModel.PLAYBACK_MAP_INTERVAL_S / 2) * speed, first[1], 1e-12);
+        assertEquals(first[0] + (guess + FieldMaps.PLAYBACK_MAP_INTERVAL_S / 2) * speed, first[1], 1e-12);
 
         double took = 3 * guess;
         nowNs[0] += (long) (took * 1e9);
-        vm.mapShown(maps.get(maps.size() - 1));
-        double learnt = vm.mapLatencyS();
+        vm.maps().mapShown(maps.get(maps.size() - 1));
+        double learnt = vm.maps().mapLatencyS();
         assertTrue(learnt > guess && learnt <= took, "moves toward the measured delay: " + learnt);
 
         int before = asked.size();
         for (int i = 0; i < 10 && asked.size() == before; i++) {
-            vm.advance(0.01);
+            vm.clock().advance(0.01);
         }
         double[] next = asked.get(asked.size() - 1);
-        assertEquals(next[0] + (learnt + EditorViewModel.PLAYBACK_MAP_INTERVAL_S / 2) * speed, next[1], 1e-12);
+        assertEquals(next[0] + (learnt + FieldMaps.PLAYBACK_MAP_INTERVAL_S / 2) * speed, next[1], 1e-12);
     }
 
     private static void drain(Queue<Runnable> jobs) {

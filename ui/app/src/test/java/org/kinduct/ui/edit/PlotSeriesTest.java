@@ -6,15 +6,19 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
-import org.kinduct.solver.SceneSolver;
+import org.kinduct.scene.TimeSpan;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.dynamics.CircuitModel;
+import org.kinduct.solver.dynamics.RunMonitor;
+import org.kinduct.solver.run.RunRequest;
+import org.kinduct.solver.run.RunResult;
+import org.kinduct.solver.run.SceneRun;
 import org.kinduct.solver.dynamics.EnergyAudit;
 
 class PlotSeriesTest {
@@ -26,6 +30,11 @@ class PlotSeriesTest {
         return find(MotionSheet.of(s, "magnet"), "Motion").check(s, "glide").apply(s);
     }
 
+    /** The run of {@code s} over {@code window}, as the editor, the export and the command line make it. */
+    private static RunResult run(Scene s, TimeSpan window) {
+        return new SceneRun(s, new RunRequest(window, CircuitModel.AUTO, List.of()), RunMonitor.NONE, true).result();
+    }
+
     private static Property find(List<Property> props, String label) {
         return props.stream().filter(p -> p.label().startsWith(label)).findFirst().orElseThrow();
     }
@@ -35,15 +44,15 @@ class PlotSeriesTest {
         Scene s = glidingMagnet();
         Motion.Glide g = (Motion.Glide) s.body(SceneEdits.bodyOf(s, "magnet")).orElseThrow().motion();
         Vec2 pivot = s.body(SceneEdits.bodyOf(s, "magnet")).orElseThrow().pivot();
-        List<Snapshot> series = new SceneSolver(s).series(0, 1, 0.25);
-        List<PlotSeries.Line> lines = PlotSeries.lines(s, series, Set.of("magnet"),
-                PlotSeries.Quantity.POSITION_X);
+        RunResult run = run(s, new TimeSpan(0, 1, 0.25));
+        List<Snapshot> series = run.samples();
+        List<PlotSeries.Line> lines = PlotSeries.lines(run, Set.of("magnet"), PlotSeries.Quantity.POSITION_X);
         assertEquals(1, lines.size());
         for (int i = 0; i < series.size(); i++) {
             // Uniform motion x = x0 + v·t (definition of constant velocity).
             assertEquals(pivot.x() + g.velocity().x() * series.get(i).tS(), lines.get(0).values()[i], TOL);
         }
-        List<PlotSeries.Line> speed = PlotSeries.lines(s, series, Set.of(), PlotSeries.Quantity.SPEED);
+        List<PlotSeries.Line> speed = PlotSeries.lines(run, Set.of(), PlotSeries.Quantity.SPEED);
         assertEquals(g.velocity().length(), speed.get(0).values()[2], TOL);
     }
 
@@ -55,8 +64,9 @@ class PlotSeriesTest {
     @Test
     void aConductorsRoundingNoiseIsPlottedAsZero() {
         Scene s = org.kinduct.demo.Demos.load("spinning-coil-generator");
-        List<Snapshot> series = new SceneSolver(s).series(0, 0.025, 1.25e-3);
-        double[] emf = PlotSeries.lines(s, series, Set.of(), PlotSeries.Quantity.EMF).get(0).values();
+        RunResult run = run(s, new TimeSpan(0, 0.025, 1.25e-3));
+        List<Snapshot> series = run.samples();
+        double[] emf = PlotSeries.lines(run, Set.of(), PlotSeries.Quantity.EMF).get(0).values();
         assertTrue(series.get(0).conductors().get(0).emfV() != 0, "the solver's value there is noise, not an exact 0");
         assertEquals(0, emf[0], 0.0);
         assertEquals(0, emf[emf.length - 1], 0.0);
@@ -68,24 +78,25 @@ class PlotSeriesTest {
     }
 
     @Test
-    void simulatedPosesTakePrecedenceOverTheDrawnPose() {
-        Scene s = glidingMagnet();
-        String body = SceneEdits.bodyOf(s, "magnet");
-        Pose moved = new Pose(Vec2.ZERO, new Vec2(0.3, 0), 0, new Vec2(0, 2), 0);
-        List<Snapshot> series = new SceneSolver(s).series(0, 1, 0.5).stream()
-                .map(sn -> new Snapshot(sn.tS(), sn.conductors(), Map.of(body, moved))).toList();
-        PlotSeries.Line y = PlotSeries.lines(s, series, Set.of(), PlotSeries.Quantity.SPEED).get(0);
-        assertEquals(2, y.values()[1], TOL);
+    void aFreeBodyIsPlottedAsItsRunMovedIt() {
+        Scene s = Fixtures.springCart(false);
+        RunResult run = run(s, s.time());
+        PlotSeries.Line x = PlotSeries.lines(run, Set.of(), PlotSeries.Quantity.POSITION_X).get(0);
+        for (int i = 0; i < run.samples().size(); i += 50) {
+            Pose p = run.samples().get(i).freeBodies().get("cart");
+            assertEquals(p.pivot().x() + p.offset().x(), x.values()[i], 0);
+        }
+        assertTrue(x.values()[50] != x.values()[0], "it moved, unlike its drawn pose");
     }
 
     @Test
     void conductorQuantitiesFollowTheSelectionAndTheSnapshots() {
         Scene s = glidingMagnet();
-        List<Snapshot> series = new SceneSolver(s).series(0, 1, 0.5);
-        PlotSeries.Line f = PlotSeries.lines(s, series, Set.of("loop"), PlotSeries.Quantity.FORCE_X).get(0);
+        RunResult run = run(s, new TimeSpan(0, 1, 0.5));
+        PlotSeries.Line f = PlotSeries.lines(run, Set.of("loop"), PlotSeries.Quantity.FORCE_X).get(0);
         assertEquals("loop", f.id());
-        assertEquals(series.get(1).conductor("loop").orElseThrow().forceN().x(), f.values()[1], 0);
-        assertTrue(PlotSeries.lines(s, series, Set.of("magnet"), PlotSeries.Quantity.EMF).isEmpty());
+        assertEquals(run.samples().get(1).conductor("loop").orElseThrow().forceN().x(), f.values()[1], 0);
+        assertTrue(PlotSeries.lines(run, Set.of("magnet"), PlotSeries.Quantity.EMF).isEmpty());
     }
 
     @Test

@@ -44,7 +44,7 @@ class UndoHistoryTest {
         assertFalse(h.isDirty());
         h.push(b, "to b");
         assertTrue(h.isDirty());
-        h.markSaved();
+        assertTrue(h.markSaved(b));
         assertFalse(h.isDirty());
         h.undo();
         assertTrue(h.isDirty(), "back before the save differs from the file");
@@ -54,6 +54,26 @@ class UndoHistoryTest {
         h.push(c, "to c");
         h.undo();
         assertTrue(h.isDirty(), "the saved entry was discarded with the redo branch");
+    }
+
+    @Test
+    void aSaveThatFinishesAfterAnEditMarksTheStateItWrote() {
+        UndoHistory h = new UndoHistory(a, 10);
+        h.push(b, "to b");
+        h.push(c, "to c");
+        assertTrue(h.markSaved(b), "b was written while the user went on to c");
+        assertTrue(h.isDirty(), "c is not on file");
+        h.undo();
+        assertFalse(h.isDirty(), "b is");
+    }
+
+    @Test
+    void aSaveOfAStateTheHistoryNoLongerHoldsMarksNothing() {
+        UndoHistory h = new UndoHistory(a, 10);
+        h.push(b, "to b");
+        h.reset(c);
+        assertFalse(h.markSaved(b), "another scene was opened meanwhile");
+        assertFalse(h.isDirty(), "the opened scene stays as it was");
     }
 
     @Test

@@ -1,0 +1,284 @@
+package org.kinduct.ui.edit;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertSame;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.Executor;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.junit.jupiter.api.Test;
+import org.kinduct.render.paint.Frame;
+import org.kinduct.render.view.ViewTransform;
+import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Polygons;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
+import org.kinduct.scene.Vec2;
+import org.kinduct.ui.edit.CanvasGestures.Button;
+import org.kinduct.ui.edit.CanvasGestures.Key;
+
+/** Mouse and keys on the canvas, without a toolkit: screen pixels in, edits, selection and view out. */
+class CanvasGesturesTest {
+
+    private static final Executor SAME_THREAD = Runnable::run;
+    /** 2000 px per metre: grid snapping is then 10 mm, reach 3.5 mm. */
+    private static final ViewTransform VIEW = new ViewTransform(0, 0, 2000, 800, 600);
+    private static final double GEOMETRY_TOL = 1e-9;
+
+    private final AtomicInteger viewMoves = new AtomicInteger();
+
+    private static Scene twoWires() {
+        Scene s = Scene.empty("gestures").withConductors(List.of(
+                new Conductor.Wire("a", Body.FIXED, List.of(Conductor.Vertex.at(-0.05, 0), Conductor.Vertex.at(0.05, 0))),
+                new Conductor.Wire("b", Body.FIXED, List.of(Conductor.Vertex.at(-0.05, 0.05),
+                        Conductor.Vertex.at(0.05, 0.05)))));
+        return s.withSources(List.of(new Source.UniformField("background", 1e-3)));
+    }
+
+    private EditorViewModel vm(Scene s) {
+        EditorViewModel vm = new EditorViewModel(s, SAME_THREAD, SAME_THREAD);
+        vm.view().viewProperty().set(VIEW);
+        // The field maps are not what these tests are about.
+        vm.view().layers().clear();
+        return vm;
+    }
+
+    private CanvasGestures gestures(EditorViewModel vm) {
+        return new CanvasGestures(vm, viewMoves::incrementAndGet);
+    }
+
+    private static double sx(EditorViewModel vm, double x) {
+        return vm.view().view().screenX(x);
+    }
+
+    private static double sy(EditorViewModel vm, double y) {
+        return vm.view().view().screenY(y);
+    }
+
+    /** Press at scene point (x0, y0), drag to (x1, y1) (screen points as the view is at the press), release. */
+    private static void drag(EditorViewModel vm, CanvasGestures g, Button b, double x0, double y0, double x1, double y1) {
+        double[] screen = {sx(vm, x0), sy(vm, y0), sx(vm, (x0 + x1) / 2), sy(vm, (y0 + y1) / 2), sx(vm, x1), sy(vm, y1)};
+        g.pressed(screen[0], screen[1], b, false);
+        g.dragged(screen[2], screen[3]);
+        g.dragged(screen[4], screen[5]);
+        g.released();
+    }
+
+    /** A click in place at scene point (x, y). */
+    private static void click(EditorViewModel vm, CanvasGestures g, double x, double y, int count) {
+        g.pressed(sx(vm, x), sy(vm, y), Button.PRIMARY, false);
+        g.released();
+        g.clicked(sx(vm, x), sy(vm, y), Button.PRIMARY, count);
+    }
+
+    private static Vec2 firstVertex(Scene s, String id) {
+        return s.conductor(id).orElseThrow().vertices().get(0).at();
+    }
+
+    @Test
+    void draggingAnObjectPreviewsTheMoveAndReleaseAppliesItAsOneEdit() {
+        EditorViewModel vm = vm(twoWires());
+        CanvasGestures g = gestures(vm);
+        Scene before = vm.scene();
+        g.pressed(sx(vm, 0.01), sy(vm, 0), Button.PRIMARY, false);
+        assertEquals(Set.of("a"), vm.document().selection(), "pressing on a wire selects it");
+        g.dragged(sx(vm, 0.03), sy(vm, 0.02));
+
+        Frame preview = g.frame("");
+        assertSame(before, vm.scene(), "nothing is edited while dragging");
+        assertTrue(firstVertex(preview.scene(), "a").eq(new Vec2(-0.03, 0.02), GEOMETRY_TOL), "the preview moved");
+        assertNull(preview.snapshot(), "the numbers belong to the scene before the drag");
+
+        g.released();
+        assertTrue(firstVertex(vm.scene(), "a").eq(new Vec2(-0.03, 0.02), GEOMETRY_TOL));
+        assertEquals(firstVertex(before, "b"), firstVertex(vm.scene(), "b"), "the other wire stays");
+        assertSame(vm.scene(), g.frame("").scene(), "the preview ends with the drag");
+        vm.document().undo();
+        assertEquals(before, vm.scene(), "one undo takes the whole drag back");
+    }
+
+    @Test
+    void shiftTogglesObjectsInAndOutOfTheSelectionAndMovesThemTogether() {
+        EditorViewModel vm = vm(twoWires());
+        CanvasGestures g = gestures(vm);
+        g.pressed(sx(vm, 0), sy(vm, 0), Button.PRIMARY, false);
+        g.released();
+        g.pressed(sx(vm, 0), sy(vm, 0.05), Button.PRIMARY, true);
+        assertEquals(Set.of("a", "b"), vm.document().selection());
+        g.dragged(sx(vm, 0.01), sy(vm, 0.05));
+        g.released();
+        assertTrue(firstVertex(vm.scene(), "a").eq(new Vec2(-0.04, 0), GEOMETRY_TOL));
+        assertTrue(firstVertex(vm.scene(), "b").eq(new Vec2(-0.04, 0.05), GEOMETRY_TOL));
+        g.pressed(sx(vm, 0.01), sy(vm, 0.05), Button.PRIMARY, true);
+        g.released();
+        assertEquals(Set.of("a"), vm.document().selection(), "Shift on a selected object takes it out");
+    }
+
+    @Test
+    void aBandOnEmptyGroundSelectsWhatLiesWhollyInsideIt() {
+        EditorViewModel vm = vm(twoWires());
+        CanvasGestures g = gestures(vm);
+        vm.document().select(Set.of("b"));
+        g.pressed(sx(vm, -0.06), sy(vm, 0.02), Button.PRIMARY, false);
+        assertTrue(vm.document().selection().isEmpty(), "a press on empty ground clears the selection");
+        g.dragged(sx(vm, 0.06), sy(vm, -0.02));
+        assertEquals(4, g.frame("").marks().preview().size(), "the band is drawn while dragging");
+        g.released();
+        assertEquals(Set.of("a"), vm.document().selection(), "not b (outside), not the uniform field (everywhere)");
+        assertTrue(g.frame("").marks().preview().isEmpty());
+    }
+
+    @Test
+    void draggingAVertexHandleOfASelectedLoopMovesThatVertexOntoTheGrid() {
+        Scene s = Scene.empty("square").withConductors(List.of(Conductor.Loop.simple("sq", Body.FIXED, List.of(
+                Conductor.Vertex.at(0, 0), Conductor.Vertex.at(0.04, 0), Conductor.Vertex.at(0.04, 0.04),
+                Conductor.Vertex.at(0, 0.04)), ShapeFactory.DEFAULT_WIRE)));
+        EditorViewModel vm = vm(s);
+        CanvasGestures g = gestures(vm);
+        vm.document().select(Set.of("sq"));
+        drag(vm, g, Button.PRIMARY, 0.04, 0.04, 0.0612, 0.0497);
+        List<Conductor.Vertex> vs = vm.scene().conductor("sq").orElseThrow().vertices();
+        assertEquals(new Vec2(0.06, 0.05), vs.get(2).at(), "snapped to the 10 mm grid");
+        assertEquals(new Vec2(0.04, 0), vs.get(1).at(), "the other vertices stay");
+        assertEquals("Move vertex", vm.statusProperty().get());
+    }
+
+    @Test
+    void theMiddleButtonOrSpaceWithThePrimaryOnePansWithoutEditing() {
+        EditorViewModel vm = vm(twoWires());
+        CanvasGestures g = gestures(vm);
+        Scene before = vm.scene();
+        drag(vm, g, Button.MIDDLE, 0, 0, 0.01, 0);
+        assertEquals(VIEW.centerX() - 0.01, vm.view().view().centerX(), GEOMETRY_TOL, "the ground moved with the mouse");
+        g.keyPressed(Key.SPACE);
+        double x = vm.view().view().centerX();
+        drag(vm, g, Button.PRIMARY, 0, 0, 0.01, 0);
+        g.keyReleased(Key.SPACE);
+        assertTrue(vm.view().view().centerX() < x);
+        assertSame(before, vm.scene());
+        assertTrue(viewMoves.get() >= 2, "the canvas heard of the moving view");
+    }
+
+    @Test
+    void theWheelZoomsAboutThePointUnderTheCursor() {
+        EditorViewModel vm = vm(twoWires());
+        CanvasGestures g = gestures(vm);
+        double px = 600;
+        double py = 100;
+        Vec2 under = vm.view().view().toScene(px, py);
+        assertTrue(g.scrolled(px, py, 40));
+        assertTrue(vm.view().view().pxPerM() > VIEW.pxPerM());
+        assertTrue(vm.view().view().toScene(px, py).eq(under, GEOMETRY_TOL));
+        assertFalse(g.scrolled(px, py, 0), "a scroll without a turn does nothing");
+    }
+
+    @Test
+    void aRectangularLoopIsDrawnWithTwoClicksAndIsSelected() {
+        EditorViewModel vm = vm(Scene.empty("draw"));
+        CanvasGestures g = gestures(vm);
+        vm.view().toolProperty().set(ToolKind.RECT_LOOP);
+        assertTrue(g.isDrawing());
+        click(vm, g, -0.05, -0.02, 1);
+        click(vm, g, 0.04, 0.03, 1);
+        Conductor.Loop loop = assertInstanceOf(Conductor.Loop.class, vm.scene().conductors().get(0));
+        List<Vec2> pts = loop.vertices().stream().map(Conductor.Vertex::at).toList();
+        // Counter-clockwise, on the clicked grid points.
+        assertEquals(0.09 * 0.05, Polygons.signedArea(pts), GEOMETRY_TOL);
+        assertEquals(Set.of(loop.id()), vm.document().selection());
+    }
+
+    @Test
+    void aClickThatMovedTooFarPlacesNoPoint() {
+        EditorViewModel vm = vm(Scene.empty("draw"));
+        CanvasGestures g = gestures(vm);
+        vm.view().toolProperty().set(ToolKind.WIRE);
+        g.pressed(100, 100, Button.PRIMARY, false);
+        g.released();
+        g.clicked(110, 100, Button.PRIMARY, 1);
+        g.keyPressed(Key.ENTER);
+        g.clicked(100, 100, Button.PRIMARY, 1);
+        g.keyPressed(Key.ENTER);
+        assertTrue(vm.scene().conductors().isEmpty(), "one point so far: no wire yet");
+    }
+
+    @Test
+    void aPolygonIsClosedWithEnterOrADoubleClickAndEscapeCancelsItThenLeavesTheTool() {
+        EditorViewModel vm = vm(Scene.empty("draw"));
+        CanvasGestures g = gestures(vm);
+        vm.view().toolProperty().set(ToolKind.LOOP);
+        for (double[] p : new double[][] {{0, 0}, {0.06, 0}, {0.03, 0.05}}) {
+            click(vm, g, p[0], p[1], 1);
+        }
+        g.keyPressed(Key.ENTER);
+        assertEquals(3, vm.scene().conductors().get(0).vertices().size());
+
+        for (double[] p : new double[][] {{0.1, 0}, {0.16, 0}, {0.13, 0.05}}) {
+            click(vm, g, p[0], p[1], 1);
+        }
+        click(vm, g, 0.13, 0.05, 2);
+        assertEquals(2, vm.scene().conductors().size(), "the double click closed the second loop");
+
+        click(vm, g, -0.1, 0, 1);
+        g.keyPressed(Key.ESCAPE);
+        g.keyPressed(Key.ENTER);
+        assertEquals(2, vm.scene().conductors().size(), "Escape dropped the started shape");
+        g.keyPressed(Key.ESCAPE);
+        assertEquals(ToolKind.SELECT, vm.view().toolProperty().get());
+        assertFalse(g.isDrawing());
+        assertTrue(vm.document().selection().isEmpty());
+    }
+
+    @Test
+    void aTypedLengthPlacesTheNextVertexTowardsTheCursor() {
+        EditorViewModel vm = vm(Scene.empty("draw"));
+        CanvasGestures g = gestures(vm);
+        assertEquals("Pick a drawing tool first", g.typed("25 mm"));
+        vm.view().toolProperty().set(ToolKind.WIRE);
+        click(vm, g, 0, 0, 1);
+        g.moved(sx(vm, 0.05), sy(vm, 0));
+        assertEquals("", g.typed("25 mm"));
+        assertFalse(g.typed("25 parsecs").isEmpty(), "an unknown unit is refused with the reason");
+        g.keyPressed(Key.ENTER);
+        List<Vec2> pts = vm.scene().conductors().get(0).vertices().stream().map(Conductor.Vertex::at).toList();
+        assertEquals(2, pts.size());
+        assertTrue(pts.get(1).eq(new Vec2(0.025, 0), GEOMETRY_TOL), "typed 25 mm towards the cursor: " + pts);
+    }
+
+    @Test
+    void keysDeleteThePlayAndStepTheTimeAndFitTheView() {
+        EditorViewModel vm = vm(twoWires());
+        CanvasGestures g = gestures(vm);
+        vm.document().select(Set.of("a"));
+        g.keyPressed(Key.DELETE);
+        assertTrue(vm.scene().conductor("a").isEmpty());
+        g.keyPressed(Key.PERIOD);
+        g.keyPressed(Key.PERIOD);
+        g.keyPressed(Key.COMMA);
+        assertEquals(vm.scene().time().dtS(), vm.clock().time(), GEOMETRY_TOL);
+        g.keyPressed(Key.K);
+        assertTrue(vm.clock().isPlaying());
+        g.keyPressed(Key.HOME);
+        assertFalse(vm.clock().isPlaying());
+        assertEquals(0, vm.clock().time(), 0);
+        g.keyPressed(Key.F);
+        assertNotEquals(VIEW, vm.view().view(), "fitted to the wire left");
+    }
+
+    @Test
+    void duplicatesLandAFewPixelsAwayOnScreen() {
+        EditorViewModel vm = vm(twoWires());
+        CanvasGestures g = gestures(vm);
+        vm.document().select(Set.of("a"));
+        g.duplicateSelection();
+        Conductor copy = vm.scene().conductors().get(2);
+        Vec2 shift = copy.vertices().get(0).at().minus(firstVertex(vm.scene(), "a"));
+        assertTrue(shift.eq(new Vec2(20 / VIEW.pxPerM(), -20 / VIEW.pxPerM()), GEOMETRY_TOL), "shift " + shift);
+    }
+}
