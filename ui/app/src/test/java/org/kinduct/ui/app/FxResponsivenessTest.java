@@ -46,10 +46,15 @@ import org.testfx.util.WaitForAsyncUtils;
 class FxResponsivenessTest {
 
     /**
-     * Longest round trip through the UI thread while the run goes on: a few frames at 60 Hz. A UI
-     * thread that waited for the run (tens of seconds) or for one solve would miss it by far.
+     * Round trips through the UI thread while the run goes on: the typical (median) one a frame
+     * at 60 Hz, the 95th percentile a few frames, the worst under a second. A UI thread that waited
+     * for one solve per mouse move would miss the first two; one that waited for the run (tens of
+     * seconds), all three. The worst is loose because the shared build machine stalls a thread
+     * now and then for a tenth of a second or more (measured: 172 ms once in 40 under a load of 9).
      */
-    private static final long MAX_ROUND_TRIP_MS = 100;
+    private static final long MEDIAN_ROUND_TRIP_MS = 17;
+    private static final long P95_ROUND_TRIP_MS = 100;
+    private static final long MAX_ROUND_TRIP_MS = 1000;
     private static final int PROBES = 40;
     /** The run outlasts the probes many times over, and an edit must free the workers within this. */
     private static final long CANCEL_WITHIN_S = 10;
@@ -152,6 +157,10 @@ class FxResponsivenessTest {
                         + " run progress %.0f %% → %.0f %% meanwhile; after the edit the new run was in after %.2f s%n",
                 PROBES, roundTrips.stream().sorted().toList().get(PROBES / 2), worst, 100 * progressBefore,
                 100 * progressAfter, cancelS);
+        List<Long> sorted = roundTrips.stream().sorted().toList();
+        assertTrue(sorted.get(PROBES / 2) <= MEDIAN_ROUND_TRIP_MS, "seed " + SEED + ": median of " + roundTrips);
+        assertTrue(sorted.get(PROBES * 95 / 100) <= P95_ROUND_TRIP_MS, "seed " + SEED + ": 95th percentile of "
+                + roundTrips);
         assertTrue(worst < MAX_ROUND_TRIP_MS, "seed " + SEED + ": round trips " + roundTrips);
         assertTrue(readouts.stream().distinct().count() > PROBES / 2, "the moves reached the canvas: " + readouts);
         assertFalse(WaitForAsyncUtils.asyncFx(() -> vm.results().simulatingProperty().get()).get(10, TimeUnit.SECONDS),

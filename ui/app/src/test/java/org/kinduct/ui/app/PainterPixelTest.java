@@ -65,7 +65,7 @@ class PainterPixelTest {
                 v[r * cols + c] = c < cols / 2 ? 0.1f : -0.1f;
             }
         }
-        return new FieldRaster(-0.2, 0.15, 0.01, cols, rows, v, 0.1, 0.1, 1, 0);
+        return new FieldRaster(-0.2, 0.15, 0.01, cols, rows, v, 0.1, 0.1f, 1, 0);
     }
 
     private static PixelReader render(Scene scene, Snapshot snap, String name) throws Exception {
@@ -76,7 +76,7 @@ class PainterPixelTest {
     private static PixelReader render(Scene scene, Snapshot snap, String name, boolean backdrop) throws Exception {
         EnumSet<Layer> layers = EnumSet.of(Layer.HEAT_MAP, Layer.CONDUCTORS, Layer.LENZ);
         Frame f = new Frame(scene, 0, snap, halves(), VIEW, layers, ColourRange.automatic(), EditorMarks.none(), "");
-        FieldBackdrop drawn = backdrop ? FieldBackdrop.render(halves(), VIEW, 0.1, layers) : null;
+        FieldBackdrop drawn = backdrop ? FieldBackdrop.render(halves(), VIEW, ColourRange.automatic().scaleFor(halves()), layers) : null;
         WritableImage img = WaitForAsyncUtils.asyncFx(() -> {
             Canvas c = new Canvas(W, H);
             new CanvasFrames(c).show(f, drawn);

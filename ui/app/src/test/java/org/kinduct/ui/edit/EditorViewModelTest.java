@@ -112,7 +112,7 @@ class EditorViewModelTest {
         drain(queue);
         assertNotNull(vm.maps().raster());
         assertEquals(vm.document().revision(), vm.maps().raster().revision());
-        FieldRaster stale = new FieldRaster(0, 0, 1, 1, 1, new float[1], 0, vm.document().revision() - 1, 0);
+        FieldRaster stale = new FieldRaster(0, 0, 1, 1, 1, new float[1], 0, 0, vm.document().revision() - 1, 0);
         vm.maps().accept(stale);
         assertEquals(vm.document().revision(), vm.maps().raster().revision(), "the stale map is ignored");
     }
