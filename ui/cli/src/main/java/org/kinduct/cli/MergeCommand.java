@@ -36,7 +36,9 @@ final class MergeCommand implements Callable<Integer> {
         StudyTable whole;
         try {
             for (Path p : parts) {
-                tables.put(p.toString(), StudyJson.read(read(p), p.toString()));
+                if (tables.put(p.toString(), StudyJson.read(read(p), p.toString())) != null) {
+                    throw new BadInputException(p + " is given twice");
+                }
             }
             whole = StudyMerge.merge(tables);
         } catch (IllegalArgumentException e) {

@@ -16,6 +16,9 @@ import org.kinduct.study.StudyTable;
  */
 final class StudyPlots {
 
+    /** Room above and below the plotted values, as a fraction of their range. */
+    private static final double MARGIN = 0.05;
+
     private StudyPlots() {
     }
 
@@ -114,8 +117,8 @@ final class StudyPlots {
         String what = metrics.size() == 1 ? h.metrics().get(metrics.get(0)).metric() : "metrics";
         return new LinePlot(h.scene() + ": " + what + " against " + along.path(),
                 new PlotAxis(along.path(), along.unit(), along.log(), xlo, xhi),
-                new PlotAxis(metrics.size() == 1 ? what : "", h.metrics().get(metrics.get(0)).unit(), false,
-                        Math.min(lo, 0 < lo && lo < 0.2 * hi ? 0 : lo), hi),
+                new PlotAxis(metrics.size() == 1 ? what : "value", h.metrics().get(metrics.get(0)).unit(), false,
+                        lo - MARGIN * (hi - lo), hi + MARGIN * (hi - lo)),
                 xs, series);
     }
 

@@ -5,7 +5,8 @@ import java.util.List;
 
 /**
  * A study's rows as CSV: {@code point}, each varied value and each metric with its SI unit in
- * the column name ({@code magnet-1.standoff_m}, {@code peak_emf:pickup_V}), then {@code error};
+ * the column name in ASCII ({@code magnet-1.standoff_m}, {@code board-coil.load_Ohm}, {@code peak_emf:pickup_V}),
+ * then {@code error};
  * numbers in their shortest exact decimal form, empty where there is none. A run that stopped
  * early ends with the line {@code # incomplete: R of N points}.
  */
@@ -41,7 +42,12 @@ public final class StudyCsv {
     }
 
     private static String named(String name, String unit) {
-        return unit.isEmpty() ? name : name + "_" + unit;
+        return unit.isEmpty() ? name : name + "_" + ascii(unit);
+    }
+
+    /** Unit symbols in column names in ASCII, as the scene format also accepts them: Ohm, degC, m/s^2. */
+    private static String ascii(String unit) {
+        return unit.replace("Ω", "Ohm").replace("°C", "degC").replace("²", "^2").replace("·", "*");
     }
 
     private static String number(double v) {

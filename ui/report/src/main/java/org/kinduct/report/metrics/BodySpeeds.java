@@ -2,6 +2,7 @@ package org.kinduct.report.metrics;
 
 import java.util.List;
 import org.kinduct.scene.Pose;
+import org.kinduct.scene.units.Units;
 import org.kinduct.solver.Snapshot;
 
 /**
@@ -36,9 +37,10 @@ final class BodySpeeds {
      * The speed approached at the end: Aitken's Δ² extrapolation v∞ = v₃ − (v₃ − v₂)²/((v₃ − v₂) − (v₂ − v₁))
      * of the speeds v₁, v₂, v₃ at the samples a tenth of the window apart that end at its last
      * sample. It is exact for an exponential approach v∞ + A·e^{−t/τ} (Aitken 1926; any numerical
-     * analysis text). The last speed when the speed no longer changes; NaN (not reached) when the
-     * three speeds do not approach a limit (the changes differ in sign or do not shrink), or the
-     * window has fewer than three samples.
+     * analysis text). The last speed when the speed no longer changes (both changes within
+     * {@link Units#NOISE_FRACTION} of it, rounding noise); NaN (not reached) when the three speeds
+     * do not approach a limit (the changes differ in sign or do not shrink), or the window has
+     * fewer than three samples.
      */
     double terminal() {
         int n = speeds.length;
@@ -51,7 +53,8 @@ final class BodySpeeds {
         double v3 = speeds[n - 1];
         double d1 = v2 - v1;
         double d2 = v3 - v2;
-        if (d2 == 0) {
+        double noise = Units.NOISE_FRACTION * Math.abs(v3);
+        if (Math.abs(d1) <= noise && Math.abs(d2) <= noise) {
             return v3;
         }
         if (Math.signum(d1) != Math.signum(d2) || Math.abs(d2) >= Math.abs(d1)) {

@@ -55,8 +55,8 @@ public enum MetricKind {
     FINAL_SPEED("final_speed", Scope.FREE_BODY, Dimension.VELOCITY, "speed of the body's pivot at the last sample",
             (run, w, id) -> new BodySpeeds(w, id).last()),
     TERMINAL_SPEED("terminal_speed", Scope.FREE_BODY, Dimension.VELOCITY,
-            "speed approached at the end: Aitken Δ² extrapolation of the speeds a tenth of the window apart;"
-                    + " empty when the speed does not approach a limit",
+            "speed approached at the end: Aitken Δ² extrapolation of the speeds a tenth of the window apart"
+                    + " (the last speed once settled); empty when the speed does not approach a limit",
             (run, w, id) -> new BodySpeeds(w, id).terminal()),
     SETTLING_TIME("settling_time", Scope.FREE_BODY, Dimension.TIME,
             "time from the run's start after which the speed stays within 2 % of its final value",
