@@ -46,9 +46,10 @@ class DesignPhysicsTest {
     private static final double LOAD_STEP = 0.25;
     /**
      * Optimiser against the formula, relative: the transient left at 0.1 s weighs on the power
-     * with a factor that depends on c_e, i.e. on R_L; it moves the optimum by about 1e-4 of R*.
+     * with a factor that depends on c_e, i.e. on R_L; it moves the optimum by up to about 1e-4 of
+     * R* (measured 5.7e-6: R* = 2.492346 Ω, found 2.49236 Ω).
      */
-    private static final double BEST_LOAD = 1e-3;
+    private static final double BEST_LOAD = 1e-4;
 
     /**
      * Coil resistance at 25 °C, ρ20·(1 + α20·5 K)·N·perimeter/(π d²/4), copper ρ20 = 1/58 Ω·mm²/m,
@@ -115,10 +116,12 @@ class DesignPhysicsTest {
     private static final double G = 9.81;
     private static final double FRAME_W = 0.1;
     /**
-     * Terminal speed against the formula, relative: the extrapolated speed carries the
-     * integration's error (relative tolerance 1e-10) and what is left of the approach after 1 s.
+     * Terminal speed against the formula, relative. The runs end 0.16 s after the frame enters the
+     * gap, while the speed still approaches v_t (at 0.6 T the last speed is 1.7 % above it); the
+     * extrapolation is exact for the slow exponential that is left (the inductive mode, L/R ≈ 2 ms,
+     * has died out), so what remains is the integration's error. Measured ≤ 1.3e-13.
      */
-    private static final double TERMINAL = 1e-6;
+    private static final double TERMINAL = 1e-12;
 
     /**
      * Hard-drawn aluminium at 20 °C, ρ20 = 0.028264 Ω·mm²/m (IEC 60889, from memory, as the scene
@@ -136,7 +139,8 @@ class DesignPhysicsTest {
     @Test
     void fallingFrameTerminalSpeedFollowsTheInverseSquareOfTheField() throws IOException {
         Path json = dir.resolve("frame.json");
-        Result r = CliRun.run("sweep", "--demo", "frame-brake", "--vary", "pole-gap.bz=0.6 T..1.2 T:4", "--metric",
+        Result r = CliRun.run("sweep", "--demo", "frame-brake", "--set", "time.t1=0.3 s", "--vary",
+                "pole-gap.bz=0.6 T..1.2 T:4", "--metric",
                 "terminal_speed:frame", "--metric", "final_speed:frame", "--json", json.toString());
         assertEquals(KinductMain.OK, r.code(), r.err());
         for (Row row : StudyJson.read(Files.readString(json), "frame.json").rows()) {
