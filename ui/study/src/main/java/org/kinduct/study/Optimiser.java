@@ -26,22 +26,26 @@ import org.kinduct.solver.dynamics.RunMonitor;
  * Minimization without Derivatives</i>, 1973), Powell's BOBYQA (Cambridge report DAMTP 2009/NA06)
  * or Hansen's CMA-ES for several. Every run is one {@code kinduct solve} of the edited scene.
  *
- * <p>The search sees the goal scaled by its value at the start, plus {@value #PENALTY} times each
- * constraint's relative violation (an exact penalty: with a weight above the constraint's
- * multiplier the penalised optimum is the constrained one). A point the model refuses counts as
+ * <p>The search sees the goal scaled by its value at the start, plus {@value #PENALTY} times the
+ * square of each constraint's relative violation: a smooth penalty that BOBYQA's quadratic
+ * models follow (an exact, kinked penalty stalled them on the limit), whose optimum breaks a
+ * limit by about the multiplier over twice the weight, 1e-6 or less. A point the model refuses counts as
  * {@value #REFUSED}. The answer is the best evaluated point that meets every constraint, so what
  * is reported has been run and meets them whatever the search did.
  */
 public final class Optimiser {
 
-    /** Weight of a constraint's relative violation against the goal's relative change. */
-    static final double PENALTY = 100;
+    /** Weight of the squared relative violation of a constraint against the goal's relative change. */
+    static final double PENALTY = 1e6;
     /** Search value of a point the model refuses: far worse than any penalised point near the start. */
     static final double REFUSED = 1e6;
     /** Search coordinates are in [0, 1]; stop when they are known to this. */
     static final double U_TOLERANCE = 1e-7;
     /** BOBYQA's first trust-region radius in search coordinates: a fifth of each range. */
     static final double FIRST_RADIUS = 0.2;
+    /** BOBYQA restarts from its best point, and their first radius in search coordinates. */
+    static final int RESTARTS = 3;
+    static final double RESTART_RADIUS = 0.01;
     /** CMA-ES: first step size in search coordinates, and the seed of its random numbers (runs repeat exactly). */
     static final double CMAES_SIGMA = 0.3;
     static final long CMAES_SEED = 20_260_101L;
@@ -89,9 +93,17 @@ public final class Optimiser {
                         new UnivariateObjectiveFunction(u -> searchValue(new double[] {u})), GoalType.MINIMIZE,
                         new SearchInterval(0, 1, 0.5));
             } else if (method == Optimisation.Method.BOBYQA) {
-                new BOBYQAOptimizer(2 * n + 1, FIRST_RADIUS, U_TOLERANCE).optimize(new MaxEval(o.maxEvaluations()),
-                        new ObjectiveFunction(this::searchValue), GoalType.MINIMIZE, new InitialGuess(start),
-                        unitBox(n));
+                bobyqa(start, FIRST_RADIUS);
+                // Restarts from the best point with a small region: where a limit is active the
+                // penalty's kink spoils the first quadratic models, and a fresh local model moves
+                // along the limit again.
+                for (int restart = 0; restart < RESTARTS && history.size() < o.maxEvaluations(); restart++) {
+                    int before = history.size();
+                    bobyqa(bestU(), RESTART_RADIUS);
+                    if (history.size() == before) {
+                        break;
+                    }
+                }
             } else {
                 double[] sigma = new double[n];
                 Arrays.fill(sigma, CMAES_SIGMA);
@@ -106,6 +118,23 @@ public final class Optimiser {
             // The run budget is spent: the best point evaluated so far is the answer.
         }
         return new Result(history, best());
+    }
+
+    private void bobyqa(double[] start, double radius) {
+        int n = start.length;
+        new BOBYQAOptimizer(2 * n + 1, radius, U_TOLERANCE).optimize(new MaxEval(o.maxEvaluations() - history.size()),
+                new ObjectiveFunction(this::searchValue), GoalType.MINIMIZE, new InitialGuess(start), unitBox(n));
+    }
+
+    /** Search coordinates of the point with the lowest search value so far. */
+    private double[] bestU() {
+        List<Double> best = null;
+        for (Map.Entry<List<Double>, Double> e : seen.entrySet()) {
+            if (best == null || e.getValue() < seen.get(best)) {
+                best = e.getKey();
+            }
+        }
+        return best.stream().mapToDouble(Double::doubleValue).toArray();
     }
 
     private static SimpleBounds unitBox(int n) {
@@ -135,7 +164,8 @@ public final class Optimiser {
                 value = REFUSED;
             }
             for (int c = 0; c < o.constraints().size(); c++) {
-                value += PENALTY * o.constraints().get(c).violation(e.constrained()[c]);
+                double v = o.constraints().get(c).violation(e.constrained()[c]);
+                value += PENALTY * v * v;
             }
         }
         seen.put(key, value);
