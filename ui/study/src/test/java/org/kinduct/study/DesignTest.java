@@ -34,8 +34,8 @@ class DesignTest {
         assertMessage("unknown spacing 'lin'", () -> Axis.parse("pickup.load=1 ohm..2 ohm:3:lin", CARRIAGE));
         assertMessage("log spacing needs both ends non-zero and of one sign",
                 () -> Axis.parse("magnet-1.center.x=-1 mm..1 mm:3:log", CARRIAGE));
-        assertMessage("pickup.turns takes whole numbers, and this gives 150.0",
-                () -> Axis.parse("pickup.turns=100..200:3", CARRIAGE));
+        assertMessage("pickup.turns takes whole numbers, and this gives 133.3",
+                () -> Axis.parse("pickup.turns=100..200:4", CARRIAGE));
         assertMessage("expected PATH=FROM..TO:N", () -> Axis.parse("pickup.turns", CARRIAGE));
         assertMessage("pickup.load: expected a resistance such as '100 ohm', got '2 mm'",
                 () -> Axis.parse("pickup.load=2 mm,3 mm", CARRIAGE));
