@@ -24,14 +24,6 @@ public record Row(int point, double[] values, double[] metrics, String error) {
         return metrics.clone();
     }
 
-    double value(int axis) {
-        return values[axis];
-    }
-
-    double metric(int index) {
-        return metrics[index];
-    }
-
     /** Exact comparison, as merging and the tests need; NaN equals NaN. */
     @Override
     public boolean equals(Object o) {

@@ -24,9 +24,9 @@ public record LinePlot(String title, PlotAxis x, PlotAxis y, double[] xs, List<S
 
     @Override
     public void draw(Surface s) {
-        Frame.draw(s, title, x, y, RIGHT);
-        double w = s.width() - Frame.LEFT - RIGHT;
-        double h = s.height() - Frame.TOP - Frame.BOTTOM;
+        ChartFrame.draw(s, title, x, y, RIGHT);
+        double w = s.width() - ChartFrame.LEFT - RIGHT;
+        double h = s.height() - ChartFrame.TOP - ChartFrame.BOTTOM;
         for (int k = 0; k < series.size(); k++) {
             int colour = COLOURS[k % COLOURS.length];
             double[] ys = series.get(k).ys();
@@ -40,8 +40,8 @@ public record LinePlot(String title, PlotAxis x, PlotAxis y, double[] xs, List<S
                     drawing = false;
                     continue;
                 }
-                double px = Frame.LEFT + x.fraction(xs[i]) * w;
-                double py = Frame.TOP + h - y.fraction(ys[i]) * h;
+                double px = ChartFrame.LEFT + x.fraction(xs[i]) * w;
+                double py = ChartFrame.TOP + h - y.fraction(ys[i]) * h;
                 if (drawing) {
                     s.lineTo(px, py);
                 } else {
@@ -52,7 +52,7 @@ public record LinePlot(String title, PlotAxis x, PlotAxis y, double[] xs, List<S
             s.strokePath();
             for (int i = 0; i < xs.length; i++) {
                 if (Double.isFinite(ys[i])) {
-                    s.fillOval(Frame.LEFT + x.fraction(xs[i]) * w, Frame.TOP + h - y.fraction(ys[i]) * h, 3);
+                    s.fillOval(ChartFrame.LEFT + x.fraction(xs[i]) * w, ChartFrame.TOP + h - y.fraction(ys[i]) * h, 3);
                 }
             }
         }
@@ -63,18 +63,18 @@ public record LinePlot(String title, PlotAxis x, PlotAxis y, double[] xs, List<S
     private void legend(Surface s) {
         double widest = 0;
         for (Series one : series) {
-            widest = Math.max(widest, s.textWidth(one.name(), Frame.TEXT, false));
+            widest = Math.max(widest, s.textWidth(one.name(), ChartFrame.TEXT, false));
         }
-        double lx = Frame.LEFT + 10;
+        double lx = ChartFrame.LEFT + 10;
         s.fill(0xE6FFFFFF);
-        s.fillRect(lx, Frame.TOP + 6, widest + 46, 18 * series.size() + 6);
+        s.fillRect(lx, ChartFrame.TOP + 6, widest + 46, 18 * series.size() + 6);
         for (int k = 0; k < series.size(); k++) {
-            double ly = Frame.TOP + 18 + 18 * k;
+            double ly = ChartFrame.TOP + 18 + 18 * k;
             s.stroke(COLOURS[k % COLOURS.length]);
             s.lineWidth(2);
-            Frame.line(s, lx + 6, ly, lx + 30, ly);
-            s.fill(Frame.INK);
-            s.text(series.get(k).name(), lx + 36, ly, Frame.TEXT, false, Surface.Anchor.LEFT);
+            ChartFrame.line(s, lx + 6, ly, lx + 30, ly);
+            s.fill(ChartFrame.INK);
+            s.text(series.get(k).name(), lx + 36, ly, ChartFrame.TEXT, false, Surface.Anchor.LEFT);
         }
     }
 }

@@ -25,9 +25,9 @@ public record MapPlot(String title, PlotAxis x, PlotAxis y, PlotAxis value, doub
 
     @Override
     public void draw(Surface s) {
-        Frame.draw(s, title, x, y, RIGHT);
-        double w = s.width() - Frame.LEFT - RIGHT;
-        double h = s.height() - Frame.TOP - Frame.BOTTOM;
+        ChartFrame.draw(s, title, x, y, RIGHT);
+        double w = s.width() - ChartFrame.LEFT - RIGHT;
+        double h = s.height() - ChartFrame.TOP - ChartFrame.BOTTOM;
         double[] range = range();
         int cols = (int) Math.ceil(w / 2);
         int rows = (int) Math.ceil(h / 2);
@@ -38,11 +38,11 @@ public record MapPlot(String title, PlotAxis x, PlotAxis y, PlotAxis value, doub
                 pixels[r * cols + c] = colour(interpolate(index(xs, x, (c + 0.5) / cols), index(ys, y, fy)), range);
             }
         }
-        s.image(pixels, cols, rows, Frame.LEFT, Frame.TOP, w, h);
+        s.image(pixels, cols, rows, ChartFrame.LEFT, ChartFrame.TOP, w, h);
         contours(s, w, h, range);
-        s.stroke(Frame.INK);
+        s.stroke(ChartFrame.INK);
         s.lineWidth(1);
-        s.strokeRect(Frame.LEFT, Frame.TOP, w, h);
+        s.strokeRect(ChartFrame.LEFT, ChartFrame.TOP, w, h);
         colourBar(s, h, range);
     }
 
@@ -130,8 +130,8 @@ public record MapPlot(String title, PlotAxis x, PlotAxis y, PlotAxis value, doub
             Contours.lines(raster, level, (lx, ly, n) -> {
                 double[] pts = new double[2 * n];
                 for (int k = 0; k < n; k++) {
-                    pts[2 * k] = Frame.LEFT + position(xs, x, lx[k]) * w;
-                    pts[2 * k + 1] = Frame.TOP + h - position(ys, y, ly[k]) * h;
+                    pts[2 * k] = ChartFrame.LEFT + position(xs, x, lx[k]) * w;
+                    pts[2 * k + 1] = ChartFrame.TOP + h - position(ys, y, ly[k]) * h;
                 }
                 lines.add(pts);
             });
@@ -160,23 +160,23 @@ public record MapPlot(String title, PlotAxis x, PlotAxis y, PlotAxis value, doub
         for (int k = 0; k < n; k++) {
             bar[k] = colour(range[1] - (range[1] - range[0]) * (k + 0.5) / n, range);
         }
-        s.image(bar, 1, n, left, Frame.TOP, BAR_WIDTH, h);
-        s.stroke(Frame.INK);
+        s.image(bar, 1, n, left, ChartFrame.TOP, BAR_WIDTH, h);
+        s.stroke(ChartFrame.INK);
         s.lineWidth(1);
-        s.strokeRect(left, Frame.TOP, BAR_WIDTH, h);
-        s.fill(Frame.INK);
+        s.strokeRect(left, ChartFrame.TOP, BAR_WIDTH, h);
+        s.fill(ChartFrame.INK);
         for (double v : value.ticks()) {
             double f = range[1] > range[0] ? (v - range[0]) / (range[1] - range[0]) : 0.5;
             if (f >= -1e-9 && f <= 1 + 1e-9) {
-                double py = Frame.TOP + h - f * h;
-                Frame.line(s, left + BAR_WIDTH, py, left + BAR_WIDTH + 4, py);
-                s.text(value.tickText(v), left + BAR_WIDTH + 7, py, Frame.TEXT, false, Surface.Anchor.LEFT);
+                double py = ChartFrame.TOP + h - f * h;
+                ChartFrame.line(s, left + BAR_WIDTH, py, left + BAR_WIDTH + 4, py);
+                s.text(value.tickText(v), left + BAR_WIDTH + 7, py, ChartFrame.TEXT, false, Surface.Anchor.LEFT);
             }
         }
         s.save();
-        s.translate(s.width() - 14, Frame.TOP + h / 2);
+        s.translate(s.width() - 14, ChartFrame.TOP + h / 2);
         s.rotate(-Math.PI / 2);
-        s.text(value.label(), 0, 0, Frame.TEXT, false, Surface.Anchor.CENTER);
+        s.text(value.label(), 0, 0, ChartFrame.TEXT, false, Surface.Anchor.CENTER);
         s.restore();
     }
 }

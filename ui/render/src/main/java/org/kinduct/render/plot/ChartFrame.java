@@ -3,7 +3,7 @@ package org.kinduct.render.plot;
 import org.kinduct.render.paint.Surface;
 
 /** The parts every plot shares: title, plot box, axes with ticks and labels. */
-final class Frame {
+final class ChartFrame {
 
     static final int INK = 0xFF1E1E1E;
     static final int GRID = 0x1F000000;
@@ -12,7 +12,7 @@ final class Frame {
     static final double TOP = 60;
     static final double BOTTOM = 70;
 
-    private Frame() {
+    private ChartFrame() {
     }
 
     /** Title, white page, the box, grid lines and tick labels of both axes. */
