@@ -21,8 +21,8 @@ import picocli.CommandLine.Parameters;
                 "Checks that the parts belong to one study and that none is missing, repeated or incomplete."})
 final class MergeCommand implements Callable<Integer> {
 
-    /** Study result files are small beside this; a bigger file is surely not one. */
-    private static final long MAX_BYTES = 1L << 30;
+    /** A part of a million points with a dozen metrics is some 200 MiB; a bigger file is surely not one. */
+    private static final long MAX_BYTES = 256L << 20;
 
     @Parameters(paramLabel = "PART.json", arity = "1..*", description = "The parts' JSON files.")
     List<Path> parts;
@@ -53,7 +53,7 @@ final class MergeCommand implements Callable<Integer> {
     private static String read(Path p) {
         try {
             if (Files.size(p) > MAX_BYTES) {
-                throw new BadInputException(p + " is larger than 1 GiB: not a study result");
+                throw new BadInputException(p + " is larger than 256 MiB: not a study result");
             }
             return new String(Files.readAllBytes(p), StandardCharsets.UTF_8);
         } catch (IOException e) {

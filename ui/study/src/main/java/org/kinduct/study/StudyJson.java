@@ -125,6 +125,10 @@ public final class StudyJson {
             Header header = new Header(text(root, "study"), text(root, "scene"), text(root, "mode"),
                     root.path("from_s").isNumber() ? root.path("from_s").asDouble() : Double.NEGATIVE_INFINITY,
                     text(root, "circuit_model"), root.path("points").asInt(), varied, metrics);
+            if (header.points() < 1 || header.points() > Design.MAX_POINTS) {
+                throw new IllegalArgumentException("\"points\" must be 1 to " + Design.MAX_POINTS + ", got "
+                        + root.path("points"));
+            }
             JsonNode s = root.path("shard");
             Shard shard = s.isObject() ? new Shard(s.path("index").asInt(), s.path("count").asInt()) : null;
             List<Row> rows = new ArrayList<>();
