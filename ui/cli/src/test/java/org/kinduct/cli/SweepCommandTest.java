@@ -196,7 +196,7 @@ class SweepCommandTest {
                 "--metric", "peak_emv:pickup");
         assertFails("'pickup' is not a free body", "--vary", "magnet-2.standoff=1 mm,2 mm", "--metric",
                 "terminal_speed:pickup");
-        assertFails("--shard: shard '5/4': expected K/N with 1 ≤ K ≤ N", "--vary", "magnet-2.standoff=1 mm,2 mm",
+        assertFails("--shard: shard 5/4: expected K/N with 1 ≤ K ≤ N", "--vary", "magnet-2.standoff=1 mm,2 mm",
                 "--metric", "peak_emf:pickup", "--shard", "5/4");
     }
 
