@@ -5,7 +5,7 @@ import java.util.Locale;
 import java.util.Optional;
 
 /** "Did you mean ...?" for misspelt names: the nearest known name by edit distance. */
-final class Suggestions {
+public final class Suggestions {
 
     private Suggestions() {
     }
@@ -14,7 +14,7 @@ final class Suggestions {
      * The known name closest to {@code given}, ignoring case, if it is within a third of the
      * name's length (at least 1) of edits: "vertexes" finds "vertices", "colour" finds nothing.
      */
-    static Optional<String> closest(String given, Collection<String> known) {
+    public static Optional<String> closest(String given, Collection<String> known) {
         String g = given.toLowerCase(Locale.ROOT);
         String best = null;
         int bestDistance = Integer.MAX_VALUE;
@@ -26,6 +26,18 @@ final class Suggestions {
             }
         }
         return best != null && bestDistance <= Math.max(1, best.length() / 3) ? Optional.of(best) : Optional.empty();
+    }
+
+    /**
+     * Up to {@code max} known names nearest to {@code given} by {@link #distance}, nearest first,
+     * each within the distance {@link #closest} allows (ties in the order of {@code known}).
+     */
+    public static java.util.List<String> nearest(String given, Collection<String> known, int max) {
+        String g = given.toLowerCase(Locale.ROOT);
+        return known.stream()
+                .filter(k -> distance(g, k.toLowerCase(Locale.ROOT)) <= Math.max(1, k.length() / 3))
+                .sorted(java.util.Comparator.comparingInt(k -> distance(g, k.toLowerCase(Locale.ROOT))))
+                .limit(max).toList();
     }
 
     /** " (did you mean 'x'?)" or nothing. */

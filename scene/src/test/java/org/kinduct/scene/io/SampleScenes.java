@@ -14,13 +14,13 @@ import org.kinduct.scene.Vec2;
 import org.kinduct.scene.WireSpec;
 
 /** Scenes for the file-format tests: one with every record variant, and random ones from a seed. */
-final class SampleScenes {
+public final class SampleScenes {
 
     private SampleScenes() {
     }
 
     /** Every motion, source, coil shape, conductor, vertex form and wire form at least once. */
-    static Scene everyVariant() {
+    public static Scene everyVariant() {
         List<Body> bodies = List.of(
                 new Body("carriage", "Carriage", Vec2.ZERO, new Motion.Glide(new Vec2(0.5, 0))),
                 new Body("shaker", "shaker", new Vec2(0.01, 0.02), new Motion.Oscillate(2e-3, 50, Math.PI / 2, 0.1)),
@@ -70,7 +70,7 @@ final class SampleScenes {
     }
 
     /** A random valid scene; numbers include awkward doubles to test that writing them is lossless. */
-    static Scene random(SplittableRandom r) {
+    public static Scene random(SplittableRandom r) {
         List<Body> bodies = new ArrayList<>();
         List<String> bodyIds = new ArrayList<>(List.of(Body.FIXED));
         int nBodies = r.nextInt(4);

@@ -1,0 +1,199 @@
+package org.kinduct.cli;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The metrics of README "Metrics", computed from the results JSON of {@code kinduct solve}
+ * (written for the tests apart from the production code, from the definitions alone): each
+ * sweep point must give what an independent solve of the edited scene gives.
+ */
+final class SolveJsonMetrics {
+
+    private final JsonNode root;
+
+    SolveJsonMetrics(String json) throws IOException {
+        root = new ObjectMapper().readTree(json);
+    }
+
+    /** The metric {@code key} of {@code id} (null for the scene) with load resistance {@code loadOhm} (loops). */
+    double metric(String key, String id, double loadOhm) {
+        if (key.equals("audit_residual")) {
+            JsonNode a = root.path("energy_audit");
+            return a.isObject() ? a.path("residual_J").asDouble() : Double.NaN;
+        }
+        if (List.of("final_speed", "terminal_speed", "settling_time").contains(key)) {
+            return body(key, id);
+        }
+        List<JsonNode> s = new ArrayList<>();
+        root.path("samples").forEach(n -> {
+            if (n.path("id").asText().equals(id)) {
+                s.add(n);
+            }
+        });
+        int n = s.size();
+        double[] t = new double[n];
+        double[] emf = new double[n];
+        double[] current = new double[n];
+        for (int i = 0; i < n; i++) {
+            t[i] = s.get(i).path("t").asDouble();
+            emf[i] = s.get(i).path("emf_V").asDouble();
+            current[i] = s.get(i).path("current_A").asDouble();
+        }
+        switch (key) {
+            case "peak_emf":
+                return max(abs(emf));
+            case "rms_emf": {
+                double sum = 0;
+                for (double e : emf) {
+                    sum += e * e;
+                }
+                return Math.sqrt(sum / n);
+            }
+            case "peak_to_peak_emf":
+                return max(emf) + max(negate(emf));
+            case "peak_time": {
+                int best = 0;
+                for (int i = 1; i < n; i++) {
+                    if (Math.abs(emf[i]) > Math.abs(emf[best])) {
+                        best = i;
+                    }
+                }
+                return t[best];
+            }
+            case "dominant_frequency":
+                return dominantFrequency(emf, (t[n - 1] - t[0]) / (n - 1));
+            case "flux_swing": {
+                double[] linkage = new double[n];
+                for (int i = 0; i < n; i++) {
+                    linkage[i] = s.get(i).path("linkage_Wb").asDouble();
+                }
+                return max(linkage) + max(negate(linkage));
+            }
+            case "peak_current":
+                return max(abs(current));
+            case "mean_load_power": {
+                double[] p = new double[n];
+                for (int i = 0; i < n; i++) {
+                    p[i] = current[i] * current[i] * loadOhm;
+                }
+                return trapezoid(t, p) / (t[n - 1] - t[0]);
+            }
+            case "joule_heat": {
+                double[] p = new double[n];
+                for (int i = 0; i < n; i++) {
+                    p[i] = current[i] * current[i] * s.get(i).path("resistance_Ohm").asDouble();
+                }
+                return trapezoid(t, p);
+            }
+            case "peak_force": {
+                double[] f = new double[n];
+                for (int i = 0; i < n; i++) {
+                    JsonNode force = s.get(i).path("force_N");
+                    f[i] = Math.hypot(force.get(0).asDouble(), force.get(1).asDouble());
+                }
+                return max(f);
+            }
+            default:
+                throw new IllegalArgumentException(key);
+        }
+    }
+
+    private double body(String key, String id) {
+        List<Double> t = new ArrayList<>();
+        List<Double> v = new ArrayList<>();
+        root.path("bodies").forEach(b -> {
+            if (b.path("id").asText().equals(id)) {
+                t.add(b.path("t").asDouble());
+                v.add(Math.hypot(b.path("velocity_mps").get(0).asDouble(), b.path("velocity_mps").get(1).asDouble()));
+            }
+        });
+        int n = v.size();
+        double last = v.get(n - 1);
+        if (key.equals("final_speed")) {
+            return last;
+        }
+        if (key.equals("settling_time")) {
+            double band = 0.02 * (last != 0 ? last : max(v.stream().mapToDouble(Double::doubleValue).toArray()));
+            int k = n - 1;
+            while (k > 0 && Math.abs(v.get(k - 1) - last) <= band) {
+                k--;
+            }
+            return t.get(k) - root.path("samples").get(0).path("t").asDouble();
+        }
+        // Aitken's Δ² on the speeds a tenth of the window apart, ending at the last sample.
+        int step = (int) Math.max(1, Math.round((n - 1) * 0.1));
+        double a = v.get(n - 1 - 2 * step);
+        double b = v.get(n - 1 - step);
+        double c = last;
+        if (Math.abs(b - a) <= 1e-9 * Math.abs(c) && Math.abs(c - b) <= 1e-9 * Math.abs(c)) {
+            return c;
+        }
+        if (Math.signum(b - a) != Math.signum(c - b) || Math.abs(c - b) >= Math.abs(b - a)) {
+            return Double.NaN;
+        }
+        return c - (c - b) * (c - b) / ((c - b) - (b - a));
+    }
+
+    /** Largest |DFT| bin above zero of the mean-free signal zero-padded to the power of two ≥ 8n, by direct summation. */
+    private static double dominantFrequency(double[] x, double dt) {
+        int n = x.length;
+        int size = Integer.highestOneBit(8 * n - 1) << 1;
+        double mean = 0;
+        for (double v : x) {
+            mean += v / n;
+        }
+        int best = 0;
+        double largest = 0;
+        for (int k = 1; k <= size / 2; k++) {
+            double re = 0;
+            double im = 0;
+            for (int i = 0; i < n; i++) {
+                double phase = -2 * Math.PI * ((long) k * i % size) / size;
+                re += (x[i] - mean) * Math.cos(phase);
+                im += (x[i] - mean) * Math.sin(phase);
+            }
+            double m = Math.hypot(re, im);
+            if (m > largest * (1 + 1e-12)) {
+                largest = m;
+                best = k;
+            }
+        }
+        return best / (size * dt);
+    }
+
+    private static double trapezoid(double[] t, double[] y) {
+        double sum = 0;
+        for (int i = 0; i + 1 < t.length; i++) {
+            sum += (t[i + 1] - t[i]) * (y[i] + y[i + 1]) / 2;
+        }
+        return sum;
+    }
+
+    private static double[] abs(double[] v) {
+        double[] out = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            out[i] = Math.abs(v[i]);
+        }
+        return out;
+    }
+
+    private static double[] negate(double[] v) {
+        double[] out = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            out[i] = -v[i];
+        }
+        return out;
+    }
+
+    private static double max(double[] v) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (double x : v) {
+            m = Math.max(m, x);
+        }
+        return m;
+    }
+}
