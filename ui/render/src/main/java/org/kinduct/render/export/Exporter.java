@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.report.CautionCheck;
+import org.kinduct.report.RunSummary;
 import org.kinduct.solver.run.ResultScales;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.io.SceneFiles;
@@ -196,7 +197,9 @@ public final class Exporter {
             RunResult result = run.result();
             List<Snapshot> checked = new ArrayList<>(result.samples());
             checked.add(snapshot());
-            page = SnapshotPage.layout(scene, snapshot(), result.audit().map(EnergyText::of).stream().toList(),
+            List<String> remarks = new ArrayList<>(RunSummary.lines(result));
+            result.audit().map(EnergyText::of).ifPresent(remarks::add);
+            page = SnapshotPage.layout(scene, snapshot(), remarks,
                     CautionCheck.lines(scene, checked), result.scales(), waveform(result), options);
         }
         return page;
@@ -217,7 +220,8 @@ public final class Exporter {
             }
             lines.add(new LineChart.Series(scene.conductors().get(c).id(), t, emf));
         }
-        return new LineChart.Content("EMF over the run", lines, Dimension.TIME, Dimension.VOLTAGE, snapshot().tS());
+        return new LineChart.Content("EMF over the run", lines, "t", Dimension.TIME, "EMF", Dimension.VOLTAGE,
+                snapshot().tS());
     }
 
     /** Output pixels per page unit. */

@@ -1,15 +1,15 @@
 package org.kinduct.render.paint;
 
 import java.util.List;
-import org.kinduct.render.view.NiceSteps;
+import org.kinduct.render.plot.PlotAxis;
 import org.kinduct.scene.units.Dimension;
-import org.kinduct.scene.units.Units;
 
 /**
- * A line chart on a {@link Surface}: one or more series of y against x, axes with round ticks,
- * a key naming each line in its colour, and an optional marker at one x (the instant a picture
- * shows). The y axis is symmetric about zero when the data change sign (an EMF that reverses
- * reads at a glance), else it starts at zero. Stateless; every surface draws the same chart.
+ * A compact line chart inside a box of a page: one or more series of y against x, axes with
+ * round ticks ({@link PlotAxis}, as the study plots use), a key naming each line in its colour,
+ * and an optional marker at one x (the instant a picture shows). The y axis is symmetric about
+ * zero when the data change sign (an EMF that reverses reads at a glance), else it starts at
+ * zero. Stateless; every surface draws the same chart.
  */
 public final class LineChart {
 
@@ -17,13 +17,10 @@ public final class LineChart {
     private static final int[] COLOURS = {0xFF1F5FA8, 0xFFC2410C, 0xFF2E7D32, 0xFF7B1FA2, 0xFF8D6E00, 0xFF00838F};
     private static final int MARKER = 0xFFD6007A;
     private static final double FONT = 11;
-    private static final double LEFT = 62;
-    private static final double BOTTOM = 30;
+    private static final double LEFT = 46;
+    private static final double BOTTOM = 34;
     private static final double TOP = 20;
     private static final double RIGHT = 10;
-    /** Ticks wanted at least this many screen units apart: across the time axis, and up the value axis. */
-    private static final double X_TICK_SPACING = 48;
-    private static final double Y_TICK_SPACING = 24;
 
     /** One line: its name and its values at the x's (NaN leaves a gap). */
     public record Series(String label, double[] x, double[] y) {
@@ -35,8 +32,12 @@ public final class LineChart {
         }
     }
 
-    /** What a chart shows: series, the units of both axes, a title, and a marker at {@code markerX} (NaN: none). */
-    public record Content(String title, List<Series> series, Dimension xUnit, Dimension yUnit, double markerX) {
+    /**
+     * What a chart shows: series, the names and dimensions of both axes, a title, and a marker at
+     * {@code markerX} (NaN: none).
+     */
+    public record Content(String title, List<Series> series, String xName, Dimension xUnit, String yName,
+                          Dimension yUnit, double markerX) {
         public Content {
             series = List.copyOf(series);
         }
@@ -64,11 +65,19 @@ public final class LineChart {
         }
         double xLow = xr[0];
         double xHigh = xr[1] > xr[0] ? xr[1] : xr[0] + 1;
+        PlotAxis xAxis = new PlotAxis(c.xName(), c.xUnit().siUnit().symbol(), false, xLow, xHigh);
+        PlotAxis yAxis = new PlotAxis(c.yName(), c.yUnit().siUnit().symbol(), false, yLow, yHigh);
         s.save();
+        // The value axis is named above its tick labels, the title beside it.
+        s.fill(Palette.MUTED);
+        s.text(yAxis.label(), x, y + TOP / 2, FONT, false, Surface.Anchor.LEFT);
         s.fill(Palette.INK);
-        s.text(c.title(), px, y + TOP / 2, FONT, true, Surface.Anchor.LEFT);
-        ticks(s, px, py, pw, ph, xLow, xHigh, c.xUnit(), true);
-        ticks(s, px, py, pw, ph, yLow, yHigh, c.yUnit(), false);
+        s.text(c.title(), x + s.textWidth(yAxis.label(), FONT, false) + 16, y + TOP / 2, FONT, true,
+                Surface.Anchor.LEFT);
+        ticks(s, px, py, pw, ph, xAxis, true);
+        ticks(s, px, py, pw, ph, yAxis, false);
+        s.fill(Palette.MUTED);
+        s.text(xAxis.label(), px + pw, py + ph + 4 + FONT, FONT, false, Surface.Anchor.TOP_RIGHT);
         s.stroke(Palette.LABEL_EDGE);
         s.lineWidth(1);
         s.dash();
@@ -105,14 +114,11 @@ public final class LineChart {
         return low <= high ? new double[] {low, high} : new double[] {0, 0};
     }
 
-    private static void ticks(Surface s, double px, double py, double pw, double ph, double low, double high,
-                              Dimension unit, boolean alongX) {
-        double length = alongX ? pw : ph;
-        double step = NiceSteps.atLeast((high - low) * (alongX ? X_TICK_SPACING : Y_TICK_SPACING) / length);
+    private static void ticks(Surface s, double px, double py, double pw, double ph, PlotAxis axis, boolean alongX) {
         s.lineWidth(1);
-        for (double v = Math.ceil(low / step) * step; v <= high + step * 1e-9; v += step) {
-            double at = (v - low) / (high - low) * length;
-            double value = Math.abs(v) < step * 1e-9 ? 0 : v;
+        s.dash();
+        for (double value : axis.ticks()) {
+            double at = axis.fraction(value) * (alongX ? pw : ph);
             s.stroke(value == 0 ? Palette.AXIS : Palette.GRID_MINOR);
             s.beginPath();
             if (alongX) {
@@ -124,11 +130,10 @@ public final class LineChart {
             }
             s.strokePath();
             s.fill(Palette.MUTED);
-            String label = Units.format(value, unit);
             if (alongX) {
-                s.text(label, px + at, py + ph + 4, FONT, false, Surface.Anchor.TOP_CENTER);
+                s.text(axis.tickText(value), px + at, py + ph + 4, FONT, false, Surface.Anchor.TOP_CENTER);
             } else {
-                s.text(label, px - 4, py + ph - at, FONT, false, Surface.Anchor.RIGHT);
+                s.text(axis.tickText(value), px - 4, py + ph - at, FONT, false, Surface.Anchor.RIGHT);
             }
         }
     }

@@ -121,7 +121,7 @@ public record MapPlot(String title, PlotAxis x, PlotAxis y, PlotAxis value, doub
             }
         }
         // Cell (c, r) centred on index (c, rows − 1 − r): contour coordinates are point indices.
-        FieldRaster raster = new FieldRaster(-0.5, rows - 0.5, 1, cols, rows, grid, 0, 0, 0);
+        FieldRaster raster = new FieldRaster(-0.5, rows - 0.5, 1, cols, rows, grid, 0, 0, 0, 0);
         double step = NiceSteps.atLeast((range[1] - range[0]) / 8);
         s.stroke(CONTOUR_INK);
         s.lineWidth(1);

@@ -125,6 +125,11 @@ public enum MetricKind {
         return definition;
     }
 
+    /** This metric of {@code target} (null for SCENE) over the whole of {@code run}. */
+    public double of(RunResult run, String target) {
+        return read(run, target, Double.NEGATIVE_INFINITY);
+    }
+
     /** This metric of {@code target} (null for SCENE) from the samples of {@code run} at or after {@code fromS}. */
     double read(RunResult run, String target, double fromS) {
         return reading.read(run, Window.of(run, fromS), target);

@@ -1,0 +1,72 @@
+package org.kinduct.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.kinduct.report.metrics.MetricKind;
+import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Motion;
+import org.kinduct.scene.units.Units;
+import org.kinduct.solver.run.RunResult;
+
+/**
+ * The answer to "how many volts, how much power, how fast" in one line per conductor and per
+ * free body, from the same metrics a design study reads ({@link MetricKind}): peak and RMS EMF
+ * and when the peak comes, the dominant frequency, and for closed loops the peak current and the
+ * mean power into the load resistor; the final and terminal speed of each free body.
+ */
+public final class RunSummary {
+
+    private static final List<MetricKind> EVERY_CONDUCTOR = List.of(MetricKind.PEAK_EMF, MetricKind.PEAK_TIME,
+            MetricKind.RMS_EMF, MetricKind.DOMINANT_FREQUENCY);
+    private static final List<MetricKind> CLOSED_LOOPS = List.of(MetricKind.PEAK_CURRENT, MetricKind.MEAN_LOAD_POWER);
+    private static final List<MetricKind> FREE_BODIES = List.of(MetricKind.FINAL_SPEED, MetricKind.TERMINAL_SPEED);
+
+    private RunSummary() {
+    }
+
+    /** E.g. "pickup: peak EMF 248 mV at 140 ms, RMS EMF 154 mV, dominant frequency 8.33 Hz"; only quantities with a value. */
+    public static List<String> lines(RunResult run) {
+        List<String> out = new ArrayList<>();
+        if (run.samples().size() < 2) {
+            return out;
+        }
+        for (Conductor c : run.scene().conductors()) {
+            List<MetricKind> kinds = new ArrayList<>(EVERY_CONDUCTOR);
+            if (c instanceof Conductor.Loop loop && !loop.open()) {
+                kinds.addAll(CLOSED_LOOPS);
+                if (loop.loadOhm() == 0) {
+                    kinds.remove(MetricKind.MEAN_LOAD_POWER);
+                }
+            }
+            out.add(line(run, c.id(), kinds));
+        }
+        for (Body b : run.scene().bodies()) {
+            if (b.motion() instanceof Motion.Free) {
+                out.add(line(run, b.id(), FREE_BODIES));
+            }
+        }
+        return out;
+    }
+
+    private static String line(RunResult run, String id, List<MetricKind> kinds) {
+        List<String> parts = new ArrayList<>();
+        for (MetricKind k : kinds) {
+            double v = k.of(run, id);
+            if (!Double.isFinite(v) || k == MetricKind.PEAK_TIME) {
+                continue;
+            }
+            String text = name(k) + " " + Units.format(v, k.dimension());
+            if (k == MetricKind.PEAK_EMF) {
+                text += " at " + Units.format(MetricKind.PEAK_TIME.of(run, id), MetricKind.PEAK_TIME.dimension());
+            }
+            parts.add(text);
+        }
+        return id + ": " + String.join(", ", parts);
+    }
+
+    /** "peak EMF", "RMS EMF", "mean load power": the metric's key in words, abbreviations in capitals. */
+    private static String name(MetricKind k) {
+        return k.key().replace('_', ' ').replace("rms", "RMS").replace("emf", "EMF");
+    }
+}
