@@ -121,10 +121,14 @@ final class CoupledEquations implements OrdinaryDifferentialEquation {
         return evaluate(t, y).derivative();
     }
 
-    /** The stored energies at an evaluated state; no magnetic energy in the quasi-static model, whose inductances are taken as zero. */
+    /**
+     * The stored energies at an evaluated state; no magnetic energy in the quasi-static model,
+     * whose inductances are taken as zero.
+     */
     EnergyLedger.Stored stored(Evaluation at) {
         double magnetic = inductive() ? LoopCircuits.magneticEnergyJ(at.inductance(), at.current()) : 0;
-        return new EnergyLedger.Stored(bodies.kineticEnergyJ(at.poses()), bodies.potentialEnergyJ(at.poses()), magnetic);
+        return new EnergyLedger.Stored(bodies.kineticEnergyJ(at.poses()), bodies.potentialEnergyJ(at.poses()),
+                magnetic);
     }
 
     /** The energy audit of a run from {@code first} to {@code last}. */
@@ -177,7 +181,8 @@ final class CoupledEquations implements OrdinaryDifferentialEquation {
         for (int k = 0; k < n; k++) {
             loopForce[k] = perAmpereTurn[k].applyTo(circuits.loop(k).turns() * current[k], loads);
         }
-        double inductiveHolding = inductive() && inductiveForces.present() && n > 1
+        // Also for a single loop: one that changes shape (a bar on rails) pushes itself with ½·I²·dL/dq.
+        double inductiveHolding = inductive() && inductiveForces.present()
                 ? inductiveForces.apply(tS, poses, current, loads) : 0;
         FreeBodies.Power mechanical = bodies.addForces(tS, poses, loads);
 

@@ -167,7 +167,7 @@ final class FreeBodies {
         return new Power(applied, damping);
     }
 
-    /** Writes each free body's rates: (ẋ, ẏ, θ̇) = (vx, vy, ω), (v̇x, v̇y) = F/m, ω̇ = τ/I_p (0 when it does not turn). */
+    /** Writes each free body's rates: (vx, vy, ω), then F/m and τ/I_p (0 when it does not turn). */
     void writeDerivatives(Pose[] poses, BodyLoads loads, double[] derivative) {
         for (int b = 0; b < free.length; b++) {
             Motion.Free f = free[b];

@@ -23,7 +23,7 @@ import org.kinduct.solver.field.PlaneField;
  */
 final class LoopCircuits {
 
-    /** Closed loop k: the loop, its conductor index in the scene, its wire radius and the one body it rides (−1 if several). */
+    /** Closed loop k: the loop, its index among the conductors, its wire radius, its one body (−1 if several). */
     record Circuit(Conductor.Loop loop, int conductor, double wireRadiusM, int rigidBody) {
     }
 
@@ -79,7 +79,7 @@ final class LoopCircuits {
         return circuits.get(k).conductor();
     }
 
-    /** True when some entry of M changes as the bodies move (two loops on different bodies, or a loop that changes shape). */
+    /** True when some entry of M changes as bodies move: loops on different bodies, or one that changes shape. */
     boolean anyVariable() {
         return anyVariable;
     }

@@ -44,7 +44,10 @@ final class TransformerStencil {
         return sourcesVary ? new Around(fieldsAt(now, tS, tS - stepS), fieldsAt(now, tS, tS + stepS)) : null;
     }
 
-    /** −∂Φ/∂t per turn through a loop held at xs, ys, volts; {@code around} from {@link #around} (null: nothing varies). */
+    /**
+     * −∂Φ/∂t per turn through a loop held at xs, ys, volts; {@code around} from {@link #around}
+     * (null: nothing varies).
+     */
     double emfPerTurn(Around around, double[] xs, double[] ys) {
         if (around == null) {
             return 0;
