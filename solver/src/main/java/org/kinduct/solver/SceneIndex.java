@@ -13,31 +13,35 @@ import org.kinduct.solver.field.PlaneField;
 
 /**
  * The scene's bodies, sources and conductor vertices resolved to array indices once, so that
- * each instant only looks up poses by index.
+ * each instant only looks up poses by index. Bodies are numbered as in {@link Scene#bodies()},
+ * sources as in {@link Scene#sources()}, conductors as in {@link Scene#conductors()}; a pose
+ * array {@code Pose[]} holds one pose per body in that order. Public for the coupled simulation
+ * ({@code org.kinduct.solver.dynamics}), which places the same conductors and sources from the
+ * poses it integrates.
  */
-final class SceneIndex {
+public final class SceneIndex {
 
     private final Scene scene;
     private final String[] bodyIds;
+    private final Map<String, Integer> bodyIndex = new HashMap<>();
     private final int[] sourceBody;
     private final SourceReach[] reach;
     private final int[][] vertexBody;
     private final Vec2[][] drawn;
 
-    SceneIndex(Scene scene) {
+    public SceneIndex(Scene scene) {
         this.scene = scene;
         List<Body> bodies = scene.bodies();
         bodyIds = new String[bodies.size()];
-        Map<String, Integer> index = new HashMap<>();
         for (int b = 0; b < bodyIds.length; b++) {
             bodyIds[b] = bodies.get(b).id();
-            index.put(bodyIds[b], b);
+            bodyIndex.put(bodyIds[b], b);
         }
         List<Source> sources = scene.sources();
         sourceBody = new int[sources.size()];
         reach = new SourceReach[sources.size()];
         for (int s = 0; s < sourceBody.length; s++) {
-            sourceBody[s] = index.get(sources.get(s).body());
+            sourceBody[s] = bodyIndex.get(sources.get(s).body());
             reach[s] = SourceReach.of(sources.get(s));
         }
         List<Conductor> conductors = scene.conductors();
@@ -49,17 +53,34 @@ final class SceneIndex {
             vertexBody[c] = new int[vertices.size()];
             drawn[c] = new Vec2[vertices.size()];
             for (int i = 0; i < vertices.size(); i++) {
-                vertexBody[c][i] = index.get(vertices.get(i).bodyOr(conductor.body()));
+                vertexBody[c][i] = bodyIndex.get(vertices.get(i).bodyOr(conductor.body()));
                 drawn[c][i] = vertices.get(i).at();
             }
         }
     }
 
-    Scene scene() {
+    public Scene scene() {
         return scene;
     }
 
-    int sourceCount() {
+    public int bodyCount() {
+        return bodyIds.length;
+    }
+
+    /**
+     * The index of body {@code bodyId}.
+     *
+     * @throws IllegalArgumentException when the scene has no such body
+     */
+    public int body(String bodyId) {
+        Integer b = bodyIndex.get(bodyId);
+        if (b == null) {
+            throw new IllegalArgumentException("no body '" + bodyId + "'");
+        }
+        return b;
+    }
+
+    public int sourceCount() {
         return sourceBody.length;
     }
 
@@ -77,12 +98,23 @@ final class SceneIndex {
         return reach[source];
     }
 
-    int sourceBody(int source) {
+    /** The index of the body source {@code source} rides. */
+    public int sourceBody(int source) {
         return sourceBody[source];
     }
 
-    int vertexCount(int conductor) {
+    public int vertexCount(int conductor) {
         return drawn[conductor].length;
+    }
+
+    /** The index of the body vertex {@code i} of conductor {@code conductor} rides. */
+    public int vertexBody(int conductor, int i) {
+        return vertexBody[conductor][i];
+    }
+
+    /** Vertex {@code i} of conductor {@code conductor} as drawn, in its body's frame, metres. */
+    public Vec2 drawn(int conductor, int i) {
+        return drawn[conductor][i];
     }
 
     Frame frame(Kinematics kinematics, double tS) {
@@ -90,18 +122,32 @@ final class SceneIndex {
         for (int b = 0; b < poses.length; b++) {
             poses[b] = kinematics.poseAt(bodyIds[b], tS);
         }
+        return new Frame(tS, poses, fields(poses, tS));
+    }
+
+    /** Every source's field at {@code tS}, each placed by the pose of its body in {@code poses}. */
+    public PlaneField[] fields(Pose[] poses, double tS) {
         List<Source> sources = scene.sources();
         PlaneField[] fields = new PlaneField[sources.size()];
         for (int s = 0; s < fields.length; s++) {
             fields[s] = SourceFields.place(sources.get(s), poses[sourceBody[s]], tS);
         }
-        return new Frame(tS, poses, fields);
+        return fields;
     }
 
     /** Writes conductor {@code c}'s vertices at {@code frame} into xs, ys. */
     void place(int c, Frame frame, double[] xs, double[] ys) {
         for (int i = 0; i < xs.length; i++) {
             Vec2 p = frame.pose(vertexBody[c][i]).place(drawn[c][i]);
+            xs[i] = p.x();
+            ys[i] = p.y();
+        }
+    }
+
+    /** Writes conductor {@code c}'s vertices, each placed by the pose of its body in {@code poses}, into xs, ys. */
+    public void place(int c, Pose[] poses, double[] xs, double[] ys) {
+        for (int i = 0; i < xs.length; i++) {
+            Vec2 p = poses[vertexBody[c][i]].place(drawn[c][i]);
             xs[i] = p.x();
             ys[i] = p.y();
         }

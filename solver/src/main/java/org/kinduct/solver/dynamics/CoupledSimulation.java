@@ -1,9 +1,7 @@
 package org.kinduct.solver.dynamics;
 
-import java.util.ArrayList;
-import java.util.HashMap;
+import java.util.Arrays;
 import java.util.List;
-import java.util.Map;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
@@ -11,12 +9,11 @@ import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.hipparchus.ode.sampling.ODEStepHandler;
 import org.kinduct.scene.Checks;
-import org.kinduct.scene.Motion;
-import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.solver.ConductorState;
-import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.dynamics.StateLayout.AuditTerm;
+import org.kinduct.solver.dynamics.StateLayout.BodyDof;
 
 /**
  * Coupled simulation of the loop circuits and the free bodies of a scene over [t0, t1].
@@ -59,26 +56,33 @@ import org.kinduct.solver.Snapshot;
  * anchor or another body's pivot; the reaction acts on that body. The magnetic force on a loop
  * edge from each source is N·I·∫ dl × B (from its B_z moments), its torque about the body's pivot
  * likewise; the reaction (force and torque) acts on the source's body, so free magnets and coils
- * are pushed back. Forces between loop currents are the gradient of ½IᵀMI at constant currents,
- * by central differences. Edges whose ends ride different bodies (a bar sliding on rails) are
- * contacts: their force is taken by the guide, not applied to a body. Forces between sources
- * (magnet on magnet) are not modelled. Prescribed and free bodies mix.
+ * are pushed back. Forces between loop currents, and the force of a loop that changes shape on
+ * itself (½·I²·dL/dx on a bar sliding on rails, even when it is the scene's only loop), are the
+ * gradient of ½IᵀMI at constant currents, by central differences; holders of prescribed bodies
+ * supply −½·Iᵀ(dM/dt)I against them. Edges whose ends ride different bodies (a bar sliding on
+ * rails) are contacts: their force is taken by the guide, not applied to a body. Forces between
+ * sources (magnet on magnet) are not modelled. Prescribed and free bodies mix.
  *
- * <p><b>Integration.</b> Hipparchus' Dormand–Prince 8(5,3), steps at most dt, relative tolerance
- * relTol on the body states with absolute tolerances relTol times the loops' size (and its ratio
- * to the run's duration for speeds); on each loop's Ψ_k an absolute tolerance only,
- * relTol·L_kk·{@value #CURRENT_SCALE_A} A, because Ψ_k is dominated by the external linkage and a
- * tolerance relative to it would leave I with an error of relTol·|λ_ext|/L. Samples come from the
- * integrator's dense output; currents are then good to about 1e-7 relative at the default
- * tolerance, positions and speeds to about 1e-9.
+ * <p><b>Integration.</b> The equations are {@code CoupledEquations} over the named state layout
+ * {@code StateLayout}, put together from parts with one job each (free-body mechanics, loop
+ * circuits, edge forces, transformer stencil, inductive forces, coil drives, energy ledger); the
+ * samples come from the step handler {@code RunSampler}. Hipparchus' Dormand–Prince 8(5,3),
+ * steps at most dt, relative tolerance relTol on the body states with absolute tolerances relTol
+ * times the loops' size (and its ratio to the run's duration for speeds); on each loop's Ψ_k an
+ * absolute tolerance only, relTol·L_kk·{@value #CURRENT_SCALE_A} A, because Ψ_k is dominated by
+ * the external linkage and a tolerance relative to it would leave I with an error of
+ * relTol·|λ_ext|/L. Samples come from the integrator's dense output; currents are then good to
+ * about 1e-7 relative at the default tolerance, positions and speeds to about 1e-9.
  *
  * <p><b>Energy audit</b> ({@link EnergyAudit}): applied, holding and drive work, Joule and damping
  * heat, integrated alongside the state, and the changes of kinetic, potential and magnetic
  * energy; its residual is about 1e-9 of the heat where loop–loop forces play no part, 1e-4 where
- * they do (their differences). In the quasi-static model there is no magnetic energy and no
- * loop–loop force, and the Joule heat equals the mechanical work the braking forces take out
- * (exactly, for loops riding one body each over still sources: I·EMF_motional = −F·v edge by
- * edge); a transformer EMF from moving sources is a central difference, good to about 1e-8.
+ * they do (their differences); where a single loop's self-force is the only such force it is
+ * far smaller (measured 3e-14 for a free bar braking on rails). In the quasi-static model there
+ * is no magnetic energy and no loop–loop force, and the Joule heat equals the mechanical work the
+ * braking forces take out (exactly, for loops riding one body each over still sources:
+ * I·EMF_motional = −F·v edge by edge); a transformer EMF from moving sources is a central
+ * difference, good to about 1e-8.
  */
 public final class CoupledSimulation {
 
@@ -140,39 +144,26 @@ public final class CoupledSimulation {
         double endS = Math.max(t1S, times.last());
         stopIfCancelled(monitor, t0S, t0S, endS);
         double hS = DIFFERENCE_STEP_FRACTION * dtS;
-        CoupledModel model = new CoupledModel(scene, hS, circuitModel.resolveFor(scene, t0S, dtS));
-        double[] y0 = model.initialState(t0S);
-        OrdinaryDifferentialEquation equations = new OrdinaryDifferentialEquation() {
+        CoupledEquations equations = new CoupledEquations(scene, t0S, hS, circuitModel.resolveFor(scene, t0S, dtS));
+        double[] y0 = equations.initialState();
+        // The stop request is polled at every evaluation of the equations.
+        OrdinaryDifferentialEquation watched = new OrdinaryDifferentialEquation() {
             @Override
             public int getDimension() {
-                return model.dimension();
+                return equations.getDimension();
             }
 
             @Override
             public double[] computeDerivatives(double t, double[] y) {
                 stopIfCancelled(monitor, t, t0S, endS);
-                return model.evaluate(t, y).derivative;
+                return equations.computeDerivatives(t, y);
             }
         };
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-12 * (endS - t0S), dtS,
-                absoluteTolerances(model, y0, t0S, endS), relativeTolerances(model));
-        List<Snapshot> samples = new ArrayList<>(times.gridCount());
-        List<Snapshot> extras = new ArrayList<>();
+                absoluteTolerances(equations, y0, t0S, endS), relativeTolerances(equations.layout()));
         // Samples are made as the integrator passes their times, so the progress counts their cost too.
-        integrator.addStepHandler(new ODEStepHandler() {
-            private int next;
-
-            @Override
-            public void handleStep(ODEStateInterpolator step) {
-                // The integrator ends exactly at the last sample time, so every one is reached.
-                double end = step.getCurrentState().getTime();
-                for (; next < times.count() && times.time(next) <= end; next++) {
-                    double t = times.time(next);
-                    Snapshot sample = sample(model, t, step.getInterpolatedState(t).getPrimaryState());
-                    (times.onGrid(next) ? samples : extras).add(sample);
-                }
-            }
-        });
+        RunSampler sampler = new RunSampler(equations, times);
+        integrator.addStepHandler(sampler);
         // Added after the sampler, so a step's samples are made before its progress is reported.
         integrator.addStepHandler(new ODEStepHandler() {
             @Override
@@ -186,9 +177,10 @@ public final class CoupledSimulation {
                 monitor.progress(1);
             }
         });
-        ODEStateAndDerivative last = integrator.integrate(equations, new ODEState(t0S, y0), endS);
-        return new CoupledRun(samples, extras, audit(model, t0S, y0, last.getTime(), last.getPrimaryState()),
-                model.circuitModel());
+        ODEStateAndDerivative last = integrator.integrate(watched, new ODEState(t0S, y0), endS);
+        EnergyAudit audit = equations.audit(equations.evaluate(t0S, y0),
+                equations.evaluate(last.getTime(), last.getPrimaryState()), last.getPrimaryState());
+        return new CoupledRun(sampler.samples(), sampler.extras(), audit, equations.circuitModel());
     }
 
     private static void stopIfCancelled(RunMonitor monitor, double tS, double t0S, double t1S) {
@@ -197,77 +189,43 @@ public final class CoupledSimulation {
         }
     }
 
-    private static EnergyAudit audit(CoupledModel model, double t0S, double[] y0, double t1S, double[] y1) {
-        CoupledModel.Evaluation start = model.evaluate(t0S, y0);
-        CoupledModel.Evaluation end = model.evaluate(t1S, y1);
-        int a = model.auditOffset();
-        return new EnergyAudit(y1[a + CoupledModel.APPLIED], y1[a + CoupledModel.HOLDING], y1[a + CoupledModel.DRIVE],
-                y1[a + CoupledModel.JOULE], y1[a + CoupledModel.DAMPING],
-                end.kineticEnergyJ() - start.kineticEnergyJ(), end.potentialEnergyJ() - start.potentialEnergyJ(),
-                end.magneticEnergyJ() - start.magneticEnergyJ());
-    }
-
-    /**
-     * The sample at t: free bodies' poses from the state, conductor states from the quasi-static
-     * solver run on the integrated motion (EMF by both methods, flux, resistance, wires and open
-     * loops as there), with each closed loop's current and force replaced by the coupled ones
-     * (its sense by the one rule, {@link ConductorState#withCurrent}), and every closed loop's
-     * self-inductance where it is now.
-     */
-    private static Snapshot sample(CoupledModel model, double tS, double[] y) {
-        CoupledModel.Evaluation now = model.evaluate(tS, y);
-        Map<String, Pose> free = new HashMap<>();
-        for (int b = 0; b < model.bodies().size(); b++) {
-            if (model.bodies().get(b).motion() instanceof Motion.Free) {
-                free.put(model.bodies().get(b).id(), now.poses[b]);
-            }
-        }
-        Map<String, Integer> loopIndex = new HashMap<>();
-        for (int k = 0; k < model.loops().size(); k++) {
-            loopIndex.put(model.loops().get(k).loop().id(), k);
-        }
-        double[][] inductance = model.inductance(now.poses);
-        Snapshot quasiStatic = new SceneSolver(model.scene(), model.kinematicsAround(tS, y)).at(tS);
-        List<ConductorState> states = new ArrayList<>();
-        for (ConductorState c : quasiStatic.conductors()) {
-            Integer k = loopIndex.get(c.id());
-            states.add(k == null ? c
-                    : c.withInductance(inductance[k][k]).withCurrent(now.current[k], now.loopForce[k]));
-        }
-        return new Snapshot(tS, states, free);
-    }
-
-    private double[] relativeTolerances(CoupledModel model) {
-        double[] rel = new double[model.dimension()];
+    private double[] relativeTolerances(StateLayout layout) {
+        double[] rel = new double[layout.dimension()];
         // Body states only: the loop states get an absolute tolerance, the energy integrals none.
-        java.util.Arrays.fill(rel, 0, model.loopOffset(), relTol);
+        Arrays.fill(rel, 0, layout.bodyStates(), relTol);
         return rel;
     }
 
     /**
      * Absolute tolerances: relTol times a length scale (the loops' extent, else 1 m) for
      * positions, its ratio to the run's duration for velocities, 1 rad and 1/duration for angles
-     * and ω, and L_kk·{@value #CURRENT_SCALE_A} A for loop k's Ψ. The energy integrals are not
-     * error-controlled: they ride on the steps the state needs.
+     * and ω, and L_kk·{@value #CURRENT_SCALE_A} A for loop k's circuit state. The energy
+     * integrals are not error-controlled: they ride on the steps the state needs.
      */
-    private double[] absoluteTolerances(CoupledModel model, double[] y0, double t0S, double t1S) {
-        double length = model.lengthScaleM();
+    private double[] absoluteTolerances(CoupledEquations equations, double[] y0, double t0S, double t1S) {
+        StateLayout layout = equations.layout();
+        double length = equations.circuits().lengthScaleM();
         double duration = t1S - t0S;
-        int loopsAt = model.loopOffset();
-        double[][] inductance = model.inductance(model.poses(t0S, y0));
-        double[] abs = new double[model.dimension()];
-        for (int i = 0; i < loopsAt; i += CoupledModel.BODY_DOFS) {
-            abs[i] = relTol * length;
-            abs[i + 1] = relTol * length;
-            abs[i + 2] = relTol;
-            abs[i + 3] = relTol * length / duration;
-            abs[i + 4] = relTol * length / duration;
-            abs[i + 5] = relTol / duration;
+        double[] abs = new double[layout.dimension()];
+        for (int b = 0; b < equations.bodies().count(); b++) {
+            if (!layout.free(b)) {
+                continue;
+            }
+            abs[layout.of(b, BodyDof.X)] = relTol * length;
+            abs[layout.of(b, BodyDof.Y)] = relTol * length;
+            abs[layout.of(b, BodyDof.ANGLE)] = relTol;
+            abs[layout.of(b, BodyDof.VX)] = relTol * length / duration;
+            abs[layout.of(b, BodyDof.VY)] = relTol * length / duration;
+            abs[layout.of(b, BodyDof.OMEGA)] = relTol / duration;
         }
-        for (int k = 0; k < model.auditOffset() - loopsAt; k++) {
-            abs[loopsAt + k] = relTol * inductance[k][k] * CURRENT_SCALE_A;
+        // Computed for every run: a loop whose inductance cannot be computed is refused here, before any step.
+        double[][] inductance = equations.circuits().inductance(equations.bodies().poses(t0S, y0));
+        for (int k = 0; k < layout.loopStates(); k++) {
+            abs[layout.loop(k)] = relTol * inductance[k][k] * CURRENT_SCALE_A;
         }
-        java.util.Arrays.fill(abs, model.auditOffset(), abs.length, Double.MAX_VALUE);
+        for (AuditTerm term : AuditTerm.values()) {
+            abs[layout.audit(term)] = Double.MAX_VALUE;
+        }
         return abs;
     }
 }
