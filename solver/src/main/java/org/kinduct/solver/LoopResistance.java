@@ -13,6 +13,8 @@ public final class LoopResistance {
     }
 
     /**
+     * Resistance of the loop's whole winding, ohms.
+     *
      * @param perimeterM length of one turn where the loop is now, metres
      * @throws IllegalArgumentException when the resistivity model gives no positive resistance
      *         (a winding far below −234 °C)

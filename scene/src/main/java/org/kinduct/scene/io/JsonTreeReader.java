@@ -77,8 +77,8 @@ final class JsonTreeReader {
         JsonLocation at = p.currentTokenLocation();
         int line = line(at);
         int column = column(at);
-        switch (token) {
-            case START_OBJECT: {
+        return switch (token) {
+            case START_OBJECT -> {
                 List<Json.Member> members = new ArrayList<>();
                 for (JsonToken t = p.nextToken(); t != JsonToken.END_OBJECT; t = p.nextToken()) {
                     JsonLocation nameAt = p.currentTokenLocation();
@@ -86,30 +86,23 @@ final class JsonTreeReader {
                     Json v = value(p, p.nextToken());
                     members.add(new Json.Member(name, v, line(nameAt), column(nameAt)));
                 }
-                return new Json.Obj(List.copyOf(members), line, column);
+                yield new Json.Obj(List.copyOf(members), line, column);
             }
-            case START_ARRAY: {
+            case START_ARRAY -> {
                 List<Json> items = new ArrayList<>();
                 for (JsonToken t = p.nextToken(); t != JsonToken.END_ARRAY; t = p.nextToken()) {
                     items.add(value(p, t));
                 }
-                return new Json.Arr(List.copyOf(items), line, column);
+                yield new Json.Arr(List.copyOf(items), line, column);
             }
-            case VALUE_STRING:
-                return new Json.Str(p.getText(), line, column);
-            case VALUE_NUMBER_INT:
-                return new Json.Num(p.getText(), true, line, column);
-            case VALUE_NUMBER_FLOAT:
-                return new Json.Num(p.getText(), false, line, column);
-            case VALUE_TRUE:
-                return new Json.Bool(true, line, column);
-            case VALUE_FALSE:
-                return new Json.Bool(false, line, column);
-            case VALUE_NULL:
-                return new Json.Null(line, column);
-            default:
-                throw new JsonParseException(p, "unexpected " + token);
-        }
+            case VALUE_STRING -> new Json.Str(p.getText(), line, column);
+            case VALUE_NUMBER_INT -> new Json.Num(p.getText(), true, line, column);
+            case VALUE_NUMBER_FLOAT -> new Json.Num(p.getText(), false, line, column);
+            case VALUE_TRUE -> new Json.Bool(true, line, column);
+            case VALUE_FALSE -> new Json.Bool(false, line, column);
+            case VALUE_NULL -> new Json.Null(line, column);
+            default -> throw new JsonParseException(p, "unexpected " + token);
+        };
     }
 
     /**

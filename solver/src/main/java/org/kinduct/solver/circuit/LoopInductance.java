@@ -143,7 +143,7 @@ public final class LoopInductance {
         boolean tooClose;
         if (adjacent) {
             Filament shorter = f.length() <= g.length() ? f : g;
-            Filament longer = shorter == f ? g : f;
+            Filament longer = f.length() <= g.length() ? g : f;
             // The shared end is at distance 0; the larger distance is the free end's.
             tooClose = Math.max(pointToFilament(shorter.ax(), shorter.ay(), shorter.az(), longer),
                     pointToFilament(shorter.bx(), shorter.by(), shorter.bz(), longer)) < clearanceM;

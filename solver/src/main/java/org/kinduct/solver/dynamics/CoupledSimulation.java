@@ -27,7 +27,7 @@ import org.kinduct.solver.dynamics.StateLayout.BodyDof;
  * closed loop); samples at further instants on request; and {@link CoupledRun#audit()}, the
  * {@link EnergyAudit} of the whole run. Bad input (a loop whose
  * wires overlap, sides shorter than four wire radii) throws {@link IllegalArgumentException}.
- * A {@link RunMonitor} passed to {@link #simulate(Scene, double, double, double, RunMonitor)}
+ * A {@link RunMonitor} passed to {@link #simulate(Scene, double, double, double, List, RunMonitor)}
  * follows a long run's progress and can stop it ({@link SimulationCancelledException}).
  *
  * <p><b>Circuits.</b> Every closed loop k carries a current I_k obeying Faraday's law with its

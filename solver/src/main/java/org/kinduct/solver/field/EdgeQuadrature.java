@@ -106,6 +106,8 @@ public final class EdgeQuadrature {
     }
 
     /**
+     * A line integral over a polygon's edges, with its first moment and error estimate.
+     *
      * @param value ∫₀¹ f ds summed over the edges
      * @param firstMoment ∫₀¹ s·f ds summed over the edges (s the parameter along each edge)
      * @param errorEstimate estimated absolute error of {@code value} (and of the first moment,

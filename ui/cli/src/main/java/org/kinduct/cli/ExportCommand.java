@@ -3,6 +3,7 @@ package org.kinduct.cli;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.time.LocalDate;
+import java.time.ZoneId;
 import java.util.concurrent.Callable;
 import org.kinduct.report.Version;
 import org.kinduct.scene.Scene;
@@ -73,7 +74,7 @@ final class ExportCommand implements Callable<Integer> {
         SnapshotOptions options;
         try {
             ExportInstant instant = ExportInstant.parse(at, text -> Units.parse(text, Dimension.TIME));
-            options = SnapshotOptions.standard(instant, widthPx, dpi, viewChoice(view), LocalDate.now(), Version.text());
+            options = SnapshotOptions.standard(instant, widthPx, dpi, viewChoice(view), LocalDate.now(ZoneId.systemDefault()), Version.text());
         } catch (IllegalArgumentException e) {
             throw new BadInputException(e.getMessage());
         }
@@ -92,7 +93,7 @@ final class ExportCommand implements Callable<Integer> {
         if (text.strip().equalsIgnoreCase("fit")) {
             return new ViewChoice.Fit();
         }
-        String[] parts = text.split(",");
+        String[] parts = text.split(",", -1);
         if (parts.length != 4) {
             throw new IllegalArgumentException("--view: expected 'fit' or four lengths x0,y0,x1,y1, got '" + text + "'");
         }

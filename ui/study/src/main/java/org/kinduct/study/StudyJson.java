@@ -101,9 +101,9 @@ public final class StudyJson {
         try {
             root = new ObjectMapper().readTree(text);
         } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
-            throw new IllegalArgumentException(source + ": not JSON: " + e.getOriginalMessage());
-        } catch (IOException e) {
-            throw new IllegalArgumentException(source + ": " + e.getMessage());
+            int line = e.getLocation() == null ? 0 : e.getLocation().getLineNr();
+            throw new IllegalArgumentException(source + (line > 0 ? ":" + line : "") + ": not JSON: "
+                    + e.getOriginalMessage());
         }
         if (root == null || !root.isObject() || !FORMAT.equals(root.path("format").asText(null))) {
             throw new IllegalArgumentException(source + ": not a Kinduct study result (\"format\": \"" + FORMAT + "\")");

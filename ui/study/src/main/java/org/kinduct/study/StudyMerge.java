@@ -18,6 +18,8 @@ public final class StudyMerge {
     }
 
     /**
+     * Joins the parts of a study run in shards into one table.
+     *
      * @param parts each part's table by its file name (for messages)
      * @throws IllegalArgumentException naming the file and what does not fit
      */

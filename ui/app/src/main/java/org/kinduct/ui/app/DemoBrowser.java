@@ -37,7 +37,6 @@ final class DemoBrowser {
     private static final ExecutorService RENDERER = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "kinduct-thumbnails");
         t.setDaemon(true);
-        t.setPriority(Thread.MIN_PRIORITY);
         return t;
     });
 

@@ -82,7 +82,7 @@ public final class CanvasGestures {
         pressY = y;
         pressView = view();
         drag = Drag.NONE;
-        if (button == Button.MIDDLE || button == Button.PRIMARY && spaceDown) {
+        if (button == Button.MIDDLE || (button == Button.PRIMARY && spaceDown)) {
             drag = Drag.PAN;
             return;
         }

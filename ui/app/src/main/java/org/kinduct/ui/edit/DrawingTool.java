@@ -58,7 +58,7 @@ public final class DrawingTool {
      * when there is no direction yet).
      */
     public Optional<UnaryOperator<Scene>> typed(String text) {
-        String[] parts = text.split("[,;]");
+        String[] parts = text.split("[,;]", -1);
         if (parts.length == 2) {
             return addPoint(new Vec2(TextInput.length(parts[0]), TextInput.length(parts[1])));
         }

@@ -75,7 +75,7 @@ final class FreeMotionSheet {
 
     /** "x, y; k; L" (fixed anchor) or "body; k; L" (spring to another body's pivot). */
     static Motion.Free.Spring parseSpring(String text) {
-        String[] parts = text.split(";");
+        String[] parts = text.split(";", -1);
         if (parts.length != 3) {
             throw new IllegalArgumentException("a spring is '" + SPRING_FORMAT + "', e.g. '0, 50 mm; "
                     + Dimension.STIFFNESS.example() + "; 20 mm', got '" + text.strip() + "'");
@@ -84,7 +84,7 @@ final class FreeMotionSheet {
         double rest = Units.parse(parts[2], Dimension.LENGTH);
         String anchor = parts[0].strip();
         if (anchor.contains(",")) {
-            String[] xy = anchor.split(",");
+            String[] xy = anchor.split(",", -1);
             if (xy.length != 2) {
                 throw new IllegalArgumentException("a spring anchor is 'x, y', got '" + anchor + "'");
             }

@@ -186,7 +186,7 @@ public final class MotionSheet {
     static Property vector(String label, Dimension d, Vec2 v,
                            java.util.function.Function<Vec2, UnaryOperator<Scene>> apply) {
         return new Property(label + " (x, y)", pair(v, d), List.of(), typed -> {
-            String[] parts = typed.split(",");
+            String[] parts = typed.split(",", -1);
             if (parts.length != 2) {
                 throw new IllegalArgumentException("expected two values 'x, y' such as '" + d.example() + ", 0'");
             }
@@ -210,9 +210,10 @@ public final class MotionSheet {
 
     static List<Motion.Path.Key> parseKeys(String text) {
         List<Motion.Path.Key> keys = new ArrayList<>();
-        String[] entries = text.split(";");
+        // A closing ';' is forgiven; an empty key between two is an error like any short key.
+        String[] entries = text.strip().replaceFirst(";$", "").split(";", -1);
         for (int i = 0; i < entries.length; i++) {
-            String[] f = entries[i].split(",");
+            String[] f = entries[i].split(",", -1);
             if (f.length != 4) {
                 throw new IllegalArgumentException("key " + (i + 1) + " needs 't, x, y, angle', got '"
                         + entries[i].strip() + "'");

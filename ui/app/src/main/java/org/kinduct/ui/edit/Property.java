@@ -27,6 +27,7 @@ public record Property(String label, String text, List<String> options, Function
      *
      * @throws IllegalArgumentException saying why the input or its result is not acceptable
      */
+    @SuppressWarnings("ReturnValueIgnored") // applied only to see whether it throws
     public UnaryOperator<Scene> check(Scene scene, String typed) {
         UnaryOperator<Scene> op = edit.apply(typed);
         op.apply(scene);

@@ -99,6 +99,7 @@ public final class UndoHistory {
      * finishes after its write, when the user may have edited on meanwhile. False, and nothing
      * marked, when no entry holds it any more (the history was reset or dropped it).
      */
+    @SuppressWarnings("ReferenceEquality") // the very object written, not an equal scene elsewhere
     public boolean markSaved(Scene saved) {
         for (int i = entries.size() - 1; i >= 0; i--) {
             if (entries.get(i).scene() == saved) {

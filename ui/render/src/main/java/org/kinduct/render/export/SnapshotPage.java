@@ -151,7 +151,7 @@ final class SnapshotPage {
     }
 
     private static double clampMapHeight(double h) {
-        return Math.max(MIN_MAP_HEIGHT, Math.min(MAX_MAP_HEIGHT, Math.round(h)));
+        return Math.max(MIN_MAP_HEIGHT, Math.min(MAX_MAP_HEIGHT, Math.rint(h)));
     }
 
     /** A map view showing {@code box} as large as fits in the map region [left, right] × [top, bottom], centred. */
@@ -387,7 +387,7 @@ final class SnapshotPage {
     static List<String> wrap(String text, double size, boolean bold, double width) {
         List<String> lines = new ArrayList<>();
         StringBuilder line = new StringBuilder();
-        for (String word : text.strip().split("\\s+")) {
+        for (String word : text.strip().split("\\s+", -1)) {
             if (word.isEmpty()) {
                 continue;
             }

@@ -67,7 +67,7 @@ final class ConductorPainter {
         int n = pts.size();
         for (int i = 0; i < n; i++) {
             String here = c.vertices().get(i).bodyOr(c.body());
-            boolean closedAround = c instanceof Conductor.Loop || i > 0 && i < n - 1;
+            boolean closedAround = c instanceof Conductor.Loop || (i > 0 && i < n - 1);
             String before = c.vertices().get((i + n - 1) % n).bodyOr(c.body());
             String after = c.vertices().get((i + 1) % n).bodyOr(c.body());
             if (closedAround && (!here.equals(before) || !here.equals(after))) {

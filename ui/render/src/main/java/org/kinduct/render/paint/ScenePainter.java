@@ -112,8 +112,8 @@ public final class ScenePainter {
         }
         gridLines(s, v, major, Palette.GRID_MAJOR, 1);
         s.fill(Palette.AXIS);
-        s.fillRect(Math.round(v.screenX(0)), 0, 1, s.height());
-        s.fillRect(0, Math.round(v.screenY(0)), s.width(), 1);
+        s.fillRect(Math.rint(v.screenX(0)), 0, 1, s.height());
+        s.fillRect(0, Math.rint(v.screenY(0)), s.width(), 1);
         s.fill(Palette.MUTED);
         for (double y = Math.ceil(v.minY() / major) * major; y <= v.maxY(); y += major) {
             axisLabel(s, Quantities.length(snap(y, major)), 4, v.screenY(y) - 2, true, taken);
@@ -143,10 +143,10 @@ public final class ScenePainter {
     private static void gridLines(Surface s, ViewTransform v, double step, int colour, double width) {
         s.fill(colour);
         for (double x = Math.ceil(v.minX() / step) * step; x <= v.maxX(); x += step) {
-            s.fillRect(Math.round(v.screenX(x)), 0, width, s.height());
+            s.fillRect(Math.rint(v.screenX(x)), 0, width, s.height());
         }
         for (double y = Math.ceil(v.minY() / step) * step; y <= v.maxY(); y += step) {
-            s.fillRect(0, Math.round(v.screenY(y)), s.width(), width);
+            s.fillRect(0, Math.rint(v.screenY(y)), s.width(), width);
         }
     }
 

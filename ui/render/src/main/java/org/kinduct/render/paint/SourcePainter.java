@@ -111,7 +111,7 @@ public final class SourcePainter {
         double x = b.centerX();
         Glyphs.fieldSymbol(s, x, b.y() + 8, 7, bzT > 0, Palette.INK);
         s.fill(0xC0FFFFFF);
-        s.fillRect(x - (w) / 2, b.y() + 18, w, 14);
+        s.fillRect(x - w / 2, b.y() + 18, w, 14);
         s.fill(Palette.INK);
         s.text(text, x, b.y() + 25, 11, false, Surface.Anchor.CENTER);
     }

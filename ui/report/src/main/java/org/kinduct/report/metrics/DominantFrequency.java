@@ -21,6 +21,8 @@ final class DominantFrequency {
     }
 
     /**
+     * The frequency of the largest spectral peak.
+     *
      * @param values samples at a constant spacing {@code dtS}
      * @return hertz; 0 when the signal is constant or has fewer than two samples
      */

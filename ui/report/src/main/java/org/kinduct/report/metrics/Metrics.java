@@ -28,6 +28,8 @@ public final class Metrics {
     }
 
     /**
+     * Reads a metric from its command-line spelling.
+     *
      * @throws IllegalArgumentException saying what is wrong with {@code text} and what would be right
      */
     public static Metric parse(String text, Scene scene) {
