@@ -10,6 +10,8 @@ import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableSet;
 import org.kinduct.render.paint.Placement;
@@ -36,6 +38,7 @@ public final class SceneDocument {
     private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper canRedo = new ReadOnlyBooleanWrapper();
     private final ReadOnlyObjectWrapper<Path> file = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper();
     private final ObservableSet<String> selection = FXCollections.observableSet();
     private long revision;
 
@@ -50,6 +53,7 @@ public final class SceneDocument {
         this.say = say;
         this.revised = revised;
         scene.set(initial);
+        updateFlags();
     }
 
     /** Applies an edit; an edit the model rejects leaves the scene as it was and says why. */
@@ -139,6 +143,13 @@ public final class SceneDocument {
         dirty.set(history.isDirty());
         canUndo.set(history.canUndo());
         canRedo.set(history.canRedo());
+        title.set(title(scene(), file(), isDirty()));
+    }
+
+    /** "• Scene name — file.json — Kinduct": the mark while unsaved, the file once there is one. */
+    static String title(Scene s, Path file, boolean dirty) {
+        String name = s.name().isBlank() ? "untitled" : s.name().strip();
+        return (dirty ? "• " : "") + name + (file == null ? "" : " — " + file.getFileName()) + " — Kinduct";
     }
 
     // ---- selection ----
@@ -209,6 +220,11 @@ public final class SceneDocument {
 
     public boolean isDirty() {
         return dirty.get();
+    }
+
+    /** The window's title: the scene's name, its file, and a mark while it has unsaved changes. */
+    public ReadOnlyStringProperty titleProperty() {
+        return title.getReadOnlyProperty();
     }
 
     public ReadOnlyBooleanProperty canUndoProperty() {
