@@ -12,6 +12,7 @@ import javafx.beans.property.ReadOnlyStringWrapper;
 import org.kinduct.render.paint.Placement;
 import org.kinduct.render.view.SceneBounds;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.io.SceneWithUnits;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.RunMonitor;
 import org.kinduct.solver.run.RunRequest;
@@ -122,6 +123,11 @@ public final class EditorViewModel {
      * afresh; {@code unsaved} marks recovered work that still needs saving.
      */
     public void load(Scene newScene, Path from, boolean unsaved) {
+        load(SceneWithUnits.of(newScene), from, unsaved);
+    }
+
+    /** Replaces the whole scene as {@link #load(Scene, Path, boolean)} does, keeping the units its file gave. */
+    public void load(SceneWithUnits newScene, Path from, boolean unsaved) {
         // Nothing of the scene before may stand beside the new one while its numbers are computed.
         results.forget();
         maps.forget();

@@ -19,6 +19,8 @@ import org.kinduct.render.view.SceneBounds;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.scene.io.SceneWithUnits;
+import org.kinduct.scene.io.UnitTexts;
 
 /**
  * The document being edited: the scene with its undo history, whether it has unsaved changes,
@@ -39,6 +41,8 @@ public final class SceneDocument {
     private final ReadOnlyBooleanWrapper canRedo = new ReadOnlyBooleanWrapper();
     private final ReadOnlyObjectWrapper<Path> file = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper();
+    /** The units the loaded file gave values in, written back on saving. */
+    private UnitTexts units = UnitTexts.none();
     private final ObservableSet<String> selection = FXCollections.observableSet();
     private long revision;
 
@@ -107,14 +111,20 @@ public final class SceneDocument {
      * {@code unsaved} marks recovered work that still needs saving. Through
      * {@link EditorViewModel#load}, which also takes the time back to the start.
      */
-    void load(Scene newScene, Path from, boolean unsaved) {
-        history.reset(newScene);
+    void load(SceneWithUnits newScene, Path from, boolean unsaved) {
+        history.reset(newScene.scene());
         if (unsaved) {
             history.markUnsaved();
         }
+        units = newScene.units();
         file.set(from);
         selection.clear();
-        show(newScene);
+        show(newScene.scene());
+    }
+
+    /** The scene now with the units its file gave values in: what saving writes. */
+    public SceneWithUnits withUnits() {
+        return new SceneWithUnits(scene(), units);
     }
 
     /**
