@@ -71,8 +71,9 @@ public final class ScenePainter {
         if (legendBox != null) {
             fixed.add(legendBox);
         }
+        // The axis values join the fixed boxes, so no callout or contour label covers them.
         if (f.shows(Layer.GRID)) {
-            grid(s, v, new ArrayList<>(fixed));
+            grid(s, v, fixed);
         }
         LabelPlacer placer = new LabelPlacer(s.width(), s.height());
         fixed.forEach(placer::reserve);
@@ -86,10 +87,15 @@ public final class ScenePainter {
         if (f.shows(Layer.LENZ) && f.snapshot() != null) {
             ConductorPainter.drawLenz(s, v, f.scene(), f.snapshot(), placer);
         }
+        // Source labels keep off the velocity arrows, and are placed before the velocity labels, so
+        // a magnet keeps its label on its centre and those move instead.
+        if (f.shows(Layer.MOTION)) {
+            MotionPainter.reserveArrows(v, f.scene(), placement, placer);
+        }
+        sourceLabels.forEach(Runnable::run);
         if (f.shows(Layer.MOTION)) {
             MotionPainter.draw(s, v, f.scene(), placement, placer);
         }
-        sourceLabels.forEach(Runnable::run);
         List<Runnable> labels = new ArrayList<>();
         if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
             ConductorPainter.placeCallouts(s, v, f.scene(), f.snapshot(), f.scales(), placer, labels);

@@ -40,6 +40,10 @@ class SourceLabelTest {
     }
 
     private static List<TextBox> texts(Scene scene) {
+        return texts(scene, LAYERS);
+    }
+
+    private static List<TextBox> texts(Scene scene, EnumSet<Layer> layers) {
         List<TextBox> out = new ArrayList<>();
         Surface s = (Surface) Proxy.newProxyInstance(Surface.class.getClassLoader(), new Class<?>[] {Surface.class},
                 (proxy, method, args) -> switch (method.getName()) {
@@ -67,7 +71,7 @@ class SourceLabelTest {
                     }
                     default -> null;
                 });
-        ScenePainter.draw(s, new Frame(scene, 0, null, null, VIEW, LAYERS, ColourRange.automatic(),
+        ScenePainter.draw(s, new Frame(scene, 0, null, null, VIEW, layers, ColourRange.automatic(),
                 EditorMarks.none(), ""));
         return out;
     }
@@ -112,6 +116,27 @@ class SourceLabelTest {
     void aMagnetLabelStaysOnItsCentreWhenNothingIsInTheWay() {
         List<TextBox> pole = named(texts(Scene.empty("t").withSources(List.of(magnet(0, 0)))), "S");
         assertEquals(VIEW.screenX(0), pole.get(0).x() + pole.get(0).w() / 2, 1e-9);
+    }
+
+    @Test
+    void aVelocityArrowFromAFieldPatchsCentreDoesNotRunThroughItsMark() {
+        Source.FieldPatch patch = new Source.FieldPatch("gap", Body.FIXED, List.of(new Vec2(-0.02, -0.025),
+                new Vec2(0.02, -0.025), new Vec2(0.02, 0.025), new Vec2(-0.02, 0.025)), 0.5);
+        // A short rod gliding to the right, its middle on the patch's centre: the arrow starts there.
+        Body cart = new Body("cart", "cart", Vec2.ZERO, new org.kinduct.scene.Motion.Glide(new Vec2(0.5, 0)));
+        Conductor.Wire rod = new Conductor.Wire("rod", "cart", List.of(new Conductor.Vertex(new Vec2(0, -0.001), null),
+                new Conductor.Vertex(new Vec2(0, 0.001), null)));
+        Scene scene = Scene.empty("t").withBodies(List.of(cart)).withSources(List.of(patch))
+                .withConductors(List.of(rod));
+        List<TextBox> value = named(texts(scene, EnumSet.of(Layer.SOURCES, Layer.CONDUCTORS, Layer.MOTION)),
+                Quantities.bz(0.5));
+        assertEquals(1, value.size());
+        // The arrow runs 38 px to the right of the centre, its head 5 px to each side.
+        double ax = VIEW.screenX(0);
+        double ay = VIEW.screenY(0);
+        TextBox t = value.get(0);
+        boolean onArrow = t.x() < ax + 38 + 5 && t.x() + t.w() > ax - 5 && t.y() < ay + 5 && t.y() + t.h() > ay - 5;
+        assertFalse(onArrow, t + " lies on the velocity arrow");
     }
 
     @Test
