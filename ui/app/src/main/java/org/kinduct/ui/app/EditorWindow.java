@@ -119,7 +119,8 @@ final class EditorWindow {
         VBox tableBox = new VBox(2, table, inductanceLine(), energyLine());
         VBox.setVgrow(table, Priority.ALWAYS);
         SplitPane lower = new SplitPane(plotBox, tableBox);
-        lower.setDividerPositions(0.42);
+        // The table's eight columns take more room than the plot needs.
+        lower.setDividerPositions(0.34);
         lower.setPrefHeight(200);
 
         SplitPane vertical = new SplitPane(centre, lower);

@@ -27,15 +27,15 @@ import org.kinduct.ui.edit.SceneResults;
 
 /**
  * One row per conductor at the instant shown: flux linkage, both EMF methods and whether they
- * agree, current, polarity or sense, force; the words are those of {@link Labels}. Columns widen to
- * their widest text (they never shrink while values change, so playback does not make them jump)
- * and the table scrolls sideways rather than cutting text; every heading and cell tells its full
- * text in a tooltip.
+ * agree, current, polarity or sense, force; the words are those of {@link Labels}. Long headings
+ * take two lines; columns widen to their widest text (they never shrink while values change, so
+ * playback does not make them jump) and the table scrolls sideways rather than cutting text; every
+ * heading and cell tells its full text in a tooltip.
  */
 final class ReadoutTable extends TableView<ReadoutTable.Row> {
 
     /** Room a cell or heading needs beyond its text: padding, borders, the sort arrow's gap. */
-    private static final double CELL_MARGIN_PX = 22;
+    private static final double CELL_MARGIN_PX = 16;
     /** Column headings are set in bold (the default style sheet's). */
     private static final Font HEADING_FONT = Font.font(Font.getDefault().getFamily(), FontWeight.BOLD,
             Font.getDefault().getSize());
@@ -63,22 +63,22 @@ final class ReadoutTable extends TableView<ReadoutTable.Row> {
         setColumnResizePolicy(TableView.UNCONSTRAINED_RESIZE_POLICY);
         columns = List.of(
                 column("Conductor", "The conductor's id", r -> r.state().id()),
-                column("Flux linkage N·Φ", "Flux through one turn times the turns (loops)",
+                column("Flux linkage\nN·Φ", "Flux through one turn times the turns (loops)",
                         r -> loop(r, Quantities.flux(scales.flux(r.state().linkageWb())))),
-                column("EMF, flux rule", "−dλ/dt, the rate of change of the flux linkage (loops): the check on the"
+                column("EMF,\nflux rule", "−dλ/dt, the rate of change of the flux linkage (loops): the check on the"
                         + " next column", r -> loop(r, Quantities.voltage(scales.emf(r.state().emfFluxV())))),
-                column("EMF, motion + induced field", "∮(v × B − ∂A/∂t)·dl: the EMF of moving through the field"
+                column("EMF, motion +\ninduced field", "∮(v × B − ∂A/∂t)·dl: the EMF of moving through the field"
                         + " plus that of the induced electric field (the only EMF of a loop at rest beside an AC"
                         + " coil). The EMF reported everywhere, positive along the vertex order",
                         r -> Quantities.voltage(scales.emf(r.state().emfMotionalV()))),
-                column("Methods agree", "Whether the two EMF columns agree, with their relative difference; an"
+                column("Methods\nagree", "Whether the two EMF columns agree, with their relative difference; an"
                         + " open wire has one method, and where a loop edge crosses a field edge there is no check",
                         r -> Labels.agreement(r.state())),
                 column("Current", "Current along the vertex order (closed loops)",
                         r -> closed(r, Quantities.current(scales.current(r.state().currentA())))),
-                column("Polarity / sense", "Wires and open loops: which end is +. Closed loops: the current's"
+                column("Polarity /\nsense", "Wires and open loops: which end is +. Closed loops: the current's"
                         + " sense on screen", r -> Labels.polarityOrSense(r.state(), r.closedLoop())),
-                column("Force (x, y)", "Magnetic force on a closed loop, in the plane", r -> closed(r, force(r))));
+                column("Force\n(x, y)", "Magnetic force on a closed loop, in the plane", r -> closed(r, force(r))));
         columns.forEach(c -> getColumns().add(c.table()));
         SceneResults results = vm.results();
         results.snapshotProperty().addListener((obs, old, snap) -> show());
@@ -129,7 +129,10 @@ final class ReadoutTable extends TableView<ReadoutTable.Row> {
     /** Widens each column to its heading and widest text now shown. */
     private void widen(List<Row> shown) {
         for (Column c : columns) {
-            double w = textWidth(c.heading(), HEADING_FONT);
+            double w = 0;
+            for (String line : c.heading().split("\n")) {
+                w = Math.max(w, textWidth(line, HEADING_FONT));
+            }
             for (Row r : shown) {
                 w = Math.max(w, textWidth(c.text().apply(r), Font.getDefault()));
             }
@@ -149,7 +152,7 @@ final class ReadoutTable extends TableView<ReadoutTable.Row> {
     private Column column(String heading, String explanation, Function<Row, String> text) {
         TableColumn<Row, String> c = new TableColumn<>();
         Label head = new Label(heading);
-        head.setTooltip(new Tooltip(heading + ": " + explanation));
+        head.setTooltip(new Tooltip(heading.replace('\n', ' ') + ": " + explanation));
         c.setGraphic(head);
         c.setCellValueFactory(cd -> new ReadOnlyStringWrapper(text.apply(cd.getValue())));
         c.setCellFactory(col -> new TippedCell());

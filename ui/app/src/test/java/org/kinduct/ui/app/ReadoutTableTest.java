@@ -87,7 +87,7 @@ class ReadoutTableTest {
     void theMotionalColumnSaysItHoldsTheInducedFieldTooAndItsValueIsTheStillLoopsWholeEmf() throws Exception {
         ConductorState loop = shown().conductor("pickup").orElseThrow();
         javafx.scene.control.TableColumn<ReadoutTable.Row, ?> motional = table.getColumns().get(3);
-        assertEquals("EMF, motion + induced field", heading(motional));
+        assertEquals("EMF, motion + induced field", heading(motional).replace('\n', ' '));
         String tip = ((Label) motional.getGraphic()).getTooltip().getText();
         assertTrue(tip.contains("∂A/∂t"), tip);
         assertTrue(loop.emfMotionalV() != 0, "a still loop beside an AC coil has an EMF");
