@@ -111,6 +111,9 @@ final class ReadoutTable extends TableView<ReadoutTable.Row> {
         placeholder.setText(scene.conductors().isEmpty() ? "No conductors: draw a wire or a loop" : "Solving…");
         if (snap == null) {
             rows.clear();
+            // Another scene is coming (or nothing could be solved): its rows size the columns afresh.
+            columns.forEach(c -> c.table().setPrefWidth(0));
+            widen(List.of());
             return;
         }
         scales = vm.results().scalesNow();
