@@ -18,10 +18,6 @@ public final class ExportTimes {
 
     /** One offered instant and its words. */
     public record Choice(String label, ExportInstant instant) {
-        @Override
-        public String toString() {
-            return label;
-        }
     }
 
     private ExportTimes() {
