@@ -38,9 +38,15 @@ final class ReadContext {
     private final List<Ref> bodyDeclarations = new ArrayList<>();
     private final List<Ref> objectDeclarations = new ArrayList<>();
     private final List<Ref> bodyReferences = new ArrayList<>();
+    private final Map<String, UnitTexts.Given> given = new LinkedHashMap<>();
 
     List<Problem> problems() {
         return problems;
+    }
+
+    /** The quantities read from texts so far, by path. */
+    UnitTexts unitTexts() {
+        return UnitTexts.of(given);
     }
 
     int problemCount() {
@@ -88,7 +94,11 @@ final class ReadContext {
                 return finite(path, num);
             }
             if (node instanceof Json.Str str) {
-                return attempt(path, node, () -> Units.parse(str.value(), d));
+                Double v = attempt(path, node, () -> Units.parse(str.value(), d));
+                if (v != null) {
+                    given.put(path, new UnitTexts.Given(str.value(), d));
+                }
+                return v;
             }
             problem(path, node, "expected " + d.noun() + " (a number in " + siWords(d) + " or a text such as '"
                     + d.example() + "'), got " + node.describe());

@@ -58,8 +58,18 @@ public final class SceneFiles {
      * @throws SceneFormatException when the content is not a valid scene (including text that is not UTF-8)
      */
     public static Scene read(Path file) throws IOException, SceneFormatException {
+        return readWithUnits(file).scene();
+    }
+
+    /**
+     * The scene in {@code file} with the texts its values were given in (see {@link UnitTexts}).
+     *
+     * @throws IOException as {@link #read} does
+     * @throws SceneFormatException as {@link #read} does
+     */
+    public static SceneWithUnits readWithUnits(Path file) throws IOException, SceneFormatException {
         String text = decode(readBytes(file), file.toString());
-        return SceneJson.read(text, file.toString());
+        return SceneJson.readWithUnits(text, file.toString());
     }
 
     /**
@@ -69,6 +79,16 @@ public final class SceneFiles {
      *         {@code file}, if any, is then unchanged and no temporary file is left behind
      */
     public static void write(Scene scene, Path file) throws IOException {
+        write(SceneWithUnits.of(scene), file);
+    }
+
+    /**
+     * Saves {@code scene} atomically as {@link #write(Scene, Path)} does, with its values in the
+     * units they were given in ({@link SceneJson#write(SceneWithUnits)}).
+     *
+     * @throws IOException as {@link #write(Scene, Path)} does
+     */
+    public static void write(SceneWithUnits scene, Path file) throws IOException {
         writeAtomically(file, SceneJson.write(scene).getBytes(StandardCharsets.UTF_8));
     }
 

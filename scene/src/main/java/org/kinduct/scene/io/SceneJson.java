@@ -11,6 +11,8 @@ import org.kinduct.scene.Scene;
  *
  * <p>{@link #read} checks the whole text and reports every problem it finds, each with its JSON
  * path and line/column; {@link #write} is lossless: {@code read(write(s), ...)} equals {@code s}.
+ * {@link #readWithUnits} also keeps the texts values were given in, which
+ * {@link #write(SceneWithUnits)} writes back.
  */
 public final class SceneJson {
 
@@ -26,8 +28,18 @@ public final class SceneJson {
      *         all problems in document order; nothing else is thrown, whatever the text
      */
     public static Scene read(String text, String sourceName) throws SceneFormatException {
+        return readWithUnits(text, sourceName).scene();
+    }
+
+    /**
+     * The scene in {@code text} with the texts its values were given in, as {@link #read} reads it.
+     *
+     * @throws SceneFormatException as {@link #read} does
+     */
+    public static SceneWithUnits readWithUnits(String text, String sourceName) throws SceneFormatException {
         List<Problem> problems = new ArrayList<>();
         Scene scene = null;
+        UnitTexts units = UnitTexts.none();
         if (text == null) {
             problems.add(new Problem("", 1, 1, "no text to read"));
         } else {
@@ -37,6 +49,7 @@ public final class SceneJson {
                 ReadContext ctx = new ReadContext();
                 scene = new SceneReader(ctx).scene(root);
                 problems.addAll(ctx.problems());
+                units = ctx.unitTexts();
             }
         }
         if (scene == null && problems.isEmpty()) {
@@ -46,11 +59,20 @@ public final class SceneJson {
             problems.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
             throw new SceneFormatException(sourceName == null ? "<scene>" : sourceName, problems);
         }
-        return scene;
+        return new SceneWithUnits(scene, units);
     }
 
     /** {@code scene} as pretty-printed JSON ending in a newline, every field explicit, numbers in SI. */
     public static String write(Scene scene) {
-        return SceneWriter.write(scene);
+        return SceneWriter.write(scene, UnitTexts.none());
+    }
+
+    /**
+     * {@code scene} as {@link #write(Scene)} writes it, but each value that was given as a text
+     * with a unit is written in that unit: as given while unchanged, else exactly in that unit
+     * (see {@link UnitTexts#textFor}). Reads back as {@code scene} exactly.
+     */
+    public static String write(SceneWithUnits scene) {
+        return SceneWriter.write(scene.scene(), scene.units());
     }
 }

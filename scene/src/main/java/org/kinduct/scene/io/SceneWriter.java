@@ -6,6 +6,7 @@ import java.io.IOException;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.util.List;
+import java.util.Optional;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Motion;
@@ -16,7 +17,9 @@ import org.kinduct.scene.WireSpec;
 
 /**
  * Writes a scene as JSON with every field explicit and every number in SI as Java's shortest
- * round-trip decimal ({@link Double#toString}), so reading it back gives an equal scene.
+ * round-trip decimal ({@link Double#toString}), so reading it back gives an equal scene; values
+ * given in a unit ({@link UnitTexts}) are written in it, exactly. The writer keeps the JSON path
+ * of what it writes, as the reader names it, to find each value's text.
  */
 final class SceneWriter {
 
@@ -24,18 +27,22 @@ final class SceneWriter {
 
     private final JsonGenerator g;
     private final Layout layout;
+    private final UnitTexts units;
+    /** The JSON path of the object or list being written. */
+    private String where = "";
 
-    private SceneWriter(JsonGenerator g, Layout layout) {
+    private SceneWriter(JsonGenerator g, Layout layout, UnitTexts units) {
         this.g = g;
         this.layout = layout;
+        this.units = units;
     }
 
-    static String write(Scene scene) {
+    static String write(Scene scene, UnitTexts units) {
         StringWriter out = new StringWriter();
         Layout layout = new Layout();
         try (JsonGenerator g = FACTORY.createGenerator(out)) {
             g.setPrettyPrinter(layout);
-            new SceneWriter(g, layout).scene(scene);
+            new SceneWriter(g, layout, units).scene(scene);
         } catch (IOException | UncheckedIOException e) {
             throw new UncheckedIOException("writing JSON to memory failed",
                     e instanceof UncheckedIOException u ? u.getCause() : (IOException) e);
@@ -49,29 +56,16 @@ final class SceneWriter {
         g.writeNumberField("version", Scene.VERSION);
         g.writeStringField("name", s.name());
         g.writeStringField("description", s.description());
-        g.writeObjectFieldStart("time");
-        g.writeNumberField("t0", s.time().t0S());
-        g.writeNumberField("t1", s.time().t1S());
-        g.writeNumberField("dt", s.time().dtS());
-        g.writeEndObject();
+        object("time", () -> {
+            number("t0", s.time().t0S());
+            number("t1", s.time().t1S());
+            number("dt", s.time().dtS());
+        });
         point("gravity", s.gravity());
-        g.writeArrayFieldStart("bodies");
-        for (Body b : s.bodies()) {
-            if (!Body.FIXED.equals(b.id())) { // the fixed frame is implicit in every scene
-                body(b);
-            }
-        }
-        g.writeEndArray();
-        g.writeArrayFieldStart("sources");
-        for (Source src : s.sources()) {
-            source(src);
-        }
-        g.writeEndArray();
-        g.writeArrayFieldStart("conductors");
-        for (Conductor c : s.conductors()) {
-            conductor(c);
-        }
-        g.writeEndArray();
+        // The fixed frame is implicit in every scene.
+        list("bodies", s.bodies().stream().filter(b -> !Body.FIXED.equals(b.id())).toList(), this::body);
+        list("sources", s.sources(), this::source);
+        list("conductors", s.conductors(), this::conductor);
         g.writeEndObject();
     }
 
@@ -80,13 +74,11 @@ final class SceneWriter {
         g.writeStringField("id", b.id());
         g.writeStringField("name", b.name());
         point("pivot", b.pivot());
-        g.writeFieldName("motion");
-        motion(b.motion());
+        object("motion", () -> motion(b.motion()));
         g.writeEndObject();
     }
 
-    private void motion(Motion m) throws IOException {
-        g.writeStartObject();
+    private void motion(Motion m) {
         m.match(new Motion.Cases<Void>() {
             @Override
             public Void still(Motion.Still still) {
@@ -114,10 +106,10 @@ final class SceneWriter {
             public Void oscillate(Motion.Oscillate o) {
                 return io(() -> {
                     kind("oscillate");
-                    g.writeNumberField("amplitude", o.amplitudeM());
-                    g.writeNumberField("frequency", o.frequencyHz());
-                    g.writeNumberField("direction", o.directionRad());
-                    g.writeNumberField("phase", o.phaseRad());
+                    number("amplitude", o.amplitudeM());
+                    number("frequency", o.frequencyHz());
+                    number("direction", o.directionRad());
+                    number("phase", o.phaseRad());
                 });
             }
 
@@ -125,8 +117,8 @@ final class SceneWriter {
             public Void spin(Motion.Spin spin) {
                 return io(() -> {
                     kind("spin");
-                    g.writeNumberField("omega", spin.omegaRadPerS());
-                    g.writeNumberField("startAngle", spin.startAngleRad());
+                    number("omega", spin.omegaRadPerS());
+                    number("startAngle", spin.startAngleRad());
                 });
             }
 
@@ -135,15 +127,13 @@ final class SceneWriter {
                 return io(() -> {
                     kind("path");
                     g.writeStringField("blend", Vocabulary.BLEND.name(path.blend()));
-                    g.writeArrayFieldStart("keys");
-                    for (Motion.Path.Key k : path.keys()) {
+                    list("keys", path.keys(), k -> {
                         g.writeStartObject();
-                        g.writeNumberField("t", k.tS());
+                        number("t", k.tS());
                         point("offset", k.offset());
-                        g.writeNumberField("angle", k.angleRad());
+                        number("angle", k.angleRad());
                         g.writeEndObject();
-                    }
-                    g.writeEndArray();
+                    });
                 });
             }
 
@@ -155,31 +145,28 @@ final class SceneWriter {
                 });
             }
         });
-        g.writeEndObject();
     }
 
     private void free(Motion.Free f) throws IOException {
-        g.writeNumberField("mass", f.massKg());
-        g.writeNumberField("inertia", f.inertiaKgM2());
+        number("mass", f.massKg());
+        number("inertia", f.inertiaKgM2());
         point("initialVelocity", f.initialVelocity());
-        g.writeNumberField("initialOmega", f.initialOmegaRadPerS());
-        g.writeNumberField("damping", f.dampingNsPerM());
+        number("initialOmega", f.initialOmegaRadPerS());
+        number("damping", f.dampingNsPerM());
         point("force", f.appliedForce());
         point("forceAmplitude", f.appliedAmplitude());
-        g.writeNumberField("forceFrequency", f.appliedFrequencyHz());
-        g.writeArrayFieldStart("springs");
-        for (Motion.Free.Spring s : f.springs()) {
+        number("forceFrequency", f.appliedFrequencyHz());
+        list("springs", f.springs(), s -> {
             g.writeStartObject();
             if (s.otherBody() != null) {
                 g.writeStringField("body", s.otherBody());
             } else {
                 point("anchor", s.anchor());
             }
-            g.writeNumberField("stiffness", s.stiffnessNPerM());
-            g.writeNumberField("restLength", s.restLengthM());
+            number("stiffness", s.stiffnessNPerM());
+            number("restLength", s.restLengthM());
             g.writeEndObject();
-        }
-        g.writeEndArray();
+        });
     }
 
     private void source(Source s) throws IOException {
@@ -191,7 +178,7 @@ final class SceneWriter {
                     kind("field-patch");
                     idAndBody(p.id(), p.body());
                     points("outline", p.outline());
-                    g.writeNumberField("bz", p.bzT());
+                    number("bz", p.bzT());
                 });
             }
 
@@ -200,7 +187,7 @@ final class SceneWriter {
                 return io(() -> {
                     kind("uniform-field");
                     g.writeStringField("id", u.id());
-                    g.writeNumberField("bz", u.bzT());
+                    number("bz", u.bzT());
                 });
             }
 
@@ -210,10 +197,8 @@ final class SceneWriter {
                     kind("block-magnet");
                     idAndBody(m.id(), m.body());
                     point("center", m.center());
-                    g.writeFieldName("size");
-                    layout.inlineNext();
-                    g.writeArray(new double[] {m.sizeXM(), m.sizeYM(), m.heightM()}, 0, 3);
-                    g.writeNumberField("angle", m.angleRad());
+                    numbers("size", m.sizeXM(), m.sizeYM(), m.heightM());
+                    number("angle", m.angleRad());
                     magnetPlacement(m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
                 });
             }
@@ -224,8 +209,8 @@ final class SceneWriter {
                     kind("cylinder-magnet");
                     idAndBody(m.id(), m.body());
                     point("center", m.center());
-                    g.writeNumberField("radius", m.radiusM());
-                    g.writeNumberField("height", m.heightM());
+                    number("radius", m.radiusM());
+                    number("height", m.heightM());
                     magnetPlacement(m.standoffM(), m.side(), m.remanenceT(), m.magnetization());
                 });
             }
@@ -237,13 +222,13 @@ final class SceneWriter {
                     idAndBody(c.id(), c.body());
                     coilShape(c.shape());
                     g.writeNumberField("turns", c.turns());
-                    g.writeNumberField("z", c.planeZM());
-                    g.writeObjectFieldStart("current");
-                    g.writeNumberField("dc", c.drive().dcA());
-                    g.writeNumberField("amplitude", c.drive().amplitudeA());
-                    g.writeNumberField("frequency", c.drive().frequencyHz());
-                    g.writeNumberField("phase", c.drive().phaseRad());
-                    g.writeEndObject();
+                    number("z", c.planeZM());
+                    object("current", () -> {
+                        number("dc", c.drive().dcA());
+                        number("amplitude", c.drive().amplitudeA());
+                        number("frequency", c.drive().frequencyHz());
+                        number("phase", c.drive().phaseRad());
+                    });
                 });
             }
         });
@@ -252,9 +237,9 @@ final class SceneWriter {
 
     private void magnetPlacement(double standoffM, Source.Side side, double remanenceT,
                                  Source.Magnetization north) throws IOException {
-        g.writeNumberField("standoff", standoffM);
+        number("standoff", standoffM);
         g.writeStringField("side", Vocabulary.SIDE.name(side));
-        g.writeNumberField("remanence", remanenceT);
+        number("remanence", remanenceT);
         g.writeStringField("north", Vocabulary.NORTH.name(north));
     }
 
@@ -267,12 +252,10 @@ final class SceneWriter {
 
             @Override
             public Void circle(Source.CoilShape.Circle c) {
-                return io(() -> {
-                    g.writeObjectFieldStart("circle");
+                return io(() -> object("circle", () -> {
                     point("center", c.center());
-                    g.writeNumberField("radius", c.radiusM());
-                    g.writeEndObject();
-                });
+                    number("radius", c.radiusM());
+                }));
             }
         });
     }
@@ -291,10 +274,9 @@ final class SceneWriter {
             }
         }));
         idAndBody(c.id(), c.body());
-        g.writeArrayFieldStart("vertices");
-        for (Conductor.Vertex v : c.vertices()) {
+        list("vertices", c.vertices(), v -> {
             if (v.body() == null) {
-                point(v.at());
+                pointItem(where, v.at());
             } else {
                 layout.inlineNext();
                 g.writeStartObject();
@@ -302,8 +284,7 @@ final class SceneWriter {
                 g.writeStringField("body", v.body());
                 g.writeEndObject();
             }
-        }
-        g.writeEndArray();
+        });
         c.match(new Conductor.Cases<Void>() {
             @Override
             public Void wire(Conductor.Wire wire) {
@@ -316,8 +297,8 @@ final class SceneWriter {
                     g.writeNumberField("turns", loop.turns());
                     wireSpec(loop.wire());
                     g.writeBooleanField("open", loop.open());
-                    g.writeNumberField("load", loop.loadOhm());
-                    g.writeNumberField("temperature", loop.temperatureC());
+                    number("load", loop.loadOhm());
+                    number("temperature", loop.temperatureC());
                 });
             }
         });
@@ -325,14 +306,14 @@ final class SceneWriter {
     }
 
     private void wireSpec(WireSpec w) throws IOException {
-        g.writeObjectFieldStart("wire");
-        g.writeStringField("material", Vocabulary.MATERIAL.name(w.material()));
-        if (w.awg() != null) {
-            g.writeNumberField("awg", w.awg());
-        } else {
-            g.writeNumberField("diameter", w.diameterM());
-        }
-        g.writeEndObject();
+        object("wire", () -> {
+            g.writeStringField("material", Vocabulary.MATERIAL.name(w.material()));
+            if (w.awg() != null) {
+                g.writeNumberField("awg", w.awg());
+            } else {
+                number("diameter", w.diameterM());
+            }
+        });
     }
 
     /** A step of writing; the cases of the sealed families cannot throw checked exceptions. */
@@ -359,24 +340,73 @@ final class SceneWriter {
         g.writeStringField("body", body);
     }
 
-    private void points(String name, List<Vec2> points) throws IOException {
+    /** Writes the items of a list, each with its path ({@code name[i]}) as where it is. */
+    private interface Item<T> {
+        void write(T item) throws IOException;
+    }
+
+    private <T> void list(String name, List<T> items, Item<T> each) throws IOException {
+        String outer = where;
         g.writeArrayFieldStart(name);
-        for (Vec2 p : points) {
-            point(p);
+        for (int i = 0; i < items.size(); i++) {
+            where = ReadContext.item(ReadContext.child(outer, name), i);
+            each.write(items.get(i));
+        }
+        where = outer;
+        g.writeEndArray();
+    }
+
+    /** An object field {@code name} whose members {@code members} writes. */
+    private void object(String name, Writing members) throws IOException {
+        String outer = where;
+        g.writeObjectFieldStart(name);
+        where = ReadContext.child(outer, name);
+        members.run();
+        where = outer;
+        g.writeEndObject();
+    }
+
+    private void number(String name, double v) throws IOException {
+        g.writeFieldName(name);
+        value(ReadContext.child(where, name), v);
+    }
+
+    /** A value: the text it was given in while there is one ({@link UnitTexts#textFor}), else its SI number. */
+    private void value(String path, double v) throws IOException {
+        Optional<String> text = units.textFor(path, v);
+        if (text.isPresent()) {
+            g.writeString(text.get());
+        } else {
+            g.writeNumber(v);
+        }
+    }
+
+    /** A short list of numbers on one line, e.g. a block's {@code [x size, y size, height]}. */
+    private void numbers(String name, double... values) throws IOException {
+        String path = ReadContext.child(where, name);
+        g.writeFieldName(name);
+        layout.inlineNext();
+        g.writeStartArray();
+        for (int i = 0; i < values.length; i++) {
+            value(ReadContext.item(path, i), values[i]);
         }
         g.writeEndArray();
     }
 
-    private void point(String name, Vec2 p) throws IOException {
-        g.writeFieldName(name);
-        point(p);
+    private void points(String name, List<Vec2> points) throws IOException {
+        list(name, points, p -> pointItem(where, p));
     }
 
-    private void point(Vec2 p) throws IOException {
+    private void point(String name, Vec2 p) throws IOException {
+        numbers(name, p.x(), p.y());
+    }
+
+    /** A point as a list item, at {@code path}. */
+    private void pointItem(String path, Vec2 p) throws IOException {
         layout.inlineNext();
         g.writeStartArray();
-        g.writeNumber(p.x());
-        g.writeNumber(p.y());
+        value(ReadContext.item(path, 0), p.x());
+        value(ReadContext.item(path, 1), p.y());
         g.writeEndArray();
     }
 }

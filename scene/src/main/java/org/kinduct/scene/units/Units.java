@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.List;
+import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -81,6 +82,37 @@ public final class Units {
             throw new IllegalArgumentException(Texts.quote(text) + " is out of range for " + d.noun());
         }
         return si;
+    }
+
+    /**
+     * The unit a quantity text is written in, as spelled there ("mm" for "12 mm", "uT" for
+     * "-45 uT"); empty for a bare number or a text that is no quantity.
+     */
+    public static String unitOf(String text) {
+        Matcher m = NUMBER_AND_UNIT.matcher(normalise(text.strip()));
+        return m.matches() ? m.group(2).strip() : "";
+    }
+
+    /**
+     * {@code si} written in the unit spelled {@code unit} with the fewest digits that
+     * {@link #parse} reads back as exactly {@code si} ("12.5 mm"), so a file keeps its units
+     * without losing a bit; empty when {@code d} has no such unit or no decimal of at most 17
+     * digits reads back exactly (a unit with a factor of π or an offset may not).
+     */
+    public static Optional<String> exactly(double si, Dimension d, String unit) {
+        Optional<Unit> u = d.unit(normalise(unit));
+        if (u.isEmpty() || !Double.isFinite(si)) {
+            return Optional.empty();
+        }
+        BigDecimal inUnit = u.get().fromSi(new BigDecimal(si));
+        for (int digits = 1; digits <= 17; digits++) {
+            String text = inUnit.round(new MathContext(digits, RoundingMode.HALF_EVEN)).stripTrailingZeros()
+                    .toString() + " " + unit;
+            if (Double.compare(parse(text, d), si) == 0) { // −0.0 is not 0.0 to a record
+                return Optional.of(text);
+            }
+        }
+        return Optional.empty();
     }
 
     /**

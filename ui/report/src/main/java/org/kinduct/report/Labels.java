@@ -2,6 +2,7 @@ package org.kinduct.report;
 
 import org.kinduct.solver.dynamics.CircuitModel;
 import org.kinduct.solver.Circulation;
+import org.kinduct.solver.ConductorState;
 import java.util.Locale;
 import org.kinduct.solver.Terminal;
 import org.kinduct.solver.run.RunPlan;
@@ -15,6 +16,12 @@ public final class Labels {
 
     /** Relative disagreement between the two EMF methods above which a result is flagged. */
     public static final double AGREEMENT_FLAG = 1e-6;
+
+    /** A cell whose quantity does not apply to the conductor (a wire's flux, an open circuit's current). */
+    public static final String NOT_APPLICABLE = "—";
+
+    /** An open wire's agreement: it has the motional method only, so there is nothing to compare. */
+    public static final String ONE_METHOD = "n/a (open wire)";
 
     private Labels() {
     }
@@ -68,6 +75,23 @@ public final class Labels {
             return "yes";
         }
         return String.format(Locale.ROOT, disagreement <= AGREEMENT_FLAG ? "yes, %.0e" : "CHECK, %.0e", disagreement);
+    }
+
+    /**
+     * One conductor's agreement at one instant: {@link #agreement(double)} for loops,
+     * {@link #ONE_METHOD} for wires, with "v × B only" where a moving idealized field left out the
+     * induced part.
+     */
+    public static String agreement(ConductorState st) {
+        if (st.kind() == ConductorState.Kind.WIRE) {
+            return st.inducedFieldIncluded() ? ONE_METHOD : "n/a (open wire; v × B only)";
+        }
+        return agreement(st.disagreement());
+    }
+
+    /** What a conductor's sign means at one instant: a closed loop's current sense, else which end is +. */
+    public static String polarityOrSense(ConductorState st, boolean closedLoop) {
+        return closedLoop ? sense(st.direction()) : polarity(st.positiveEnd(), st.kind() == ConductorState.Kind.LOOP);
     }
 
     /** {@code cw}, {@code ccw} or {@code none}, as seen on screen. */

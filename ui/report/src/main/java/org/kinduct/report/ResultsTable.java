@@ -118,7 +118,7 @@ public final class ResultsTable {
 
     private static String agreement(ConductorSummary r) {
         if (r.kind() == ConductorState.Kind.WIRE) {
-            return "n/a (open wire)";
+            return Labels.ONE_METHOD;
         }
         String worst = String.format(Locale.ROOT, "%.1e", r.worstDisagreement());
         String kinks = r.kinkSamples() == 0 ? "" : "; " + r.kinkSamples() + " at field-edge crossings not comparable";

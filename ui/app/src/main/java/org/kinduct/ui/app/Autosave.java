@@ -17,8 +17,8 @@ import java.util.List;
 import java.util.Set;
 import java.util.UUID;
 import java.util.concurrent.ConcurrentHashMap;
-import org.kinduct.scene.Scene;
 import org.kinduct.scene.io.SceneFiles;
+import org.kinduct.scene.io.SceneWithUnits;
 
 /**
  * One editor window's autosave, and the autosaves that ended sessions left behind.
@@ -74,8 +74,11 @@ final class Autosave {
         return dir.resolve(name + SCENE);
     }
 
-    /** Writes {@code scene}, the work of {@code origin} (null for a new scene or a demo), atomically. */
-    void write(SceneStore store, Scene scene, Path origin) throws IOException, SceneStore.LoadFailure {
+    /**
+     * Writes {@code scene}, the work of {@code origin} (null for a new scene or a demo), atomically,
+     * in the units its file gave (so recovered work keeps them).
+     */
+    void write(SceneStore store, SceneWithUnits scene, Path origin) throws IOException, SceneStore.LoadFailure {
         if (lock == null) {
             Files.createDirectories(dir);
             lockChannel = FileChannel.open(lockFile(), StandardOpenOption.CREATE,

@@ -8,6 +8,7 @@ import java.util.concurrent.Executor;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.io.SceneWithUnits;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.SceneDocument;
 
@@ -180,7 +181,7 @@ final class DocumentFiles {
      * it was). Edits made while it is written stay unsaved.
      */
     CompletableFuture<Boolean> saveTo(Path file) {
-        Scene scene = vm.scene();
+        SceneWithUnits scene = document().withUnits();
         return Futures.watched(onIo(() -> {
             store.write(scene, file);
             return null;
@@ -189,7 +190,7 @@ final class DocumentFiles {
                 dialogs.error("Could not save " + file.getFileName(), message(failure));
                 return false;
             }
-            document().markSaved(scene, file);
+            document().markSaved(scene.scene(), file);
             vm.say("Saved " + file.getFileName());
             remember(file);
             if (!document().isDirty()) {
@@ -232,7 +233,7 @@ final class DocumentFiles {
             clearAutosave();
             return;
         }
-        Scene scene = vm.scene();
+        SceneWithUnits scene = document().withUnits();
         Path origin = document().file();
         onIo(() -> {
             autosave.write(store, scene, origin);

@@ -38,8 +38,6 @@ final class EditorCanvas extends Pane {
 
     private static final Duration IDLE_REFINE = Duration.millis(250);
     private static final double FRAME_TIME_SMOOTHING = 0.1;
-    /** Longest wall-clock step one playback frame takes (after a stall, playback resumes rather than jumps). */
-    private static final double MAX_FRAME_S = 0.1;
 
     private final EditorViewModel vm;
     private final CanvasGestures gestures;
@@ -76,20 +74,22 @@ final class EditorCanvas extends Pane {
             o.addListener(x -> needsPaint = true);
         }
         backdrops = new BackdropWorker(Platform::runLater, (raster, b) -> {
-            backdrop = vm.maps().raster() != null ? b : null;
+            // Colours of a scene no longer shown (another was opened meanwhile) never reach the view.
+            FieldRaster shown = vm.maps().raster();
+            if (shown != null && shown.revision() == raster.revision()) {
+                backdrop = b;
+                needsPaint = true;
+            }
             vm.maps().mapShown(raster);
-            needsPaint = true;
         });
         for (Observable o : new Observable[] {vm.maps().rasterProperty(), vm.view().viewProperty(), vm.view().layers(),
                 vm.view().rangeProperty()}) {
             o.addListener(x -> requestBackdrop());
         }
-        // The readout follows the field of the instant shown, also while the mouse rests.
-        vm.results().shownFieldProperty().addListener(o -> {
-            if (!Double.isNaN(cursorX)) {
-                showCursor(cursorX, cursorY);
-            }
-        });
+        // The readout follows the field of the instant shown and the view, also while the mouse
+        // rests; change listeners, since the readout need not read the value every time.
+        vm.results().shownFieldProperty().addListener((o, was, now) -> refreshCursor());
+        vm.view().viewProperty().addListener((o, was, now) -> refreshCursor());
         vm.view().toolProperty().addListener((obs, old, t) -> {
             setCursor(t == ToolKind.SELECT ? Cursor.DEFAULT : Cursor.CROSSHAIR);
             needsPaint = true;
@@ -167,7 +167,7 @@ final class EditorCanvas extends Pane {
 
     private void tick(long now) {
         if (lastNanos != 0 && vm.clock().isPlaying()) {
-            vm.clock().advance(Math.min(MAX_FRAME_S, (now - lastNanos) * 1e-9));
+            vm.clock().advance((now - lastNanos) * 1e-9);
             needsPaint = true;
         }
         lastNanos = now;
@@ -224,6 +224,12 @@ final class EditorCanvas extends Pane {
     private void interacting() {
         vm.maps().request(FieldMaps.Quality.COARSE);
         refine.playFromStart();
+    }
+
+    private void refreshCursor() {
+        if (!Double.isNaN(cursorX)) {
+            showCursor(cursorX, cursorY);
+        }
     }
 
     /** Position and B_z under the cursor; B_z is the field delivered with the snapshot shown. */

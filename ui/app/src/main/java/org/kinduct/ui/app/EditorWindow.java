@@ -64,6 +64,7 @@ final class EditorWindow {
 
     static final Duration AUTOSAVE_EVERY = Duration.seconds(30);
     private static final double ROTATE_STEP_RAD = Math.toRadians(15);
+    private static final double HELP_WIDTH_PX = 640;
 
     private final Stage stage;
     private final EditorViewModel vm;
@@ -118,7 +119,8 @@ final class EditorWindow {
         VBox tableBox = new VBox(2, table, inductanceLine(), energyLine());
         VBox.setVgrow(table, Priority.ALWAYS);
         SplitPane lower = new SplitPane(plotBox, tableBox);
-        lower.setDividerPositions(0.42);
+        // The table's eight columns take more room than the plot needs.
+        lower.setDividerPositions(0.34);
         lower.setPrefHeight(200);
 
         SplitPane vertical = new SplitPane(centre, lower);
@@ -134,10 +136,7 @@ final class EditorWindow {
         Timeline autosave = new Timeline(new KeyFrame(AUTOSAVE_EVERY, e -> files.autosave()));
         autosave.setCycleCount(Timeline.INDEFINITE);
         autosave.play();
-        SceneDocument document = vm.document();
-        document.fileProperty().addListener(o -> updateTitle());
-        document.dirtyProperty().addListener(o -> updateTitle());
-        updateTitle();
+        stage.titleProperty().bind(vm.document().titleProperty());
         files.recent().addListener((ListChangeListener<Path>) c -> refreshRecent());
         refreshRecent();
     }
@@ -186,13 +185,6 @@ final class EditorWindow {
             }
         });
         return entry;
-    }
-
-    private void updateTitle() {
-        Path f = vm.document().file();
-        String name = f != null ? f.getFileName().toString()
-                : vm.scene().name().isEmpty() ? "untitled" : vm.scene().name();
-        stage.setTitle((vm.document().isDirty() ? "• " : "") + name + " — Kinduct");
     }
 
     // ---- menus ----
@@ -274,6 +266,7 @@ final class EditorWindow {
                 item("Safety notes…", null, () -> info("Safety notes", HelpTexts.CAUTION)),
                 item("Signs and overlays…", null, () -> info("Signs and overlays", HelpTexts.CONVENTIONS)),
                 item("Mouse and keys…", null, () -> info("Mouse and keys", HelpTexts.KEYS)));
+        help.setId("help-menu");
         MenuBar bar = new MenuBar(file, edit, viewMenu, play, help);
         bar.setId("menu-bar");
         return bar;
@@ -402,7 +395,12 @@ final class EditorWindow {
         simulating.visibleProperty().bind(vm.results().simulatingProperty());
         simulating.managedProperty().bind(vm.results().simulatingProperty());
         simulating.progressProperty().bind(vm.results().simulationProgressProperty());
-        HBox bar = new HBox(8, play, back, fwd, reset, new Label("speed ×"), speed, scrubber, simulating, time);
+        Label slow = new Label();
+        slow.setId("playback-note");
+        slow.setStyle("-fx-text-fill: #9a4a00;");
+        slow.textProperty().bind(vm.playbackNoteProperty());
+        slow.managedProperty().bind(slow.textProperty().isNotEmpty());
+        HBox bar = new HBox(8, play, back, fwd, reset, new Label("speed ×"), speed, slow, scrubber, simulating, time);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(4, 8, 4, 8));
         return bar;
@@ -462,8 +460,12 @@ final class EditorWindow {
         a.setHeaderText(title);
         Label body = new Label(text);
         body.setWrapText(true);
-        body.setMaxWidth(620);
+        // A wrapping label asks for the width of its longest paragraph on one line; a set width
+        // makes it wrap instead, so the dialog fits a 1280 × 800 screen.
+        body.setPrefWidth(HELP_WIDTH_PX);
+        body.setMinHeight(Region.USE_PREF_SIZE);
         a.getDialogPane().setContent(body);
+        a.setResizable(true);
         a.initOwner(stage);
         a.show();
     }

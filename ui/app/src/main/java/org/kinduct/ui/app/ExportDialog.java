@@ -11,6 +11,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.EnumSet;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
@@ -24,15 +25,15 @@ import javafx.scene.control.Label;
 import javafx.scene.control.RadioButton;
 import javafx.scene.control.TextField;
 import javafx.scene.control.ToggleGroup;
+import javafx.scene.control.Tooltip;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.stage.FileChooser;
 import javafx.stage.Window;
 import org.kinduct.report.Version;
 import org.kinduct.scene.Scene;
-import org.kinduct.scene.units.Dimension;
-import org.kinduct.scene.units.Units;
 import org.kinduct.ui.edit.EditorViewModel;
+import org.kinduct.ui.edit.ExportTimes;
 import org.kinduct.render.paint.Layer;
 import org.kinduct.render.paint.Quantities;
 
@@ -50,10 +51,12 @@ public final class ExportDialog {
     private final ComboBox<ExportPreferences.Format> format = new ComboBox<>();
     private final TextField width = new TextField();
     private final TextField dpi = new TextField();
-    private final TextField time = new TextField();
+    private final ComboBox<String> time = new ComboBox<>();
     private final RadioButton currentView = new RadioButton("Current view");
     private final RadioButton wholeScene = new RadioButton("Whole scene");
     private Choice chosen;
+    /** The instants offered, for the scene and the time shown when the dialog opened. */
+    private List<ExportTimes.Choice> instants = List.of();
 
     private ExportDialog(Window owner, EditorViewModel vm, Path home, Executor io) {
         this.owner = owner;
@@ -87,9 +90,15 @@ public final class ExportDialog {
         width.setId("export-width");
         dpi.setText(Integer.toString(prefs.dpi()));
         dpi.setId("export-dpi");
-        // The instant that answers "how many volts" by default; the time shown, or any time, on request.
-        time.setText("peak");
-        time.setPromptText("peak, peak:ID or a time");
+        // The instant that answers "how many volts" by default; a conductor's peak, the time shown,
+        // or any time typed as --at takes it, on request.
+        instants = ExportTimes.of(vm.scene(), vm.clock().time());
+        time.getItems().setAll(instants.stream().map(ExportTimes.Choice::label).toList());
+        time.setEditable(true);
+        time.setValue(instants.get(0).label());
+        time.setPromptText("peak, peak:ID or a time such as 50 ms");
+        time.setTooltip(new Tooltip("Choose, or type what kinduct export --at takes: peak, peak:ID or a time"));
+        time.setMaxWidth(Double.MAX_VALUE);
         time.setId("export-time");
         ToggleGroup views = new ToggleGroup();
         currentView.setToggleGroup(views);
@@ -131,7 +140,7 @@ public final class ExportDialog {
         try {
             int w = Integer.parseInt(width.getText().strip());
             int r = Integer.parseInt(dpi.getText().strip());
-            ExportInstant t = ExportInstant.parse(time.getText(), text -> Units.parse(text, Dimension.TIME));
+            ExportInstant t = ExportTimes.parse(time.getEditor().getText(), instants);
             ViewChoice view = wholeScene.isSelected() ? new ViewChoice.Fit() : new ViewChoice.Current(vm.view().view());
             EnumSet<Layer> layers = vm.view().layers().isEmpty() ? EnumSet.noneOf(Layer.class)
                     : EnumSet.copyOf(vm.view().layers());

@@ -40,8 +40,10 @@ final class HelpTexts {
             Arrows along a closed loop show the current; thicker means more current. The ⊙ or ⊗ \
             inside a loop is the induced current's own field, which opposes the change of flux.
 
-            The table shows both EMF methods, −dΦ/dt and ∮(v×B)·dl; they must agree for closed \
-            loops, and a row marked DIFFER points at a problem in the model or the numerics.""";
+            The table shows both EMF methods: the flux rule −dλ/dt, and motion plus induced \
+            field ∮(v × B − ∂A/∂t)·dl, which is the EMF reported (for a loop at rest beside an AC \
+            coil it is all induced field). They must agree for closed loops; a row marked CHECK \
+            points at a problem in the model or the numerics.""";
 
     static final String KEYS = """
             Wheel: zoom at the cursor     Middle-drag or Space+drag: pan     F: zoom to fit

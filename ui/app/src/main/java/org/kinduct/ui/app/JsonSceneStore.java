@@ -4,18 +4,18 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import org.kinduct.scene.Scene;
 import org.kinduct.scene.io.SceneFiles;
 import org.kinduct.scene.io.SceneFormatException;
 import org.kinduct.scene.io.SceneJson;
+import org.kinduct.scene.io.SceneWithUnits;
 
 /** Scene files in Kinduct's JSON format, through {@link SceneFiles} (atomic save). */
 final class JsonSceneStore implements SceneStore {
 
     @Override
-    public Scene read(Path file) throws LoadFailure {
+    public SceneWithUnits read(Path file) throws LoadFailure {
         try {
-            return SceneFiles.read(file);
+            return SceneFiles.readWithUnits(file);
         } catch (SceneFormatException e) {
             throw new LoadFailure(e.getMessage(), e);
         } catch (IOException e) {
@@ -24,12 +24,12 @@ final class JsonSceneStore implements SceneStore {
     }
 
     @Override
-    public Scene readResource(String resource) throws LoadFailure {
+    public SceneWithUnits readResource(String resource) throws LoadFailure {
         try (InputStream in = JsonSceneStore.class.getResourceAsStream(resource)) {
             if (in == null) {
                 throw new LoadFailure("No demo scene " + resource + " on the class path", null);
             }
-            return SceneJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8), resource);
+            return SceneJson.readWithUnits(new String(in.readAllBytes(), StandardCharsets.UTF_8), resource);
         } catch (SceneFormatException e) {
             throw new LoadFailure(e.getMessage(), e);
         } catch (IOException e) {
@@ -38,7 +38,7 @@ final class JsonSceneStore implements SceneStore {
     }
 
     @Override
-    public void write(Scene scene, Path file) throws LoadFailure {
+    public void write(SceneWithUnits scene, Path file) throws LoadFailure {
         try {
             SceneFiles.write(scene, file);
         } catch (IOException e) {

@@ -23,12 +23,10 @@ import org.kinduct.ui.edit.PropertySheet;
 
 /**
  * Properties of the selection (or of the scene when nothing is selected) and the motion editor.
- * Text fields accept values with units; a value that is not accepted stays in the field, marked,
- * with the reason under it, and the scene is left as it was.
+ * Text fields accept values with units; a value that is not accepted goes back to the last valid
+ * one, the status line says why, and the scene is left as it was.
  */
 final class PropertiesPanel extends ScrollPane {
-
-    private static final String INVALID_STYLE = "-fx-border-color: #b00020; -fx-border-width: 1.5;";
 
     private final EditorViewModel vm;
     private final VBox box = new VBox(4);
@@ -132,16 +130,10 @@ final class PropertiesPanel extends ScrollPane {
     private void addAll(List<Property> props) {
         for (Property p : props) {
             Label label = new Label(p.label());
-            Label error = new Label();
-            error.setId(idFor(p) + "-error");
-            error.setWrapText(true);
-            error.setStyle("-fx-text-fill: #b00020; -fx-font-size: 11px;");
-            error.setManaged(false);
-            error.setVisible(false);
-            Control control = p.isChoice() ? choice(p, error) : text(p, error);
+            Control control = p.isChoice() ? choice(p) : text(p);
             control.setId(idFor(p));
             control.setMaxWidth(Double.MAX_VALUE);
-            box.getChildren().addAll(label, control, error);
+            box.getChildren().addAll(label, control);
         }
     }
 
@@ -150,11 +142,11 @@ final class PropertiesPanel extends ScrollPane {
         return "prop-" + slug;
     }
 
-    private TextField text(Property p, Label error) {
+    private TextField text(Property p) {
         TextField f = new TextField(p.text());
         Runnable commit = () -> {
-            if (!f.getText().equals(p.text())) {
-                commit(p, f.getText(), f, error);
+            if (!f.getText().equals(p.text()) && !commit(p, f.getText())) {
+                f.setText(p.text());
             }
         };
         f.setOnAction(e -> commit.run());
@@ -166,30 +158,30 @@ final class PropertiesPanel extends ScrollPane {
         return f;
     }
 
-    private ComboBox<String> choice(Property p, Label error) {
+    private ComboBox<String> choice(Property p) {
         ComboBox<String> c = new ComboBox<>();
         c.getItems().setAll(p.options());
         c.setValue(p.text());
         c.setOnAction(e -> {
-            if (c.getValue() != null && !c.getValue().equals(p.text())) {
-                commit(p, c.getValue(), c, error);
+            if (c.getValue() != null && !c.getValue().equals(p.text()) && !commit(p, c.getValue())) {
+                c.setValue(p.text());
             }
         });
         return c;
     }
 
-    private void commit(Property p, String typed, Control control, Label error) {
+    /**
+     * Applies {@code typed}; false, with the reason and the value kept on the status line, when the
+     * input or the scene it would make is refused.
+     */
+    private boolean commit(Property p, String typed) {
         UnaryOperator<Scene> edit;
         try {
             edit = p.check(vm.scene(), typed);
         } catch (IllegalArgumentException e) {
-            control.setStyle(INVALID_STYLE);
-            error.setText(e.getMessage());
-            error.setManaged(true);
-            error.setVisible(true);
-            vm.say(p.label() + ": " + e.getMessage());
-            return;
+            vm.say(p.label() + ": " + e.getMessage() + " — kept " + p.text());
+            return false;
         }
-        vm.document().apply("Set " + p.label().toLowerCase(Locale.ROOT), edit);
+        return vm.document().apply("Set " + p.label().toLowerCase(Locale.ROOT), edit);
     }
 }

@@ -69,6 +69,14 @@ final class TimePlot extends Pane {
         draw();
     }
 
+    /** Why there are no lines: the run is still being computed, or there is nothing to plot. */
+    private String emptyNote() {
+        if (vm.results().currentResult().isEmpty()) {
+            return " — computing the run…";
+        }
+        return quantity.ofBodies() ? " — no moving bodies" : " — no conductors";
+    }
+
     private void seek(double x) {
         double t0 = vm.scene().time().t0S();
         double t1 = vm.scene().time().t1S();
@@ -105,8 +113,7 @@ final class TimePlot extends Pane {
         g.fillText("0", LEFT - 4, top + ph / 2 + 4);
         g.fillText(peak > 0 ? "−" + Units.format(lim, quantity.dimension) : "", LEFT - 4, top + ph);
         g.setTextAlign(TextAlignment.LEFT);
-        g.fillText(quantity + (lines.isEmpty() ? quantity.ofBodies() ? " — no moving bodies" : " — no conductors" : ""),
-                LEFT, 13);
+        g.fillText(quantity + (lines.isEmpty() ? emptyNote() : ""), LEFT, 13);
         g.fillText(Quantities.time(t0), LEFT, h - 5);
         g.setTextAlign(TextAlignment.RIGHT);
         g.fillText(Quantities.time(t1), LEFT + pw, h - 5);

@@ -12,6 +12,7 @@ import javafx.beans.property.ReadOnlyStringWrapper;
 import org.kinduct.render.paint.Placement;
 import org.kinduct.render.view.SceneBounds;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.io.SceneWithUnits;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.RunMonitor;
 import org.kinduct.solver.run.RunRequest;
@@ -35,6 +36,12 @@ public final class EditorViewModel {
     private final PlaybackClock clock;
     private final FieldMaps maps;
     private final SceneDocument document;
+    private final PlaybackRate rate = new PlaybackRate();
+    /**
+     * A zoom to fit was asked for before the run it should take in (free bodies' paths) was in:
+     * it is fitted again once that run arrives, unless the user moved the view or edited first.
+     */
+    private boolean fitAwaitsRun;
 
     public EditorViewModel(Scene initial, Executor work, Executor ui) {
         this(initial, EditorViewModel::run, work, ui, System::nanoTime);
@@ -49,8 +56,9 @@ public final class EditorViewModel {
         results = new SceneResults(runs, work, ui, clockNs, this::say);
         clock = new PlaybackClock(initial.time(), new PlaybackClock.Moves() {
             @Override
-            public void played(double realSeconds) {
-                maps.played(realSeconds);
+            public void played(double wallSeconds) {
+                maps.played(wallSeconds);
+                measure(wallSeconds);
             }
 
             @Override
@@ -62,12 +70,14 @@ public final class EditorViewModel {
         document = new SceneDocument(initial, this::say, this::revised);
         clock.timeProperty().addListener(o -> showTime());
         clock.playingProperty().addListener((o, was, now) -> {
+            rate.reset();
             if (!now) {
                 showTime();
                 maps.request(FieldMaps.Quality.FINE);
             }
         });
-        results.resultProperty().addListener(o -> refitAfterRun());
+        // A change listener: an invalidation listener that does not read the value would miss the next run.
+        results.resultProperty().addListener((o, was, now) -> refitAfterRun());
         revised(initial, document.revision());
     }
 
@@ -81,6 +91,7 @@ public final class EditorViewModel {
     }
 
     private void revised(Scene s, long revision) {
+        fitAwaitsRun = false;
         results.start(s, revision);
         if (!clock.window(s.time())) {
             showTime();
@@ -98,11 +109,28 @@ public final class EditorViewModel {
         }
     }
 
+    /** Measures how fast playback really goes by the instant shown after a frame of {@code wallSeconds}. */
+    private void measure(double wallSeconds) {
+        Snapshot shown = results.snapshot();
+        Optional<RunResult> current = results.currentResult();
+        boolean solving = current.isEmpty() || !clock.playsSamplesOf(current.get());
+        rate.frame(wallSeconds, shown == null ? Double.NaN : shown.tS(), document.scene().time(), clock.speed(),
+                solving);
+    }
+
     /**
      * Replaces the whole scene (opened file, new scene, recovered work) and starts its time
      * afresh; {@code unsaved} marks recovered work that still needs saving.
      */
     public void load(Scene newScene, Path from, boolean unsaved) {
+        load(SceneWithUnits.of(newScene), from, unsaved);
+    }
+
+    /** Replaces the whole scene as {@link #load(Scene, Path, boolean)} does, keeping the units its file gave. */
+    public void load(SceneWithUnits newScene, Path from, boolean unsaved) {
+        // Nothing of the scene before may stand beside the new one while its numbers are computed.
+        results.forget();
+        maps.forget();
         document.load(newScene, from, unsaved);
         clock.resetTime();
     }
@@ -113,14 +141,22 @@ public final class EditorViewModel {
      */
     public void zoomToFit() {
         // A run of the scene shown before (just after opening another) says nothing about this one.
-        view.fit(results.extent().orElseGet(() -> SceneBounds.ofWindow(document.scene(), List.of())));
+        Optional<SceneBounds> covered = results.extent();
+        view.fit(covered.orElseGet(() -> SceneBounds.ofWindow(document.scene(), List.of())));
+        fitAwaitsRun = covered.isEmpty();
         maps.request(FieldMaps.Quality.FINE);
     }
 
-    /** A fitted view is fitted again once the free bodies' run is in, unless the user has moved it since. */
+    /**
+     * Completes a zoom to fit asked for while the run was computed (on opening a scene), so free
+     * bodies' paths are in view; the view never rescales by itself after an edit.
+     */
     private void refitAfterRun() {
-        if (view.stillFitted() && results.currentResult().map(RunResult::hasFreeBodies).orElse(false)) {
-            zoomToFit();
+        if (fitAwaitsRun && results.resultIsCurrent()) {
+            fitAwaitsRun = false;
+            if (view.stillFitted() && results.currentResult().map(RunResult::hasFreeBodies).orElse(false)) {
+                zoomToFit();
+            }
         }
     }
 
@@ -132,6 +168,11 @@ public final class EditorViewModel {
 
     public void say(String message) {
         status.set(message);
+    }
+
+    /** Empty while playback keeps to the speed asked for, else how fast it really goes and why. */
+    public ReadOnlyStringProperty playbackNoteProperty() {
+        return rate.noteProperty();
     }
 
     public ReadOnlyStringProperty statusProperty() {

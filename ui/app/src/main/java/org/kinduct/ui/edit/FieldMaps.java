@@ -108,6 +108,11 @@ public final class FieldMaps {
         return mapLatencyS;
     }
 
+    /** Shows no map until the next scene's first arrives (another scene replaces this one). */
+    void forget() {
+        raster.set(null);
+    }
+
     /** Takes a finished map unless the scene changed since it was asked for. */
     void accept(FieldRaster r) {
         if (r.revision() == results.revision()) {

@@ -19,11 +19,13 @@ public final class PlaybackClock {
 
     /** Playback frames that move on by less than this fraction of a run's sample step are solved exactly. */
     static final double SLOW_MOTION_FRACTION = 0.25;
+    /** Longest wall-clock step one playback frame takes: after a stall, playback resumes rather than jumps. */
+    static final double MAX_FRAME_S = 0.1;
 
     /** Told of every move after it happened, so the field maps can follow at a fitting pace. */
     interface Moves {
-        /** Playback moved the time on for {@code realSeconds} of wall-clock time. */
-        void played(double realSeconds);
+        /** A playback frame {@code wallSeconds} of wall-clock time after the last moved the time on. */
+        void played(double wallSeconds);
 
         /** The user put the time somewhere: {@code settled} after a step or reset, false while scrubbing. */
         void jumped(boolean settled);
@@ -57,11 +59,14 @@ public final class PlaybackClock {
         return true;
     }
 
-    /** Advances playback by {@code realSeconds} of wall-clock time times the speed, wrapping at the end. */
-    public void advance(double realSeconds) {
-        frameStepS = realSeconds * speed.get();
+    /**
+     * A playback frame {@code wallSeconds} after the last: moves the time on by that (at most
+     * {@value #MAX_FRAME_S} s) times the speed, wrapping at the end.
+     */
+    public void advance(double wallSeconds) {
+        frameStepS = Math.min(wallSeconds, MAX_FRAME_S) * speed.get();
         time.set(wrapped(time.get() + frameStepS));
-        moves.played(realSeconds);
+        moves.played(wallSeconds);
     }
 
     /** Moves by {@code steps} of the scene's time step. */

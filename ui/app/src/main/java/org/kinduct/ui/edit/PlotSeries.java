@@ -16,9 +16,10 @@ import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
 
 /**
- * The lines of the time plot: a conductor quantity for the selected conductors (all when none is
- * selected), or a body quantity for the bodies the selected objects ride (all moving bodies when
- * none is selected). Free bodies are read from the simulated poses, the others from their motion.
+ * The lines of the time plot: a conductor quantity for the selected conductors (all when no
+ * conductor is selected, so selecting a magnet leaves the plot as it was), or a body quantity for
+ * the bodies the selected objects ride (all moving bodies when none is selected). Free bodies are
+ * read from the simulated poses, the others from their motion.
  */
 public final class PlotSeries {
 
@@ -84,8 +85,9 @@ public final class PlotSeries {
             // Read against the run's largest value of any conductor, so a conductor with no EMF
             // plots flat at zero instead of its rounding noise stretched to full height.
             double reference = q.runScale(run.scales());
+            boolean anySelected = selection.stream().anyMatch(id -> scene.conductor(id).isPresent());
             for (ConductorState first : series.get(0).conductors()) {
-                if (selection.isEmpty() || selection.contains(first.id())) {
+                if (!anySelected || selection.contains(first.id())) {
                     double[] v = new double[t.length];
                     for (int i = 0; i < t.length; i++) {
                         double raw = series.get(i).conductor(first.id()).map(q.ofConductor::applyAsDouble)

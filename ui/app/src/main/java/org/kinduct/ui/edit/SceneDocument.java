@@ -10,6 +10,8 @@ import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableSet;
 import org.kinduct.render.paint.Placement;
@@ -17,6 +19,8 @@ import org.kinduct.render.view.SceneBounds;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.scene.io.SceneWithUnits;
+import org.kinduct.scene.io.UnitTexts;
 
 /**
  * The document being edited: the scene with its undo history, whether it has unsaved changes,
@@ -36,6 +40,9 @@ public final class SceneDocument {
     private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper canRedo = new ReadOnlyBooleanWrapper();
     private final ReadOnlyObjectWrapper<Path> file = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper();
+    /** The units the loaded file gave values in, written back on saving. */
+    private UnitTexts units = UnitTexts.none();
     private final ObservableSet<String> selection = FXCollections.observableSet();
     private long revision;
 
@@ -50,6 +57,7 @@ public final class SceneDocument {
         this.say = say;
         this.revised = revised;
         scene.set(initial);
+        updateFlags();
     }
 
     /** Applies an edit; an edit the model rejects leaves the scene as it was and says why. */
@@ -103,14 +111,20 @@ public final class SceneDocument {
      * {@code unsaved} marks recovered work that still needs saving. Through
      * {@link EditorViewModel#load}, which also takes the time back to the start.
      */
-    void load(Scene newScene, Path from, boolean unsaved) {
-        history.reset(newScene);
+    void load(SceneWithUnits newScene, Path from, boolean unsaved) {
+        history.reset(newScene.scene());
         if (unsaved) {
             history.markUnsaved();
         }
+        units = newScene.units();
         file.set(from);
         selection.clear();
-        show(newScene);
+        show(newScene.scene());
+    }
+
+    /** The scene now with the units its file gave values in: what saving writes. */
+    public SceneWithUnits withUnits() {
+        return new SceneWithUnits(scene(), units);
     }
 
     /**
@@ -139,6 +153,13 @@ public final class SceneDocument {
         dirty.set(history.isDirty());
         canUndo.set(history.canUndo());
         canRedo.set(history.canRedo());
+        title.set(title(scene(), file(), isDirty()));
+    }
+
+    /** "• Scene name — file.json — Kinduct": the mark while unsaved, the file once there is one. */
+    static String title(Scene s, Path file, boolean dirty) {
+        String name = s.name().isBlank() ? "untitled" : s.name().strip();
+        return (dirty ? "• " : "") + name + (file == null ? "" : " — " + file.getFileName()) + " — Kinduct";
     }
 
     // ---- selection ----
@@ -209,6 +230,11 @@ public final class SceneDocument {
 
     public boolean isDirty() {
         return dirty.get();
+    }
+
+    /** The window's title: the scene's name, its file, and a mark while it has unsaved changes. */
+    public ReadOnlyStringProperty titleProperty() {
+        return title.getReadOnlyProperty();
     }
 
     public ReadOnlyBooleanProperty canUndoProperty() {

@@ -153,6 +153,12 @@ public final class SceneResults {
         });
     }
 
+    /** Shows nothing until the next scene's numbers arrive (another scene replaces this one). */
+    void forget() {
+        snapshot.set(null);
+        shownField.set(NO_FIELD);
+    }
+
     /** A solve failed: nothing is shown rather than numbers of another state. A stopped run is no news. */
     private void failed(long rev, long ask, RuntimeException e) {
         ui.execute(() -> {

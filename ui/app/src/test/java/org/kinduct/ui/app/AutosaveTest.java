@@ -18,6 +18,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.io.SceneWithUnits;
 
 /** Autosaves per window, and which ones a start may offer: files only, no toolkit. */
 class AutosaveTest {
@@ -31,7 +32,7 @@ class AutosaveTest {
     /** What a session that ended without a clean exit leaves: autosave, origin, and a lock nobody holds. */
     static Path orphan(Path dir, String id, Scene scene, Path origin, Instant savedAt) throws Exception {
         Path json = dir.resolve("autosave-" + id + ".json");
-        STORE.write(scene, json);
+        STORE.write(SceneWithUnits.of(scene), json);
         Files.writeString(dir.resolve("autosave-" + id + ".origin"), origin == null ? "" : origin.toString(),
                 StandardCharsets.UTF_8);
         Files.writeString(dir.resolve("autosave-" + id + ".lock"), "");
@@ -47,11 +48,11 @@ class AutosaveTest {
     void twoWindowsWriteTwoFilesAndNeitherIsOfferedWhileTheyLive() throws Exception {
         Autosave a = new Autosave(home);
         Autosave b = new Autosave(home);
-        a.write(STORE, Scene.empty("a"), null);
-        b.write(STORE, Scene.empty("b"), null);
+        a.write(STORE, SceneWithUnits.of(Scene.empty("a")), null);
+        b.write(STORE, SceneWithUnits.of(Scene.empty("b")), null);
         assertNotEquals(a.file(), b.file());
-        assertEquals("a", STORE.read(a.file()).name());
-        assertEquals("b", STORE.read(b.file()).name());
+        assertEquals("a", STORE.read(a.file()).scene().name());
+        assertEquals("b", STORE.read(b.file()).scene().name());
         assertTrue(offered(home).isEmpty(), "a window's autosave is not work left behind");
         a.release();
         b.release();
@@ -61,8 +62,8 @@ class AutosaveTest {
     void aCleanReleaseRemovesOnlyItsOwnAutosave() throws Exception {
         Autosave a = new Autosave(home);
         Autosave b = new Autosave(home);
-        a.write(STORE, Scene.empty("a"), null);
-        b.write(STORE, Scene.empty("b"), null);
+        a.write(STORE, SceneWithUnits.of(Scene.empty("a")), null);
+        b.write(STORE, SceneWithUnits.of(Scene.empty("b")), null);
         Path left = orphan(home, "left", Scene.empty("left"), null, NOW);
 
         a.release();
@@ -77,7 +78,7 @@ class AutosaveTest {
     @Test
     void anOrphanIsOfferedWhenNewerThanItsFileOrWithoutOne() throws Exception {
         Path saved = home.resolve("saved.json");
-        STORE.write(Scene.empty("saved"), saved);
+        STORE.write(SceneWithUnits.of(Scene.empty("saved")), saved);
         Files.setLastModifiedTime(saved, FileTime.from(NOW));
         Path newer = orphan(home, "newer", Scene.empty("newer"), saved, NOW.plusSeconds(60));
         Path older = orphan(home, "older", Scene.empty("older"), saved, NOW.minusSeconds(60));
@@ -103,7 +104,7 @@ class AutosaveTest {
     @Test
     void theSingleAutosaveOfEarlierVersionsIsOfferedAsWorkWithoutAFile() throws Exception {
         Path legacy = home.resolve("autosave.json");
-        STORE.write(Scene.empty("legacy"), legacy);
+        STORE.write(SceneWithUnits.of(Scene.empty("legacy")), legacy);
         List<Autosave.Orphan> offered = Autosave.recoverable(home);
         assertEquals(List.of(legacy), offered.stream().map(Autosave.Orphan::file).toList());
         assertNull(offered.get(0).origin());
@@ -122,7 +123,7 @@ class AutosaveTest {
     void theAutosaveRecordsTheFileItsWorkBelongsTo() throws Exception {
         Path file = home.resolve("doc.json");
         Autosave a = new Autosave(home);
-        a.write(STORE, Scene.empty("doc"), file);
+        a.write(STORE, SceneWithUnits.of(Scene.empty("doc")), file);
         // As a crash leaves it: the lock is the process's until it ends; read the record directly.
         Path origin = home.resolve(a.file().getFileName().toString().replace(".json", ".origin"));
         assertEquals(file.toAbsolutePath().normalize().toString(), Files.readString(origin).strip());

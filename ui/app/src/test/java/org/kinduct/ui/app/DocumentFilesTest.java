@@ -24,6 +24,8 @@ import org.kinduct.demo.Demos;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.path.SceneValues;
+import org.kinduct.scene.io.SceneWithUnits;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.SceneEdits;
 
@@ -115,7 +117,7 @@ class DocumentFilesTest {
     @Test
     void aStartWithADemoStillOffersTheWorkACrashLeftAndRecoversItUnsaved() throws Exception {
         Path file = home.resolve("work.json");
-        STORE.write(Scene.empty("as saved"), file);
+        STORE.write(SceneWithUnits.of(Scene.empty("as saved")), file);
         Files.setLastModifiedTime(file, FileTime.from(NOW));
         Scene unsaved = Scene.empty("unsaved edits");
         Path left = AutosaveTest.orphan(home, "crashed", unsaved, file, NOW.plusSeconds(30));
@@ -129,13 +131,13 @@ class DocumentFilesTest {
         assertTrue(w.vm().document().isDirty(), "recovered work still needs saving");
         assertEquals(file, w.vm().document().file(), "saving writes it back where it came from");
         assertEquals(List.of(w.autosave().file()), autosaves(), "taken over into this window's autosave");
-        assertEquals(unsaved, STORE.read(w.autosave().file()));
+        assertEquals(unsaved, STORE.read(w.autosave().file()).scene());
     }
 
     @Test
     void aStartWithAFileOffersWorkNewerThanThatFile() throws Exception {
         Path file = home.resolve("work.json");
-        STORE.write(Scene.empty("as saved"), file);
+        STORE.write(SceneWithUnits.of(Scene.empty("as saved")), file);
         Files.setLastModifiedTime(file, FileTime.from(NOW));
         AutosaveTest.orphan(home, "crashed", Scene.empty("unsaved edits"), file, NOW.plusSeconds(30));
         Script dialogs = new Script().answer(FileDialogs.Recovery.LATER);
@@ -154,7 +156,7 @@ class DocumentFilesTest {
     @Test
     void workTheFileHasCaughtUpWithIsNeitherOfferedNorRemoved() throws Exception {
         Path file = home.resolve("work.json");
-        STORE.write(Scene.empty("saved later"), file);
+        STORE.write(SceneWithUnits.of(Scene.empty("saved later")), file);
         Files.setLastModifiedTime(file, FileTime.from(NOW));
         Path left = AutosaveTest.orphan(home, "older", Scene.empty("older"), file, NOW.minusSeconds(30));
         Script dialogs = new Script();
@@ -209,7 +211,7 @@ class DocumentFilesTest {
         Window w = window(new Script());
         addWire(w.vm(), "unsaved");
         w.files().autosave();
-        assertEquals(w.vm().scene(), STORE.read(w.autosave().file()), "the autosave holds the current scene");
+        assertEquals(w.vm().scene(), STORE.read(w.autosave().file()).scene(), "the autosave holds the current scene");
         assertTrue(w.files().saveTo(home.resolve("saved.json")).get());
         assertFalse(Files.exists(w.autosave().file()), "the file has it all");
         w.files().autosave();
@@ -253,10 +255,35 @@ class DocumentFilesTest {
             r.run();
         }
         assertTrue(saved.get());
-        assertEquals(written, STORE.read(file));
+        assertEquals(written, STORE.read(file).scene());
         assertTrue(w.vm().document().isDirty(), "the later edit is not in the file");
         w.vm().document().undo();
         assertFalse(w.vm().document().isDirty(), "the written state is");
+    }
+
+    /** A hand-written file keeps its units through open, edit and save; only the edited value changes. */
+    @Test
+    void savingKeepsTheUnitsTheFileWasWrittenIn() throws Exception {
+        Path file = home.resolve("by-hand.json");
+        Files.writeString(file, """
+                {"format": "kinduct-scene", "version": 1, "name": "by hand",
+                 "time": {"t0": "0 ms", "t1": "200 ms", "dt": "1 ms"},
+                 "sources": [{"kind": "block-magnet", "id": "m", "center": ["0 mm", "0 mm"],
+                   "size": ["10 mm", "10 mm", "4 mm"], "standoff": "1.5 mm", "remanence": "1.25 T"}],
+                 "conductors": [{"kind": "wire", "id": "w", "vertices": [["-10 mm", "8 mm"], ["10 mm", "8 mm"]]}]}
+                """);
+        Window w = window(new Script());
+        assertTrue(w.files().open(file).get());
+        w.vm().document().apply("Set gap", s -> SceneValues.of(s).write("m.standoff", 0.002));
+
+        assertTrue(w.files().save().get());
+
+        String saved = Files.readString(file);
+        for (String kept : List.of("\"0 ms\"", "\"200 ms\"", "\"1 ms\"", "[\"10 mm\", \"10 mm\", \"4 mm\"]",
+                "\"1.25 T\"", "[\"-10 mm\", \"8 mm\"]", "\"standoff\": \"2 mm\"")) {
+            assertTrue(saved.contains(kept), kept + " in\n" + saved);
+        }
+        assertEquals(w.vm().scene(), STORE.read(file).scene());
     }
 
     @Test
@@ -295,7 +322,7 @@ class DocumentFilesTest {
         Scene work = w.vm().scene();
         w.files().newScene();
         assertEquals(List.of("unsaved", "save as"), dialogs.asked);
-        assertEquals(work, STORE.read(file));
+        assertEquals(work, STORE.read(file).scene());
         assertTrue(w.vm().scene().conductors().isEmpty());
         assertNull(w.vm().document().file());
     }

@@ -29,9 +29,11 @@ import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.SceneEdits;
+import org.kinduct.render.paint.Quantities;
 import org.kinduct.render.view.ViewTransform;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
@@ -49,9 +51,11 @@ class EditorWindowTest {
 
     private EditorViewModel vm;
     private EditorWindow window;
+    private Stage stage;
 
     @Start
     void start(Stage stage) {
+        this.stage = stage;
         vm = new EditorViewModel(Scene.empty("test"), Runnable::run, Platform::runLater);
         window = new EditorWindow(stage, vm, new JsonSceneStore(), new AppHome(home), Runnable::run);
         stage.setScene(new javafx.scene.Scene(window.root(), 1100, 760));
@@ -219,17 +223,38 @@ class EditorWindowTest {
     }
 
     @Test
-    void invalidPropertyInputIsMarkedInlineAndChangesNothing(FxRobot robot) {
+    void aRefusedEntryGoesBackToTheLastValidValueAndTheStatusLineSaysWhy(FxRobot robot) {
         interact(() -> vm.document().select(java.util.Set.of()));
         Scene before = vm.scene();
         TextField end = robot.lookup("#prop-end-time").queryAs(TextField.class);
+        String valid = end.getText();
         robot.doubleClickOn(end);
         interact(end::clear);
         robot.write("12 mm").type(KeyCode.ENTER);
         WaitForAsyncUtils.waitForFxEvents();
-        Label error = robot.lookup("#prop-end-time-error").queryAs(Label.class);
-        assertTrue(error.isVisible());
-        assertTrue(error.getText().contains("time"), error.getText());
+        assertEquals(valid, end.getText(), "the field shows the value the scene still has");
+        String status = robot.lookup("#status").queryAs(Label.class).getText();
+        assertTrue(status.contains("time") && status.contains("kept " + valid), status);
+        assertSame(before, vm.scene());
+    }
+
+    @Test
+    void negativeTurnsAreRefusedWhenTheFieldIsLeft(FxRobot robot) {
+        interact(() -> {
+            vm.document().apply("add", s -> SceneEdits.addConductor(s, Conductor.Loop.simple("sq", Body.FIXED, List.of(
+                    Conductor.Vertex.at(0, 0), Conductor.Vertex.at(0.04, 0), Conductor.Vertex.at(0.04, 0.04),
+                    Conductor.Vertex.at(0, 0.04)), org.kinduct.ui.edit.ShapeFactory.DEFAULT_WIRE)));
+            vm.document().select(java.util.Set.of("sq"));
+        });
+        Scene before = vm.scene();
+        TextField turns = robot.lookup("#prop-turns").queryAs(TextField.class);
+        robot.doubleClickOn(turns);
+        interact(turns::clear);
+        robot.write("-5");
+        interact(window.canvas()::requestFocus);
+        assertEquals("1", turns.getText());
+        String status = robot.lookup("#status").queryAs(Label.class).getText();
+        assertTrue(status.startsWith("Turns: ") && status.contains("-5") && status.endsWith("kept 1"), status);
         assertSame(before, vm.scene());
     }
 
@@ -259,6 +284,59 @@ class EditorWindowTest {
         interact(() -> vm.load(Scene.empty("other"), null, false));
         assertTrue(onFx(() -> window.files().open(file)));
         assertEquals(saved, vm.scene());
+    }
+
+    @Test
+    void theWindowTitleFollowsOpenEditAndSave() throws Exception {
+        assertTrue(onFx(() -> window.files().openDemo(org.kinduct.demo.Demos.resource("rail-sled").orElseThrow())));
+        assertEquals("Sled on rails crossing a pole gap — Kinduct", stage.getTitle());
+        interact(() -> vm.document().apply("Rename", s -> s.withText("sled", s.description())));
+        assertEquals("• sled — Kinduct", stage.getTitle());
+        Path file = home.resolve("sled.json");
+        assertTrue(onFx(() -> window.files().saveTo(file)));
+        assertEquals("sled — sled.json — Kinduct", stage.getTitle());
+    }
+
+    /** With the mouse resting over a magnet, turning its poles round flips the B_z the readout shows. */
+    @Test
+    void theCursorReadoutFollowsAnEditUnderAStillMouse(FxRobot robot) {
+        Source.BlockMagnet magnet = new Source.BlockMagnet("m", Body.FIXED, new Vec2(0.02, 0.01), 0.02, 0.02, 0.005,
+                0, 0.001, Source.Side.BELOW, 1.2, Source.Magnetization.PLUS_Z);
+        interact(() -> vm.document().apply("add", s -> SceneEdits.addSource(s, magnet)));
+        javafx.geometry.Point2D at = screenOf(robot, 0.02, 0.01);
+        robot.moveTo(at);
+        WaitForAsyncUtils.waitForFxEvents();
+        Label readout = robot.lookup("#cursor-readout").queryAs(Label.class);
+        assertTrue(readout.getText().endsWith("⊙"), readout.getText());
+
+        interact(() -> vm.document().apply("Poles", s -> SceneEdits.replaceSource(s, new Source.BlockMagnet("m",
+                Body.FIXED, magnet.center(), 0.02, 0.02, 0.005, 0, 0.001, Source.Side.BELOW, 1.2,
+                Source.Magnetization.MINUS_Z))));
+
+        assertTrue(readout.getText().endsWith("⊗"), "after the edit: " + readout.getText());
+        interact(vm::zoomToFit);
+        javafx.geometry.Point2D mouse = window.canvas().screenToLocal(
+                robot.robotContext().getBaseRobot().retrieveMouse());
+        assertTrue(readout.getText().startsWith("x " + Quantities.length(
+                vm.view().view().toScene(mouse.getX(), mouse.getY()).x())), "after zooming: " + readout.getText());
+    }
+
+    @Test
+    void theSignsDialogFitsA1280By800ScreenAndShowsItsWholeText(FxRobot robot) {
+        javafx.scene.control.MenuBar bar = robot.lookup("#menu-bar").queryAs(javafx.scene.control.MenuBar.class);
+        javafx.scene.control.MenuItem signs = bar.getMenus().stream().filter(m -> "help-menu".equals(m.getId()))
+                .findFirst().orElseThrow().getItems().stream().filter(i -> i.getText().startsWith("Signs"))
+                .findFirst().orElseThrow();
+        interact(signs::fire);
+        javafx.scene.control.DialogPane pane = robot.lookup(".dialog-pane")
+                .queryAs(javafx.scene.control.DialogPane.class);
+        javafx.stage.Window dialog = pane.getScene().getWindow();
+        assertTrue(dialog.getWidth() <= 1280 && dialog.getHeight() <= 800,
+                "dialog " + dialog.getWidth() + " × " + dialog.getHeight());
+        Label body = (Label) pane.getContent();
+        assertTrue(body.getText().contains("CHECK"), "the table's word for a disagreement");
+        assertTrue(body.getHeight() >= body.prefHeight(body.getWidth()) - 1, "every wrapped line shown");
+        interact(dialog::hide);
     }
 
     /** Starts a file action on the UI thread and waits for its outcome. */

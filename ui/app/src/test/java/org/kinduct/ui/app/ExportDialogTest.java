@@ -65,6 +65,20 @@ class ExportDialogTest {
     }
 
     @Test
+    void theTimeIsChosenFromTheCommandLinesChoicesOrTyped(FxRobot robot) throws Exception {
+        open(robot);
+        ComboBox<?> time = robot.lookup("#export-time").queryAs(ComboBox.class);
+        assertTrue(time.isEditable(), "a time may be typed");
+        java.util.List<String> offered = time.getItems().stream().map(Object::toString).toList();
+        assertTrue(offered.get(0).startsWith("peak"), offered.toString());
+        for (org.kinduct.scene.Conductor c : vm.scene().conductors()) {
+            assertTrue(offered.contains("peak of " + c.id()), offered.toString());
+        }
+        assertTrue(offered.get(offered.size() - 1).startsWith("the time shown"), offered.toString());
+        robot.clickOn("Cancel");
+    }
+
+    @Test
     void invalidWidthKeepsTheDialogOpenAndSaysWhy(FxRobot robot) throws Exception {
         open(robot);
         TextField width = robot.lookup("#export-width").queryAs(TextField.class);

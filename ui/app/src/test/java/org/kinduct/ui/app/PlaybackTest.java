@@ -27,6 +27,7 @@ import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.ShapeFactory;
 import org.kinduct.render.paint.Quantities;
+import org.kinduct.report.Labels;
 import org.kinduct.render.view.ViewTransform;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
@@ -100,7 +101,9 @@ class PlaybackTest {
         TableView<?> table = robot.lookup("#readouts").queryAs(TableView.class);
         String shownEmf = (String) table.getColumns().get(3).getCellData(0);
         assertEquals(Quantities.voltage(st.emfMotionalV()), shownEmf);
-        assertEquals("agree", table.getColumns().get(4).getCellData(0));
+        assertEquals(Labels.agreement(st), table.getColumns().get(4).getCellData(0));
+        assertTrue(Labels.agreement(st).startsWith("yes"), Labels.agreement(st));
+        assertEquals("↺ counter-clockwise", table.getColumns().get(6).getCellData(0));
 
         // The ⊙ of the induced field is drawn at the loop's centre: a dark dot there.
         Vec2 centre = st.vertices().stream().reduce(Vec2.ZERO, Vec2::plus).times(0.25);

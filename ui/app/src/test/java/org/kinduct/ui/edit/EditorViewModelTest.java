@@ -3,9 +3,11 @@ package org.kinduct.ui.edit;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Path;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.List;
@@ -84,9 +86,14 @@ class EditorViewModelTest {
         Scene s = Fixtures.loopAndMagnet().withTime(new TimeSpan(0, 1, 0.01));
         EditorViewModel vm = vm(s, SAME_THREAD);
         vm.clock().speedProperty().set(2);
-        vm.clock().advance(0.3);
+        vm.clock().advance(0.1);
+        vm.clock().advance(0.1);
+        vm.clock().advance(0.1);
         assertEquals(0.6, vm.clock().time(), TIME_TOL);
         vm.clock().advance(0.3);
+        assertEquals(0.8, vm.clock().time(), TIME_TOL, "a frame after a stall moves on by 0.1 s of wall time");
+        vm.clock().advance(0.1);
+        vm.clock().advance(0.1);
         assertEquals(0.2, vm.clock().time(), TIME_TOL);
         vm.clock().step(3);
         assertEquals(0.23, vm.clock().time(), TIME_TOL);
@@ -130,6 +137,66 @@ class EditorViewModelTest {
         assertFalse(vm.document().isDirty());
         assertFalse(vm.clock().isPlaying());
         assertEquals(0, vm.clock().time(), 0);
+    }
+
+    @Test
+    void theTitleNamesTheSceneAndItsFileAndMarksUnsavedChanges() {
+        EditorViewModel vm = vm(Fixtures.loopAndMagnet(), SAME_THREAD);
+        assertEquals("fixture — Kinduct", vm.document().titleProperty().get());
+        vm.document().apply("Rename", s -> s.withText("pickup", ""));
+        assertEquals("• pickup — Kinduct", vm.document().titleProperty().get());
+        vm.document().markSaved(vm.scene(), Path.of("/tmp/work/pickup.json"));
+        assertEquals("pickup — pickup.json — Kinduct", vm.document().titleProperty().get());
+        vm.load(org.kinduct.demo.Demos.load("rail-sled"), null, false);
+        assertEquals("Sled on rails crossing a pole gap — Kinduct", vm.document().titleProperty().get(),
+                "an opened demo, clean and without a file");
+        vm.load(Scene.empty(""), null, false);
+        assertEquals("untitled — Kinduct", vm.document().titleProperty().get());
+    }
+
+    @Test
+    void openingAnotherSceneShowsNothingOfTheSceneBeforeWhileItsNumbersAreComputed() {
+        Queue<Runnable> work = new ArrayDeque<>();
+        EditorViewModel vm = vm(Fixtures.glidingMagnet(), work::add);
+        drain(work);
+        assertNotNull(vm.results().snapshot());
+        assertNotNull(vm.maps().raster());
+        assertTrue(vm.results().bzAt(0.1, 0) != 0);
+
+        Scene next = org.kinduct.demo.Demos.load("rail-sled");
+        vm.load(next, null, false);
+
+        assertNull(vm.results().snapshot(), "no table rows of the scene before");
+        assertNull(vm.maps().raster(), "no field colours of the scene before");
+        assertEquals(0, vm.results().bzAt(0.1, 0), 0, "no cursor readout of the scene before");
+        assertTrue(vm.results().currentResult().isEmpty(), "no waveform of the scene before");
+        drain(work);
+        assertEquals(List.of("rail-circuit"), vm.results().snapshot().conductors().stream()
+                .map(org.kinduct.solver.ConductorState::id).toList());
+        assertEquals(vm.document().revision(), vm.maps().raster().revision());
+    }
+
+    /** A loop dropped under gravity: its run decides where it falls, but an edit never moves the view. */
+    @Test
+    void theViewIsFittedOnOpeningOnlyNeverAfterAnEdit() {
+        Scene drop = Fixtures.springCart(false).withBodies(List.of(new org.kinduct.scene.Body("cart", "cart",
+                new org.kinduct.scene.Vec2(0.1, 0), org.kinduct.scene.Motion.Free.ofMass(0.1))))
+                .withGravity(new org.kinduct.scene.Vec2(0, -9.81));
+        Queue<Runnable> work = new ArrayDeque<>();
+        EditorViewModel vm = vm(Fixtures.loopAndMagnet(), work::add);
+        drain(work);
+        vm.load(drop, null, false);
+        vm.zoomToFit();
+        ViewTransform beforeRun = vm.view().view();
+        drain(work);
+        ViewTransform opened = vm.view().view();
+        assertTrue(opened.minY() < beforeRun.minY(), "once the run is in, the fall is taken into view");
+
+        vm.document().apply("Gravity", s -> s.withGravity(new org.kinduct.scene.Vec2(0, -30)));
+        drain(work);
+
+        assertTrue(vm.results().currentResult().isPresent());
+        assertSame(opened, vm.view().view(), "the edit left the view where it was");
     }
 
     @Test

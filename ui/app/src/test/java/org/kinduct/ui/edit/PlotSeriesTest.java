@@ -8,6 +8,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
+import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
@@ -96,7 +98,20 @@ class PlotSeriesTest {
         PlotSeries.Line f = PlotSeries.lines(run, Set.of("loop"), PlotSeries.Quantity.FORCE_X).get(0);
         assertEquals("loop", f.id());
         assertEquals(run.samples().get(1).conductor("loop").orElseThrow().forceN().x(), f.values()[1], 0);
-        assertTrue(PlotSeries.lines(run, Set.of("magnet"), PlotSeries.Quantity.EMF).isEmpty());
+    }
+
+    @Test
+    void selectingOnlySourcesKeepsEveryConductorPlotted() {
+        Scene s = SceneEdits.addConductor(glidingMagnet(), new Conductor.Wire("rod", Body.FIXED,
+                List.of(Conductor.Vertex.at(0.06, -0.01), Conductor.Vertex.at(0.06, 0.01))));
+        RunResult run = run(s, new TimeSpan(0, 1, 0.5));
+        assertEquals(List.of("loop", "rod"), ids(PlotSeries.lines(run, Set.of("magnet"), PlotSeries.Quantity.EMF)));
+        assertEquals(List.of("rod"), ids(PlotSeries.lines(run, Set.of("magnet", "rod"), PlotSeries.Quantity.EMF)),
+                "a selected conductor still picks its line");
+    }
+
+    private static List<String> ids(List<PlotSeries.Line> lines) {
+        return lines.stream().map(PlotSeries.Line::id).toList();
     }
 
     @Test

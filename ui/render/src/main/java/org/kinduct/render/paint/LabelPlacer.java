@@ -5,8 +5,8 @@ import java.util.List;
 
 /**
  * Greedy label placement: each label tries positions on rings around its anchor, nearest first,
- * and takes the first that overlaps no earlier label and stays on the surface. When none is
- * free it takes the least-overlapping one, so a label is never dropped.
+ * and takes the first that overlaps no earlier label or reserved line (a conductor) and stays on
+ * the surface. When none is free it takes the least-overlapping one, so a label is never dropped.
  */
 public final class LabelPlacer {
 
@@ -35,9 +35,45 @@ public final class LabelPlacer {
     private static final double[] RINGS = {16, 36, 62, 96, 140};
     private static final int DIRECTIONS = 8;
 
+    /** A line labels keep off, screen pixels, as thick as {@code 2 · halfWidth}. */
+    private record Line(double x0, double y0, double x1, double y1, double halfWidth) {
+
+        /** Length of this line inside {@code b} widened by the half width and {@code pad}: 0 when clear of it. */
+        double lengthIn(Box b, double pad) {
+            double grow = halfWidth + pad;
+            double minX = b.x() - grow;
+            double minY = b.y() - grow;
+            double maxX = b.x() + b.w() + grow;
+            double maxY = b.y() + b.h() + grow;
+            // Liang–Barsky clipping of the segment to the box (common practice in computer graphics).
+            double dx = x1 - x0;
+            double dy = y1 - y0;
+            double[] p = {-dx, dx, -dy, dy};
+            double[] q = {x0 - minX, maxX - x0, y0 - minY, maxY - y0};
+            double t0 = 0;
+            double t1 = 1;
+            for (int i = 0; i < 4; i++) {
+                if (p[i] == 0) {
+                    if (q[i] < 0) {
+                        return 0;
+                    }
+                } else {
+                    double t = q[i] / p[i];
+                    if (p[i] < 0) {
+                        t0 = Math.max(t0, t);
+                    } else {
+                        t1 = Math.min(t1, t);
+                    }
+                }
+            }
+            return t0 <= t1 ? (t1 - t0) * Math.hypot(dx, dy) : 0;
+        }
+    }
+
     private final double width;
     private final double height;
     private final List<Box> taken = new ArrayList<>();
+    private final List<Line> lines = new ArrayList<>();
 
     public LabelPlacer(double width, double height) {
         this.width = width;
@@ -47,6 +83,14 @@ public final class LabelPlacer {
     /** Marks a screen area as occupied (e.g. the legend) without placing a label there. */
     public void reserve(Box box) {
         taken.add(box);
+    }
+
+    /**
+     * Keeps labels off the segment from (x0, y0) to (x1, y1), {@code halfWidth} pixels to each side
+     * (a conductor as drawn), without taking the boxes around it: a long line leaves room beside it.
+     */
+    public void reserveLine(double x0, double y0, double x1, double y1, double halfWidth) {
+        lines.add(new Line(x0, y0, x1, y1, halfWidth));
     }
 
     /** Places a {@code w × h} box near (ax, ay), on the side away from it (a callout with a leader), and records it. */
@@ -112,6 +156,12 @@ public final class LabelPlacer {
         for (Box t : taken) {
             if (t.overlaps(b, PAD)) {
                 sum += t.overlapArea(b) + 1;
+            }
+        }
+        for (Line l : lines) {
+            double crossed = l.lengthIn(b, PAD);
+            if (crossed > 0) {
+                sum += crossed * 2 * l.halfWidth() + 1;
             }
         }
         return sum;

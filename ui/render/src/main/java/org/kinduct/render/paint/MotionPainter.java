@@ -21,12 +21,58 @@ final class MotionPainter {
 
     private static final int COLOUR = 0xFF00695C;
     private static final double ARROW_PX = 38;
+    /** Half the width of an arrow's head, which is twice this long. */
+    private static final double HEAD_HALF_PX = 5;
     private static final double FONT = 11;
 
     private MotionPainter() {
     }
 
+    /** One moving body's mark on screen: the arrow's start, its direction (zero without one), and the label. */
+    private record Mark(double x, double y, double dx, double dy, String text) {
+        boolean hasArrow() {
+            return dx != 0 || dy != 0;
+        }
+    }
+
+    /** Keeps labels placed before {@link #draw} (the sources') off the velocity arrows. */
+    static void reserveArrows(ViewTransform v, Scene scene, Placement placement, LabelPlacer placer) {
+        for (Mark m : marks(v, scene, placement)) {
+            if (m.hasArrow()) {
+                placer.reserveLine(m.x(), m.y(), m.x() + m.dx() * ARROW_PX, m.y() + m.dy() * ARROW_PX, HEAD_HALF_PX);
+            }
+        }
+    }
+
     static void draw(Surface s, ViewTransform v, Scene scene, Placement placement, LabelPlacer placer) {
+        for (Mark m : marks(v, scene, placement)) {
+            double x = m.x();
+            double y = m.y();
+            if (m.hasArrow()) {
+                s.stroke(COLOUR);
+                s.fill(COLOUR);
+                s.lineWidth(2.5);
+                s.dash();
+                s.beginPath();
+                s.moveTo(x, y);
+                s.lineTo(x + m.dx() * (ARROW_PX - 6), y + m.dy() * (ARROW_PX - 6));
+                s.strokePath();
+                Glyphs.arrowHead(s, x + m.dx() * ARROW_PX, y + m.dy() * ARROW_PX, m.dx(), m.dy(), 2 * HEAD_HALF_PX);
+            }
+            if (!m.text().isEmpty()) {
+                double w = s.textWidth(m.text(), FONT, false) + 8;
+                LabelPlacer.Box box = placer.placeAround(x + ARROW_PX / 2, y + 14, w, 16);
+                s.fill(Palette.LABEL_BOX);
+                s.fillRect(box.x(), box.y(), box.w(), box.h());
+                s.fill(COLOUR);
+                s.text(m.text(), box.centerX(), box.centerY(), FONT, false, Surface.Anchor.CENTER);
+            }
+        }
+    }
+
+    /** The marks of the moving bodies that carry something. */
+    private static List<Mark> marks(ViewTransform v, Scene scene, Placement placement) {
+        List<Mark> out = new ArrayList<>();
         for (Body body : scene.bodies()) {
             if (Body.FIXED.equals(body.id())) {
                 continue;
@@ -37,38 +83,23 @@ final class MotionPainter {
             }
             Pose pose = placement.pose(body.id());
             Vec2 centre = SourcePainter.centroid(carried);
-            double x = v.screenX(centre.x());
-            double y = v.screenY(centre.y());
             // The velocity of the carried objects' middle: the pivot's plus ω × r.
             Vec2 velocity = pose.velocityAt(centre);
+            double dx = 0;
+            double dy = 0;
             String text = "";
             if (velocity.length() > 0) {
-                double dx = velocity.x() / velocity.length();
-                double dy = -velocity.y() / velocity.length();
-                s.stroke(COLOUR);
-                s.fill(COLOUR);
-                s.lineWidth(2.5);
-                s.dash();
-                s.beginPath();
-                s.moveTo(x, y);
-                s.lineTo(x + dx * (ARROW_PX - 6), y + dy * (ARROW_PX - 6));
-                s.strokePath();
-                Glyphs.arrowHead(s, x + dx * ARROW_PX, y + dy * ARROW_PX, dx, dy, 10);
+                dx = velocity.x() / velocity.length();
+                dy = -velocity.y() / velocity.length();
                 text = "v " + Units.format(velocity.length(), Dimension.VELOCITY);
             }
             if (pose.omegaRadPerS() != 0) {
                 text += (text.isEmpty() ? "" : ", ") + "ω " + Units.format(Math.abs(pose.omegaRadPerS()),
                         Dimension.ANGULAR_SPEED) + (pose.omegaRadPerS() > 0 ? " ↺" : " ↻");
             }
-            if (!text.isEmpty()) {
-                double w = s.textWidth(text, FONT, false) + 8;
-                LabelPlacer.Box box = placer.placeAround(x + ARROW_PX / 2, y + 14, w, 16);
-                s.fill(Palette.LABEL_BOX);
-                s.fillRect(box.x(), box.y(), box.w(), box.h());
-                s.fill(COLOUR);
-                s.text(text, box.centerX(), box.centerY(), FONT, false, Surface.Anchor.CENTER);
-            }
+            out.add(new Mark(v.screenX(centre.x()), v.screenY(centre.y()), dx, dy, text));
         }
+        return out;
     }
 
     /** Where the conductors' vertices and the sources' outlines that ride {@code bodyId} are now. */

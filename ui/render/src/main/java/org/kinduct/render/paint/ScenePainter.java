@@ -4,6 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import org.kinduct.render.view.NiceSteps;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
 import org.kinduct.render.view.ViewTransform;
 
 /**
@@ -19,6 +22,8 @@ public final class ScenePainter {
      * placed 16 cm wide (1 pt = 0.3528 mm), the smallest size we allow in print.
      */
     static final double LABEL_FONT = 11;
+    /** Half the width of a conductor as drawn with its halo ({@link ConductorPainter}). */
+    private static final double CONDUCTOR_HALF_WIDTH_PX = 3;
     /** The "t = …" box in the top-left corner; axis labels keep out of it. */
     private static final LabelPlacer.Box HEADER = new LabelPlacer.Box(6, 6, 150, 20);
     private static final double LEGEND_W = 178;
@@ -66,24 +71,31 @@ public final class ScenePainter {
         if (legendBox != null) {
             fixed.add(legendBox);
         }
+        // The axis values join the fixed boxes, so no callout or contour label covers them.
         if (f.shows(Layer.GRID)) {
-            grid(s, v, new ArrayList<>(fixed));
+            grid(s, v, fixed);
         }
         LabelPlacer placer = new LabelPlacer(s.width(), s.height());
         fixed.forEach(placer::reserve);
         Placement placement = Placement.of(f.scene(), f.tS(), f.freeBodies());
-        List<Runnable> patchMarks = f.shows(Layer.SOURCES)
+        List<Runnable> sourceLabels = f.shows(Layer.SOURCES)
                 ? SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer) : List.of();
         if (f.shows(Layer.CONDUCTORS)) {
             ConductorPainter.drawConductors(s, v, f.scene(), placement, f.marks());
+            keepLabelsOffConductors(v, f.scene(), placement, placer);
         }
         if (f.shows(Layer.LENZ) && f.snapshot() != null) {
             ConductorPainter.drawLenz(s, v, f.scene(), f.snapshot(), placer);
         }
+        // Source labels keep off the velocity arrows, and are placed before the velocity labels, so
+        // a magnet keeps its label on its centre and those move instead.
+        if (f.shows(Layer.MOTION)) {
+            MotionPainter.reserveArrows(v, f.scene(), placement, placer);
+        }
+        sourceLabels.forEach(Runnable::run);
         if (f.shows(Layer.MOTION)) {
             MotionPainter.draw(s, v, f.scene(), placement, placer);
         }
-        patchMarks.forEach(Runnable::run);
         List<Runnable> labels = new ArrayList<>();
         if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
             ConductorPainter.placeCallouts(s, v, f.scene(), f.snapshot(), f.scales(), placer, labels);
@@ -99,6 +111,21 @@ public final class ScenePainter {
         }
         header(s, f);
         s.restore();
+    }
+
+    /** Conductors' lines (as drawn, halo included) are kept free of labels, which would hide where they run. */
+    private static void keepLabelsOffConductors(ViewTransform v, Scene scene, Placement placement,
+                                                LabelPlacer placer) {
+        for (Conductor c : scene.conductors()) {
+            List<Vec2> pts = placement.vertices(c);
+            int edges = c instanceof Conductor.Loop ? pts.size() : pts.size() - 1;
+            for (int i = 0; i < edges; i++) {
+                Vec2 a = pts.get(i);
+                Vec2 b = pts.get((i + 1) % pts.size());
+                placer.reserveLine(v.screenX(a.x()), v.screenY(a.y()), v.screenX(b.x()), v.screenY(b.y()),
+                        CONDUCTOR_HALF_WIDTH_PX);
+            }
+        }
     }
 
     /** Grid lines and axis values; a value is left out where it would touch a box of {@code taken} or another value. */

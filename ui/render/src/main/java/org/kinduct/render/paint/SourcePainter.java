@@ -14,18 +14,20 @@ public final class SourcePainter {
 
     /** Height of a patch's mark: the 7 px symbol above a 14 px value. */
     private static final double PATCH_MARK_H = 34;
+    /** Height of a magnet's pole label: the 15 px pole letter above the 11 px magnetization. */
+    private static final double POLE_LABEL_H = 30;
 
     private SourcePainter() {
     }
 
     /**
-     * Draws the sources; returns the field patches' value marks (⊙/⊗ and B_z), to be placed once
-     * conductors and their arrows have claimed their room, so a conductor crossing a patch's
-     * centre does not run through its value.
+     * Draws the sources; returns their labels (a patch's ⊙/⊗ and B_z, a magnet's pole), to be
+     * placed once conductors and their arrows have claimed their room, so a conductor crossing a
+     * source's centre neither runs through its label nor hides it.
      */
     static List<Runnable> draw(Surface s, ViewTransform v, Scene scene, Placement placement, EditorMarks marks,
                                LabelPlacer placer) {
-        List<Runnable> patchMarks = new ArrayList<>();
+        List<Runnable> labels = new ArrayList<>();
         for (Source src : scene.sources()) {
             List<Vec2> outline = outline(src, placement);
             if (outline.isEmpty()) {
@@ -43,7 +45,7 @@ public final class SourcePainter {
                     s.strokePath();
                     s.dash();
                     Vec2 c = centroid(outline);
-                    patchMarks.add(() -> patchMark(s, placer, v.screenX(c.x()), v.screenY(c.y()), patch.bzT()));
+                    labels.add(() -> patchMark(s, placer, v.screenX(c.x()), v.screenY(c.y()), patch.bzT()));
                     return null;
                 }
 
@@ -54,13 +56,13 @@ public final class SourcePainter {
 
                 @Override
                 public Void block(Source.BlockMagnet block) {
-                    magnet(s, v, outline, block.magnetization(), placer);
+                    labels.add(magnet(s, v, outline, block.magnetization(), placer));
                     return null;
                 }
 
                 @Override
                 public Void cylinder(Source.CylinderMagnet cylinder) {
-                    magnet(s, v, outline, cylinder.magnetization(), placer);
+                    labels.add(magnet(s, v, outline, cylinder.magnetization(), placer));
                     return null;
                 }
 
@@ -86,11 +88,12 @@ public final class SourcePainter {
                 s.dash();
             }
         }
-        return patchMarks;
+        return labels;
     }
 
-    private static void magnet(Surface s, ViewTransform v, List<Vec2> outline, Source.Magnetization north,
-                               LabelPlacer placer) {
+    /** Draws a magnet's outline; returns the placing of its pole label. */
+    private static Runnable magnet(Surface s, ViewTransform v, List<Vec2> outline, Source.Magnetization north,
+                                   LabelPlacer placer) {
         polygon(s, v, outline, true);
         s.fill(Palette.MAGNET_FILL);
         s.fillPath();
@@ -99,8 +102,7 @@ public final class SourcePainter {
         s.dash();
         s.strokePath();
         Vec2 c = centroid(outline);
-        magnetHint(s, v, c, north);
-        placer.reserve(new LabelPlacer.Box(v.screenX(c.x()) - 16, v.screenY(c.y()) - 18, 32, 32));
+        return () -> poleLabel(s, placer, v.screenX(c.x()), v.screenY(c.y()), north);
     }
 
     /** A patch's ⊙/⊗ and value in the free box nearest its centre (cx, cy). */
@@ -197,14 +199,27 @@ public final class SourcePainter {
         return new Vec2(x / pts.size(), y / pts.size());
     }
 
-    /** The face the viewer sees (+z side): N for a magnet magnetized towards +z. */
-    private static void magnetHint(Surface s, ViewTransform v, Vec2 c, Source.Magnetization north) {
+    /**
+     * The face the viewer sees (+z side), N for a magnet magnetized towards +z, in the free box
+     * nearest its centre (cx, cy): whole on the surface, off conductors; on a light box where it
+     * had to leave the centre. A magnet whose centre is out of view gets none.
+     */
+    private static void poleLabel(Surface s, LabelPlacer placer, double cx, double cy, Source.Magnetization north) {
+        if (cx < 0 || cy < 0 || cx > s.width() || cy > s.height()) {
+            return;
+        }
         boolean plus = north == Source.Magnetization.PLUS_Z;
-        double x = v.screenX(c.x());
-        double y = v.screenY(c.y());
+        String pole = plus ? "N" : "S";
+        String moment = plus ? "M +z" : "M −z";
+        double w = Math.max(s.textWidth(pole, 15, true), s.textWidth(moment, 11, false)) + 6;
+        LabelPlacer.Box b = placer.placeAround(cx, cy, w, POLE_LABEL_H);
+        if (Math.abs(b.centerX() - cx) > 0.5 || Math.abs(b.centerY() - cy) > 0.5) {
+            s.fill(0xC0FFFFFF);
+            s.fillRect(b.x(), b.y(), b.w(), b.h());
+        }
         s.fill(Palette.INK);
-        s.text(plus ? "N" : "S", x, y - 1, 15, true, Surface.Anchor.BOTTOM_CENTER);
-        s.text(plus ? "M +z" : "M −z", x, y + 1, 11, false, Surface.Anchor.TOP_CENTER);
+        s.text(pole, b.centerX(), b.centerY() - 1, 15, true, Surface.Anchor.BOTTOM_CENTER);
+        s.text(moment, b.centerX(), b.centerY() + 1, 11, false, Surface.Anchor.TOP_CENTER);
     }
 
     private static void coilArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward) {

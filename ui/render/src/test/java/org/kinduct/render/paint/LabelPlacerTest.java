@@ -19,6 +19,24 @@ class LabelPlacerTest {
     }
 
     @Test
+    void aReservedLineIsKeptClearButLeavesRoomBesideIt() {
+        LabelPlacer p = new LabelPlacer(1000, 800);
+        // A diagonal conductor through the anchor, 3 px to each side.
+        p.reserveLine(300, 200, 700, 600, 3);
+        LabelPlacer.Box b = p.placeAround(500, 400, 60, 20);
+        // Distance from each corner side of the line x − y = 100: all corners on one side, clear of it.
+        double[] sides = {b.x() - b.y(), b.x() + b.w() - b.y(), b.x() - b.y() - b.h(), b.x() + b.w() - b.y() - b.h()};
+        double nearest = Double.POSITIVE_INFINITY;
+        boolean above = sides[0] > 100;
+        for (double d : sides) {
+            assertEquals(above, d > 100, "the box straddles the line: " + b);
+            nearest = Math.min(nearest, Math.abs(d - 100) / Math.sqrt(2));
+        }
+        assertTrue(nearest >= 3, "clear of the line's width: " + b);
+        assertTrue(Math.hypot(b.centerX() - 500, b.centerY() - 400) < 100, "still near its anchor: " + b);
+    }
+
+    @Test
     void labelsSharingOneAnchorDoNotOverlap() {
         LabelPlacer p = new LabelPlacer(1000, 800);
         List<LabelPlacer.Box> boxes = new ArrayList<>();

@@ -135,6 +135,32 @@ class PainterLabelTest {
     }
 
     @Test
+    void contourLabelsNeverCoverAnAxisValue() {
+        // Steep enough that many levels cross the top row of x values and the left column of y values.
+        FieldRaster ramp = raster((x, y) -> (x + y) / 0.05 * 0.5);
+        List<Text> all = texts(ramp, EnumSet.of(Layer.CONTOURS, Layer.GRID));
+        List<double[]> axis = new ArrayList<>();
+        List<double[]> contour = new ArrayList<>();
+        for (Text t : all) {
+            double w = 0.6 * t.size() * t.text().length();
+            if (t.text().endsWith("mT")) {
+                // Centred on its spot.
+                contour.add(new double[] {t.x() - w / 2, t.y() - t.size() / 2, w, t.size()});
+            } else if (t.text().endsWith("m")) {
+                double top = t.x() == 4 ? t.y() - t.size() - 2 : t.y();
+                axis.add(new double[] {t.x(), top, w, t.size() + 2});
+            }
+        }
+        assertFalse(contour.isEmpty() || axis.isEmpty(), all.toString());
+        for (double[] c : contour) {
+            for (double[] a : axis) {
+                boolean overlap = c[0] < a[0] + a[2] && a[0] < c[0] + c[2] && c[1] < a[1] + a[3] && a[1] < c[1] + c[3];
+                assertFalse(overlap, java.util.Arrays.toString(c) + " covers " + java.util.Arrays.toString(a));
+            }
+        }
+    }
+
+    @Test
     void currentArrowsShrinkOnLoopsThatAreSmallOnScreen() {
         List<Vec2> square10mm = List.of(new Vec2(0, 0), new Vec2(0.01, 0), new Vec2(0.01, 0.01), new Vec2(0, 0.01));
         // 10 mm at 2000 px/m is 20 px across: the smallest arrows.
