@@ -1,5 +1,6 @@
 package org.kinduct.scene.io;
 
+import com.fasterxml.jackson.core.io.NumberInput;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
@@ -22,7 +23,7 @@ import org.kinduct.scene.units.Units;
  */
 final class ReadContext {
 
-    /** Longest list accepted; polygon checks are quadratic in the number of vertices. */
+    /** Longest list accepted: a bound on the memory one value may take. */
     static final int MAX_ITEMS = 10_000;
 
     /** Reads one value at a path; null means a problem was reported. */
@@ -271,7 +272,9 @@ final class ReadContext {
     }
 
     private Double finite(String path, Json.Num num) {
-        double v = Double.parseDouble(num.text());
+        // Jackson's port of the fast_float algorithm: correctly rounded like Double.parseDouble, and
+        // several times faster on the 17-digit numbers files are written with.
+        double v = NumberInput.parseDouble(num.text(), true);
         if (!Double.isFinite(v)) {
             problem(path, num, "number " + num.describe() + " is out of range");
             return null;
