@@ -2,8 +2,10 @@ package org.kinduct.solver.run;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Set;
 import java.util.stream.IntStream;
+import org.hipparchus.exception.MathRuntimeException;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
@@ -17,7 +19,9 @@ import org.kinduct.solver.circuit.InductanceAtStart;
 import org.kinduct.solver.circuit.LoopInductance;
 import org.kinduct.solver.dynamics.CoupledRun;
 import org.kinduct.solver.dynamics.CoupledSimulation;
+import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.dynamics.RunMonitor;
+import org.kinduct.solver.dynamics.SimulationCancelledException;
 
 /**
  * The one way Kinduct turns a scene into results, for the editor, the exports and the command
@@ -107,7 +111,7 @@ public final class SceneRun {
     public Snapshot instant(double tS) {
         Checks.finite(tS, "time");
         if (!plan().coupled()) {
-            return solveInstant(tS, inductanceAtStart());
+            return FiniteResults.require(solveInstant(tS, inductanceAtStart()));
         }
         RunResult run = result();
         return request.extraInstantsS().contains(tS) ? run.at(tS) : run.nearest(tS);
@@ -120,8 +124,7 @@ public final class SceneRun {
      */
     public RunResult instantResult(double tS) {
         if (!plan().coupled()) {
-            return new RunResult(scene, plan(), List.of(solveInstant(tS, inductanceAtStart())), List.of(), null,
-                    inductanceAtStart());
+            return result(List.of(solveInstant(tS, inductanceAtStart())), List.of(), null);
         }
         SceneRun stretched = new SceneRun(scene, request.alsoAt(tS), monitor, parallel);
         Snapshot at = stretched.instant(tS);
@@ -153,21 +156,67 @@ public final class SceneRun {
 
     private RunResult coupled() {
         TimeSpan w = request.window();
-        CoupledRun run = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE, plan().circuit())
-                .simulate(scene, w.t0S(), w.t1S(), w.dtS(), request.extraInstantsS(), monitor);
-        return new RunResult(scene, plan(), run.samples(), run.extras(), run.audit(), inductanceAtStart());
+        int steps = w.steps();
+        double gridEnd = w.at(steps);
+        // The run counts its grid with a fixed slack that rounding can defeat on long windows
+        // (dynamics.SampleTimes), dropping the last grid instant; asked for as a further instant
+        // it is sampled whichever way the count goes.
+        List<Double> extras = new ArrayList<>(request.extraInstantsS());
+        extras.add(gridEnd);
+        StepBudget budget = new StepBudget(monitor);
+        CoupledRun run;
+        try {
+            run = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE, plan().circuit())
+                    .simulate(scene, w.t0S(), Math.max(w.t1S(), gridEnd), w.dtS(), extras, budget);
+        } catch (SimulationCancelledException stopped) {
+            if (budget.exceeded()) {
+                throw new RunFailedException(String.format(Locale.ROOT, "the coupled run would take about %.3g"
+                        + " integrator steps (at most %d are taken): a free body or a loop circuit responds far"
+                        + " faster than the sampling step dt = %s s (a stiff spring, strong damping, a light"
+                        + " body, or a loop's L/R much shorter than dt with --circuit inductive)",
+                        budget.projectedSteps(), TimeSpan.MAX_STEPS, w.dtS()), stopped);
+            }
+            throw stopped;
+        } catch (IllegalArgumentException | MathRuntimeException failed) {
+            throw new RunFailedException("the coupled run stopped: " + failed.getMessage(), failed);
+        }
+        List<Snapshot> samples = new ArrayList<>(run.samples());
+        List<Snapshot> further = new ArrayList<>(run.extras());
+        int at = 0;
+        while (further.get(at).tS() != gridEnd) {
+            at++;
+        }
+        Snapshot end = further.remove(at);
+        if (samples.size() == steps) {
+            samples.add(end);
+        }
+        if (request.extraInstantsS().contains(gridEnd)) {
+            further.add(at, end);
+        }
+        return result(samples, further, run.audit());
     }
 
     private RunResult instants() {
         TimeSpan w = request.window();
-        long n = (long) Math.floor((w.t1S() - w.t0S()) / w.dtS() + 1e-9);
-        IntStream steps = IntStream.rangeClosed(0, (int) n);
+        int count = w.steps() + 1;
         // Read once here: the instants may run on other threads, which must not wait for this one's lock.
         InductanceAtStart start = inductanceAtStart();
-        List<Snapshot> samples = (parallel ? steps.parallel() : steps)
-                .mapToObj(k -> solveInstant(w.t0S() + k * w.dtS(), start)).toList();
+        InstantProgress progress = new InstantProgress(monitor, count);
+        IntStream k = IntStream.range(0, count);
+        List<Snapshot> samples = (parallel ? k.parallel() : k).mapToObj(i -> {
+            progress.checkCancelled();
+            Snapshot s = solveInstant(w.at(i), start);
+            progress.done();
+            return s;
+        }).toList();
         List<Snapshot> extras = request.extraInstantsS().stream().sorted().map(t -> solveInstant(t, start)).toList();
-        return new RunResult(scene, plan(), samples, extras, null, start);
+        return result(samples, extras, null);
+    }
+
+    private RunResult result(List<Snapshot> samples, List<Snapshot> extras, EnergyAudit audit) {
+        samples.forEach(FiniteResults::require);
+        extras.forEach(FiniteResults::require);
+        return new RunResult(scene, plan(), samples, extras, audit, inductanceAtStart());
     }
 
     /**
