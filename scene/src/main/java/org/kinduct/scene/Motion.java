@@ -247,6 +247,16 @@ public sealed interface Motion
             springs = List.copyOf(Checks.nonNull(springs, "springs"));
         }
 
+        /**
+         * The fastest rate of the body's own mechanics, 1/s: its damping rate c/m and its springs'
+         * angular frequency √(Σk/m), magnetic forces aside. An explicit integrator takes a few
+         * steps per unit of rate × time.
+         */
+        public double fastestRatePerS() {
+            double stiffness = springs.stream().mapToDouble(Spring::stiffnessNPerM).sum();
+            return Math.max(dampingNsPerM / massKg, Math.sqrt(stiffness / massKg));
+        }
+
         public static Free ofMass(double massKg) {
             return new Free(massKg, 0, Vec2.ZERO, 0, 0, Vec2.ZERO, Vec2.ZERO, 0, List.of());
         }

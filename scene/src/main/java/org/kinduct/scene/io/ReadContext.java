@@ -23,6 +23,12 @@ import org.kinduct.scene.units.Units;
  */
 final class ReadContext {
 
+    /**
+     * Largest size of any quantity in SI units (1e12 m, 1e12 T, 1e12 s, ...): far beyond any scene,
+     * and small enough that the solver's products of a dozen such numbers stay finite.
+     */
+    static final double LARGEST_MAGNITUDE = 1e12;
+
     /** Longest list accepted: a bound on the memory one value may take. */
     static final int MAX_ITEMS = 10_000;
 
@@ -85,15 +91,21 @@ final class ReadContext {
 
     Conv<Double> quantity(Dimension d) {
         return (path, node) -> {
+            Double v = null;
             if (node instanceof Json.Num num) {
-                return finite(path, num);
+                v = finite(path, num);
+            } else if (node instanceof Json.Str str) {
+                v = attempt(path, node, () -> Units.parse(str.value(), d));
+            } else {
+                problem(path, node, "expected " + d.noun() + " (a number in " + siWords(d) + " or a text such as '"
+                        + d.example() + "'), got " + node.describe());
             }
-            if (node instanceof Json.Str str) {
-                return attempt(path, node, () -> Units.parse(str.value(), d));
+            if (v != null && Math.abs(v) > LARGEST_MAGNITUDE) {
+                problem(path, node, node.describe() + " is out of range: quantities are at most 1e12 in size in SI"
+                        + " units (here " + siWords(d) + ")");
+                return null;
             }
-            problem(path, node, "expected " + d.noun() + " (a number in " + siWords(d) + " or a text such as '"
-                    + d.example() + "'), got " + node.describe());
-            return null;
+            return v;
         };
     }
 
