@@ -62,6 +62,8 @@ final class ExportCommand implements Callable<Integer> {
             throw new BadInputException("nothing to export: give at least one of --png, --svg, --csv, --field-csv,"
                     + " --json");
         }
+        OutputTargets.requireDistinct(input.file(), OutputTargets.of("--png", png, "--svg", svg, "--csv", seriesCsv,
+                "--field-csv", fieldCsv, "--json", json));
         Scene scene = input.load();
         SnapshotOptions options;
         try {

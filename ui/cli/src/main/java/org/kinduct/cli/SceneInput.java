@@ -24,6 +24,11 @@ final class SceneInput {
         String demo;
     }
 
+    /** The scene file, or null for a demo. */
+    Path file() {
+        return choice.file;
+    }
+
     Scene load() {
         if (choice.demo != null) {
             if (Demos.resource(choice.demo).isEmpty()) {

@@ -81,6 +81,7 @@ final class SolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
+        OutputTargets.requireDistinct(input.file(), OutputTargets.of("--out", out));
         Scene scene = input.load();
         RunResult results = solve(scene);
         StringWriter text = new StringWriter();
