@@ -11,6 +11,7 @@ import org.kinduct.scene.units.Units;
 import org.kinduct.render.export.Exporter;
 import org.kinduct.render.export.SnapshotOptions;
 import org.kinduct.render.export.ViewChoice;
+import org.kinduct.solver.run.RunFailedException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -72,12 +73,17 @@ final class ExportCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new BadInputException(e.getMessage());
         }
-        try {
-            for (Path written : new Exporter(scene, options).write(targets)) {
+        CliMonitor monitor = CliMonitor.forThisProcess();
+        try (Interruption watch = Interruption.watch(monitor)) {
+            for (Path written : new Exporter(scene, options, monitor).write(targets)) {
                 System.out.println("wrote " + written);
             }
-        } catch (IOException e) {
+        } catch (IOException | IllegalArgumentException e) {
             throw new BadInputException(e.getMessage());
+        } catch (RunFailedException e) {
+            throw new BadInputException(input.name() + ": " + e.getMessage());
+        } finally {
+            monitor.done();
         }
         return KinductMain.OK;
     }

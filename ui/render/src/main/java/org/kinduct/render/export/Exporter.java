@@ -54,9 +54,17 @@ public final class Exporter {
     private FieldRaster raster;
 
     public Exporter(Scene scene, SnapshotOptions options) {
+        this(scene, options, RunMonitor.NONE);
+    }
+
+    /**
+     * @param monitor follows the run's progress and may stop it
+     * @throws IllegalArgumentException when the snapshot's instant lies before the scene's start
+     */
+    public Exporter(Scene scene, SnapshotOptions options, RunMonitor monitor) {
         this.scene = scene;
         this.options = options;
-        this.run = new SceneRun(scene, RunRequest.of(scene).alsoAt(options.tS()), RunMonitor.NONE, true);
+        this.run = new SceneRun(scene, RunRequest.of(scene).alsoAt(options.tS()), monitor, true);
     }
 
     /** Writes every target atomically; a target that fails is left as it was. Returns the files written. */
