@@ -48,6 +48,13 @@ public record ConductorState(String id, Kind kind, List<Vec2> vertices, double f
                 noiseV, positiveEnd, newCurrentA, sense, newForceN, resistanceOhm, inductanceH, inducedFieldIncluded);
     }
 
+    /** This state of the conductor moved by {@code by} in the plane: only its vertices change. */
+    public ConductorState movedBy(Vec2 by) {
+        return new ConductorState(id, kind, vertices.stream().map(v -> v.plus(by)).toList(), fluxWb, linkageWb,
+                emfFluxV, emfMotionalV, emfV, disagreement, noiseV, positiveEnd, currentA, direction, forceN,
+                resistanceOhm, inductanceH, inducedFieldIncluded);
+    }
+
     /** This state with its self-inductance, henries. */
     public ConductorState withInductance(double henries) {
         return new ConductorState(id, kind, vertices, fluxWb, linkageWb, emfFluxV, emfMotionalV, emfV, disagreement,
