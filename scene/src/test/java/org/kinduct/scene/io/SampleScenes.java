@@ -129,8 +129,9 @@ final class SampleScenes {
                                     nonNegative(r)));
                 }
                 // Mass, damping and springs within what a window may integrate (at most 1e6 responses).
-                return new Motion.Free(1e-3 + r.nextDouble(), nonNegative(r), point(r), any(r), r.nextDouble(), point(r),
-                        point(r), nonNegative(r), springs);
+                double mass = 1e-3 + r.nextDouble();
+                return new Motion.Free(mass, r.nextBoolean() ? 0 : mass * (1e-12 + r.nextDouble()), point(r), any(r),
+                        r.nextDouble(), point(r), point(r), nonNegative(r), springs);
             }
         }
     }

@@ -2,6 +2,7 @@ package org.kinduct.solver.run;
 
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Snapshot;
+import org.kinduct.solver.dynamics.EnergyAudit;
 
 /**
  * A result that is not a number is an error, never a value: NaN or infinity where a quantity
@@ -28,6 +29,16 @@ final class FiniteResults {
             }
         }
         return s;
+    }
+
+    /** {@code audit}, after checking every entry is finite; null stays null (quasi-static instants have none). */
+    static EnergyAudit require(EnergyAudit audit) {
+        if (audit != null && !Double.isFinite(audit.suppliedJ() + audit.jouleJ() + audit.dampingJ()
+                + audit.deltaKineticJ() + audit.deltaPotentialJ() + audit.deltaMagneticJ())) {
+            throw new RunFailedException("the energy audit of the run came out as " + audit + " instead of numbers;"
+                    + " the scene lies outside what the solver can compute");
+        }
+        return audit;
     }
 
     private static void check(Snapshot s, ConductorState c, String quantity, double value) {

@@ -178,7 +178,7 @@ public final class SceneRun {
         // it is sampled whichever way the count goes.
         List<Double> extras = new ArrayList<>(request.extraInstantsS());
         extras.add(gridEnd);
-        StepBudget budget = new StepBudget(monitor);
+        StepBudget budget = new StepBudget(monitor, steps + 1 + request.extraInstantsS().size());
         CoupledRun run;
         try {
             run = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE, plan().circuit())
@@ -186,10 +186,11 @@ public final class SceneRun {
         } catch (SimulationCancelledException stopped) {
             if (budget.exceeded()) {
                 throw new RunFailedException(String.format(Locale.ROOT, "the coupled run would take about %.3g"
-                        + " integrator steps (at most %d are taken): a free body or a loop circuit responds far"
-                        + " faster than the sampling step dt = %s s (a stiff spring, strong damping, a light"
-                        + " body, or a loop's L/R much shorter than dt with --circuit inductive)",
-                        budget.projectedSteps(), TimeSpan.MAX_STEPS, w.dtS()), stopped);
+                        + " integrator steps (at most %.0f are taken here: 10 million, and 1000 per sample): the scene"
+                        + " changes far faster than the sampling step dt = %s s can follow (a stiff spring, strong"
+                        + " damping or a light free body, a loop's L/R much shorter than dt with --circuit inductive,"
+                        + " or a prescribed motion much faster than dt)", budget.projectedSteps(), budget.maxSteps(),
+                        w.dtS()), stopped);
             }
             throw stopped;
         } catch (IllegalArgumentException | MathRuntimeException failed) {
@@ -231,7 +232,7 @@ public final class SceneRun {
     private RunResult result(List<Snapshot> samples, List<Snapshot> extras, EnergyAudit audit) {
         samples.forEach(FiniteResults::require);
         extras.forEach(FiniteResults::require);
-        return new RunResult(scene, plan(), samples, extras, audit, inductanceAtStart());
+        return new RunResult(scene, plan(), samples, extras, FiniteResults.require(audit), inductanceAtStart());
     }
 
     /**

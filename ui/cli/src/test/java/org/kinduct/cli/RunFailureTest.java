@@ -48,7 +48,7 @@ class RunFailureTest {
 
         assertEquals(KinductMain.BAD_INPUT, r.code(), r.err());
         assertTrue(r.err().startsWith("kinduct: " + scene + ": the coupled run would take about"), r.err());
-        assertTrue(r.err().contains("integrator steps (at most 10000000 are taken)"), r.err());
+        assertTrue(r.err().contains("integrator steps (at most 1001000 are taken here"), r.err());
         assertFalse(r.err().contains("internal error"), r.err());
         assertFalse(Files.exists(out));
     }
