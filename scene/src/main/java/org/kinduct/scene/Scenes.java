@@ -18,14 +18,58 @@ public final class Scenes {
     /**
      * Every drawn position of the scene, in no particular order: body pivots, spring anchors, patch
      * and coil outlines, magnet and coil centres, conductor vertices. Directions, offsets and
-     * velocities are not positions.
+     * velocities are not positions. (Read where they are, without rebuilding the scene as
+     * {@link #mapPositions} does, whose checks cost time on large outlines.)
      */
     public static List<Vec2> positions(Scene scene) {
         List<Vec2> out = new ArrayList<>();
-        mapPositions(scene, p -> {
-            out.add(p);
-            return p;
-        });
+        for (Body b : scene.bodies()) {
+            if (!Body.FIXED.equals(b.id())) {
+                out.add(b.pivot());
+            }
+            if (b.motion() instanceof Motion.Free free) {
+                free.springs().stream().map(Motion.Free.Spring::anchor).filter(a -> a != null).forEach(out::add);
+            }
+        }
+        for (Source s : scene.sources()) {
+            out.addAll(s.match(new Source.Cases<List<Vec2>>() {
+                @Override
+                public List<Vec2> patch(Source.FieldPatch p) {
+                    return p.outline();
+                }
+
+                @Override
+                public List<Vec2> uniform(Source.UniformField u) {
+                    return List.of();
+                }
+
+                @Override
+                public List<Vec2> block(Source.BlockMagnet m) {
+                    return List.of(m.center());
+                }
+
+                @Override
+                public List<Vec2> cylinder(Source.CylinderMagnet m) {
+                    return List.of(m.center());
+                }
+
+                @Override
+                public List<Vec2> coil(Source.SourceCoil c) {
+                    return c.shape().match(new Source.CoilShape.Cases<>() {
+                        @Override
+                        public List<Vec2> polygon(Source.CoilShape.Polygon p) {
+                            return p.vertices();
+                        }
+
+                        @Override
+                        public List<Vec2> circle(Source.CoilShape.Circle circle) {
+                            return List.of(circle.center());
+                        }
+                    });
+                }
+            }));
+        }
+        scene.conductors().forEach(c -> c.vertices().forEach(v -> out.add(v.at())));
         return out;
     }
 
