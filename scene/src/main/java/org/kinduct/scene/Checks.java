@@ -29,6 +29,21 @@ public final class Checks {
         return v;
     }
 
+    /**
+     * Smallest length a size may have (a magnet's side, a radius, a wire's diameter, a coil's
+     * distance from the plane), metres: below it 1/size and size² overflow or underflow in the
+     * solver, and no part of the plan-view model means anything.
+     */
+    public static final double SMALLEST_SIZE_M = 1e-9;
+
+    /** A length that must be positive: at least {@link #SMALLEST_SIZE_M}. */
+    public static double size(double v, String what) {
+        if (!(v >= SMALLEST_SIZE_M) || !Double.isFinite(v)) {
+            throw new IllegalArgumentException(what + " must be at least 1 nm, got " + v + " m");
+        }
+        return v;
+    }
+
     public static double nonNegative(double v, String what) {
         if (!(v >= 0) || !Double.isFinite(v)) {
             throw new IllegalArgumentException(what + " must be zero or positive, got " + v);

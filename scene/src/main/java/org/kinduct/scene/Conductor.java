@@ -39,6 +39,7 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop {
             if (vertices.size() < 2) {
                 throw new IllegalArgumentException("a wire needs at least 2 vertices, got " + vertices.size());
             }
+            requireDistinctNeighbours(vertices, false);
         }
 
         @Override
@@ -64,6 +65,7 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop {
             if (vertices.size() < 3) {
                 throw new IllegalArgumentException("a loop needs at least 3 vertices, got " + vertices.size());
             }
+            requireDistinctNeighbours(vertices, true);
             if (turns < 1) {
                 throw new IllegalArgumentException("turns must be at least 1, got " + turns);
             }
@@ -72,6 +74,11 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop {
             Checks.finite(temperatureC, "temperature");
             if (temperatureC < -273.15) {
                 throw new IllegalArgumentException("temperature must be above absolute zero, got " + temperatureC);
+            }
+            if (!(wire.material().resistivityAt(temperatureC) > 0)) {
+                throw new IllegalArgumentException("temperature " + temperatureC + " °C is below the range of the"
+                        + " linear resistivity model of " + wire.material().name().toLowerCase(java.util.Locale.ROOT)
+                        + ", whose resistivity reaches zero at " + wire.material().zeroResistivityC() + " °C");
             }
         }
 
@@ -83,6 +90,20 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop {
         /** A shorted single-turn copper loop at 20 °C. */
         public static Loop simple(String id, String body, List<Vertex> vertices, WireSpec wire) {
             return new Loop(id, body, vertices, 1, wire, false, 0, 20);
+        }
+    }
+
+    /**
+     * Refuses a vertex drawn where the one before it is (and, for a closed path, the last where the
+     * first is): the side between them has no length and no direction.
+     */
+    private static void requireDistinctNeighbours(List<Vertex> vertices, boolean closed) {
+        int n = vertices.size();
+        for (int i = 0; i < (closed ? n : n - 1); i++) {
+            if (vertices.get(i).at().equals(vertices.get((i + 1) % n).at())) {
+                throw new IllegalArgumentException("vertex " + (i + 1) % n + " repeats vertex " + i + " at "
+                        + vertices.get(i).at().x() + ", " + vertices.get(i).at().y() + " m");
+            }
         }
     }
 

@@ -27,6 +27,11 @@ public enum Material {
         return alpha20PerK;
     }
 
+    /** The temperature at which the linear model's resistivity reaches zero, 20 − 1/α20 °C. */
+    public double zeroResistivityC() {
+        return 20 - 1 / alpha20PerK;
+    }
+
     /** Resistivity at {@code temperatureC}, Ω·m (linear model, valid over roughly −50…200 °C). */
     public double resistivityAt(double temperatureC) {
         return rho20OhmM * (1 + alpha20PerK * (temperatureC - 20));

@@ -238,6 +238,10 @@ public sealed interface Motion
         public Free {
             Checks.positive(massKg, "mass");
             Checks.nonNegative(inertiaKgM2, "moment of inertia");
+            if (inertiaKgM2 > 0 && inertiaKgM2 < massKg * SMALLEST_GYRATION_M * SMALLEST_GYRATION_M) {
+                throw new IllegalArgumentException("moment of inertia " + inertiaKgM2 + " kg·m² is less than mass × (1 µm)²:"
+                        + " give 0 to lock rotation, or the body's real inertia");
+            }
             Checks.nonNull(initialVelocity, "initial velocity");
             Checks.finite(initialOmegaRadPerS, "initial angular velocity");
             Checks.nonNegative(dampingNsPerM, "damping");
@@ -245,6 +249,22 @@ public sealed interface Motion
             Checks.nonNull(appliedAmplitude, "applied force amplitude");
             Checks.nonNegative(appliedFrequencyHz, "applied force frequency");
             springs = List.copyOf(Checks.nonNull(springs, "springs"));
+        }
+
+        /**
+         * Smallest radius of gyration √(I/m) of a body that turns, metres: a smaller inertia would
+         * spin the body up without bound under the slightest torque.
+         */
+        static final double SMALLEST_GYRATION_M = 1e-6;
+
+        /**
+         * The fastest rate of the body's own mechanics, 1/s: its damping rate c/m and its springs'
+         * angular frequency √(Σk/m), magnetic forces aside. An explicit integrator takes a few
+         * steps per unit of rate × time.
+         */
+        public double fastestRatePerS() {
+            double stiffness = springs.stream().mapToDouble(Spring::stiffnessNPerM).sum();
+            return Math.max(dampingNsPerM / massKg, Math.sqrt(stiffness / massKg));
         }
 
         public static Free ofMass(double massKg) {

@@ -8,20 +8,16 @@ public final class Polygons {
     private Polygons() {
     }
 
-    /** Copies {@code pts} after checking it has at least 3 distinct points and no crossing edges. */
+    /** Copies {@code pts} after checking it has at least 3 distinct points and no crossing edges (O(n log n), {@link EdgeSweep}). */
     public static List<Vec2> requireSimple(List<Vec2> pts, String what) {
         List<Vec2> copy = requirePolygon(pts, what);
-        int n = copy.size();
-        for (int i = 0; i < n; i++) {
-            for (int j = i + 1; j < n; j++) {
-                if (j == i + 1 || (i == 0 && j == n - 1)) {
-                    continue;
-                }
-                if (segmentsCross(copy.get(i), copy.get((i + 1) % n), copy.get(j), copy.get((j + 1) % n))) {
-                    throw new IllegalArgumentException(what + " must not cross itself: edge " + i
-                            + " crosses edge " + j);
-                }
-            }
+        int[] crossing = EdgeSweep.firstCrossing(copy);
+        if (crossing != null) {
+            int n = copy.size();
+            boolean neighbours = crossing[1] == crossing[0] + 1 || crossing[1] - crossing[0] == n - 1;
+            throw new IllegalArgumentException(what + " must not cross itself: edge " + crossing[0]
+                    + (neighbours ? " and edge " + crossing[1] + " fold back onto each other" : " crosses edge "
+                    + crossing[1]));
         }
         if (signedArea(copy) == 0) {
             throw new IllegalArgumentException(what + " encloses no area");
@@ -63,6 +59,11 @@ public final class Polygons {
         }
         return (d1 == 0 && onSegment(c, d, a)) || (d2 == 0 && onSegment(c, d, b))
                 || (d3 == 0 && onSegment(a, b, c)) || (d4 == 0 && onSegment(a, b, d));
+    }
+
+    /** True when the path a → b → c turns straight back: c lies on the line through a and b, on b's side towards a. */
+    static boolean foldsBack(Vec2 a, Vec2 b, Vec2 c) {
+        return orient(a, b, c) == 0 && b.minus(a).dot(c.minus(b)) < 0;
     }
 
     private static double orient(Vec2 p, Vec2 q, Vec2 r) {

@@ -101,9 +101,9 @@ public sealed interface Source
             Checks.id(id, "Source");
             Checks.id(body, "Body");
             Checks.nonNull(center, "center");
-            Checks.positive(sizeXM, "size x");
-            Checks.positive(sizeYM, "size y");
-            Checks.positive(heightM, "height");
+            Checks.size(sizeXM, "size x");
+            Checks.size(sizeYM, "size y");
+            Checks.size(heightM, "height");
             Checks.finite(angleRad, "angle");
             Checks.nonNegative(standoffM, "stand-off");
             Checks.nonNull(side, "side");
@@ -125,8 +125,8 @@ public sealed interface Source
             Checks.id(id, "Source");
             Checks.id(body, "Body");
             Checks.nonNull(center, "center");
-            Checks.positive(radiusM, "radius");
-            Checks.positive(heightM, "height");
+            Checks.size(radiusM, "radius");
+            Checks.size(heightM, "height");
             Checks.nonNegative(standoffM, "stand-off");
             Checks.nonNull(side, "side");
             Checks.positive(remanenceT, "remanence");
@@ -157,6 +157,7 @@ public sealed interface Source
             if (planeZM == 0) {
                 throw new IllegalArgumentException("a source coil must sit off the drawing plane (z ≠ 0)");
             }
+            Checks.size(Math.abs(planeZM), "a source coil's distance from the drawing plane");
             Checks.nonNull(drive, "drive");
         }
 
@@ -195,7 +196,7 @@ public sealed interface Source
         record Circle(Vec2 center, double radiusM) implements CoilShape {
             public Circle {
                 Checks.nonNull(center, "center");
-                Checks.positive(radiusM, "radius");
+                Checks.size(radiusM, "radius");
             }
 
             @Override

@@ -8,7 +8,7 @@ public record WireSpec(Material material, double diameterM, Integer awg) {
 
     public WireSpec {
         Checks.nonNull(material, "material");
-        Checks.positive(diameterM, "wire diameter");
+        Checks.size(diameterM, "wire diameter");
         if (awg != null && Math.abs(awgDiameterM(awg) - diameterM) > 1e-12) {
             throw new IllegalArgumentException("AWG " + awg + " is " + awgDiameterM(awg) + " m, not " + diameterM);
         }

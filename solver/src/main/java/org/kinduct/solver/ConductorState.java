@@ -16,8 +16,9 @@ import org.kinduct.scene.Vec2;
  * @param emfMotionalV ∮ or ∫ (v × B − ∂A/∂t)·dl, times turns for loops
  * @param emfV the EMF reported (motional method; the flux method is its check)
  * @param disagreement |emfFlux − emfMotional| / max(|emfFlux|, |emfMotional|, floor); 0 for wires;
- *        NaN at an instant where the flux has a kink (a loop edge crossing a field-patch edge, a
- *        key of a linear path), where −dλ/dt is not defined and so is no check
+ *        NaN at an instant where the flux has a kink (a loop edge crossing a field-patch edge or
+ *        the edge of a magnet's face lying in the plane, a key of a linear path), where −dλ/dt is
+ *        not defined and so is no check
  * @param noiseV the reporting threshold: an |EMF| at or below it is rounding noise, shown as 0 with
  *        no + end, and a current at or below noiseV/R gets no sense
  * @param positiveEnd + terminal for wires and open loops; NONE for closed loops
@@ -46,6 +47,13 @@ public record ConductorState(String id, Kind kind, List<Vec2> vertices, double f
         Circulation sense = Circulation.of(newCurrentA, Polygons.signedArea(vertices), noiseV / resistanceOhm);
         return new ConductorState(id, kind, vertices, fluxWb, linkageWb, emfFluxV, emfMotionalV, emfV, disagreement,
                 noiseV, positiveEnd, newCurrentA, sense, newForceN, resistanceOhm, inductanceH, inducedFieldIncluded);
+    }
+
+    /** This state of the conductor moved by {@code by} in the plane: only its vertices change. */
+    public ConductorState movedBy(Vec2 by) {
+        return new ConductorState(id, kind, vertices.stream().map(v -> v.plus(by)).toList(), fluxWb, linkageWb,
+                emfFluxV, emfMotionalV, emfV, disagreement, noiseV, positiveEnd, currentA, direction, forceN,
+                resistanceOhm, inductanceH, inducedFieldIncluded);
     }
 
     /** This state with its self-inductance, henries. */

@@ -16,9 +16,13 @@ import org.kinduct.scene.Source;
  * <p><b>Choice of h.</b> Let T be the time over which the scene changes appreciably, the shortest
  * of: the scene's time window; 1/(2πf) of every oscillating body and AC-driven coil; the
  * shortest interval between keys of a keyframed path; 1/|ω| of the fastest-turning body at t; and
- * ℓ/v, with ℓ the shortest length in the scene (a conductor edge at t, a patch or coil edge, a
- * magnet's smallest dimension plus its stand-off, a coil's distance from the plane) and v the
- * fastest speed of a conductor vertex or source at t. Then f⁽⁵⁾ ~ f'/T⁴, and a flux value carries
+ * ℓ/v, with ℓ the shortest length in the scene (a patch or coil edge, a magnet's smallest
+ * dimension plus its stand-off, a coil's distance from the plane, and a conductor edge at t
+ * where B_z jumps across edges in the plane, since the flux then kinks each time a vertex
+ * crosses one) and v the fastest speed of a conductor vertex or source at t. In fields smooth in
+ * the plane the flux through a loop is as smooth as the field, however short the loop's edges:
+ * letting a 3000-gon's edges set ℓ made h 500 times smaller than needed, and the flux rule's
+ * rounding, ε·Φ/h, 500 times larger. Then f⁽⁵⁾ ~ f'/T⁴, and a flux value carries
  * an absolute rounding error δf ~ k·ε·|f'|·T (ε = 2.2e-16, k a modest count of summed terms), so
  * the relative error of the derivative is about (h/T)⁴/30 + 1.5·k·ε·T/h. With h = 1e-5·T that is
  * 3e-22 + 3e-11·k: rounding dominates and stays far below the 1e-6 the two EMF methods must agree
@@ -100,8 +104,11 @@ final class DifferenceStep {
         double shortest = Double.POSITIVE_INFINITY;
         double fastest = 0;
         double turn = now.fastestTurnRadPerS();
+        boolean kinks = index.fieldJumpsInPlane();
         for (PlacedConductor conductor : conductors) {
-            shortest = Math.min(shortest, conductor.shortestEdgeM());
+            if (kinks) {
+                shortest = Math.min(shortest, conductor.shortestEdgeM());
+            }
             fastest = Math.max(fastest, conductor.fastestVertexMPerS());
         }
         for (int s = 0; s < index.sourceCount(); s++) {

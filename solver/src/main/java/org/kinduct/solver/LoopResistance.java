@@ -16,15 +16,16 @@ public final class LoopResistance {
      * Resistance of the loop's whole winding, ohms.
      *
      * @param perimeterM length of one turn where the loop is now, metres
-     * @throws IllegalArgumentException when the resistivity model gives no positive resistance
-     *         (a winding far below −234 °C)
+     * @throws IllegalArgumentException when there is no positive resistance (a loop whose vertices
+     *         ride different bodies collapsed to no length, with no load; a loop's temperature is
+     *         kept where its resistivity is positive)
      */
     public static double ohms(Conductor.Loop loop, double perimeterM) {
         double r = loop.turns() * perimeterM * loop.wire().material().resistivityAt(loop.temperatureC())
                 / loop.wire().crossSectionM2() + loop.loadOhm();
         if (!(r > 0)) {
-            throw new IllegalArgumentException("loop '" + loop.id() + "' has no positive resistance at "
-                    + loop.temperatureC() + " °C (" + r + " Ω): the resistivity model does not reach there");
+            throw new IllegalArgumentException("loop '" + loop.id() + "' has no positive resistance (" + r
+                    + " Ω at a length of " + perimeterM + " m)");
         }
         return r;
     }

@@ -93,6 +93,16 @@ public final class SceneIndex {
         return sum;
     }
 
+    /** True when some source's B_z jumps across edges in the plane ({@link SourceReach#jumps()}). */
+    boolean fieldJumpsInPlane() {
+        for (SourceReach r : reach) {
+            if (r.jumps()) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** The source's reach. */
     SourceReach reach(int source) {
         return reach[source];

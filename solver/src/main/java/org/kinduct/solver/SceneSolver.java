@@ -8,6 +8,7 @@ import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
+import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 
 /**
@@ -56,11 +57,6 @@ import org.kinduct.scene.Vec2;
  */
 public final class SceneSolver {
 
-    /** Most time steps a series may have, as for a scene's own time span. */
-    private static final long MAX_STEPS = 10_000_000;
-    /** Slack in counting steps so that t1 = t0 + n·dt computed with rounding still counts n. */
-    private static final double STEP_COUNT_SLACK = 1e-9;
-
     private final Kinematics kinematics;
     private final SceneIndex index;
     private final DifferenceStep step;
@@ -84,7 +80,8 @@ public final class SceneSolver {
 
     /**
      * States at t0, t0 + dt, …, up to t1 inclusive when (t1 − t0)/dt is a whole number within
-     * rounding, else up to the last step before t1; the instants are solved on every core.
+     * rounding, else up to the last step before t1 ({@link TimeSpan#stepsBetween}); the instants
+     * are solved on every core.
      */
     public List<Snapshot> series(double t0S, double t1S, double dtS) {
         return series(t0S, t1S, dtS, true);
@@ -95,19 +92,10 @@ public final class SceneSolver {
      * thread alone, for an interactive caller that leaves the other cores to its display.
      */
     public List<Snapshot> series(double t0S, double t1S, double dtS, boolean parallel) {
-        Checks.finite(t0S, "t0");
-        Checks.finite(t1S, "t1");
-        Checks.positive(dtS, "dt");
-        if (t1S < t0S) {
-            throw new IllegalArgumentException("t1 must not be before t0, got t0 = " + t0S + " s, t1 = " + t1S + " s");
-        }
-        double steps = Math.floor((t1S - t0S) / dtS + STEP_COUNT_SLACK);
-        if (steps > MAX_STEPS) {
-            throw new IllegalArgumentException("more than " + MAX_STEPS + " time steps: (t1 − t0)/dt = " + steps);
-        }
+        int steps = TimeSpan.stepsBetween(t0S, t1S, dtS);
         // Instants are independent and this solver is immutable: they may be solved on every core.
-        IntStream steps0 = IntStream.rangeClosed(0, (int) steps);
-        return (parallel ? steps0.parallel() : steps0).mapToObj(i -> at(t0S + i * dtS)).toList();
+        IntStream k = IntStream.rangeClosed(0, steps);
+        return (parallel ? k.parallel() : k).mapToObj(i -> at(t0S + i * dtS)).toList();
     }
 
     /** The summed field of all sources at {@code tS}, e.g. for a B_z map. */

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.kinduct.scene.Pose;
+import org.kinduct.scene.Vec2;
 
 /**
  * The solved state of a scene at time {@code tS}, seconds: every conductor, and the pose of
@@ -33,6 +34,14 @@ public record Snapshot(double tS, List<ConductorState> conductors, Map<String, P
             throw new IllegalArgumentException("no free body '" + bodyId + "' in this state");
         }
         return pose;
+    }
+
+    /** This state of a scene moved by {@code by} in the plane: conductors' vertices and bodies' pivots move. */
+    public Snapshot movedBy(Vec2 by) {
+        Map<String, Pose> moved = new java.util.HashMap<>();
+        freeBodies.forEach((id, p) -> moved.put(id, new Pose(p.pivot().plus(by), p.offset(), p.angleRad(), p.velocity(),
+                p.omegaRadPerS())));
+        return new Snapshot(tS, conductors.stream().map(c -> c.movedBy(by)).toList(), moved);
     }
 
     public Optional<ConductorState> conductor(String id) {

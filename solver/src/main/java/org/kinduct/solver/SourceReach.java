@@ -9,39 +9,41 @@ import org.kinduct.solver.field.PhysicalConstants;
  * What the difference step, the quadrature and the noise thresholds need to know of a source: a
  * drawn anchor point, the source's extent around it (so a turning source's far edge counts at
  * |ω|·extent), the shortest length over which its field changes in the plane (metres; infinite for
- * a uniform field) and the order of magnitude of its strongest B_z there (tesla).
+ * a uniform field), the order of magnitude of its strongest B_z there (tesla), and whether B_z
+ * jumps across edges in the plane (a patch's outline, the footprint of a magnet touching the
+ * plane): the flux through a loop then kinks whenever a loop vertex crosses such an edge.
  *
  * <p>Field scales: a patch or uniform field its own B_z; a magnet its remanence (the field of a
  * uniformly magnetized body stays below Br outside it); a coil N·μ0·I_max/(2π·d) with d the
  * smaller of its plane distance and size, the field of a straight filament at distance d
  * (Biot–Savart; Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §5.2.2).
  */
-record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT) {
+record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT, boolean jumps) {
 
     static SourceReach of(Source source) {
         return source.match(new Source.Cases<>() {
             @Override
             public SourceReach patch(Source.FieldPatch patch) {
-                return ofOutline(patch.outline(), Double.POSITIVE_INFINITY, Math.abs(patch.bzT()));
+                return ofOutline(patch.outline(), Double.POSITIVE_INFINITY, Math.abs(patch.bzT()), true);
             }
 
             @Override
             public SourceReach uniform(Source.UniformField uniform) {
-                return new SourceReach(Vec2.ZERO, 0, Double.POSITIVE_INFINITY, Math.abs(uniform.bzT()));
+                return new SourceReach(Vec2.ZERO, 0, Double.POSITIVE_INFINITY, Math.abs(uniform.bzT()), false);
             }
 
             @Override
             public SourceReach block(Source.BlockMagnet block) {
                 return new SourceReach(block.center(), 0.5 * Math.hypot(block.sizeXM(), block.sizeYM()),
                         Math.min(Math.min(block.sizeXM(), block.sizeYM()), block.heightM()) + block.standoffM(),
-                        block.remanenceT());
+                        block.remanenceT(), block.standoffM() == 0);
             }
 
             @Override
             public SourceReach cylinder(Source.CylinderMagnet cylinder) {
                 return new SourceReach(cylinder.center(), cylinder.radiusM(),
                         Math.min(2 * cylinder.radiusM(), cylinder.heightM()) + cylinder.standoffM(),
-                        cylinder.remanenceT());
+                        cylinder.remanenceT(), cylinder.standoffM() == 0);
             }
 
             @Override
@@ -57,21 +59,21 @@ record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT) {
         return coil.shape().match(new Source.CoilShape.Cases<>() {
             @Override
             public SourceReach polygon(Source.CoilShape.Polygon polygon) {
-                SourceReach outline = ofOutline(polygon.vertices(), plane, 0);
+                SourceReach outline = ofOutline(polygon.vertices(), plane, 0, false);
                 return new SourceReach(outline.anchor(), outline.extentM(), outline.lengthM(),
-                        PhysicalConstants.MU_0 * amps / (2 * Math.PI * outline.lengthM()));
+                        PhysicalConstants.MU_0 * amps / (2 * Math.PI * outline.lengthM()), false);
             }
 
             @Override
             public SourceReach circle(Source.CoilShape.Circle circle) {
                 double length = Math.min(circle.radiusM(), plane);
                 return new SourceReach(circle.center(), circle.radiusM(), length,
-                        PhysicalConstants.MU_0 * amps / (2 * Math.PI * length));
+                        PhysicalConstants.MU_0 * amps / (2 * Math.PI * length), false);
             }
         });
     }
 
-    private static SourceReach ofOutline(List<Vec2> outline, double lengthCapM, double fieldT) {
+    private static SourceReach ofOutline(List<Vec2> outline, double lengthCapM, double fieldT, boolean jumps) {
         Vec2 anchor = outline.get(0);
         double extent = 0;
         double shortest = lengthCapM;
@@ -79,6 +81,6 @@ record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT) {
             extent = Math.max(extent, outline.get(i).minus(anchor).length());
             shortest = Math.min(shortest, outline.get((i + 1) % outline.size()).minus(outline.get(i)).length());
         }
-        return new SourceReach(anchor, extent, shortest, fieldT);
+        return new SourceReach(anchor, extent, shortest, fieldT, jumps);
     }
 }

@@ -61,7 +61,9 @@ class LoopResistanceTest {
 
     @Test
     void temperatureBelowTheResistivityModelIsRejected() {
+        // ρ(T) = ρ20·[1 + α20·(T − 20 °C)] reaches zero at 20 − 1/α20 = −234.45 °C (IEC 60028 coefficient).
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> squareCoil(1, -270, 0, false));
-        assertTrue(e.getMessage().startsWith("loop 'coil' has no positive resistance at -270.0 °C"), e.getMessage());
+        assertTrue(e.getMessage().startsWith("temperature -270.0 °C is below the range of the linear resistivity"
+                + " model of copper, whose resistivity reaches zero at -234.45"), e.getMessage());
     }
 }

@@ -40,6 +40,12 @@ final class Fields {
         return members.containsKey(name);
     }
 
+    /** The value of member {@code name} as written, or null when the object lacks it. */
+    Json node(String name) {
+        Json.Member m = members.get(name);
+        return m == null ? null : m.value();
+    }
+
     /** The value of a required field, or null after reporting it missing or wrong. */
     <T> T req(String name, ReadContext.Conv<T> conv) {
         if (!has(name)) {

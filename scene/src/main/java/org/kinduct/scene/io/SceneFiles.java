@@ -11,7 +11,11 @@ import java.nio.charset.CoderResult;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
+import java.nio.channels.FileLock;
+import java.nio.channels.OverlappingFileLockException;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.DirectoryIteratorException;
+import java.nio.file.DirectoryStream;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileSystemException;
 import java.nio.file.Files;
@@ -22,16 +26,24 @@ import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.PosixFileAttributeView;
 import java.util.List;
 import java.util.concurrent.ThreadLocalRandom;
+import java.util.regex.Pattern;
 import org.kinduct.scene.Scene;
 
 /**
  * Scene files on disk: UTF-8 JSON as {@link SceneJson} reads and writes it.
  *
  * <p>Saving is atomic where the file system allows: the text goes to a temporary file in the
- * target's folder, is forced to disk, and is renamed over the target, so a crash or a failed
- * write leaves either the old file or the new one, never a mix, and no temporary file. Where the
- * file system cannot rename atomically the file is replaced by a plain move, and a warning is
- * logged.
+ * target's folder ({@code .NAME.<hex>.tmp}), is forced to disk, and is renamed over the target, so
+ * a crash or a failed write leaves either the old file or the new one, never a mix. A write that
+ * fails removes its temporary file; one that is killed cannot, so every write first removes the
+ * temporary files of earlier writes to the same target whose writer is gone (each writer holds a
+ * lock on its own temporary file while it lives; the operating system drops the lock when the
+ * process dies). Where the file system cannot rename atomically the file is replaced by a plain
+ * move, and a warning is logged. A target that is not a regular file (a device, a named pipe), or
+ * that is reached through {@code /dev} or {@code /proc} (a stream such as {@code /dev/stdout},
+ * whichever file or pipe the stream goes to), is written through in place, appending: it cannot
+ * be replaced, renaming over a device would put a regular file where it was, and a stream
+ * redirected to a log with {@code >>} keeps what the log held.
  */
 public final class SceneFiles {
 
@@ -73,7 +85,9 @@ public final class SceneFiles {
     }
 
     /**
-     * Saves {@code scene} to {@code file} atomically (see the class comment).
+     * Saves {@code scene} to {@code file} atomically (see the class comment). A scene the reader
+     * would refuse (a number beyond the file format's limits, a loop whose wire has no room) is
+     * not saved: what is saved can be opened again.
      *
      * @throws IOException saying which file could not be saved and why; the previous content of
      *         {@code file}, if any, is then unchanged and no temporary file is left behind
@@ -89,7 +103,13 @@ public final class SceneFiles {
      * @throws IOException as {@link #write(Scene, Path)} does
      */
     public static void write(SceneWithUnits scene, Path file) throws IOException {
-        writeAtomically(file, SceneJson.write(scene).getBytes(StandardCharsets.UTF_8));
+        String text = SceneJson.write(scene);
+        try {
+            SceneJson.read(text, file.toString());
+        } catch (SceneFormatException e) {
+            throw new IOException("cannot save to " + file + ": the scene would not open again:\n" + e.getMessage(), e);
+        }
+        writeAtomically(file, text.getBytes(StandardCharsets.UTF_8));
     }
 
     /**
@@ -101,6 +121,10 @@ public final class SceneFiles {
     }
 
     static void writeAtomically(Path file, Content content) throws IOException {
+        if (Files.exists(file) && !Files.isDirectory(file) && (!Files.isRegularFile(file) || isStream(file))) {
+            writeInPlace(file, content);
+            return;
+        }
         // Saving through a link updates the file it points to and keeps the link.
         Path target = Files.isSymbolicLink(file) && Files.exists(file) ? file.toRealPath() : file.toAbsolutePath();
         Path folder = target.getParent();
@@ -110,32 +134,77 @@ public final class SceneFiles {
         if (Files.isDirectory(target)) {
             throw new IOException("cannot save to " + target + ": it is a folder");
         }
-        Path temp;
-        try {
-            temp = createTemp(folder, target.getFileName().toString());
-        } catch (IOException e) {
-            throw new IOException("cannot save to " + target + ": cannot create a file in folder " + folder
-                    + " (" + reason(e) + ")", e);
-        }
+        String name = target.getFileName().toString();
+        removeAbandonedTemps(folder, name);
+        Temp temp = null;
         boolean moved = false;
         try {
-            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE);
-                 OutputStream out = Channels.newOutputStream(channel)) {
+            temp = createTemp(folder, name);
+            // The lock lives as long as the channel, or this process: it tells later writers the file is in use.
+            try (FileChannel channel = temp.channel()) {
+                channel.lock();
+                OutputStream out = Channels.newOutputStream(channel);
                 content.writeTo(out);
                 out.flush();
                 channel.force(true);
             }
-            copyPermissions(target, temp);
-            moveIntoPlace(temp, target);
+            copyPermissions(target, temp.path());
+            moveIntoPlace(temp.path(), target);
             moved = true;
         } catch (IOException e) {
-            throw new IOException("cannot save to " + target + ": " + reason(e) + "; the file was not changed", e);
+            String where = temp == null ? "cannot create a file in folder " + folder + " (" + reason(e) + ")"
+                    : reason(e) + "; the file was not changed";
+            throw new IOException("cannot save to " + target + ": " + where, e);
         } finally {
-            if (!moved) {
-                deleteTemp(temp);
+            if (!moved && temp != null) {
+                deleteTemp(temp.path());
             }
         }
         syncFolder(folder);
+    }
+
+    /** A path through the system's device or process folders: {@code /dev/stdout}, {@code /proc/self/fd/1}. */
+    private static boolean isStream(Path file) {
+        Path absolute = file.toAbsolutePath().normalize();
+        return absolute.startsWith("/dev") || absolute.startsWith("/proc");
+    }
+
+    /** A device, pipe or stream: written through, since it cannot be replaced. */
+    private static void writeInPlace(Path file, Content content) throws IOException {
+        try (OutputStream out = Files.newOutputStream(file, StandardOpenOption.WRITE, StandardOpenOption.APPEND)) {
+            content.writeTo(out);
+        } catch (IOException e) {
+            throw new IOException("cannot write to " + file + ": " + reason(e), e);
+        }
+    }
+
+    /**
+     * Removes temporary files of earlier writes to {@code name} whose writers are gone: nobody
+     * holds their lock. A file another live writer is using stays.
+     */
+    private static void removeAbandonedTemps(Path folder, String name) {
+        Pattern ours = Pattern.compile("\\." + Pattern.quote(name) + "\\.[0-9a-f]{1,16}\\.tmp");
+        try (DirectoryStream<Path> temps = Files.newDirectoryStream(folder,
+                p -> ours.matcher(p.getFileName().toString()).matches())) {
+            for (Path temp : temps) {
+                removeIfAbandoned(temp);
+            }
+        } catch (IOException | DirectoryIteratorException e) {
+            LOG.log(System.Logger.Level.DEBUG, "cannot look for abandoned temporary files in " + folder, e);
+        }
+    }
+
+    private static void removeIfAbandoned(Path temp) {
+        try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE)) {
+            FileLock lock = channel.tryLock();
+            if (lock != null) {
+                Files.deleteIfExists(temp);
+            }
+        } catch (OverlappingFileLockException inUseHere) {
+            // Another thread of this program is writing it.
+        } catch (IOException e) {
+            LOG.log(System.Logger.Level.DEBUG, "cannot remove abandoned temporary file " + temp, e);
+        }
     }
 
     private static byte[] readBytes(Path file) throws IOException {
@@ -182,14 +251,17 @@ public final class SceneFiles {
         return out.flip().toString();
     }
 
-    /** A new empty file next to the target, created with the folder's default permissions. */
-    private static Path createTemp(Path folder, String name) throws IOException {
+    /** A temporary file and the channel writing it. */
+    private record Temp(Path path, FileChannel channel) {
+    }
+
+    /** A new empty file next to the target, created with the folder's default permissions, open for writing. */
+    private static Temp createTemp(Path folder, String name) throws IOException {
         for (int attempt = 1; ; attempt++) {
             Path temp = folder.resolve("." + name + "." + Long.toHexString(ThreadLocalRandom.current().nextLong())
                     + ".tmp");
             try {
-                Files.newByteChannel(temp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE).close();
-                return temp;
+                return new Temp(temp, FileChannel.open(temp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE));
             } catch (FileAlreadyExistsException e) {
                 if (attempt == TEMP_NAME_ATTEMPTS) {
                     throw e;

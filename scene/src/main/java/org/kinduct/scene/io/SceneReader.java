@@ -28,6 +28,7 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
+import org.kinduct.scene.WireClearance;
 import org.kinduct.scene.WireSpec;
 
 /**
@@ -36,6 +37,13 @@ import org.kinduct.scene.WireSpec;
  * problems; values come back null only after a problem was reported.
  */
 final class SceneReader {
+
+    /**
+     * Most responses a free body may go through in the window: its fastest mechanical rate
+     * ({@link Motion.Free#fastestRatePerS}) times t1 − t0. The explicit integrator takes a few
+     * steps per response, and a run takes at most ten million steps.
+     */
+    static final double MAX_RESPONSES = 1e6;
 
     /** Defaults of optional fields (docs/scene-format.md). */
     static final TimeSpan DEFAULT_TIME = new TimeSpan(0, 1, 0.01);
@@ -94,7 +102,29 @@ final class SceneReader {
         List<Source> sourceList = f.opt("sources", ctx.list(kinded(sources, "a source")), List.of());
         List<Conductor> conductorList = f.opt("conductors", ctx.list(kinded(conductors, "a conductor")), List.of());
         ctx.checkReferences();
+        if (time != null && bodyList != null) {
+            checkResponses(time, bodyList, f.node("bodies"));
+        }
         return f.build(() -> new Scene(name, description, bodyList, sourceList, conductorList, time, gravity));
+    }
+
+    /** A free body whose own mechanics respond too fast to integrate over the window is refused at its motion. */
+    private void checkResponses(TimeSpan time, List<Body> bodies, Json listed) {
+        double window = time.t1S() - time.t0S();
+        for (int i = 0; i < bodies.size(); i++) {
+            if (bodies.get(i).motion() instanceof Motion.Free free && free.fastestRatePerS() * window > MAX_RESPONSES) {
+                Json body = ((Json.Arr) listed).items().get(i);
+                ctx.problem(ReadContext.item("bodies", i) + ".motion", body, String.format(java.util.Locale.ROOT,
+                        "this free body responds too fast for the time window: damping rate c/m and spring"
+                        + " frequency √(k/m) reach %.3g /s, %.3g times over t1 − t0 = %s s (at most %.0e);"
+                        + " the integrator would need more steps than a run may take", free.fastestRatePerS(),
+                        free.fastestRatePerS() * window, window, MAX_RESPONSES));
+            }
+        }
+    }
+
+    private static List<Vec2> drawn(Conductor c) {
+        return c.vertices().stream().map(Conductor.Vertex::at).toList();
     }
 
     private TimeSpan time(String path, Json node) {
@@ -310,7 +340,13 @@ final class SceneReader {
         Boolean open = f.opt("open", ctx.flag(), false);
         Double load = f.opt("load", ctx.quantity(RESISTANCE), 0.0);
         Double temperature = f.opt("temperature", ctx.quantity(TEMPERATURE), DEFAULT_TEMPERATURE_C);
-        return f.build(() -> new Conductor.Loop(id, body, vertices, turns, wire, open, load, temperature));
+        return f.build(() -> {
+            Conductor.Loop loop = new Conductor.Loop(id, body, vertices, turns, wire, open, load, temperature);
+            if (!loop.open()) {
+                WireClearance.requireRoom(drawn(loop), loop.wire().diameterM() / 2);
+            }
+            return loop;
+        });
     }
 
     /** {@code [x, y]} riding the conductor's body, or {@code {"at": [x, y], "body": id}}. */

@@ -12,10 +12,10 @@ import java.util.regex.Pattern;
  * Reads and writes quantities with units: {@code parse("12 mm", LENGTH)} is 0.012 (SI) and
  * {@code format(0.0125, LENGTH)} is "12.5 mm".
  *
- * <p>Input: a decimal number (optional sign, fraction and exponent; no hex, NaN or infinity),
- * optional spaces, then a unit of the expected {@link Dimension}; a bare number is in the SI unit.
- * The Unicode minus sign, the Greek mu and the ohm sign are read as '-', 'µ' and 'Ω', and the
- * letter 'u' may stand for 'µ'. Unit spellings are case-sensitive ("mm" is not "Mm").
+ * <p>Input: a decimal number of at most {@value #MAX_NUMBER_CHARACTERS} characters (optional
+ * sign, fraction and exponent; no hex, NaN or infinity), optional spaces, then a unit of the
+ * expected {@link Dimension}; a bare number is in the SI unit. The Unicode minus sign, the Greek
+ * mu and the ohm sign are read as '-', 'µ' and 'Ω', and the letter 'u' may stand for 'µ'. Unit spellings are case-sensitive ("mm" is not "Mm").
  *
  * <p>Output: {@value #DISPLAY_DIGITS} significant digits (rounded half up), an engineering
  * prefix chosen from {@link Dimension#displayUnits()}, and the Unicode minus sign "−". Every
@@ -47,6 +47,13 @@ public final class Units {
     private static final int SMALLEST_PLAIN_EXPONENT = -3;
     private static final int LARGEST_PLAIN_EXPONENT = 5;
 
+    /**
+     * Longest number accepted in a text, in characters: far more digits than a double holds (17),
+     * and short enough that converting it costs microseconds (exact decimal conversion takes time
+     * quadratic in the length: a million digits took 40 s).
+     */
+    public static final int MAX_NUMBER_CHARACTERS = 100;
+
     private static final Pattern NUMBER_AND_UNIT =
             Pattern.compile("([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d{1,9})?)\\s*(.*)", Pattern.DOTALL);
 
@@ -67,6 +74,10 @@ public final class Units {
         Matcher m = NUMBER_AND_UNIT.matcher(clean);
         if (!m.matches()) {
             throw expected(d, Texts.quote(text), "");
+        }
+        if (m.group(1).length() > MAX_NUMBER_CHARACTERS) {
+            throw new IllegalArgumentException("the number in " + Texts.quote(text) + " has " + m.group(1).length()
+                    + " characters; at most " + MAX_NUMBER_CHARACTERS + " are accepted");
         }
         String spelling = m.group(2).strip();
         Unit unit = spelling.isEmpty() ? d.siUnit() : d.unit(spelling).orElseThrow(

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
 import org.kinduct.scene.Body;
+import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.Motion;
@@ -59,7 +60,7 @@ public final class SampleScenes {
                         new Conductor.Vertex(new Vec2(0.01, 0), "walker"), Conductor.Vertex.at(0, 0.01)), 1,
                         WireSpec.of(Material.ALUMINIUM, 0.2e-3), true, 0, -10),
                 new Conductor.Loop("thick", "fixed", List.of(Conductor.Vertex.at(0, 0),
-                        Conductor.Vertex.at(0.01, 0), Conductor.Vertex.at(0, 0.01)), 3,
+                        Conductor.Vertex.at(0.1, 0), Conductor.Vertex.at(0, 0.1)), 3,
                         WireSpec.awg(Material.COPPER, -3), false, 0.5, 20));
         return new Scene("Every variant", "A scene with \"quotes\", a tab\t, ünïcödé and a\nnew line.",
                 bodies, sources, conductors, new TimeSpan(0, 0.5, 1e-3), new Vec2(0, -9.81));
@@ -69,7 +70,10 @@ public final class SampleScenes {
         return List.of(new Vec2(x, y), new Vec2(x + side, y), new Vec2(x + side, y + side), new Vec2(x, y + side));
     }
 
-    /** A random valid scene; numbers include awkward doubles to test that writing them is lossless. */
+    /**
+     * A random valid scene within the file format's limits; numbers include awkward doubles to
+     * test that writing them is lossless.
+     */
     public static Scene random(SplittableRandom r) {
         List<Body> bodies = new ArrayList<>();
         List<String> bodyIds = new ArrayList<>(List.of(Body.FIXED));
@@ -120,11 +124,14 @@ public final class SampleScenes {
                 List<Motion.Free.Spring> springs = new ArrayList<>();
                 for (int i = 0, n = r.nextInt(3); i < n; i++) {
                     springs.add(r.nextBoolean()
-                            ? new Motion.Free.Spring(point(r), null, positive(r), nonNegative(r))
-                            : new Motion.Free.Spring(null, pick(r, earlierBodies), positive(r), nonNegative(r)));
+                            ? new Motion.Free.Spring(point(r), null, 1e-6 + 100 * r.nextDouble(), nonNegative(r))
+                            : new Motion.Free.Spring(null, pick(r, earlierBodies), 1e-6 + 100 * r.nextDouble(),
+                                    nonNegative(r)));
                 }
-                return new Motion.Free(positive(r), nonNegative(r), point(r), any(r), nonNegative(r), point(r), point(r),
-                        nonNegative(r), springs);
+                // Mass, damping and springs within what a window may integrate (at most 1e6 responses).
+                double mass = 1e-3 + r.nextDouble();
+                return new Motion.Free(mass, r.nextBoolean() ? 0 : mass * (1e-12 + r.nextDouble()), point(r), any(r),
+                        r.nextDouble(), point(r), point(r), nonNegative(r), springs);
             }
         }
     }
@@ -138,15 +145,15 @@ public final class SampleScenes {
             case 1:
                 return new Source.UniformField(id, any(r));
             case 2:
-                return new Source.BlockMagnet(id, body, point(r), positive(r), positive(r), positive(r), any(r),
+                return new Source.BlockMagnet(id, body, point(r), size(r), size(r), size(r), any(r),
                         nonNegative(r), side, positive(r), north);
             case 3:
-                return new Source.CylinderMagnet(id, body, point(r), positive(r), positive(r), nonNegative(r), side,
+                return new Source.CylinderMagnet(id, body, point(r), size(r), size(r), nonNegative(r), side,
                         positive(r), north);
             default: {
                 Source.CoilShape shape = r.nextBoolean() ? new Source.CoilShape.Polygon(convex(r))
-                        : new Source.CoilShape.Circle(point(r), positive(r));
-                return new Source.SourceCoil(id, body, shape, 1 + r.nextInt(100), -positive(r),
+                        : new Source.CoilShape.Circle(point(r), size(r));
+                return new Source.SourceCoil(id, body, shape, 1 + r.nextInt(100), -size(r),
                         new Source.Drive(any(r), any(r), nonNegative(r), any(r)));
             }
         }
@@ -155,25 +162,32 @@ public final class SampleScenes {
     private static Conductor conductor(SplittableRandom r, String id, List<String> bodyIds) {
         String body = pick(r, bodyIds);
         boolean loop = r.nextBoolean();
-        List<Conductor.Vertex> vertices = new ArrayList<>();
-        for (int i = 0, n = (loop ? 3 : 2) + r.nextInt(4); i < n; i++) {
-            vertices.add(new Conductor.Vertex(point(r), r.nextInt(4) == 0 ? pick(r, bodyIds) : null));
+        // A closed loop's wire must have room along its sides: a convex outline a metre or two across.
+        List<Vec2> points = new ArrayList<>(loop ? convex(r, 1 + r.nextDouble()) : List.of());
+        for (int i = 0, n = 2 + r.nextInt(4); !loop && i < n; i++) {
+            points.add(point(r));
         }
+        List<Conductor.Vertex> vertices = points.stream()
+                .map(p -> new Conductor.Vertex(p, r.nextInt(4) == 0 ? pick(r, bodyIds) : null)).toList();
         if (!loop) {
             return new Conductor.Wire(id, body, vertices);
         }
         Material material = r.nextBoolean() ? Material.COPPER : Material.ALUMINIUM;
-        WireSpec wire = r.nextBoolean() ? WireSpec.awg(material, -3 + r.nextInt(60)) : WireSpec.of(material, positive(r));
+        WireSpec wire = r.nextBoolean() ? WireSpec.awg(material, -3 + r.nextInt(60))
+                : WireSpec.of(material, Checks.SMALLEST_SIZE_M + 1e-3 * r.nextDouble());
         return new Conductor.Loop(id, body, vertices, 1 + r.nextInt(1000), wire, r.nextBoolean(), nonNegative(r),
-                -273.15 + 500 * r.nextDouble());
+                material.zeroResistivityC() + 0.01 + 480 * r.nextDouble());
     }
 
     /** A convex polygon (hence simple, with area) of 3 to 8 vertices around a random centre. */
     private static List<Vec2> convex(SplittableRandom r) {
+        return convex(r, 1e-3 + r.nextDouble());
+    }
+
+    private static List<Vec2> convex(SplittableRandom r, double radius) {
         Vec2 c = new Vec2(r.nextDouble() - 0.5, r.nextDouble() - 0.5);
         int n = 3 + r.nextInt(6);
         List<Vec2> pts = new ArrayList<>();
-        double radius = 1e-3 + r.nextDouble();
         for (int i = 0; i < n; i++) {
             pts.add(c.plus(Vec2.polar(radius, 2 * Math.PI * (i + 0.5 * r.nextDouble()) / n)));
         }
@@ -196,7 +210,12 @@ public final class SampleScenes {
         return Math.abs(any(r)) + Double.MIN_NORMAL;
     }
 
-    /** Plain, tiny, huge, negative-zero and classic binary-fraction doubles. */
+    /** A length that must be positive: at least 1 nm. */
+    private static double size(SplittableRandom r) {
+        return Checks.SMALLEST_SIZE_M + Math.abs(any(r));
+    }
+
+    /** Plain, tiny, large (up to the format's 1e12), negative-zero and classic binary-fraction doubles. */
     private static double any(SplittableRandom r) {
         switch (r.nextInt(8)) {
             case 0:
@@ -206,7 +225,7 @@ public final class SampleScenes {
             case 2:
                 return r.nextDouble() * 1e-300;
             case 3:
-                return Double.longBitsToDouble(r.nextLong(0x7fe0000000000000L)) * (r.nextBoolean() ? 1 : -1) * 1e-10;
+                return Double.longBitsToDouble(r.nextLong(Double.doubleToLongBits(1e12))) * (r.nextBoolean() ? 1 : -1);
             default:
                 return (r.nextDouble() - 0.5) * Math.pow(10, r.nextInt(-6, 3));
         }

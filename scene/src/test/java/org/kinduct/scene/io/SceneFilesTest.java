@@ -10,21 +10,34 @@ import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.io.IOException;
 import java.io.RandomAccessFile;
+import java.nio.channels.FileChannel;
+import java.nio.channels.FileLock;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.PosixFileAttributeView;
 import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
 import java.util.List;
 import java.util.Set;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Material;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.WireSpec;
 
 class SceneFilesTest {
 
@@ -161,6 +174,98 @@ class SceneFilesTest {
         assertEquals("cannot save to " + folder.toAbsolutePath() + ": it is a folder", e.getMessage());
         assertTrue(Files.isDirectory(folder));
         assertEquals(List.of("scene.json"), namesIn(dir));
+    }
+
+    @Test
+    void aSceneTheReaderWouldRefuseIsNotSavedAndTheOldFileStays() throws IOException {
+        Path file = dir.resolve("scene.json");
+        Files.write(file, OLD_CONTENT);
+        // A valid model, but its 1 mm wire has no room along 1 mm sides.
+        Scene cramped = Scene.empty("cramped").withConductors(List.of(new Conductor.Loop("tiny", Body.FIXED,
+                List.of(Conductor.Vertex.at(0, 0), Conductor.Vertex.at(1e-3, 0), Conductor.Vertex.at(0, 1e-3)), 1,
+                WireSpec.of(Material.COPPER, 1e-3), false, 0, 20)));
+
+        IOException e = assertThrows(IOException.class, () -> SceneFiles.write(cramped, file));
+
+        assertTrue(e.getMessage().startsWith("cannot save to " + file + ": the scene would not open again:\n" + file
+                + ":"), e.getMessage());
+        assertTrue(e.getMessage().contains("conductors[0]: side 0 is 0.001 m long, shorter than 4.0 wire radii"),
+                e.getMessage());
+        assertArrayEquals(OLD_CONTENT, Files.readAllBytes(file));
+        assertEquals(List.of("scene.json"), namesIn(dir));
+    }
+
+    @Test
+    void aTemporaryFileLeftByAKilledWriteIsRemovedByTheNextWrite() throws IOException {
+        Path file = dir.resolve("scene.json");
+        Path abandoned = Files.write(dir.resolve(".scene.json.5eed0fdead.tmp"), "{\"format\": \"kin".getBytes(
+                StandardCharsets.UTF_8));
+        Path otherTarget = Files.write(dir.resolve(".other.json.5eed0fdead.tmp"), OLD_CONTENT);
+
+        SceneFiles.writeAtomically(file, OLD_CONTENT);
+
+        assertFalse(Files.exists(abandoned));
+        assertTrue(Files.exists(otherTarget), "another target's temporary file is not this write's business");
+    }
+
+    @Test
+    void aTemporaryFileAnotherWriterHoldsIsLeftAlone() throws IOException {
+        Path file = dir.resolve("scene.json");
+        Path inUse = dir.resolve(".scene.json.0123456789abcdef.tmp");
+        try (FileChannel writer = FileChannel.open(inUse, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
+             FileLock held = writer.lock()) {
+            SceneFiles.writeAtomically(file, OLD_CONTENT);
+
+            assertTrue(held.isValid());
+            assertTrue(Files.exists(inUse));
+        }
+        assertArrayEquals(OLD_CONTENT, Files.readAllBytes(file));
+    }
+
+    @Test
+    void writingToADeviceWritesThroughItAndKeepsTheDevice() throws IOException, InterruptedException {
+        // A device node of our own in the test folder, of the kind /dev/null is (character device 1, 3).
+        Path device = dir.resolve("null");
+        assumeTrue(run("mknod", device.toString(), "c", "1", "3"), "making device nodes needs the superuser");
+
+        SceneFiles.writeAtomically(device, OLD_CONTENT);
+
+        assertTrue(Files.exists(device));
+        assertFalse(Files.isRegularFile(device), "the device was replaced by a regular file");
+        assertEquals(0020000, (int) Files.getAttribute(device, "unix:mode") & 0170000, "still a character device");
+        assertEquals(List.of("null"), namesIn(dir));
+    }
+
+    @Test
+    void writingToANamedPipeStreamsThroughIt() throws IOException, InterruptedException, ExecutionException,
+            TimeoutException {
+        Path pipe = dir.resolve("results.pipe");
+        assumeTrue(run("mkfifo", pipe.toString()), "named pipes need mkfifo");
+        // A daemon: should the pipe be replaced, its reader would wait for a writer forever.
+        ExecutorService reader = Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "pipe-reader");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            Future<byte[]> received = reader.submit(() -> Files.readAllBytes(pipe));
+
+            SceneFiles.writeAtomically(pipe, OLD_CONTENT);
+
+            assertArrayEquals(OLD_CONTENT, received.get(10, TimeUnit.SECONDS));
+            assertFalse(Files.isRegularFile(pipe), "the pipe was replaced by a regular file");
+        } finally {
+            reader.shutdownNow();
+        }
+    }
+
+    /** True when the command ran and succeeded. */
+    private static boolean run(String... command) throws InterruptedException {
+        try {
+            return new ProcessBuilder(command).inheritIO().start().waitFor() == 0;
+        } catch (IOException e) {
+            return false;
+        }
     }
 
     @Test

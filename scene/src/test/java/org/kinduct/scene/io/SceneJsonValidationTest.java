@@ -132,7 +132,48 @@ class SceneJsonValidationTest {
                         "conductors[0].open", "\"yes\"", "expected true or false, got 'yes'"),
                 error("unknown choice", doc("  \"sources\": [{\"kind\": \"cylinder-magnet\", \"id\": \"m\", \"center\": [0, 0],"
                                 + " \"radius\": \"5 mm\", \"height\": \"3 mm\", \"standoff\": 0, \"side\": \"left\", \"remanence\": 1}]"),
-                        "sources[0].side", "\"left\"", "unknown value 'left'; use one of below, above"));
+                        "sources[0].side", "\"left\"", "unknown value 'left'; use one of below, above"),
+                // Inputs the solver could not make sense of, refused where they are written.
+                error("magnet a googol metres away", doc("  \"sources\": [{\"kind\": \"cylinder-magnet\", \"id\": \"m\","
+                                + " \"center\": [1e100, 0], \"radius\": \"5 mm\", \"height\": \"3 mm\", \"standoff\": 0,"
+                                + " \"remanence\": 1}]"),
+                        "sources[0].center[0]", "1e100", "'1e100' is out of range: quantities are at most 1e12 in size in"
+                                + " SI units (here metres)"),
+                error("extreme stand-off in a unit", doc("  \"sources\": [{\"kind\": \"block-magnet\", \"id\": \"m\","
+                                + " \"center\": [0, 0], \"size\": [0.01, 0.01, 0.005], \"standoff\": \"1e300 mm\","
+                                + " \"remanence\": 1}]"),
+                        "sources[0].standoff", "\"1e300 mm\"", "is out of range"),
+                error("coil next to the plane", doc("  \"sources\": [{\"kind\": \"source-coil\", \"id\": \"c\","
+                                + " \"circle\": {\"center\": [0, 0], \"radius\": 0.01}, \"z\": 1e-300, \"current\": {\"dc\": 1}}]"),
+                        "sources[0]", "{\"kind\"", "a source coil's distance from the drawing plane must be at least 1 nm,"
+                                + " got 1.0E-300 m"),
+                error("wire thinner than an atom", doc("  \"conductors\": [{\"kind\": \"loop\", \"id\": \"l\","
+                                + " \"vertices\": [[0, 0], [1, 0], [0, 1]], \"wire\": {\"diameter\": \"1e-300 mm\"}}]"),
+                        "conductors[0].wire", "{\"diameter\"", "wire diameter must be at least 1 nm, got 1.0E-303 m"),
+                error("repeated vertex", doc("  \"conductors\": [{\"kind\": \"loop\", \"id\": \"l\","
+                                + " \"vertices\": [[0, 0], [1, 0], [1, 0], [0, 1]]}]"),
+                        "conductors[0]", "{\"kind\"", "vertex 2 repeats vertex 1 at 1.0, 0.0 m"),
+                error("sides closer than the wire", doc("  \"conductors\": [{\"kind\": \"loop\", \"id\": \"l\","
+                                + " \"vertices\": [[0, 0], [0.1, 0], [0.1, 0.002], [0.05, 0.0001], [0, 0.002]],"
+                                + " \"wire\": {\"diameter\": \"1 mm\"}}]"),
+                        "conductors[0]", "{\"kind\"", "side 0 and side 3 run closer than the wire radii allow (0.001 m)"),
+                error("side shorter than a few wire radii", doc("  \"conductors\": [{\"kind\": \"loop\", \"id\": \"l\","
+                                + " \"vertices\": [[0, 0], [0.1, 0], [0.1, 0.001], [0, 0.1]], \"wire\": {\"diameter\": \"1 mm\"}}]"),
+                        "conductors[0]", "{\"kind\"", "side 1 is 0.001 m long, shorter than 4.0 wire radii (0.002 m)"),
+                error("sides folding back", doc("  \"conductors\": [{\"kind\": \"loop\", \"id\": \"l\","
+                                + " \"vertices\": [[0, 0], [0.2, 0], [0, 0.0005], [-0.1, 0.05]], \"wire\": {\"diameter\": \"2 mm\"}}]"),
+                        "conductors[0]", "{\"kind\"", "side 0 and side 1 run closer than the wire radii allow (0.002 m)"),
+                error("winding colder than copper's resistivity model", doc("  \"conductors\": [{\"kind\": \"loop\","
+                                + " \"id\": \"l\", \"vertices\": [[0, 0], [1, 0], [0, 1]], \"temperature\": \"-240 degC\"}]"),
+                        "conductors[0]", "{\"kind\"", "temperature -240.0 °C is below the range of the linear resistivity"
+                                + " model of copper, whose resistivity reaches zero at -234.45"),
+                error("times too large for the step", doc("  \"time\": {\"t0\": 1e11, \"t1\": 100000000001, \"dt\": \"1 ms\"}"),
+                        "time", "{\"t0\"", "times as large as 1.00000000001E11 s are resolved only to 1.52587890625E-5 s,"
+                                + " too coarse for dt = 0.001 s"),
+                error("free body too stiff for its window", doc("  \"time\": {\"t1\": \"1 s\"},\n  \"bodies\": [{\"id\": \"b\","
+                                + " \"motion\": {\"kind\": \"free\", \"mass\": \"1 g\", \"damping\": 1e11}}]"),
+                        "bodies[0].motion", "{\"id\": \"b\"", "this free body responds too fast for the time window:"
+                                + " damping rate c/m and spring frequency √(k/m) reach 1.00e+14 /s"));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -2,6 +2,7 @@ package org.kinduct.scene.units;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.kinduct.scene.units.Dimension.ACCELERATION;
 import static org.kinduct.scene.units.Dimension.ANGLE;
@@ -19,6 +20,7 @@ import static org.kinduct.scene.units.Dimension.TIME;
 import static org.kinduct.scene.units.Dimension.VELOCITY;
 import static org.kinduct.scene.units.Dimension.VOLTAGE;
 
+import java.time.Duration;
 import java.util.SplittableRandom;
 import java.util.stream.LongStream;
 import java.util.stream.Stream;
@@ -199,6 +201,16 @@ class UnitsTest {
         // 17 significant digits recover any double (IEEE 754-2008 §5.12.2).
         double awkward = -1.2345678901234567e-3;
         assertEquals(awkward, Units.parse(Units.format(awkward, VOLTAGE, 17), VOLTAGE));
+    }
+
+    @Test
+    void refusesAMillionDigitNumberAtOnce() {
+        String huge = "1" + "0".repeat(1_000_000) + " mm";
+        // Converting it exactly took 40 s (quadratic in the digits); the length alone decides now.
+        IllegalArgumentException e = assertTimeoutPreemptively(Duration.ofSeconds(1),
+                () -> assertThrows(IllegalArgumentException.class, () -> Units.parse(huge, LENGTH)));
+        assertTrue(e.getMessage().endsWith("has 1000001 characters; at most 100 are accepted"), e.getMessage());
+        assertEquals(0.001, Units.parse("1." + "0".repeat(97) + " mm", LENGTH), "100 characters are accepted");
     }
 
     @Test

@@ -3,6 +3,7 @@ package org.kinduct.solver.circuit;
 import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.scene.Vec2;
+import org.kinduct.scene.WireClearance;
 import org.kinduct.solver.field.CircularFilament;
 
 /**
@@ -22,12 +23,11 @@ import org.kinduct.solver.field.CircularFilament;
  * <p><b>Mutual inductance</b> between two loops: M = N₁·N₂·Σ_{i,j} M_ij over their sides.
  *
  * <p><b>Wires closer than their radii.</b> The filament model fails where two wires run side by
- * side closer than the sum of their radii: such geometry is refused with an
- * {@link IllegalArgumentException} naming the sides. Sides that cross at an angle of at least
- * {@code asin(}{@value #MIN_CROSSING_SIN}{@code )} (a figure-eight, or one wire passing over
- * another) are accepted: Neumann's integral stays finite there and is the limit of wires passing
- * close over each other. Sides shorter than {@link SegmentInductance#MIN_LENGTH_RADII} radii are
- * refused (Rosa's formula assumes l ≫ ρ).
+ * side closer than the sum of their radii, and for sides only a few radii long: such geometry is
+ * refused with an {@link IllegalArgumentException} naming the sides, by the rule the scene file
+ * reader applies too ({@link WireClearance}). Sides that cross steeply (a figure-eight, or one
+ * wire passing over another) are accepted: Neumann's integral stays finite there and is the limit
+ * of wires passing close over each other.
  *
  * <p><b>Source coils</b> (filaments, no radius, at z ≠ 0): M = N_loop·N_coil·(flux of the coil
  * through the loop per ampere) = N·N_c·∮_loop A·dl. Polygon coils use the filament sums; circular
@@ -37,9 +37,6 @@ import org.kinduct.solver.field.CircularFilament;
  */
 public final class LoopInductance {
 
-    /** Sides closer than the wire radii are accepted only when they cross at least this steeply. */
-    public static final double MIN_CROSSING_SIN = 0.1;
-
     private static final double REL_TOL = 1e-11;
 
     private LoopInductance() {
@@ -48,13 +45,12 @@ public final class LoopInductance {
     /** Self-inductance of a closed polygon of round wire (radius {@code wireRadiusM}) with N turns, henries. */
     public static double self(List<Vec2> vertices, double wireRadiusM, int turns) {
         List<Filament> sides = sides(vertices, 0);
+        WireClearance.requireRoom(vertices, wireRadiusM);
         int n = sides.size();
         double sum = 0;
         for (int i = 0; i < n; i++) {
             sum += SegmentInductance.roundWireSelf(sides.get(i).length(), wireRadiusM);
             for (int j = i + 1; j < n; j++) {
-                boolean adjacent = j == i + 1 || (i == 0 && j == n - 1);
-                checkClearance(sides.get(i), sides.get(j), adjacent, 2 * wireRadiusM, "side " + i, "side " + j);
                 sum += 2 * SegmentInductance.mutual(sides.get(i), sides.get(j));
             }
         }
@@ -66,12 +62,11 @@ public final class LoopInductance {
                                 List<Vec2> b, double wireRadiusB, int turnsB) {
         List<Filament> sa = sides(a, 0);
         List<Filament> sb = sides(b, 0);
+        WireClearance.requireApart(a, wireRadiusA, b, wireRadiusB);
         double sum = 0;
-        for (int i = 0; i < sa.size(); i++) {
-            for (int j = 0; j < sb.size(); j++) {
-                checkClearance(sa.get(i), sb.get(j), false, wireRadiusA + wireRadiusB,
-                        "side " + i + " of the first loop", "side " + j + " of the second loop");
-                sum += SegmentInductance.mutual(sa.get(i), sb.get(j));
+        for (Filament f : sa) {
+            for (Filament g : sb) {
+                sum += SegmentInductance.mutual(f, g);
             }
         }
         return (double) turnsA * turnsB * sum;
@@ -131,66 +126,9 @@ public final class LoopInductance {
         return out;
     }
 
-    /**
-     * Refuses two sides whose wires (radii summing to {@code clearanceM}) run closer than that
-     * side by side: for adjacent sides, when the shorter one's free end lies within the clearance
-     * of the other (folded back); otherwise when their nearest distance is below the clearance and
-     * they are not crossing steeply.
-     */
-    private static void checkClearance(Filament f, Filament g, boolean adjacent, double clearanceM,
-                                       String whatF, String whatG) {
-        double sin = Math.sqrt(Math.max(0, 1 - sq(f.cosAngleTo(g))));
-        boolean tooClose;
-        if (adjacent) {
-            Filament shorter = f.length() <= g.length() ? f : g;
-            Filament longer = f.length() <= g.length() ? g : f;
-            // The shared end is at distance 0; the larger distance is the free end's.
-            tooClose = Math.max(pointToFilament(shorter.ax(), shorter.ay(), shorter.az(), longer),
-                    pointToFilament(shorter.bx(), shorter.by(), shorter.bz(), longer)) < clearanceM;
-        } else {
-            tooClose = sin < MIN_CROSSING_SIN && !boxesApart(f, g, clearanceM) && distance(f, g) < clearanceM;
-        }
-        if (tooClose) {
-            throw new IllegalArgumentException(whatF + " and " + whatG + " run closer than the wire radii allow ("
-                    + clearanceM + " m); the filament model does not hold there");
-        }
-    }
-
-    /** True when the filaments' bounding boxes are more than {@code gapM} apart along x, y or z (a cheap early out). */
-    private static boolean boxesApart(Filament f, Filament g, double gapM) {
-        return Math.min(f.ax(), f.bx()) - Math.max(g.ax(), g.bx()) > gapM
-                || Math.min(g.ax(), g.bx()) - Math.max(f.ax(), f.bx()) > gapM
-                || Math.min(f.ay(), f.by()) - Math.max(g.ay(), g.by()) > gapM
-                || Math.min(g.ay(), g.by()) - Math.max(f.ay(), f.by()) > gapM
-                || Math.min(f.az(), f.bz()) - Math.max(g.az(), g.bz()) > gapM
-                || Math.min(g.az(), g.bz()) - Math.max(f.az(), f.bz()) > gapM;
-    }
-
-    private static double distance(Filament f, Filament g) {
-        double s = SegmentInductance.nearestParameter(f, g);
-        if (Double.isNaN(s)) {
-            return 0;
-        }
-        return pointToFilament(f.ax() + s * (f.bx() - f.ax()), f.ay() + s * (f.by() - f.ay()),
-                f.az() + s * (f.bz() - f.az()), g);
-    }
-
-    private static double pointToFilament(double x, double y, double z, Filament g) {
-        double dx = g.bx() - g.ax();
-        double dy = g.by() - g.ay();
-        double dz = g.bz() - g.az();
-        double t = ((x - g.ax()) * dx + (y - g.ay()) * dy + (z - g.az()) * dz) / (dx * dx + dy * dy + dz * dz);
-        t = Math.max(0, Math.min(1, t));
-        return Math.sqrt(sq(g.ax() + t * dx - x) + sq(g.ay() + t * dy - y) + sq(g.az() + t * dz - z));
-    }
-
     private static void requireOffPlane(double coilZM) {
         if (coilZM == 0 || !Double.isFinite(coilZM)) {
             throw new IllegalArgumentException("a source coil must sit off the drawing plane (z ≠ 0), got " + coilZM);
         }
-    }
-
-    private static double sq(double v) {
-        return v * v;
     }
 }

@@ -3,14 +3,16 @@ package org.kinduct.solver.circuit;
 import static org.kinduct.solver.field.PhysicalConstants.MU_0;
 import static org.kinduct.solver.field.PhysicalConstants.MU_0_OVER_4PI;
 
+import org.kinduct.scene.WireClearance;
+
 /**
  * Inductance of straight conductors at low frequency (μr = 1).
  *
  * <p><b>Self-inductance</b> of a straight round wire of length l and radius ρ with uniform current:
  * L = (μ0·l/2π)·[ln(2l/ρ) − 3/4] (Rosa, "The self and mutual inductances of linear conductors",
  * Bull. Bur. Stand. 4, 1908; Grover, <i>Inductance Calculations</i>, 1946). It assumes l ≫ ρ;
- * the terms dropped are of relative order ρ/l, so segments shorter than {@value #MIN_LENGTH_RADII}
- * radii are refused.
+ * the terms dropped are of relative order ρ/l, so segments shorter than
+ * {@link WireClearance#MIN_SIDE_RADII} radii are refused.
  *
  * <p><b>Mutual inductance</b> of two straight filaments, Neumann's formula
  * M = (μ0/4π)·(û1·û2)·∫∫ ds1 ds2 / r. The inner integral over filament 2 is closed form,
@@ -34,9 +36,6 @@ import static org.kinduct.solver.field.PhysicalConstants.MU_0_OVER_4PI;
  */
 public final class SegmentInductance {
 
-    /** Shortest straight piece accepted, in wire radii (Rosa's formula assumes l ≫ ρ). */
-    public static final double MIN_LENGTH_RADII = 4;
-
     /** Below this |sin| between coplanar filaments the closed form gives way to the quadrature. */
     static final double PLANAR_MIN_SIN = 0.05;
 
@@ -54,8 +53,8 @@ public final class SegmentInductance {
 
     /** Rosa's self-inductance of a straight round wire, henries. */
     public static double roundWireSelf(double lengthM, double radiusM) {
-        if (!(radiusM > 0) || !(lengthM >= MIN_LENGTH_RADII * radiusM) || !Double.isFinite(lengthM)) {
-            throw new IllegalArgumentException("a straight wire piece must be at least " + MIN_LENGTH_RADII
+        if (!(radiusM > 0) || !(lengthM >= WireClearance.MIN_SIDE_RADII * radiusM) || !Double.isFinite(lengthM)) {
+            throw new IllegalArgumentException("a straight wire piece must be at least " + WireClearance.MIN_SIDE_RADII
                     + " wire radii long for Rosa's formula, got length " + lengthM + " m, radius " + radiusM + " m");
         }
         return MU_0 * lengthM / (2 * Math.PI) * (Math.log(2 * lengthM / radiusM) - 0.75);

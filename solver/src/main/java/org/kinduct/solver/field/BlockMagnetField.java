@@ -80,6 +80,22 @@ public final class BlockMagnetField extends CurrentSourceField {
     }
 
     @Override
+    EdgeQuadrature.Breaks breaks() {
+        if (zLowM != 0 && zHighM != 0) {
+            return super.breaks();
+        }
+        // The footprint's corners, counter-clockwise, in scene coordinates.
+        double[] px = new double[4];
+        double[] py = new double[4];
+        double[][] local = {{-halfX, -halfY}, {halfX, -halfY}, {halfX, halfY}, {-halfX, halfY}};
+        for (int i = 0; i < 4; i++) {
+            px[i] = cx + cos * local[i][0] - sin * local[i][1];
+            py[i] = cy + sin * local[i][0] + cos * local[i][1];
+        }
+        return (ax, ay, bx, by) -> Crossings.ofPolygon(ax, ay, bx, by, px, py);
+    }
+
+    @Override
     public double bz(double x, double y) {
         double dx = x - cx;
         double dy = y - cy;

@@ -31,15 +31,25 @@ abstract sealed class CurrentSourceField implements PlaneField
         return EdgeQuadrature.STANDARD.closedPath((x, y, dx, dy) -> {
             potential(x, y, a);
             return a[0] * dx + a[1] * dy;
-        }, xs, ys).value();
+        }, xs, ys, breaks()).value();
     }
 
     @Override
     public final void bzMoments(double ax, double ay, double bx, double by, double[] out) {
         EdgeQuadrature.Estimate moments =
-                EdgeQuadrature.STANDARD.segment((x, y, dx, dy) -> bz(x, y), ax, ay, bx, by);
+                EdgeQuadrature.STANDARD.segment((x, y, dx, dy) -> bz(x, y), ax, ay, bx, by, breaks());
         out[0] = moments.value();
         out[1] = moments.firstMoment();
+    }
+
+    /**
+     * Where B_z jumps and A kinks along a segment in the plane: the edge of a magnet's face lying
+     * in the plane (stand-off 0). Quadrature panels start and end there, which keeps the flux
+     * accurate, and smooth in time as a loop moves, to a few ulp instead of the 1e-5 a singularity
+     * inside a panel left. None for fields smooth in the plane.
+     */
+    EdgeQuadrature.Breaks breaks() {
+        return EdgeQuadrature.Breaks.NONE;
     }
 
     static void requirePolygon(double[] xs, double[] ys, String what) {

@@ -80,6 +80,12 @@ public final class CylinderMagnetField extends CurrentSourceField {
     }
 
     @Override
+    EdgeQuadrature.Breaks breaks() {
+        return zLowM == 0 || zHighM == 0
+                ? (ax, ay, bx, by) -> Crossings.ofCircle(ax, ay, bx, by, cx, cy, radiusM) : super.breaks();
+    }
+
+    @Override
     public double bz(double x, double y) {
         double rho = Math.hypot(x - cx, y - cy);
         double sum = radiusM + rho;

@@ -26,8 +26,10 @@ import java.util.Arrays;
  * edge (a filament at height w) are resolved by bisection down to panels ~w long, which costs
  * about 46·log2(edge/w) evaluations. Integrable singularities (a magnet face lying in the plane:
  * jumps of B_z and logarithmic kinks of A at the footprint's edges) converge only linearly in the
- * panel size; such integrals reach the tolerance within the standard budget for footprints crossed
- * a few times, and otherwise stop at the budget with the error reported in
+ * panel size. Where the caller knows them ({@link Breaks}), the first panels end at those points, so
+ * the trouble sits at panel ends, where bisection resolves it in a few dozen evaluations and the
+ * panels move with it as the path moves (a difference in time of such integrals then stays
+ * smooth). Otherwise such integrals stop at the budget with the error reported in
  * {@link Estimate#errorEstimate()}. When the integral cancels to well below the size of its parts
  * (a loop far from the source), the tolerance is floored at {@value #CANCELLATION_FLOOR} times the
  * sum of the parts' magnitudes, the most that rounding of the integrand allows.
@@ -105,6 +107,18 @@ public final class EdgeQuadrature {
         double value(double x, double y, double dx, double dy);
     }
 
+    /** Where the integrand jumps or kinks along an edge, known to the caller. */
+    @FunctionalInterface
+    public interface Breaks {
+        /** No known trouble anywhere. */
+        Breaks NONE = (ax, ay, bx, by) -> NO_BREAKS;
+
+        /** Parameters s in (0, 1), ascending, of the trouble on the segment from (ax, ay) to (bx, by). */
+        double[] along(double ax, double ay, double bx, double by);
+    }
+
+    private static final double[] NO_BREAKS = {};
+
     /**
      * A line integral over a polygon's edges, with its first moment and error estimate.
      *
@@ -141,11 +155,16 @@ public final class EdgeQuadrature {
 
     /** Σ over the edges of the closed polygon (vertex i to i + 1, last back to first) of ∫₀¹ f ds. */
     public Estimate closedPath(EdgeIntegrand f, double[] xs, double[] ys) {
+        return closedPath(f, xs, ys, Breaks.NONE);
+    }
+
+    /** As {@link #closedPath(EdgeIntegrand, double[], double[])}, with the first panels split at {@code breaks}. */
+    public Estimate closedPath(EdgeIntegrand f, double[] xs, double[] ys, Breaks breaks) {
         if (xs.length != ys.length || xs.length < 2) {
             throw new IllegalArgumentException("a closed path needs matching coordinate arrays of at least 2 "
                     + "vertices, got " + xs.length + " x and " + ys.length + " y");
         }
-        return new Run(f, xs, ys, xs.length, false).integrate();
+        return new Run(f, xs, ys, xs.length, false, breaks).integrate();
     }
 
     /**
@@ -153,7 +172,12 @@ public final class EdgeQuadrature {
      * moments is controlled.
      */
     public Estimate segment(EdgeIntegrand f, double ax, double ay, double bx, double by) {
-        return new Run(f, new double[] {ax, bx}, new double[] {ay, by}, 1, true).integrate();
+        return segment(f, ax, ay, bx, by, Breaks.NONE);
+    }
+
+    /** As {@link #segment(EdgeIntegrand, double, double, double, double)}, with the first panels split at {@code breaks}. */
+    public Estimate segment(EdgeIntegrand f, double ax, double ay, double bx, double by, Breaks breaks) {
+        return new Run(f, new double[] {ax, bx}, new double[] {ay, by}, 1, true, breaks).integrate();
     }
 
     /** The state of one integration; panels live in parallel primitive arrays. */
@@ -163,6 +187,7 @@ public final class EdgeQuadrature {
         private final double[] ys;
         private final int edges;
         private final boolean controlFirstMoment;
+        private final Breaks breaks;
         private int evaluations;
 
         private int count;
@@ -175,12 +200,13 @@ public final class EdgeQuadrature {
         private double[] error;
         private final double[] nodeValues = new double[KRONROD_POINTS];
 
-        Run(EdgeIntegrand f, double[] xs, double[] ys, int edges, boolean controlFirstMoment) {
+        Run(EdgeIntegrand f, double[] xs, double[] ys, int edges, boolean controlFirstMoment, Breaks breaks) {
             this.f = f;
             this.xs = xs;
             this.ys = ys;
             this.edges = edges;
             this.controlFirstMoment = controlFirstMoment;
+            this.breaks = breaks;
             int capacity = Math.max(16, 2 * edges);
             edge = new int[capacity];
             lo = new double[capacity];
@@ -193,7 +219,19 @@ public final class EdgeQuadrature {
 
         Estimate integrate() {
             for (int e = 0; e < edges; e++) {
-                panel(count++, e, 0, 1);
+                int next = e + 1 == xs.length ? 0 : e + 1;
+                double start = 0;
+                for (double s : breaks.along(xs[e], ys[e], xs[next], ys[next])) {
+                    if (count == edge.length) {
+                        grow();
+                    }
+                    panel(count++, e, start, s);
+                    start = s;
+                }
+                if (count == edge.length) {
+                    grow();
+                }
+                panel(count++, e, start, 1);
             }
             while (true) {
                 double sum0 = 0;

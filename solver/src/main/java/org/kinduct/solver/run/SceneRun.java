@@ -2,11 +2,14 @@ package org.kinduct.solver.run;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Set;
 import java.util.stream.IntStream;
+import org.hipparchus.exception.MathRuntimeException;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.Scenes;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
@@ -17,7 +20,9 @@ import org.kinduct.solver.circuit.InductanceAtStart;
 import org.kinduct.solver.circuit.LoopInductance;
 import org.kinduct.solver.dynamics.CoupledRun;
 import org.kinduct.solver.dynamics.CoupledSimulation;
+import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.dynamics.RunMonitor;
+import org.kinduct.solver.dynamics.SimulationCancelledException;
 
 /**
  * The one way Kinduct turns a scene into results, for the editor, the exports and the command
@@ -36,12 +41,23 @@ import org.kinduct.solver.dynamics.RunMonitor;
  * run's {@link RunMonitor} and stops when it asks
  * ({@link org.kinduct.solver.dynamics.SimulationCancelledException}; a later call starts it anew).
  * Thread-safe.
+ *
+ * <p>A scene drawn far from (0, 0) compared with its size is solved about its own centre
+ * ({@link LocalOrigin}) and its results are moved back: coordinates like 100 km + 1 cm leave
+ * fluxes and EMFs about 1e-10 of their digits instead of 1e-6 (more where differences of
+ * coordinates multiply), and the two-method check keeps reporting.
  */
 public final class SceneRun {
 
     private final Scene scene;
+    /** The scene as solved: moved so that {@link #origin} is at (0, 0). */
+    private final Scene local;
+    private final Vec2 origin;
     private final RunRequest request;
+    /** Conductor states of {@link #local}, prescribed motion. */
     private final SceneSolver prescribed;
+    /** Fields of the scene where it is drawn, prescribed motion. */
+    private final SceneSolver fields;
     private final RunMonitor monitor;
     private final boolean parallel;
     private InductanceAtStart inductance;
@@ -63,7 +79,10 @@ public final class SceneRun {
         this.request = Checks.nonNull(request, "request");
         this.monitor = Checks.nonNull(monitor, "monitor");
         this.parallel = parallel;
-        this.prescribed = new SceneSolver(scene);
+        this.origin = LocalOrigin.of(scene);
+        this.local = origin.equals(Vec2.ZERO) ? scene : Scenes.movedBy(scene, origin.times(-1));
+        this.prescribed = new SceneSolver(local);
+        this.fields = local == scene ? prescribed : new SceneSolver(scene);
     }
 
     public Scene scene() {
@@ -77,7 +96,7 @@ public final class SceneRun {
     /** The loops' inductances at the start of the window. */
     public synchronized InductanceAtStart inductanceAtStart() {
         if (inductance == null) {
-            inductance = InductanceAtStart.of(scene, request.window().t0S());
+            inductance = InductanceAtStart.of(local, request.window().t0S());
         }
         return inductance;
     }
@@ -107,7 +126,7 @@ public final class SceneRun {
     public Snapshot instant(double tS) {
         Checks.finite(tS, "time");
         if (!plan().coupled()) {
-            return solveInstant(tS, inductanceAtStart());
+            return FiniteResults.require(solveInstant(tS, inductanceAtStart()));
         }
         RunResult run = result();
         return request.extraInstantsS().contains(tS) ? run.at(tS) : run.nearest(tS);
@@ -120,8 +139,7 @@ public final class SceneRun {
      */
     public RunResult instantResult(double tS) {
         if (!plan().coupled()) {
-            return new RunResult(scene, plan(), List.of(solveInstant(tS, inductanceAtStart())), List.of(), null,
-                    inductanceAtStart());
+            return result(List.of(solveInstant(tS, inductanceAtStart())), List.of(), null);
         }
         SceneRun stretched = new SceneRun(scene, request.alsoAt(tS), monitor, parallel);
         Snapshot at = stretched.instant(tS);
@@ -140,34 +158,81 @@ public final class SceneRun {
     public SceneField fieldOf(double tS, Set<String> sourceIds) {
         boolean free = scene.sources().stream().anyMatch(s -> sourceIds.contains(s.id())
                 && scene.body(s.body()).orElseThrow().motion() instanceof org.kinduct.scene.Motion.Free);
-        return (free ? placement() : prescribed).fieldOf(tS, sourceIds);
+        return (free ? placement() : fields).fieldOf(tS, sourceIds);
     }
 
     /** A solver placing free bodies where the run has them (prescribed placement when there are none). */
     private SceneSolver placement() {
         if (scene.bodies().stream().noneMatch(b -> b.motion() instanceof org.kinduct.scene.Motion.Free)) {
-            return prescribed;
+            return fields;
         }
         return new SceneSolver(scene, result().kinematics());
     }
 
     private RunResult coupled() {
         TimeSpan w = request.window();
-        CoupledRun run = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE, plan().circuit())
-                .simulate(scene, w.t0S(), w.t1S(), w.dtS(), request.extraInstantsS(), monitor);
-        return new RunResult(scene, plan(), run.samples(), run.extras(), run.audit(), inductanceAtStart());
+        int steps = w.steps();
+        double gridEnd = w.at(steps);
+        // The run counts its grid with a fixed slack that rounding can defeat on long windows
+        // (dynamics.SampleTimes), dropping the last grid instant; asked for as a further instant
+        // it is sampled whichever way the count goes.
+        List<Double> extras = new ArrayList<>(request.extraInstantsS());
+        extras.add(gridEnd);
+        StepBudget budget = new StepBudget(monitor, steps + 1 + request.extraInstantsS().size());
+        CoupledRun run;
+        try {
+            run = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE, plan().circuit())
+                    .simulate(local, w.t0S(), Math.max(w.t1S(), gridEnd), w.dtS(), extras, budget);
+        } catch (SimulationCancelledException stopped) {
+            if (budget.exceeded()) {
+                throw new RunFailedException(String.format(Locale.ROOT, "the coupled run would take about %.3g"
+                        + " integrator steps (at most %.0f are taken here: 10 million, and 1000 per sample): the scene"
+                        + " changes far faster than the sampling step dt = %s s can follow (a stiff spring, strong"
+                        + " damping or a light free body, a loop's L/R much shorter than dt with --circuit inductive,"
+                        + " or a prescribed motion much faster than dt)", budget.projectedSteps(), budget.maxSteps(),
+                        w.dtS()), stopped);
+            }
+            throw stopped;
+        } catch (IllegalArgumentException | MathRuntimeException failed) {
+            throw new RunFailedException("the coupled run stopped: " + failed.getMessage(), failed);
+        }
+        List<Snapshot> samples = new ArrayList<>(run.samples().stream().map(this::drawn).toList());
+        List<Snapshot> further = new ArrayList<>(run.extras().stream().map(this::drawn).toList());
+        int at = 0;
+        while (further.get(at).tS() != gridEnd) {
+            at++;
+        }
+        Snapshot end = further.remove(at);
+        if (samples.size() == steps) {
+            samples.add(end);
+        }
+        if (request.extraInstantsS().contains(gridEnd)) {
+            further.add(at, end);
+        }
+        return result(samples, further, run.audit());
     }
 
     private RunResult instants() {
         TimeSpan w = request.window();
-        long n = (long) Math.floor((w.t1S() - w.t0S()) / w.dtS() + 1e-9);
-        IntStream steps = IntStream.rangeClosed(0, (int) n);
+        int count = w.steps() + 1;
         // Read once here: the instants may run on other threads, which must not wait for this one's lock.
         InductanceAtStart start = inductanceAtStart();
-        List<Snapshot> samples = (parallel ? steps.parallel() : steps)
-                .mapToObj(k -> solveInstant(w.t0S() + k * w.dtS(), start)).toList();
+        InstantProgress progress = new InstantProgress(monitor, count);
+        IntStream k = IntStream.range(0, count);
+        List<Snapshot> samples = (parallel ? k.parallel() : k).mapToObj(i -> {
+            progress.checkCancelled();
+            Snapshot s = solveInstant(w.at(i), start);
+            progress.done();
+            return s;
+        }).toList();
         List<Snapshot> extras = request.extraInstantsS().stream().sorted().map(t -> solveInstant(t, start)).toList();
-        return new RunResult(scene, plan(), samples, extras, null, start);
+        return result(samples, extras, null);
+    }
+
+    private RunResult result(List<Snapshot> samples, List<Snapshot> extras, EnergyAudit audit) {
+        samples.forEach(FiniteResults::require);
+        extras.forEach(FiniteResults::require);
+        return new RunResult(scene, plan(), samples, extras, FiniteResults.require(audit), inductanceAtStart());
     }
 
     /**
@@ -186,7 +251,12 @@ public final class SceneRun {
             }
             states.add(state);
         }
-        return new Snapshot(s.tS(), states, s.freeBodies());
+        return drawn(new Snapshot(s.tS(), states, s.freeBodies()));
+    }
+
+    /** A state of {@link #local} where the scene is drawn. */
+    private Snapshot drawn(Snapshot local) {
+        return origin.equals(Vec2.ZERO) ? local : local.movedBy(origin);
     }
 
     private static boolean rigid(Conductor.Loop loop) {

@@ -13,6 +13,7 @@ import org.kinduct.render.export.ExportInstant;
 import org.kinduct.render.export.Exporter;
 import org.kinduct.render.export.SnapshotOptions;
 import org.kinduct.render.export.ViewChoice;
+import org.kinduct.solver.run.RunFailedException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -70,6 +71,8 @@ final class ExportCommand implements Callable<Integer> {
             throw new BadInputException("nothing to export: give at least one of --png, --svg, --pdf, --csv,"
                     + " --field-csv, --json");
         }
+        OutputTargets.requireDistinct(input.file(), OutputTargets.of("--png", png, "--svg", svg, "--csv", seriesCsv,
+                "--field-csv", fieldCsv, "--json", json));
         Scene scene = input.load();
         SnapshotOptions options;
         try {
@@ -78,12 +81,17 @@ final class ExportCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new BadInputException(e.getMessage());
         }
-        try {
-            for (Path written : new Exporter(scene, options).write(targets)) {
+        CliMonitor monitor = CliMonitor.forThisProcess();
+        try (Interruption watch = Interruption.watch(monitor)) {
+            for (Path written : new Exporter(scene, options, monitor).write(targets)) {
                 System.out.println("wrote " + written);
             }
         } catch (IOException | IllegalArgumentException e) {
             throw new BadInputException(e.getMessage());
+        } catch (RunFailedException e) {
+            throw new BadInputException(input.name() + ": " + e.getMessage());
+        } finally {
+            monitor.done();
         }
         return KinductMain.OK;
     }

@@ -24,6 +24,16 @@ final class SceneInput {
         String demo;
     }
 
+    /** What to call the scene in messages: the file as given, or the demo. */
+    String name() {
+        return choice.file != null ? choice.file.toString() : "demo " + choice.demo;
+    }
+
+    /** The scene file, or null for a demo. */
+    Path file() {
+        return choice.file;
+    }
+
     Scene load() {
         if (choice.demo != null) {
             if (Demos.resource(choice.demo).isEmpty()) {

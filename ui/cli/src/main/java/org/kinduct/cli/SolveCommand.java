@@ -14,7 +14,7 @@ import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.units.Dimension;
 import org.kinduct.scene.units.Units;
 import org.kinduct.solver.dynamics.CircuitModel;
-import org.kinduct.solver.dynamics.RunMonitor;
+import org.kinduct.solver.run.RunFailedException;
 import org.kinduct.solver.run.RunRequest;
 import org.kinduct.solver.run.RunResult;
 import org.kinduct.solver.run.SceneRun;
@@ -81,6 +81,7 @@ final class SolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
+        OutputTargets.requireDistinct(input.file(), OutputTargets.of("--out", out));
         Scene scene = input.load();
         RunResult results = solve(scene);
         StringWriter text = new StringWriter();
@@ -104,11 +105,16 @@ final class SolveCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new BadInputException("time window: " + e.getMessage());
         }
-        SceneRun run = new SceneRun(scene, request, RunMonitor.NONE, true);
-        try {
+        CliMonitor monitor = CliMonitor.forThisProcess();
+        SceneRun run = new SceneRun(scene, request, monitor, true);
+        try (Interruption watch = Interruption.watch(monitor)) {
             return at == null ? run.result() : run.instantResult(time("--at", at));
         } catch (IllegalArgumentException e) {
             throw new BadInputException(e.getMessage());
+        } catch (RunFailedException e) {
+            throw new BadInputException(input.name() + ": " + e.getMessage());
+        } finally {
+            monitor.done();
         }
     }
 

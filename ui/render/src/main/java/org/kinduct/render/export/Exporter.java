@@ -93,11 +93,19 @@ public final class Exporter {
     private FieldRaster raster;
 
     public Exporter(Scene scene, SnapshotOptions options) {
+        this(scene, options, RunMonitor.NONE);
+    }
+
+    /**
+     * @param monitor follows the run's progress and may stop it
+     * @throws IllegalArgumentException when the snapshot's instant lies before the scene's start
+     */
+    public Exporter(Scene scene, SnapshotOptions options, RunMonitor monitor) {
         this.scene = scene;
         this.options = options;
         RunRequest window = RunRequest.of(scene);
         this.run = new SceneRun(scene, options.instant() instanceof ExportInstant.At at ? window.alsoAt(at.tS()) : window,
-                RunMonitor.NONE, true);
+                monitor, true);
     }
 
     /** Writes every target atomically; a target that fails is left as it was. Returns the files written. */

@@ -7,6 +7,8 @@ import java.util.concurrent.atomic.AtomicReference;
 /**
  * Runs jobs on an executor one at a time, keeping only the newest job that is waiting: when
  * requests come faster than they finish (playback, dragging), intermediate ones are skipped.
+ * A job that throws (an {@link Error} included) ends its own run only: the failure goes on to
+ * the executor's thread as usual, and the queue takes the next job.
  */
 public final class LatestOnly {
 
@@ -22,6 +24,11 @@ public final class LatestOnly {
     /** Queues {@code job}, replacing any job not yet started. */
     public void submit(Runnable job) {
         waiting.set(Objects.requireNonNull(job));
+        start();
+    }
+
+    /** Starts draining unless a drain is under way. */
+    private void start() {
         synchronized (lock) {
             if (running) {
                 return;
@@ -43,7 +50,25 @@ public final class LatestOnly {
                 }
                 continue;
             }
-            job.run();
+            boolean finished = false;
+            try {
+                job.run();
+                finished = true;
+            } finally {
+                if (!finished) {
+                    handOver();
+                }
+            }
+        }
+    }
+
+    /** After a job threw: this drain ends, and a new one starts if a job is waiting. */
+    private void handOver() {
+        synchronized (lock) {
+            running = false;
+        }
+        if (waiting.get() != null) {
+            start();
         }
     }
 }
