@@ -7,7 +7,9 @@ import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.util.List;
 import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -279,20 +281,74 @@ final class SceneWriter {
 
     private void conductor(Conductor c) throws IOException {
         g.writeStartObject();
-        kind(c.match(new Conductor.Cases<>() {
+        c.match(new Conductor.Cases<Void>() {
             @Override
-            public String wire(Conductor.Wire wire) {
-                return "wire";
+            public Void wire(Conductor.Wire wire) {
+                return io(() -> {
+                    kind("wire");
+                    idAndBody(wire.id(), wire.body());
+                    vertices(wire.vertices());
+                });
             }
 
             @Override
-            public String loop(Conductor.Loop loop) {
-                return "loop";
+            public Void loop(Conductor.Loop loop) {
+                return io(() -> {
+                    kind("loop");
+                    idAndBody(loop.id(), loop.body());
+                    vertices(loop.vertices());
+                    g.writeNumberField("turns", loop.turns());
+                    wireSpec(loop.wire());
+                    g.writeBooleanField("open", loop.open());
+                    g.writeNumberField("load", loop.loadOhm());
+                    g.writeNumberField("temperature", loop.temperatureC());
+                });
             }
-        }));
-        idAndBody(c.id(), c.body());
+
+            @Override
+            public Void plate(Conductor.Plate plate) {
+                return io(() -> {
+                    kind("plate");
+                    idAndBody(plate.id(), plate.body());
+                    points("outline", plate.outline());
+                    g.writeArrayFieldStart("holes");
+                    for (List<Vec2> hole : plate.holes()) {
+                        g.writeStartArray();
+                        for (Vec2 p : hole) {
+                            point(p);
+                        }
+                        g.writeEndArray();
+                    }
+                    g.writeEndArray();
+                    g.writeNumberField("thickness", plate.thicknessM());
+                    conductivity(plate.conductivity());
+                    electrodes(plate);
+                });
+            }
+
+            @Override
+            public Void channel(Conductor.Channel channel) {
+                return io(() -> {
+                    kind("channel");
+                    idAndBody(channel.id(), channel.body());
+                    point("start", channel.start());
+                    point("end", channel.end());
+                    g.writeNumberField("width", channel.widthM());
+                    g.writeNumberField("depth", channel.depthM());
+                    g.writeNumberField("conductivity", channel.sigmaSPerM());
+                    g.writeStringField("profile", Vocabulary.PROFILE.name(channel.profile()));
+                    g.writeFieldName("flow");
+                    flow(channel.flow());
+                    electrodes(channel);
+                });
+            }
+        });
+        g.writeEndObject();
+    }
+
+    private void vertices(List<Conductor.Vertex> vertices) throws IOException {
         g.writeArrayFieldStart("vertices");
-        for (Conductor.Vertex v : c.vertices()) {
+        for (Conductor.Vertex v : vertices) {
             if (v.body() == null) {
                 point(v.at());
             } else {
@@ -304,20 +360,85 @@ final class SceneWriter {
             }
         }
         g.writeEndArray();
-        c.match(new Conductor.Cases<Void>() {
+    }
+
+    private void conductivity(Conductivity c) {
+        c.match(new Conductivity.Cases<Void>() {
             @Override
-            public Void wire(Conductor.Wire wire) {
-                return null;
+            public Void material(Conductivity.OfMaterial m) {
+                return io(() -> {
+                    g.writeStringField("material", Vocabulary.MATERIAL.name(m.material()));
+                    g.writeNumberField("temperature", m.temperatureC());
+                });
             }
 
             @Override
-            public Void loop(Conductor.Loop loop) {
+            public Void given(Conductivity.Given given) {
+                return io(() -> g.writeNumberField("conductivity", given.sigmaSPerM()));
+            }
+        });
+    }
+
+    /** Electrodes, pairs and the cell size of a plate or channel (the cell only when the file sets it). */
+    private void electrodes(Conductor.Sheet sheet) throws IOException {
+        g.writeArrayFieldStart("electrodes");
+        for (Conductor.Electrode e : sheet.electrodes()) {
+            layout.inlineNext();
+            g.writeStartObject();
+            g.writeStringField("name", e.name());
+            point("at", e.at());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("pairs");
+        for (Conductor.ElectrodePair p : sheet.pairs()) {
+            layout.inlineNext();
+            g.writeStartObject();
+            g.writeStringField("plus", p.plus());
+            g.writeStringField("minus", p.minus());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        if (sheet.cellM().isPresent()) {
+            g.writeNumberField("cell", sheet.cellM().getAsDouble());
+        }
+    }
+
+    private void flow(MeanFlow flow) throws IOException {
+        g.writeStartObject();
+        flow.match(new MeanFlow.Cases<Void>() {
+            @Override
+            public Void steady(MeanFlow.Steady steady) {
                 return io(() -> {
-                    g.writeNumberField("turns", loop.turns());
-                    wireSpec(loop.wire());
-                    g.writeBooleanField("open", loop.open());
-                    g.writeNumberField("load", loop.loadOhm());
-                    g.writeNumberField("temperature", loop.temperatureC());
+                    kind("steady");
+                    g.writeNumberField("velocity", steady.velocityMPerS());
+                });
+            }
+
+            @Override
+            public Void sinusoid(MeanFlow.Sinusoid s) {
+                return io(() -> {
+                    kind("sinusoid");
+                    g.writeNumberField("offset", s.offsetMPerS());
+                    g.writeNumberField("amplitude", s.amplitudeMPerS());
+                    g.writeNumberField("frequency", s.frequencyHz());
+                    g.writeNumberField("phase", s.phaseRad());
+                });
+            }
+
+            @Override
+            public Void keys(MeanFlow.Keys keys) {
+                return io(() -> {
+                    kind("keys");
+                    g.writeArrayFieldStart("keys");
+                    for (MeanFlow.Keys.Key k : keys.keys()) {
+                        layout.inlineNext();
+                        g.writeStartObject();
+                        g.writeNumberField("t", k.tS());
+                        g.writeNumberField("velocity", k.velocityMPerS());
+                        g.writeEndObject();
+                    }
+                    g.writeEndArray();
                 });
             }
         });
