@@ -107,6 +107,9 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conduc
 
         String id();
 
+        /** The body the whole conductor rides. */
+        String body();
+
         /** The outer edge as drawn, metres. */
         List<Vec2> outline();
 

@@ -4,12 +4,16 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import java.util.stream.IntStream;
+import org.kinduct.scene.Body;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.Kinematics;
 import org.kinduct.solver.SceneField;
 import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
@@ -18,6 +22,7 @@ import org.kinduct.solver.circuit.LoopInductance;
 import org.kinduct.solver.dynamics.CoupledRun;
 import org.kinduct.solver.dynamics.CoupledSimulation;
 import org.kinduct.solver.dynamics.RunMonitor;
+import org.kinduct.solver.plate.Sheets;
 
 /**
  * The one way Kinduct turns a scene into results, for the editor, the exports and the command
@@ -42,6 +47,8 @@ public final class SceneRun {
     private final Scene scene;
     private final RunRequest request;
     private final SceneSolver prescribed;
+    private final Kinematics motions;
+    private final Sheets sheets;
     private final RunMonitor monitor;
     private final boolean parallel;
     private InductanceAtStart inductance;
@@ -64,6 +71,8 @@ public final class SceneRun {
         this.monitor = Checks.nonNull(monitor, "monitor");
         this.parallel = parallel;
         this.prescribed = new SceneSolver(scene);
+        this.motions = Kinematics.prescribed(scene);
+        this.sheets = Sheets.of(scene);
     }
 
     public Scene scene() {
@@ -152,10 +161,54 @@ public final class SceneRun {
     }
 
     private RunResult coupled() {
+        requireSheetsOffFreeBodies();
         TimeSpan w = request.window();
         CoupledRun run = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE, plan().circuit())
                 .simulate(scene, w.t0S(), w.t1S(), w.dtS(), request.extraInstantsS(), monitor);
-        return new RunResult(scene, plan(), run.samples(), run.extras(), run.audit(), inductanceAtStart());
+        RunResult result = new RunResult(scene, plan(), run.samples(), run.extras(), run.audit(), inductanceAtStart());
+        if (sheets.isEmpty()) {
+            return result;
+        }
+        // Plates and channels feel the run's motion but act on nothing in it: their own field is
+        // neglected (resistive limit) and no free body carries them or a source.
+        Kinematics moved = result.kinematics();
+        return new RunResult(scene, plan(), withSheets(run.samples(), moved), withSheets(run.extras(), moved),
+                run.audit(), inductanceAtStart());
+    }
+
+    private List<Snapshot> withSheets(List<Snapshot> states, Kinematics kinematics) {
+        return (parallel ? states.parallelStream() : states.stream())
+                .map(s -> s.withSheets(sheets.at(s.tS(), kinematics))).toList();
+    }
+
+    /**
+     * Plates and channels are not coupled into free-body runs yet: refuses a run in which one rides
+     * a free body, or a free body carries a source, since their drag (or its reaction on the
+     * source) would be missing from the motion.
+     */
+    private void requireSheetsOffFreeBodies() {
+        if (sheets.isEmpty()) {
+            return;
+        }
+        for (Body body : scene.bodies()) {
+            if (!(body.motion() instanceof Motion.Free)) {
+                continue;
+            }
+            for (Conductor c : scene.conductors()) {
+                if (c instanceof Conductor.Sheet && c.body().equals(body.id())) {
+                    throw new IllegalArgumentException("'" + c.id() + "' rides free body '" + body.id()
+                            + "': plates and channels are not coupled into free-body runs yet (their drag would be"
+                            + " missing from the motion); give the body a prescribed motion");
+                }
+            }
+            for (Source source : scene.sources()) {
+                if (source.body().equals(body.id())) {
+                    throw new IllegalArgumentException("source '" + source.id() + "' rides free body '" + body.id()
+                            + "' in a scene with plates or channels: their drag on it would be missing from its motion"
+                            + " (not coupled yet); give the body a prescribed motion");
+                }
+            }
+        }
     }
 
     private RunResult instants() {
@@ -178,15 +231,14 @@ public final class SceneRun {
     private Snapshot solveInstant(double tS, InductanceAtStart start) {
         Snapshot s = prescribed.at(tS);
         List<ConductorState> states = new ArrayList<>(s.conductors().size());
-        for (int c = 0; c < s.conductors().size(); c++) {
-            ConductorState state = s.conductors().get(c);
-            Conductor conductor = scene.conductors().get(c);
+        for (ConductorState state : s.conductors()) {
+            Conductor conductor = scene.conductor(state.id()).orElseThrow();
             if (conductor instanceof Conductor.Loop loop && !loop.open()) {
                 state = state.withInductance(rigid(loop) ? start.selfH(loop.id()) : selfNow(loop, state.vertices()));
             }
             states.add(state);
         }
-        return new Snapshot(s.tS(), states, s.freeBodies());
+        return new Snapshot(s.tS(), states, s.freeBodies(), sheets.at(tS, motions));
     }
 
     private static boolean rigid(Conductor.Loop loop) {

@@ -372,15 +372,8 @@ final class SnapshotPage {
         Vec2 forceN = scales.force(st.forceN());
         double f = forceN.length();
         // A closed loop's force is a result even when it is zero; only its direction is then undefined.
-        String force = closedLoop ? Quantities.force(f) + (f > 0 ? " ∠ " + direction(forceN) : "") : NOT_APPLICABLE;
+        String force = closedLoop ? Quantities.force(f) + (f > 0 ? " ∠ " + Labels.direction(forceN) : "") : NOT_APPLICABLE;
         return new String[] {c.id(), flux, emf, agree, current, sense, force};
-    }
-
-    /** Direction of an in-plane vector as an angle from +x, counter-clockwise, in whole degrees (−179° … 180°). */
-    static String direction(Vec2 v) {
-        long deg = Math.round(Math.toDegrees(Math.atan2(v.y(), v.x())));
-        long d = deg == -180 ? 180 : deg;
-        return (d < 0 ? "−" + -d : Long.toString(d)) + "°";
     }
 
     /** Greedy word wrap to {@code width} units. */
