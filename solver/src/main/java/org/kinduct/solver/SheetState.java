@@ -13,6 +13,8 @@ import org.kinduct.scene.Vec2;
  * @param forceN force of the field on the conductor's currents, N (the drag on a moving plate)
  * @param torqueNm its z torque about {@code pivotM}, N·m
  * @param pivotM the body's pivot where it is at this instant, metres
+ * @param reachM the largest distance from the pivot to the outline, metres: |F|·reach bounds the
+ *        torque forces of that size exert, the scale a torque's rounding noise is read against
  * @param joulePowerW d·∫|J|²/σ dA, W
  * @param peakCurrentDensityAPerM2 largest cell |J|, A/m²
  * @param magneticReynolds μ0·σ·d·v (plate) or μ0·σ·w·v (channel) with the fastest speed: the
@@ -26,7 +28,8 @@ import org.kinduct.scene.Vec2;
  *        power are exact either way
  * @param streamFunction ψ for drawing the eddy currents, coarsened (see {@link StreamLattice})
  */
-public record SheetState(String id, Kind kind, Vec2 forceN, double torqueNm, Vec2 pivotM, double joulePowerW,
+public record SheetState(String id, Kind kind, Vec2 forceN, double torqueNm, Vec2 pivotM, double reachM,
+                         double joulePowerW,
                          double peakCurrentDensityAPerM2, double magneticReynolds, double cellM,
                          double meanVelocityMPerS, List<Electrode> electrodes, List<Pair> pairs,
                          boolean inducedFieldIncluded, StreamLattice streamFunction) {

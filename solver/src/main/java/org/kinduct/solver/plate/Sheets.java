@@ -97,8 +97,10 @@ public final class Sheets {
             pairs.add(new SheetState.Pair(p.plus(), p.minus(), voltage, noise, ideal,
                     ideal != 0 && Double.isFinite(ideal) ? voltage / ideal : Double.NaN));
         }
+        double reach = m.sheet().outline().stream().mapToDouble(p -> p.minus(pose.pivot()).length()).max()
+                .orElseThrow();
         return new SheetState(m.sheet().id(), m.kind(), drive.toScene(solution.forceN()), solution.torqueNm(),
-                pose.pivot().plus(pose.offset()), solution.joulePowerW(), solution.peakCurrentDensityAPerM2(),
+                pose.pivot().plus(pose.offset()), reach, solution.joulePowerW(), solution.peakCurrentDensityAPerM2(),
                 solution.magneticReynolds(), grid.cellM(), flow == null ? Double.NaN : flow.meanSpeedMPerS(),
                 electrodes, pairs, sources.inducedKnown(), Lattices.of(solution));
     }

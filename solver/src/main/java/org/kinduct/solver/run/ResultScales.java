@@ -20,7 +20,8 @@ import org.kinduct.solver.Snapshot;
  * @param currentA largest |current|, amperes
  * @param fluxWb largest |flux| or |flux linkage|, webers
  * @param forceN largest force magnitude on a conductor, plate or channel, newtons
- * @param torqueNm largest |torque| on a plate or channel, N·m
+ * @param torqueNm largest |torque| on a plate or channel, or |force| times its reach from the pivot if
+ *        larger (a torque that cancels to nothing is noise beside what its forces could exert), N·m
  * @param powerW largest Joule power of a plate or channel, watts
  */
 public record ResultScales(double emfV, double currentA, double fluxWb, double forceN, double torqueNm,
@@ -45,7 +46,7 @@ public record ResultScales(double emfV, double currentA, double fluxWb, double f
                     emf = larger(emf, pair.voltageV());
                 }
                 force = larger(force, p.forceN().length());
-                torque = larger(torque, p.torqueNm());
+                torque = larger(larger(torque, p.torqueNm()), p.forceN().length() * p.reachM());
                 power = larger(power, p.joulePowerW());
             }
         }

@@ -9,7 +9,8 @@ import org.kinduct.scene.units.Units;
  * A line chart on a {@link Surface}: one or more series of y against x, axes with round ticks,
  * a key naming each line in its colour, and an optional marker at one x (the instant a picture
  * shows). The y axis is symmetric about zero when the data change sign (an EMF that reverses
- * reads at a glance), else it starts at zero. Stateless; every surface draws the same chart.
+ * reads at a glance), else it starts at zero; it reaches {@value #HEADROOM} of the range past the
+ * data, so a flat top is not drawn on the frame. Stateless; every surface draws the same chart.
  */
 public final class LineChart {
 
@@ -24,6 +25,8 @@ public final class LineChart {
     /** Ticks wanted at least this many screen units apart: across the time axis, and up the value axis. */
     private static final double X_TICK_SPACING = 48;
     private static final double Y_TICK_SPACING = 24;
+    /** Room above (and below, when symmetric) the data, as a fraction of their range. */
+    private static final double HEADROOM = 0.06;
 
     /** One line: its name and its values at the x's (NaN leaves a gap). */
     public record Series(String label, double[] x, double[] y) {
@@ -62,6 +65,9 @@ public final class LineChart {
             yLow = -1;
             yHigh = 1;
         }
+        double room = HEADROOM * (yHigh - yLow);
+        yHigh += room;
+        yLow -= yLow < 0 ? room : 0;
         double xLow = xr[0];
         double xHigh = xr[1] > xr[0] ? xr[1] : xr[0] + 1;
         s.save();

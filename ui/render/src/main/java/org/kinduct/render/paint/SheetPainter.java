@@ -23,11 +23,11 @@ import org.kinduct.solver.run.ResultScales;
 final class SheetPainter {
 
     private static final int PLATE_FILL = 0x5CA9B0BA;
-    private static final int LIQUID_FILL = 0x5C6FB3E0;
+    private static final int LIQUID_FILL = 0x8C4FA3E0;
     private static final int DRAG = 0xFFC62828;
     private static final int FLOW = 0xFF1565C0;
     /** An eddy's centre is marked where |ψ| reaches this fraction of the conductor's largest. */
-    private static final double EDDY_FRACTION = 0.3;
+    private static final double EDDY_FRACTION = 0.2;
     private static final double EDDY_SPACING_PX = 60;
     private static final int MOST_EDDIES = 8;
     private static final double DRAG_SHORTEST_PX = 26;
@@ -145,8 +145,11 @@ final class SheetPainter {
                 continue;
             }
             SheetFrame frame = new SheetFrame(placement.pose(sheet.body()), v);
+            if (sheet instanceof Conductor.Plate) {
+                // A channel's force is spread over its liquid as a pressure drop, not a drag on a body.
+                drag(s, v, placement.place(sheet.body(), sheet.outline()), st, f.scales(), placer);
+            }
             eddyCentres(s, frame, st.streamFunction(), placer);
-            drag(s, v, placement.place(sheet.body(), sheet.outline()), st, f.scales(), placer);
             electrodes(s, v, st, placer);
         }
     }
@@ -291,7 +294,10 @@ final class SheetPainter {
         placer.reserve(new LabelPlacer.Box(x - r - 1, y - r - 1, 2 * r + 2, 2 * r + 2));
     }
 
-    /** A channel's flow: an arrow along its centreline with the mean velocity now. */
+    /**
+     * A channel's flow: an arrow along its centreline a quarter of its length from the inlet (its
+     * middle is where the electrodes and the field usually are), with the mean velocity now.
+     */
     static void drawFlow(Surface s, ViewTransform v, Frame f, Placement placement, LabelPlacer placer) {
         for (Conductor c : f.scene().conductors()) {
             if (!(c instanceof Conductor.Channel channel)) {
@@ -301,7 +307,7 @@ final class SheetPainter {
             Pose pose = placement.pose(channel.body());
             Vec2 a = pose.place(channel.start());
             Vec2 b = pose.place(channel.end());
-            Vec2 mid = a.plus(b).times(0.5);
+            Vec2 mid = a.plus(b.minus(a).times(0.25));
             Vec2 along = b.minus(a).times(Math.signum(mean) / b.minus(a).length());
             double x = v.screenX(mid.x());
             double y = v.screenY(mid.y());

@@ -10,8 +10,10 @@ import org.kinduct.solver.StreamLattice;
  * equal steps, so that every band between neighbouring lines carries the same current d·Δψ (a
  * round amount), dense where the current is strong. J = ∇ψ × ẑ circulates counter-clockwise round a
  * maximum of ψ and clockwise round a minimum, so lines of ψ &gt; 0 are drawn in one colour and
- * those of ψ &lt; 0 in another, each with an arrow in the current's direction: loops that circulate
- * in opposite senses, ahead of and behind a pole, read apart at a glance (Lenz's law).
+ * those of ψ &lt; 0 in another: loops that circulate in opposite senses, ahead of and behind a pole,
+ * read apart at a glance (Lenz's law). Every other line carries an arrow in the current's
+ * direction at its rightmost point, so that an eddy's arrows stand in a row on its right flank,
+ * pointing up for counter-clockwise and down for clockwise.
  */
 final class Streamlines {
 
@@ -48,12 +50,16 @@ final class Streamlines {
             List<double[]> lines = new ArrayList<>();
             Contours.lines(raster, k * step, (xs, ys, n) -> {
                 double[] screen = new double[2 * n];
+                int rightmost = 0;
                 for (int i = 0; i < n; i++) {
                     screen[2 * i] = frame.screenX(xs[i], ys[i]);
                     screen[2 * i + 1] = frame.screenY(xs[i], ys[i]);
+                    if (screen[2 * i] > screen[2 * rightmost]) {
+                        rightmost = i;
+                    }
                 }
                 lines.add(screen);
-                lines.add(new double[] {xs[n / 2], ys[n / 2]});
+                lines.add(new double[] {xs[rightmost], ys[rightmost]});
             });
             for (int pass = 0; pass < 2; pass++) {
                 s.stroke(pass == 0 ? Palette.HALO : colour);
@@ -70,14 +76,14 @@ final class Streamlines {
                 s.strokePath();
             }
             s.fill(colour);
-            for (int l = 0; l < lines.size(); l += 2) {
+            for (int l = 0; l < lines.size() && k % 2 != 0; l += 2) {
                 arrow(s, frame, psi, lines.get(l), lines.get(l + 1));
             }
         }
     }
 
-    /** An arrowhead at the middle of a line, along J = (∂ψ/∂y, −∂ψ/∂x) there. */
-    private static void arrow(Surface s, SheetFrame frame, StreamLattice psi, double[] screen, double[] middle) {
+    /** An arrowhead on a line at {@code at} (frame coordinates), along J = (∂ψ/∂y, −∂ψ/∂x) there. */
+    private static void arrow(Surface s, SheetFrame frame, StreamLattice psi, double[] screen, double[] at) {
         double length = 0;
         for (int i = 2; i < screen.length; i += 2) {
             length += Math.hypot(screen[i] - screen[i - 2], screen[i + 1] - screen[i - 1]);
@@ -86,14 +92,14 @@ final class Streamlines {
             return;
         }
         double[] g = new double[2];
-        SheetFrame.gradient(psi, middle[0], middle[1], g);
+        SheetFrame.gradient(psi, at[0], at[1], g);
         double[] d = new double[2];
         frame.screenDirection(g[1], -g[0], d);
         if (d[0] == 0 && d[1] == 0) {
             return;
         }
-        double x = frame.screenX(middle[0], middle[1]);
-        double y = frame.screenY(middle[0], middle[1]);
+        double x = frame.screenX(at[0], at[1]);
+        double y = frame.screenY(at[0], at[1]);
         Glyphs.arrowHead(s, x + 4.5 * d[0], y + 4.5 * d[1], d[0], d[1], 9);
     }
 
