@@ -233,8 +233,11 @@ public final class Exporter {
             }
         }
         if (!lines.isEmpty()) {
-            return new LineChart.Content("EMF and electrode voltages over the run", lines, Dimension.TIME,
-                    Dimension.VOLTAGE, snapshot().tS());
+            boolean emf = !first.conductors().isEmpty();
+            boolean pairs = lines.size() > first.conductors().size();
+            String title = emf && pairs ? "EMF and electrode voltages over the run"
+                    : emf ? "EMF over the run" : "Electrode voltages over the run";
+            return new LineChart.Content(title, lines, Dimension.TIME, Dimension.VOLTAGE, snapshot().tS());
         }
         for (SheetState sheet : first.sheets()) {
             lines.add(new LineChart.Series(sheet.id(), t, series(samples, s -> Units.withoutNoise(
