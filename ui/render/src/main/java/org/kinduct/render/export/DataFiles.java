@@ -36,8 +36,8 @@ public final class DataFiles {
     private static final List<Column> WIRE_COLUMNS = List.of(new Column("emf_V", ConductorState::emfV));
 
     /** The columns of a plate or channel. */
-    private static final List<SheetColumn> SHEET_COLUMNS = List.of(new SheetColumn("force_x_N", p -> p.forceN().x()),
-            new SheetColumn("force_y_N", p -> p.forceN().y()), new SheetColumn("torque_Nm", SheetState::torqueNm),
+    private static final List<SheetColumn> SHEET_COLUMNS = List.of(new SheetColumn("drag_x_N", p -> p.forceN().x()),
+            new SheetColumn("drag_y_N", p -> p.forceN().y()), new SheetColumn("torque_Nm", SheetState::torqueNm),
             new SheetColumn("joule_W", SheetState::joulePowerW),
             new SheetColumn("peak_current_density_A_per_m2", SheetState::peakCurrentDensityAPerM2),
             new SheetColumn("reynolds_magnetic", SheetState::magneticReynolds));
@@ -48,7 +48,7 @@ public final class DataFiles {
     /**
      * One row per time; per conductor the columns that apply to it, named {@code id.quantity_unit}:
      * wires {@code emf_V}; loops {@code flux_Wb, linkage_Wb, emf_V, emf_flux_V, current_A,
-     * force_x_N, force_y_N}; plates and channels {@code force_x_N, force_y_N, torque_Nm, joule_W,
+     * force_x_N, force_y_N}; plates and channels {@code drag_x_N, drag_y_N, torque_Nm, joule_W,
      * peak_current_density_A_per_m2, reynolds_magnetic} and per electrode pair
      * {@code id.plus-minus.voltage_V}. Empty cells for values that are not finite.
      */
