@@ -113,12 +113,16 @@ public final class ResultsTable {
         }
         if (!pairs.isEmpty()) {
             out.println();
-            String pairFmt = "%-" + idWidth + "s  %-14s %14s %10s  %-16s %s%n";
-            out.printf(Locale.ROOT, pairFmt, "plate/channel", "pair (U = φ+ − φ−)", "peak voltage", "at",
-                    "polarity at peak", "of B·w·v̄ (B at the electrodes' midpoint)");
+            int pairWidth = Math.max("electrodes".length(), pairs.stream().mapToInt(p -> p[1].length()).max().orElse(0));
+            String pairFmt = "%-" + idWidth + "s  %-" + pairWidth + "s %13s %10s  %-18s %9s%n";
+            out.printf(Locale.ROOT, pairFmt, "plate/channel", "electrodes", "peak voltage", "at", "polarity at peak",
+                    "of B·w·v̄");
             for (String[] row : pairs) {
                 out.printf(Locale.ROOT, pairFmt, (Object[]) row);
             }
+            out.println("Voltage U = φ(first) − φ(second) of each pair; B·w·v̄ of a channel with B at the electrodes'"
+                    + " midpoint (Shercliff's value for a field over the whole channel)"
+                    + (starred ? "; '*': see the note below." : "."));
         }
         out.println();
     }
