@@ -248,6 +248,7 @@ final class ConductorPainter {
         for (Conductor c : scene.conductors()) {
             reserveIfSmall(v, placement.vertices(c), placer);
         }
+        SheetPainter.reserveEddies(v, scene, snap, placement, placer);
         for (Conductor c : scene.conductors()) {
             String[] lines = calloutLines(c, snap, scales);
             if (lines == null) {
@@ -296,13 +297,20 @@ final class ConductorPainter {
         }
     }
 
-    /** Where a callout's leader points: a wire's middle, else the upper-right-most vertex of the outline. */
+    /**
+     * Where a callout's leader points: a wire's middle; the middle of a plate's or channel's top (its
+     * callout goes above it, clear of the eddies inside); a loop's upper-right-most vertex.
+     */
     private static Vec2 anchor(Conductor c, List<Vec2> pts) {
         if (c instanceof Conductor.Wire) {
             int mid = (pts.size() - 1) / 2;
             return lerp(pts.get(mid), pts.get(mid + 1), 0.5);
         }
         Vec2 best = pts.get(0);
+        if (c instanceof Conductor.Sheet) {
+            Extent box = Extent.of(pts);
+            return new Vec2((box.minX() + box.maxX()) / 2, box.maxY());
+        }
         for (Vec2 p : pts) {
             if (p.x() + p.y() > best.x() + best.y()) {
                 best = p;

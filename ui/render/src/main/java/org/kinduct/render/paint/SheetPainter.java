@@ -7,6 +7,7 @@ import org.kinduct.report.Labels;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Pose;
+import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
@@ -28,10 +29,14 @@ final class SheetPainter {
     private static final int FLOW = 0xFF1565C0;
     /** An eddy's centre is marked where |ψ| reaches this fraction of the conductor's largest. */
     private static final double EDDY_FRACTION = 0.2;
-    private static final double EDDY_SPACING_PX = 60;
+    /** Radii of an eddy's mark, screen units: the largest, and the smallest kept where eddies crowd. */
+    private static final double LARGEST_MARK_PX = 12;
+    private static final double SMALLEST_MARK_PX = 6;
     private static final int MOST_EDDIES = 8;
-    private static final double DRAG_SHORTEST_PX = 26;
-    private static final double DRAG_LONGEST_PX = 90;
+    /** Outside the streamlines' reach: |ψ| below this fraction of the largest. */
+    private static final double QUIET_FRACTION = 0.1;
+    private static final double DRAG_SHORTEST_PX = 20;
+    private static final double DRAG_LONGEST_PX = 40;
 
     private SheetPainter() {
     }
@@ -155,6 +160,38 @@ final class SheetPainter {
     }
 
     /**
+     * Keeps labels off the eddies: the screen box round the lattice nodes of each plate and channel
+     * where |ψ| reaches {@value #QUIET_FRACTION} of its largest (the quiet rest of a large plate stays
+     * open to callouts).
+     */
+    static void reserveEddies(ViewTransform v, Scene scene, Snapshot snap, Placement placement, LabelPlacer placer) {
+        for (SheetState st : snap.sheets()) {
+            Conductor c = scene.conductor(st.id()).orElseThrow();
+            SheetFrame frame = new SheetFrame(placement.pose(c.body()), v);
+            StreamLattice psi = st.streamFunction();
+            double minX = Double.POSITIVE_INFINITY;
+            double minY = Double.POSITIVE_INFINITY;
+            double maxX = Double.NEGATIVE_INFINITY;
+            double maxY = Double.NEGATIVE_INFINITY;
+            for (int j = 0; j < psi.ny(); j++) {
+                for (int i = 0; i < psi.nx(); i++) {
+                    if (psi.largestAPerM() > 0 && Math.abs(psi.psiAPerM(i, j)) >= QUIET_FRACTION * psi.largestAPerM()) {
+                        double x = frame.screenX(psi.x0M() + i * psi.stepM(), psi.y0M() + j * psi.stepM());
+                        double y = frame.screenY(psi.x0M() + i * psi.stepM(), psi.y0M() + j * psi.stepM());
+                        minX = Math.min(minX, x);
+                        minY = Math.min(minY, y);
+                        maxX = Math.max(maxX, x);
+                        maxY = Math.max(maxY, y);
+                    }
+                }
+            }
+            if (minX <= maxX) {
+                placer.reserve(new LabelPlacer.Box(minX, minY, maxX - minX, maxY - minY));
+            }
+        }
+    }
+
+    /**
      * ⊙ at the centre of each counter-clockwise eddy (a maximum of ψ) and ⊗ at each clockwise one:
      * the induced current's own field there, as inside a loop.
      */
@@ -174,16 +211,26 @@ final class SheetPainter {
         found.sort((a, b) -> Double.compare(b[0], a[0]));
         List<double[]> drawn = new ArrayList<>();
         for (double[] e : found) {
-            if (drawn.size() == MOST_EDDIES
-                    || drawn.stream().anyMatch(d -> Math.hypot(d[1] - e[1], d[2] - e[2]) < EDDY_SPACING_PX)) {
-                continue;
+            if (drawn.size() < MOST_EDDIES
+                    && drawn.stream().noneMatch(d -> Math.hypot(d[1] - e[1], d[2] - e[2]) < 2 * SMALLEST_MARK_PX)) {
+                drawn.add(e);
             }
-            drawn.add(e);
+        }
+        // Marks as large as the nearest two allow, so that close eddies keep theirs.
+        double closest = Double.POSITIVE_INFINITY;
+        for (int a = 0; a < drawn.size(); a++) {
+            for (int b = a + 1; b < drawn.size(); b++) {
+                closest = Math.min(closest, Math.hypot(drawn.get(a)[1] - drawn.get(b)[1],
+                        drawn.get(a)[2] - drawn.get(b)[2]));
+            }
+        }
+        double r = Math.max(SMALLEST_MARK_PX, Math.min(LARGEST_MARK_PX, 0.45 * closest));
+        for (double[] e : drawn) {
             boolean ccw = e[3] > 0;
             s.fill(0xE6FFFFFF);
-            s.fillOval(e[1], e[2], 12);
-            Glyphs.fieldSymbol(s, e[1], e[2], 9, ccw, ccw ? Streamlines.CCW : Streamlines.CW);
-            placer.reserve(new LabelPlacer.Box(e[1] - 13, e[2] - 13, 26, 26));
+            s.fillOval(e[1], e[2], r);
+            Glyphs.fieldSymbol(s, e[1], e[2], 0.75 * r, ccw, ccw ? Streamlines.CCW : Streamlines.CW);
+            placer.reserve(new LabelPlacer.Box(e[1] - r - 1, e[2] - r - 1, 2 * r + 2, 2 * r + 2));
         }
     }
 
@@ -202,9 +249,11 @@ final class SheetPainter {
     }
 
     /**
-     * The force on the conductor, along its line of action (the points r with (r − p) × F = τ) where
-     * it passes nearest the outline's centroid, or from the centroid when that lies outside the
-     * outline's box; length grows with |F| against the run's largest force.
+     * The force on the conductor as an arrow pulling at it from outside: along its line of action
+     * (the points r with (r − p) × F = τ) where it passes nearest the outline's centroid (the
+     * centroid's own line when that misses the outline's box), starting where that line leaves the
+     * box in the force's direction, clear of the eddies inside; its length grows with |F| against
+     * the run's largest force.
      */
     private static void drag(Surface s, ViewTransform v, List<Vec2> outline, SheetState st, ResultScales scales,
                              LabelPlacer placer) {
@@ -220,11 +269,17 @@ final class SheetPainter {
         if (at.x() < box.minX() || at.x() > box.maxX() || at.y() < box.minY() || at.y() > box.maxY()) {
             at = centroid;
         }
+        Vec2 along = force.times(1 / f);
+        double exit = Math.min(along.x() > 0 ? (box.maxX() - at.x()) / along.x()
+                : along.x() < 0 ? (box.minX() - at.x()) / along.x() : Double.POSITIVE_INFINITY,
+                along.y() > 0 ? (box.maxY() - at.y()) / along.y()
+                        : along.y() < 0 ? (box.minY() - at.y()) / along.y() : Double.POSITIVE_INFINITY);
+        Vec2 edge = at.plus(along.times(exit));
         double length = DRAG_SHORTEST_PX + (DRAG_LONGEST_PX - DRAG_SHORTEST_PX) * Math.sqrt(f / scales.forceN());
-        double dx = force.x() / f;
-        double dy = -force.y() / f;
-        double x = v.screenX(at.x());
-        double y = v.screenY(at.y());
+        double dx = along.x();
+        double dy = -along.y();
+        double x = v.screenX(edge.x()) + 6 * dx;
+        double y = v.screenY(edge.y()) + 6 * dy;
         for (int pass = 0; pass < 2; pass++) {
             s.stroke(pass == 0 ? Palette.HALO : DRAG);
             s.lineWidth(pass == 0 ? 7 : 3.5);
@@ -236,12 +291,16 @@ final class SheetPainter {
         }
         s.fill(DRAG);
         Glyphs.arrowHead(s, x + dx * length, y + dy * length, dx, dy, 14);
-        s.fillOval(x, y, 3.5);
         placer.reserve(new LabelPlacer.Box(Math.min(x, x + dx * length) - 8, Math.min(y, y + dy * length) - 8,
                 Math.abs(dx) * length + 16, Math.abs(dy) * length + 16));
-        LabelPlacer.Box label = placer.placeAround(x + dx * (length + 14), y + dy * (length + 14),
-                s.textWidth("F", ScenePainter.FONT, true) + 6, ScenePainter.FONT + 4);
-        s.text("F", label.centerX(), label.centerY(), ScenePainter.FONT, true, Surface.Anchor.CENTER);
+        String text = "F " + Quantities.force(f);
+        double w = s.textWidth(text, ScenePainter.LABEL_FONT, true) + 8;
+        LabelPlacer.Box label = placer.placeAround(x + dx * length / 2 - dy * 14, y + dy * length / 2 + dx * 14, w,
+                ScenePainter.LABEL_FONT + 5);
+        s.fill(Palette.LABEL_BOX);
+        s.fillRect(label.x(), label.y(), label.w(), label.h());
+        s.fill(DRAG);
+        s.text(text, label.centerX(), label.centerY(), ScenePainter.LABEL_FONT, true, Surface.Anchor.CENTER);
     }
 
     /**
