@@ -111,6 +111,27 @@ class ChannelResultsTest {
     }
 
     @Test
+    void pulsatingFlowReadsAtEachInstantWhatSteadyFlowAtThatMeanVelocityReads() {
+        // Resistive limit, quasi-static: the voltage follows v̄(t) = 1 + 0.5·sin(2π·2t) m/s at once
+        // (the liquid's own field, which would make it lag, is what the limit neglects).
+        double length = 8 * WIDTH_M;
+        Conductor.Channel steady = (Conductor.Channel) channel(Conductor.Channel.Profile.LAMINAR, length,
+                2 * WIDTH_M, 1, OptionalDouble.empty()).conductor("duct").orElseThrow();
+        Conductor.Channel pulsing = new Conductor.Channel("duct", Body.FIXED, steady.start(), steady.end(),
+                steady.widthM(), steady.depthM(), steady.sigmaSPerM(), steady.profile(),
+                new MeanFlow.Sinusoid(1, 0.5, 2, 0), steady.electrodes(), steady.pairs(), steady.cellM());
+        Scene base = channel(Conductor.Channel.Profile.LAMINAR, length, 2 * WIDTH_M, 1, OptionalDouble.empty());
+        double perMeanVelocity = PlateScenes.pair(PlateScenes.sheet(base, 0, "duct"), "right").voltageV();
+        for (double t : new double[] {0.05, 0.125, 0.3}) {
+            double mean = 1 + 0.5 * Math.sin(2 * Math.PI * 2 * t);
+            SheetState duct = PlateScenes.sheet(base.withConductors(List.of(pulsing)), t, "duct");
+            assertEquals(mean, duct.meanVelocityMPerS(), 1e-15);
+            assertEquals(perMeanVelocity * mean, PlateScenes.pair(duct, "right").voltageV(),
+                    1e-9 * perMeanVelocity * mean, "t = " + t);
+        }
+    }
+
+    @Test
     void reversingTheFlowReversesTheVoltageAndItsPositiveElectrode() {
         Scene forward = channel(Conductor.Channel.Profile.TURBULENT, 8 * WIDTH_M, 2 * WIDTH_M, MEAN_M_PER_S,
                 OptionalDouble.empty());

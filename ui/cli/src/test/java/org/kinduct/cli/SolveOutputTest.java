@@ -108,6 +108,37 @@ class SolveOutputTest {
     }
 
     @Test
+    void tableGivesEachPlatesDragAndHeatAndEachPairsPositiveElectrode() {
+        Result brake = CliRun.run("solve", "--demo", "plate-brake");
+        assertEquals(KinductMain.OK, brake.code(), brake.err());
+        // The demo's answer: 3.03 N and 1.51 W solid, 2.35 N and 1.18 W slotted (heat = drag × 0.5 m/s).
+        assertTrue(brake.out().matches("(?s).*solid-plate +plate +3\\.03 N .* 1\\.51 W .*"), brake.out());
+        assertTrue(brake.out().matches("(?s).*slotted-plate +plate +2\\.35 N .* 1\\.18 W .*"), brake.out());
+        Result flow = CliRun.run("solve", "--demo", "flow-electrodes");
+        assertTrue(flow.out().matches("(?s).*duct +upper − lower +14\\.9 mV .*\\+ at upper +84\\.6 %.*"), flow.out());
+    }
+
+    @Test
+    void aFastThickCopperPlateIsFlaggedBeyondTheResistiveLimit() throws IOException {
+        // 5 mm copper at 5 m/s: Rm = μ0·σ·d·v = 1.26e-6 · 5.8e7 · 0.005 · 5 = 1.8, far above 0.1.
+        Path scene = Files.writeString(dir.resolve("fast.json"), """
+                {"format": "kinduct-scene", "version": 1, "name": "fast plate", "time": {"t0": 0, "t1": "1 ms", "dt": "1 ms"},
+                 "bodies": [{"id": "cart", "motion": {"kind": "glide", "velocity": ["5 m/s", 0]}}],
+                 "sources": [{"kind": "block-magnet", "id": "m", "center": [0, 0], "size": ["10 mm", "10 mm", "5 mm"],
+                   "standoff": "2 mm", "remanence": "1.2 T"}],
+                 "conductors": [{"kind": "plate", "id": "disc", "body": "cart", "thickness": "5 mm", "material": "copper",
+                   "outline": [["-30 mm", "-20 mm"], ["30 mm", "-20 mm"], ["30 mm", "20 mm"], ["-30 mm", "20 mm"]]}]}
+                """);
+        Result table = CliRun.run("solve", scene.toString());
+        assertEquals(KinductMain.OK, table.code(), table.err());
+        assertTrue(table.out().contains("Rm 1.8 > 0.1: beyond the resistive limit"), table.out());
+        Result json = CliRun.run("solve", scene.toString(), "--format", "json");
+        JsonNode plate = new ObjectMapper().readTree(json.out()).get("plates").get(0);
+        assertFalse(plate.get("resistive_limit").asBoolean());
+        assertEquals(1.25663706212e-6 * 5.8e7 * 0.005 * 5, plate.get("reynolds_magnetic").asDouble(), 1e-12);
+    }
+
+    @Test
     void csvHeaderCarriesUnits() {
         Result r = CliRun.run("solve", "--demo", "drive-sense-wire", "--format", "csv", "--at", "0 ms");
         assertEquals(KinductMain.OK, r.code(), r.err());
