@@ -1,12 +1,17 @@
 package org.kinduct.scene;
 
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.OptionalDouble;
+import java.util.Set;
 
 /**
  * A conductor in the drawing plane. Vertices are as drawn (t = 0); each vertex rides the
- * conductor's body unless it names its own (a bar sliding on fixed rails).
+ * conductor's body unless it names its own (a bar sliding on fixed rails). Wires and loops are
+ * thin filaments; plates and channels ({@link Sheet}) are extended conductors that carry eddy
+ * currents, and their vertices are their outlines.
  */
-public sealed interface Conductor permits Conductor.Wire, Conductor.Loop {
+public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conductor.Plate, Conductor.Channel {
 
     String id();
 
@@ -25,6 +30,10 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop {
         R wire(Wire wire);
 
         R loop(Loop loop);
+
+        R plate(Plate plate);
+
+        R channel(Channel channel);
     }
 
     /**
@@ -103,6 +112,242 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop {
             if (vertices.get(i).at().equals(vertices.get((i + 1) % n).at())) {
                 throw new IllegalArgumentException("vertex " + (i + 1) % n + " repeats vertex " + i + " at "
                         + vertices.get(i).at().x() + ", " + vertices.get(i).at().y() + " m");
+            }
+        }
+    }
+
+    /**
+     * What plates and channels share: a thin conductor of uniform thickness and conductivity whose
+     * outline (and holes) ride one body, with electrodes on its edge. Eddy currents are solved on
+     * a grid of square cells ({@code cellM}, or chosen from the shape and the field when absent).
+     */
+    sealed interface Sheet permits Plate, Channel {
+
+        /** An electrode must lie on the edge to within this fraction of the conductor's size. */
+        double ON_EDGE = 1e-6;
+
+        String id();
+
+        /** The body the whole conductor rides. */
+        String body();
+
+        /** The outer edge as drawn, metres. */
+        List<Vec2> outline();
+
+        /** Insulating holes as drawn, metres; none for a channel. */
+        List<List<Vec2>> holes();
+
+        /** Thickness of a plate, depth of a channel's liquid, metres. */
+        double thicknessM();
+
+        double sigmaSPerM();
+
+        List<Electrode> electrodes();
+
+        List<ElectrodePair> pairs();
+
+        /** Side of the grid's square cells, metres, when the file sets it. */
+        OptionalDouble cellM();
+    }
+
+    /**
+     * A thin plate of uniform thickness, with optional holes and slots, riding its body rigidly.
+     *
+     * @param outline simple polygon, at least 3 points, as drawn
+     * @param holes simple polygons strictly inside the outline and apart from each other
+     * @param thicknessM d
+     * @param electrodes points on the outline or a hole's edge whose potentials are reported
+     * @param pairs electrode pairs whose voltages are reported
+     * @param cellM grid cell size, or empty for the automatic choice
+     */
+    record Plate(String id, String body, List<Vec2> outline, List<List<Vec2>> holes, double thicknessM,
+                 Conductivity conductivity, List<Electrode> electrodes, List<ElectrodePair> pairs,
+                 OptionalDouble cellM) implements Conductor, Sheet {
+        public Plate {
+            Checks.id(id, "Conductor");
+            Checks.id(body, "Body");
+            outline = Polygons.requireSimple(outline, "plate outline");
+            holes = Polygons.requireHoles(outline, holes);
+            Checks.positive(thicknessM, "thickness");
+            Checks.nonNull(conductivity, "conductivity");
+            electrodes = List.copyOf(Checks.nonNull(electrodes, "electrodes"));
+            pairs = List.copyOf(Checks.nonNull(pairs, "pairs"));
+            cellM = checkCell(cellM);
+            List<Vec2> shape = outline;
+            List<List<Vec2>> cut = holes;
+            checkElectrodes(electrodes, pairs, e -> onEdge(shape, cut, e.at()), "the plate's edge (outline or a hole)");
+        }
+
+        /** Whether {@code p} lies on the outline or a hole's edge, to within {@link Sheet#ON_EDGE} of the outline's size. */
+        public static boolean onEdge(List<Vec2> outline, List<List<Vec2>> holes, Vec2 p) {
+            double tolerance = ON_EDGE * Polygons.extentM(outline);
+            if (Polygons.nearestEdgePoint(outline, p).minus(p).length() <= tolerance) {
+                return true;
+            }
+            return holes.stream().anyMatch(h -> Polygons.nearestEdgePoint(h, p).minus(p).length() <= tolerance);
+        }
+
+        @Override
+        public List<Vertex> vertices() {
+            return outline.stream().map(p -> new Vertex(p, null)).toList();
+        }
+
+        @Override
+        public double sigmaSPerM() {
+            return conductivity.sigmaSPerM();
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.plate(this);
+        }
+    }
+
+    /**
+     * Conductive liquid flowing in a straight channel with insulating walls: centreline from
+     * {@code start} to {@code end} as drawn, the flow along it (relative to the walls, which ride
+     * the body) with mean velocity {@code flow} and a {@link Profile} across the width. The
+     * channel's ends are cut through a longer flow and conduct no current out of it.
+     *
+     * @param electrodes points on the two walls
+     */
+    record Channel(String id, String body, Vec2 start, Vec2 end, double widthM, double depthM, double sigmaSPerM,
+                   Profile profile, MeanFlow flow, List<Electrode> electrodes, List<ElectrodePair> pairs,
+                   OptionalDouble cellM) implements Conductor, Sheet {
+        public Channel {
+            Checks.id(id, "Conductor");
+            Checks.id(body, "Body");
+            Checks.nonNull(start, "start");
+            Checks.nonNull(end, "end");
+            if (start.equals(end)) {
+                throw new IllegalArgumentException("a channel's centreline needs length; start and end are both at "
+                        + start);
+            }
+            Checks.positive(widthM, "width");
+            Checks.positive(depthM, "depth");
+            Checks.positive(sigmaSPerM, "conductivity");
+            Checks.nonNull(profile, "profile");
+            Checks.nonNull(flow, "flow");
+            electrodes = List.copyOf(Checks.nonNull(electrodes, "electrodes"));
+            pairs = List.copyOf(Checks.nonNull(pairs, "pairs"));
+            cellM = checkCell(cellM);
+            Vec2 from = start;
+            Vec2 to = end;
+            double w = widthM;
+            checkElectrodes(electrodes, pairs, e -> onWall(from, to, w, e.at()), "a wall of the channel");
+        }
+
+        /**
+         * Whether {@code p} lies on a wall of the channel from {@code start} to {@code end}, {@code widthM}
+         * wide, to within {@link Sheet#ON_EDGE} of its size.
+         */
+        public static boolean onWall(Vec2 start, Vec2 end, double widthM, Vec2 p) {
+            Vec2 along = end.minus(start);
+            double length = along.length();
+            Vec2 t = along.times(1 / length);
+            double tolerance = ON_EDGE * Math.max(length, widthM);
+            Vec2 r = p.minus(start);
+            double s = r.dot(t);
+            return Math.abs(Math.abs(t.cross(r)) - widthM / 2) <= tolerance && s >= -tolerance
+                    && s <= length + tolerance;
+        }
+
+        /** Velocity profiles across the width. */
+        public enum Profile {
+            /** Uniform across the width. */
+            PLUG,
+            /** Parabolic, plane Poiseuille flow between the walls. */
+            LAMINAR,
+            /** One-seventh power law from each wall. */
+            TURBULENT
+        }
+
+        /** The unit vector from start to end. */
+        public Vec2 direction() {
+            Vec2 along = end.minus(start);
+            return along.times(1 / along.length());
+        }
+
+        /** The liquid's plan, counter-clockwise from the start's right-hand corner. */
+        @Override
+        public List<Vec2> outline() {
+            Vec2 side = direction().perp().times(widthM / 2);
+            return List.of(start.minus(side), end.minus(side), end.plus(side), start.plus(side));
+        }
+
+        @Override
+        public List<List<Vec2>> holes() {
+            return List.of();
+        }
+
+        @Override
+        public double thicknessM() {
+            return depthM;
+        }
+
+        @Override
+        public List<Vertex> vertices() {
+            return outline().stream().map(p -> new Vertex(p, null)).toList();
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.channel(this);
+        }
+    }
+
+    /**
+     * A named point on a plate's or channel's edge where its potential is read; it draws no
+     * current (an ideal voltmeter's contact).
+     */
+    record Electrode(String name, Vec2 at) {
+        public Electrode {
+            Checks.id(name, "Electrode");
+            Checks.nonNull(at, "electrode position");
+        }
+    }
+
+    /**
+     * A voltmeter across two electrodes: its voltage is φ({@code plus}) − φ({@code minus}), so a
+     * positive voltage makes {@code plus} the + electrode.
+     */
+    record ElectrodePair(String plus, String minus) {
+        public ElectrodePair {
+            Checks.id(plus, "Electrode");
+            Checks.id(minus, "Electrode");
+            if (plus.equals(minus)) {
+                throw new IllegalArgumentException("a pair needs two different electrodes, got '" + plus + "' twice");
+            }
+        }
+    }
+
+    private static OptionalDouble checkCell(OptionalDouble cellM) {
+        Checks.nonNull(cellM, "cell size");
+        cellM.ifPresent(h -> Checks.positive(h, "cell size"));
+        return cellM;
+    }
+
+    /** Electrode names are unique, each lies where {@code placed} accepts it ({@code where}), pairs name known electrodes. */
+    private static void checkElectrodes(List<Electrode> electrodes, List<ElectrodePair> pairs,
+                                        java.util.function.Predicate<Electrode> placed, String where) {
+        Set<String> names = new LinkedHashSet<>();
+        for (Electrode e : electrodes) {
+            Checks.nonNull(e, "electrode");
+            if (!names.add(e.name())) {
+                throw new IllegalArgumentException("electrode name '" + e.name() + "' is used twice");
+            }
+            if (!placed.test(e)) {
+                throw new IllegalArgumentException("electrode '" + e.name() + "' at (" + e.at().x() + ", " + e.at().y()
+                        + ") m is not on " + where);
+            }
+        }
+        for (ElectrodePair p : pairs) {
+            Checks.nonNull(p, "pair");
+            for (String name : List.of(p.plus(), p.minus())) {
+                if (!names.contains(name)) {
+                    throw new IllegalArgumentException("pair " + p.plus() + "/" + p.minus() + " names electrode '"
+                            + name + "', which does not exist; the electrodes are " + names);
+                }
             }
         }
     }

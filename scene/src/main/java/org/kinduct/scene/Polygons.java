@@ -48,6 +48,91 @@ public final class Polygons {
         return twice / 2;
     }
 
+    /**
+     * Checks holes of a plate: each a simple polygon with area lying strictly inside {@code outline}
+     * (no vertex outside or on it, no edge meeting it), and apart from the other holes (no edges
+     * meeting, neither inside another). Returns copies.
+     */
+    public static List<List<Vec2>> requireHoles(List<Vec2> outline, List<List<Vec2>> holes) {
+        List<List<Vec2>> copies = new java.util.ArrayList<>();
+        for (int h = 0; h < Checks.nonNull(holes, "holes").size(); h++) {
+            List<Vec2> hole = requireSimple(holes.get(h), "hole " + h);
+            for (Vec2 p : hole) {
+                if (!contains(outline, p)) {
+                    throw new IllegalArgumentException("hole " + h + " must lie inside the outline; its vertex " + p
+                            + " does not");
+                }
+            }
+            requireApart(hole, outline, "hole " + h + " touches the outline");
+            for (int g = 0; g < copies.size(); g++) {
+                List<Vec2> other = copies.get(g);
+                requireApart(hole, other, "holes " + g + " and " + h + " touch");
+                if (contains(other, hole.get(0)) || contains(hole, other.get(0))) {
+                    throw new IllegalArgumentException("holes " + g + " and " + h + " must not overlap or nest");
+                }
+            }
+            copies.add(hole);
+        }
+        return List.copyOf(copies);
+    }
+
+    private static void requireApart(List<Vec2> a, List<Vec2> b, String message) {
+        for (int i = 0; i < a.size(); i++) {
+            for (int j = 0; j < b.size(); j++) {
+                if (segmentsCross(a.get(i), a.get((i + 1) % a.size()), b.get(j), b.get((j + 1) % b.size()))) {
+                    throw new IllegalArgumentException(message + ": edge " + i + " meets edge " + j);
+                }
+            }
+        }
+    }
+
+    /** True when {@code p} lies inside the closed polygon {@code loop} (even–odd rule; points on an edge may go either way). */
+    public static boolean contains(List<Vec2> loop, Vec2 p) {
+        boolean inside = false;
+        for (int i = 0, n = loop.size(), j = n - 1; i < n; j = i++) {
+            Vec2 a = loop.get(i);
+            Vec2 b = loop.get(j);
+            if ((a.y() > p.y()) != (b.y() > p.y())
+                    && p.x() < (b.x() - a.x()) * (p.y() - a.y()) / (b.y() - a.y()) + a.x()) {
+                inside = !inside;
+            }
+        }
+        return inside;
+    }
+
+    /** The point of the closed polygon's edges nearest to {@code p}. */
+    public static Vec2 nearestEdgePoint(List<Vec2> loop, Vec2 p) {
+        Vec2 best = loop.get(0);
+        double bestDistance = Double.POSITIVE_INFINITY;
+        for (int i = 0, n = loop.size(); i < n; i++) {
+            Vec2 a = loop.get(i);
+            Vec2 ab = loop.get((i + 1) % n).minus(a);
+            double s = Math.max(0, Math.min(1, p.minus(a).dot(ab) / ab.dot(ab)));
+            Vec2 q = a.plus(ab.times(s));
+            double d = q.minus(p).length();
+            if (d < bestDistance) {
+                best = q;
+                bestDistance = d;
+            }
+        }
+        return best;
+    }
+
+    /** Largest side of the axis-parallel box around {@code pts}, metres. */
+    public static double extentM(List<Vec2> pts) {
+        double minX = Double.POSITIVE_INFINITY;
+        double minY = Double.POSITIVE_INFINITY;
+        double maxX = Double.NEGATIVE_INFINITY;
+        double maxY = Double.NEGATIVE_INFINITY;
+        for (Vec2 p : pts) {
+            minX = Math.min(minX, p.x());
+            minY = Math.min(minY, p.y());
+            maxX = Math.max(maxX, p.x());
+            maxY = Math.max(maxY, p.y());
+        }
+        return Math.max(maxX - minX, maxY - minY);
+    }
+
     /** True when the closed segments properly cross or touch (collinear overlap counts). */
     static boolean segmentsCross(Vec2 a, Vec2 b, Vec2 c, Vec2 d) {
         double d1 = orient(c, d, a);

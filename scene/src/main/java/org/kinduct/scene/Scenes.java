@@ -17,7 +17,8 @@ public final class Scenes {
 
     /**
      * Every drawn position of the scene, in no particular order: body pivots, spring anchors, patch
-     * and coil outlines, magnet and coil centres, conductor vertices. Directions, offsets and
+     * and coil outlines, magnet and coil centres, conductor vertices (a plate's or channel's outline
+     * corners; holes and electrodes lie within). Directions, offsets and
      * velocities are not positions. (Read where they are, without rebuilding the scene as
      * {@link #mapPositions} does, whose checks cost time on large outlines.)
      */
@@ -82,7 +83,7 @@ public final class Scenes {
             }
         }
         List<Source> sources = scene.sources().stream().map(s -> source(s, f)).toList();
-        List<Conductor> conductors = scene.conductors().stream().map(c -> conductor(c, f)).toList();
+        List<Conductor> conductors = scene.conductors().stream().map(c -> mapPositions(c, f)).toList();
         return new Scene(scene.name(), scene.description(), bodies, sources, conductors, scene.time(),
                 scene.gravity());
     }
@@ -139,7 +140,8 @@ public final class Scenes {
         });
     }
 
-    private static Conductor conductor(Conductor c, UnaryOperator<Vec2> f) {
+    /** {@code c} with {@code f} applied to every drawn position: vertices, a plate's holes, electrodes. */
+    public static Conductor mapPositions(Conductor c, UnaryOperator<Vec2> f) {
         List<Conductor.Vertex> vertices = c.vertices().stream()
                 .map(v -> new Conductor.Vertex(f.apply(v.at()), v.body())).toList();
         return c.match(new Conductor.Cases<>() {
@@ -153,6 +155,24 @@ public final class Scenes {
                 return new Conductor.Loop(l.id(), l.body(), vertices, l.turns(), l.wire(), l.open(), l.loadOhm(),
                         l.temperatureC());
             }
+
+            @Override
+            public Conductor plate(Conductor.Plate p) {
+                return new Conductor.Plate(p.id(), p.body(), p.outline().stream().map(f).toList(),
+                        p.holes().stream().map(h -> h.stream().map(f).toList()).toList(), p.thicknessM(),
+                        p.conductivity(), electrodes(p, f), p.pairs(), p.cellM());
+            }
+
+            @Override
+            public Conductor channel(Conductor.Channel ch) {
+                return new Conductor.Channel(ch.id(), ch.body(), f.apply(ch.start()), f.apply(ch.end()), ch.widthM(),
+                        ch.depthM(), ch.sigmaSPerM(), ch.profile(), ch.flow(), electrodes(ch, f), ch.pairs(),
+                        ch.cellM());
+            }
         });
+    }
+
+    private static List<Conductor.Electrode> electrodes(Conductor.Sheet sheet, UnaryOperator<Vec2> f) {
+        return sheet.electrodes().stream().map(e -> new Conductor.Electrode(e.name(), f.apply(e.at()))).toList();
     }
 }

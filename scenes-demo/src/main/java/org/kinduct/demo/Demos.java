@@ -22,6 +22,7 @@ public final class Demos {
             "pcb-harvester",
             "frame-brake",
             "flow-electrodes",
+            "plate-brake",
             "gradiometer",
             "spinning-coil-generator",
             "rail-sled",

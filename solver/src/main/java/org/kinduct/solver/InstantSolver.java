@@ -117,22 +117,35 @@ final class InstantSolver {
         return a.offset().equals(b.offset()) && a.angleRad() == b.angleRad();
     }
 
+    /** Wires and loops; plates and channels are solved on their grids ({@code org.kinduct.solver.plate}). */
     Snapshot solve() {
         List<Conductor> conductors = index.scene().conductors();
         List<ConductorState> states = new ArrayList<>(conductors.size());
         for (int c = 0; c < conductors.size(); c++) {
             int index = c;
-            states.add(conductors.get(c).match(new Conductor.Cases<>() {
+            conductors.get(c).match(new Conductor.Cases<Void>() {
                 @Override
-                public ConductorState wire(Conductor.Wire wire) {
-                    return InstantSolver.this.wire(index, wire);
+                public Void wire(Conductor.Wire wire) {
+                    states.add(InstantSolver.this.wire(index, wire));
+                    return null;
                 }
 
                 @Override
-                public ConductorState loop(Conductor.Loop loop) {
-                    return InstantSolver.this.loop(index, loop);
+                public Void loop(Conductor.Loop loop) {
+                    states.add(InstantSolver.this.loop(index, loop));
+                    return null;
                 }
-            }));
+
+                @Override
+                public Void plate(Conductor.Plate plate) {
+                    return null;
+                }
+
+                @Override
+                public Void channel(Conductor.Channel channel) {
+                    return null;
+                }
+            });
         }
         return new Snapshot(tS, states);
     }

@@ -7,20 +7,33 @@ import org.kinduct.scene.Pose;
 import org.kinduct.scene.Vec2;
 
 /**
- * The solved state of a scene at time {@code tS}, seconds: every conductor, and the pose of
- * every free body (bodies that move under forces, as the run integrated them; empty when every
- * body follows a prescribed motion, whose pose at tS its motion gives).
+ * The solved state of a scene at time {@code tS}, seconds: every wire and loop, every plate and
+ * channel ({@code sheets}, in scene order), and the pose of every free body (bodies that move
+ * under forces, as the run integrated them; empty when every body follows a prescribed motion,
+ * whose pose at tS its motion gives).
  */
-public record Snapshot(double tS, List<ConductorState> conductors, Map<String, Pose> freeBodies) {
+public record Snapshot(double tS, List<ConductorState> conductors, Map<String, Pose> freeBodies,
+                       List<SheetState> sheets) {
 
     public Snapshot {
         conductors = List.copyOf(conductors);
         freeBodies = Map.copyOf(freeBodies);
+        sheets = List.copyOf(sheets);
     }
 
-    /** A state without free bodies. */
+    /** A state without plates or channels. */
+    public Snapshot(double tS, List<ConductorState> conductors, Map<String, Pose> freeBodies) {
+        this(tS, conductors, freeBodies, List.of());
+    }
+
+    /** A state without free bodies, plates or channels. */
     public Snapshot(double tS, List<ConductorState> conductors) {
         this(tS, conductors, Map.of());
+    }
+
+    /** This state with the plates and channels solved at its instant. */
+    public Snapshot withSheets(List<SheetState> solved) {
+        return new Snapshot(tS, conductors, freeBodies, solved);
     }
 
     /**
@@ -46,5 +59,9 @@ public record Snapshot(double tS, List<ConductorState> conductors, Map<String, P
 
     public Optional<ConductorState> conductor(String id) {
         return conductors.stream().filter(c -> c.id().equals(id)).findFirst();
+    }
+
+    public Optional<SheetState> sheet(String id) {
+        return sheets.stream().filter(c -> c.id().equals(id)).findFirst();
     }
 }

@@ -18,9 +18,9 @@ import org.kinduct.solver.field.PhysicalConstants;
  * smaller of its plane distance and size, the field of a straight filament at distance d
  * (Biot–Savart; Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §5.2.2).
  */
-record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT, boolean jumps) {
+public record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT, boolean jumps) {
 
-    static SourceReach of(Source source) {
+    public static SourceReach of(Source source) {
         return source.match(new Source.Cases<>() {
             @Override
             public SourceReach patch(Source.FieldPatch patch) {

@@ -4,6 +4,7 @@ import static java.util.Map.entry;
 import static org.kinduct.scene.units.Dimension.ACCELERATION;
 import static org.kinduct.scene.units.Dimension.ANGLE;
 import static org.kinduct.scene.units.Dimension.ANGULAR_SPEED;
+import static org.kinduct.scene.units.Dimension.CONDUCTIVITY;
 import static org.kinduct.scene.units.Dimension.CURRENT;
 import static org.kinduct.scene.units.Dimension.DAMPING;
 import static org.kinduct.scene.units.Dimension.FLUX_DENSITY;
@@ -19,9 +20,13 @@ import static org.kinduct.scene.units.Dimension.TIME;
 import static org.kinduct.scene.units.Dimension.VELOCITY;
 
 import java.util.List;
+import java.util.OptionalDouble;
 import java.util.function.Function;
+import java.util.function.Predicate;
 import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
@@ -70,7 +75,14 @@ final class SceneReader {
 
     private final Choices<Function<Fields, Conductor>> conductors = Choices.of(
             entry("wire", this::wire),
-            entry("loop", this::loop));
+            entry("loop", this::loop),
+            entry("plate", this::plate),
+            entry("channel", this::channel));
+
+    private final Choices<Function<Fields, MeanFlow>> flows = Choices.of(
+            entry("steady", this::steadyFlow),
+            entry("sinusoid", this::sinusoidFlow),
+            entry("keys", this::keyedFlow));
 
     SceneReader(ReadContext ctx) {
         this.ctx = ctx;
@@ -347,6 +359,129 @@ final class SceneReader {
             }
             return loop;
         });
+    }
+
+    private Conductor plate(Fields f) {
+        String id = f.req("id", ctx.objectDeclaration("Conductor"));
+        String body = f.opt("body", ctx.bodyReference(), Body.FIXED);
+        List<Vec2> outline = f.req("outline", ctx.list(ctx.point(LENGTH)));
+        List<List<Vec2>> holes = f.opt("holes", ctx.list(ctx.list(ctx.point(LENGTH))), List.of());
+        Double thickness = f.req("thickness", ctx.quantity(LENGTH));
+        if (f.has("material") == f.has("conductivity")) {
+            f.problem("a plate needs either \"material\" (copper, aluminium) or \"conductivity\", not "
+                    + (f.has("material") ? "both" : "neither"));
+        } else if (f.has("conductivity") && f.has("temperature")) {
+            f.problem("\"temperature\" sets a named material's conductivity; a given \"conductivity\" is taken as"
+                    + " it is");
+        }
+        Material material = f.opt("material", ctx.choice(Vocabulary.MATERIAL), null);
+        Double temperature = f.opt("temperature", ctx.quantity(TEMPERATURE), DEFAULT_TEMPERATURE_C);
+        Double sigma = f.opt("conductivity", ctx.quantity(CONDUCTIVITY), null);
+        Predicate<Vec2> onEdge = outline == null || holes == null ? p -> true
+                : p -> Conductor.Plate.onEdge(outline, holes, p);
+        List<Conductor.Electrode> electrodes = f.opt("electrodes", ctx.list(electrode(onEdge,
+                "the plate's edge (outline or a hole)")), List.of());
+        List<Conductor.ElectrodePair> pairs = f.opt("pairs", ctx.list(pair(electrodes)), List.of());
+        OptionalDouble cell = cell(f);
+        return f.build(() -> new Conductor.Plate(id, body, outline, holes, thickness,
+                material != null ? new Conductivity.OfMaterial(material, temperature) : new Conductivity.Given(sigma),
+                electrodes, pairs, cell));
+    }
+
+    private Conductor channel(Fields f) {
+        String id = f.req("id", ctx.objectDeclaration("Conductor"));
+        String body = f.opt("body", ctx.bodyReference(), Body.FIXED);
+        Vec2 start = f.req("start", ctx.point(LENGTH));
+        Vec2 end = f.req("end", ctx.point(LENGTH));
+        Double width = f.req("width", ctx.quantity(LENGTH));
+        Double depth = f.req("depth", ctx.quantity(LENGTH));
+        Double sigma = f.req("conductivity", ctx.quantity(CONDUCTIVITY));
+        Conductor.Channel.Profile profile = f.req("profile", ctx.choice(Vocabulary.PROFILE));
+        MeanFlow flow = f.req("flow", kinded(flows, "a flow"));
+        Predicate<Vec2> onWall = start == null || end == null || width == null || start.equals(end) || !(width > 0)
+                ? p -> true : p -> Conductor.Channel.onWall(start, end, width, p);
+        List<Conductor.Electrode> electrodes = f.opt("electrodes", ctx.list(electrode(onWall,
+                "a wall of the channel")), List.of());
+        List<Conductor.ElectrodePair> pairs = f.opt("pairs", ctx.list(pair(electrodes)), List.of());
+        OptionalDouble cell = cell(f);
+        return f.build(() -> new Conductor.Channel(id, body, start, end, width, depth, sigma, profile, flow,
+                electrodes, pairs, cell));
+    }
+
+    /** The optional grid cell size of a plate or channel. */
+    private OptionalDouble cell(Fields f) {
+        Double cell = f.opt("cell", ctx.quantity(LENGTH), null);
+        return cell == null ? OptionalDouble.empty() : OptionalDouble.of(cell);
+    }
+
+    /** An electrode, reported where it stands when {@code placed} refuses its position (off the edge). */
+    private ReadContext.Conv<Conductor.Electrode> electrode(Predicate<Vec2> placed, String where) {
+        return (path, node) -> {
+            Fields f = ctx.fields(path, node, "an electrode {\"name\": ..., \"at\": [x, y]}");
+            if (f == null) {
+                return null;
+            }
+            String name = f.req("name", ctx.text());
+            Vec2 at = f.req("at", ctx.point(LENGTH));
+            if (at != null && !placed.test(at)) {
+                f.problem("electrode '" + name + "' at (" + at.x() + ", " + at.y() + ") m is not on " + where);
+            }
+            return f.build(() -> new Conductor.Electrode(name, at));
+        };
+    }
+
+    /** A pair of the electrodes {@code known} (null when they could not be read). */
+    private ReadContext.Conv<Conductor.ElectrodePair> pair(List<Conductor.Electrode> known) {
+        ReadContext.Conv<String> electrodeName = (path, node) -> {
+            String name = ctx.text().read(path, node);
+            if (name != null && known != null && known.stream().noneMatch(e -> e.name().equals(name))) {
+                List<String> names = known.stream().map(Conductor.Electrode::name).toList();
+                ctx.problem(path, node, "unknown electrode '" + name + "'" + Suggestions.hint(name, names)
+                        + (names.isEmpty() ? "; declare it under \"electrodes\"" : "; the electrodes are "
+                        + String.join(", ", names)));
+                return null;
+            }
+            return name;
+        };
+        return (path, node) -> {
+            Fields f = ctx.fields(path, node, "a pair {\"plus\": electrode, \"minus\": electrode}");
+            if (f == null) {
+                return null;
+            }
+            String plus = f.req("plus", electrodeName);
+            String minus = f.req("minus", electrodeName);
+            return f.build(() -> new Conductor.ElectrodePair(plus, minus));
+        };
+    }
+
+    // ---- channel flows ----
+
+    private MeanFlow steadyFlow(Fields f) {
+        Double velocity = f.req("velocity", ctx.quantity(VELOCITY));
+        return f.build(() -> new MeanFlow.Steady(velocity));
+    }
+
+    private MeanFlow sinusoidFlow(Fields f) {
+        Double offset = f.opt("offset", ctx.quantity(VELOCITY), 0.0);
+        Double amplitude = f.req("amplitude", ctx.quantity(VELOCITY));
+        Double frequency = f.req("frequency", ctx.quantity(FREQUENCY));
+        Double phase = f.opt("phase", ctx.quantity(ANGLE), 0.0);
+        return f.build(() -> new MeanFlow.Sinusoid(offset, amplitude, frequency, phase));
+    }
+
+    private MeanFlow keyedFlow(Fields f) {
+        List<MeanFlow.Keys.Key> keys = f.req("keys", ctx.list(this::flowKey));
+        return f.build(() -> new MeanFlow.Keys(keys));
+    }
+
+    private MeanFlow.Keys.Key flowKey(String path, Json node) {
+        Fields f = ctx.fields(path, node, "a key {\"t\": ..., \"velocity\": ...}");
+        if (f == null) {
+            return null;
+        }
+        Double t = f.req("t", ctx.quantity(TIME));
+        Double velocity = f.req("velocity", ctx.quantity(VELOCITY));
+        return f.build(() -> new MeanFlow.Keys.Key(t, velocity));
     }
 
     /** {@code [x, y]} riding the conductor's body, or {@code {"at": [x, y], "body": id}}. */

@@ -8,7 +8,9 @@ import java.io.UncheckedIOException;
 import java.util.List;
 import java.util.Optional;
 import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -262,19 +264,71 @@ final class SceneWriter {
 
     private void conductor(Conductor c) throws IOException {
         g.writeStartObject();
-        kind(c.match(new Conductor.Cases<>() {
+        c.match(new Conductor.Cases<Void>() {
             @Override
-            public String wire(Conductor.Wire wire) {
-                return "wire";
+            public Void wire(Conductor.Wire wire) {
+                return io(() -> {
+                    kind("wire");
+                    idAndBody(wire.id(), wire.body());
+                    vertices(wire.vertices());
+                });
             }
 
             @Override
-            public String loop(Conductor.Loop loop) {
-                return "loop";
+            public Void loop(Conductor.Loop loop) {
+                return io(() -> {
+                    kind("loop");
+                    idAndBody(loop.id(), loop.body());
+                    vertices(loop.vertices());
+                    g.writeNumberField("turns", loop.turns());
+                    wireSpec(loop.wire());
+                    g.writeBooleanField("open", loop.open());
+                    number("load", loop.loadOhm());
+                    number("temperature", loop.temperatureC());
+                });
             }
-        }));
-        idAndBody(c.id(), c.body());
-        list("vertices", c.vertices(), v -> {
+
+            @Override
+            public Void plate(Conductor.Plate plate) {
+                return io(() -> {
+                    kind("plate");
+                    idAndBody(plate.id(), plate.body());
+                    points("outline", plate.outline());
+                    list("holes", plate.holes(), hole -> {
+                        String path = where;
+                        g.writeStartArray();
+                        for (int i = 0; i < hole.size(); i++) {
+                            pointItem(ReadContext.item(path, i), hole.get(i));
+                        }
+                        g.writeEndArray();
+                    });
+                    number("thickness", plate.thicknessM());
+                    conductivity(plate.conductivity());
+                    electrodes(plate);
+                });
+            }
+
+            @Override
+            public Void channel(Conductor.Channel channel) {
+                return io(() -> {
+                    kind("channel");
+                    idAndBody(channel.id(), channel.body());
+                    point("start", channel.start());
+                    point("end", channel.end());
+                    number("width", channel.widthM());
+                    number("depth", channel.depthM());
+                    number("conductivity", channel.sigmaSPerM());
+                    g.writeStringField("profile", Vocabulary.PROFILE.name(channel.profile()));
+                    object("flow", () -> flow(channel.flow()));
+                    electrodes(channel);
+                });
+            }
+        });
+        g.writeEndObject();
+    }
+
+    private void vertices(List<Conductor.Vertex> vertices) throws IOException {
+        list("vertices", vertices, v -> {
             if (v.body() == null) {
                 pointItem(where, v.at());
             } else {
@@ -285,24 +339,82 @@ final class SceneWriter {
                 g.writeEndObject();
             }
         });
-        c.match(new Conductor.Cases<Void>() {
+    }
+
+    private void conductivity(Conductivity c) {
+        c.match(new Conductivity.Cases<Void>() {
             @Override
-            public Void wire(Conductor.Wire wire) {
-                return null;
+            public Void material(Conductivity.OfMaterial m) {
+                return io(() -> {
+                    g.writeStringField("material", Vocabulary.MATERIAL.name(m.material()));
+                    number("temperature", m.temperatureC());
+                });
             }
 
             @Override
-            public Void loop(Conductor.Loop loop) {
+            public Void given(Conductivity.Given given) {
+                return io(() -> number("conductivity", given.sigmaSPerM()));
+            }
+        });
+    }
+
+    /** Electrodes, pairs and the cell size of a plate or channel (the cell only when the file sets it). */
+    private void electrodes(Conductor.Sheet sheet) throws IOException {
+        list("electrodes", sheet.electrodes(), e -> {
+            layout.inlineNext();
+            g.writeStartObject();
+            g.writeStringField("name", e.name());
+            point("at", e.at());
+            g.writeEndObject();
+        });
+        list("pairs", sheet.pairs(), p -> {
+            layout.inlineNext();
+            g.writeStartObject();
+            g.writeStringField("plus", p.plus());
+            g.writeStringField("minus", p.minus());
+            g.writeEndObject();
+        });
+        if (sheet.cellM().isPresent()) {
+            number("cell", sheet.cellM().getAsDouble());
+        }
+    }
+
+    /** The members of a channel's mean flow. */
+    private void flow(MeanFlow flow) {
+        flow.match(new MeanFlow.Cases<Void>() {
+            @Override
+            public Void steady(MeanFlow.Steady steady) {
                 return io(() -> {
-                    g.writeNumberField("turns", loop.turns());
-                    wireSpec(loop.wire());
-                    g.writeBooleanField("open", loop.open());
-                    number("load", loop.loadOhm());
-                    number("temperature", loop.temperatureC());
+                    kind("steady");
+                    number("velocity", steady.velocityMPerS());
+                });
+            }
+
+            @Override
+            public Void sinusoid(MeanFlow.Sinusoid s) {
+                return io(() -> {
+                    kind("sinusoid");
+                    number("offset", s.offsetMPerS());
+                    number("amplitude", s.amplitudeMPerS());
+                    number("frequency", s.frequencyHz());
+                    number("phase", s.phaseRad());
+                });
+            }
+
+            @Override
+            public Void keys(MeanFlow.Keys keys) {
+                return io(() -> {
+                    kind("keys");
+                    list("keys", keys.keys(), k -> {
+                        layout.inlineNext();
+                        g.writeStartObject();
+                        number("t", k.tS());
+                        number("velocity", k.velocityMPerS());
+                        g.writeEndObject();
+                    });
                 });
             }
         });
-        g.writeEndObject();
     }
 
     private void wireSpec(WireSpec w) throws IOException {

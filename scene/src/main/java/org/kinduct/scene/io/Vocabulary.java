@@ -2,6 +2,7 @@ package org.kinduct.scene.io;
 
 import static java.util.Map.entry;
 
+import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Source;
@@ -20,6 +21,10 @@ final class Vocabulary {
 
     static final Choices<Motion.Path.Blend> BLEND = Choices.of(
             entry("linear", Motion.Path.Blend.LINEAR), entry("smooth", Motion.Path.Blend.SMOOTH));
+
+    static final Choices<Conductor.Channel.Profile> PROFILE = Choices.of(
+            entry("plug", Conductor.Channel.Profile.PLUG), entry("laminar", Conductor.Channel.Profile.LAMINAR),
+            entry("turbulent", Conductor.Channel.Profile.TURBULENT));
 
     private Vocabulary() {
     }

@@ -22,7 +22,9 @@ import java.util.stream.Collectors;
  * 1 in = 0.0254 m and 1 mil = 0.001 in (international inch, 1959); 1 G = 1e-4 T;
  * 1 km/h = 1000/3600 m/s; 1 mph = 0.44704 m/s (international mile 1609.344 m);
  * 1° = π/180 rad; 1 rpm = 2π/60 rad/s (one revolution is 2π rad); 1 min = 60 s;
- * T/K = t/°C + 273.15.
+ * T/K = t/°C + 273.15. Conductivities: 1 S/cm = 100 S/m, as the water trade writes them in mS/cm and
+ * µS/cm; 100 % IACS = 58 MS/m, the International Annealed Copper Standard's conductivity
+ * (IEC 60028: ρ20 = 1/58 Ω·mm²/m), so 1 % IACS = 0.58 MS/m exactly.
  */
 public enum Dimension {
     LENGTH("a length", "12 mm", "nm µm mm m km",
@@ -76,6 +78,16 @@ public enum Dimension {
             scaled("1", "W"), scaled("0.001", "mW"), scaled("1e-6", "µW"), scaled("1000", "kW")),
     ENERGY("an energy", "5 mJ", "µJ mJ J kJ",
             scaled("1", "J"), scaled("0.001", "mJ"), scaled("1e-6", "µJ"), scaled("1000", "kJ")),
+    TORQUE("a torque", "0.2 N*m", "µN·m mN·m N·m",
+            scaled("1", "N·m", "N*m", "Nm"), scaled("0.001", "mN·m", "mN*m", "mNm"),
+            scaled("1e-6", "µN·m", "µN*m", "µNm")),
+    CURRENT_DENSITY("a current density", "5 A/mm^2", "A/m² kA/m² A/mm²",
+            scaled("1", "A/m²", "A/m^2", "A/m2"), scaled("1000", "kA/m²", "kA/m^2", "kA/m2"),
+            scaled("1e4", "A/cm²", "A/cm^2", "A/cm2"), scaled("1e6", "A/mm²", "A/mm^2", "A/mm2")),
+    CONDUCTIVITY("a conductivity", "35 MS/m", "µS/cm mS/cm S/m MS/m",
+            scaled("1", "S/m"), scaled("1e6", "MS/m"), scaled("1000", "kS/m"), scaled("0.001", "mS/m"),
+            scaled("100", "S/cm"), scaled("0.1", "mS/cm"), scaled("1e-4", "µS/cm"),
+            scaled("580000", "% IACS", "%IACS")),
     DIMENSIONLESS("a plain number", "0.5", "",
             scaled("1", ""));
 

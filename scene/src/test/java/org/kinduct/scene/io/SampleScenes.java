@@ -2,11 +2,14 @@ package org.kinduct.scene.io;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
 import java.util.SplittableRandom;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Checks;
+import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Material;
+import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -61,7 +64,28 @@ public final class SampleScenes {
                         WireSpec.of(Material.ALUMINIUM, 0.2e-3), true, 0, -10),
                 new Conductor.Loop("thick", "fixed", List.of(Conductor.Vertex.at(0, 0),
                         Conductor.Vertex.at(0.1, 0), Conductor.Vertex.at(0, 0.1)), 3,
-                        WireSpec.awg(Material.COPPER, -3), false, 0.5, 20));
+                        WireSpec.awg(Material.COPPER, -3), false, 0.5, 20),
+                new Conductor.Plate("brake-disc", "rotor", square(-0.05, -0.02, 0.04),
+                        List.of(square(-0.04, -0.01, 0.005), square(-0.025, -0.01, 0.005)), 2e-3,
+                        new Conductivity.OfMaterial(Material.ALUMINIUM, 40),
+                        List.of(new Conductor.Electrode("rim", new Vec2(-0.05, 0)),
+                                new Conductor.Electrode("hole-edge", new Vec2(-0.035, -0.0085))),
+                        List.of(new Conductor.ElectrodePair("rim", "hole-edge")), OptionalDouble.of(5e-4)),
+                new Conductor.Plate("sample", Body.FIXED, List.of(new Vec2(0.1, 0), new Vec2(0.13, 0.01),
+                        new Vec2(0.1, 0.02)), List.of(), 0.3e-3, new Conductivity.Given(1.7e7), List.of(), List.of(),
+                        OptionalDouble.empty()),
+                new Conductor.Channel("duct", Body.FIXED, new Vec2(-0.1, 0.05), new Vec2(0.1, 0.05), 0.02, 0.015,
+                        0.05, Conductor.Channel.Profile.TURBULENT, new MeanFlow.Steady(1.5),
+                        List.of(new Conductor.Electrode("upper", new Vec2(-0.05, 0.06)),
+                                new Conductor.Electrode("lower", new Vec2(-0.05, 0.04))),
+                        List.of(new Conductor.ElectrodePair("upper", "lower")), OptionalDouble.empty()),
+                new Conductor.Channel("pulse", "carriage", new Vec2(0, 0.1), new Vec2(0, 0.2), 0.01, 0.01, 3.4e6,
+                        Conductor.Channel.Profile.LAMINAR, new MeanFlow.Sinusoid(0.2, 0.1, 1.2, 0.5), List.of(),
+                        List.of(), OptionalDouble.of(1e-3)),
+                new Conductor.Channel("ramp", Body.FIXED, new Vec2(0.2, 0.1), new Vec2(0.3, 0.1), 0.01, 0.01, 1,
+                        Conductor.Channel.Profile.PLUG, new MeanFlow.Keys(List.of(new MeanFlow.Keys.Key(0, 0),
+                        new MeanFlow.Keys.Key(0.1, 2), new MeanFlow.Keys.Key(0.3, -0.5))), List.of(), List.of(),
+                        OptionalDouble.empty()));
         return new Scene("Every variant", "A scene with \"quotes\", a tab\t, ünïcödé and a\nnew line.",
                 bodies, sources, conductors, new TimeSpan(0, 0.5, 1e-3), new Vec2(0, -9.81));
     }

@@ -17,7 +17,7 @@ import org.junit.jupiter.params.provider.EnumSource;
 import org.kinduct.scene.units.Dimension;
 import org.kinduct.scene.units.Unit;
 
-/** Keeps docs/scene-format.md true: its example reads, and its unit table lists every accepted unit. */
+/** Keeps docs/scene-format.md true: its examples read, and its unit table lists every accepted unit. */
 class SceneFormatDocumentTest {
 
     /** Surefire runs in the module folder; the document sits in the project's docs folder. */
@@ -31,11 +31,16 @@ class SceneFormatDocumentTest {
     }
 
     @Test
-    void exampleIsAValidScene() {
-        int start = text.indexOf("```json\n") + "```json\n".length();
-        String example = text.substring(start, text.indexOf("```", start));
-
-        assertDoesNotThrow(() -> SceneJson.read(example, "scene-format.md example"));
+    void everyExampleIsAValidScene() {
+        int examples = 0;
+        for (int at = text.indexOf("```json\n"); at >= 0; at = text.indexOf("```json\n", at + 1)) {
+            int start = at + "```json\n".length();
+            String example = text.substring(start, text.indexOf("```", start));
+            int number = ++examples;
+            assertDoesNotThrow(() -> SceneJson.read(example, "scene-format.md example " + number));
+        }
+        // The pickup-coil scene at the top and the plate-and-channel scene under CONDUCTOR.
+        assertTrue(examples >= 2, "examples found: " + examples);
     }
 
     @ParameterizedTest

@@ -12,7 +12,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -45,6 +47,12 @@ class SceneJsonRoundTripTest {
         assertEquals(Motion.class.getPermittedSubclasses().length, motions.size(), "motions " + motions);
         assertEquals(Source.class.getPermittedSubclasses().length, sources.size(), "sources " + sources);
         assertEquals(Conductor.class.getPermittedSubclasses().length, conductors.size(), "conductors " + conductors);
+        List<Class<?>> conductivities = scene.conductors().stream().filter(c -> c instanceof Conductor.Plate)
+                .map(c -> ((Conductor.Plate) c).conductivity().getClass()).distinct().collect(Collectors.toList());
+        List<Class<?>> flows = scene.conductors().stream().filter(c -> c instanceof Conductor.Channel)
+                .map(c -> ((Conductor.Channel) c).flow().getClass()).distinct().collect(Collectors.toList());
+        assertEquals(Conductivity.class.getPermittedSubclasses().length, conductivities.size(), "conductivities");
+        assertEquals(MeanFlow.class.getPermittedSubclasses().length, flows.size(), "flows " + flows);
     }
 
     @Test

@@ -130,6 +130,52 @@ class SceneJsonValidationTest {
                 error("not a boolean", doc("  \"conductors\": [{\"kind\": \"loop\", \"id\": \"l\","
                                 + " \"vertices\": [[0, 0], [1, 0], [0, 1]], \"open\": \"yes\"}]"),
                         "conductors[0].open", "\"yes\"", "expected true or false, got 'yes'"),
+                error("plate electrode off the edge", doc("  \"conductors\": [{\"kind\": \"plate\", \"id\": \"p\","
+                                + " \"outline\": [[0, 0], [\"40 mm\", 0], [\"40 mm\", \"20 mm\"], [0, \"20 mm\"]],"
+                                + " \"thickness\": \"1 mm\", \"material\": \"copper\","
+                                + " \"electrodes\": [{\"name\": \"a\", \"at\": [0, \"10 mm\"]}, {\"name\": \"b\", \"at\": [\"20 mm\", \"10 mm\"]}]}]"),
+                        "conductors[0].electrodes[1]", "{\"name\": \"b\"",
+                        "electrode 'b' at (0.02, 0.01) m is not on the plate's edge (outline or a hole)"),
+                error("pair naming an unknown electrode", doc("  \"conductors\": [{\"kind\": \"plate\", \"id\": \"p\","
+                                + " \"outline\": [[0, 0], [\"40 mm\", 0], [\"40 mm\", \"20 mm\"], [0, \"20 mm\"]],"
+                                + " \"thickness\": \"1 mm\", \"material\": \"copper\","
+                                + " \"electrodes\": [{\"name\": \"left\", \"at\": [0, \"10 mm\"]}, {\"name\": \"right\", \"at\": [\"40 mm\", \"10 mm\"]}],"
+                                + " \"pairs\": [{\"plus\": \"left\", \"minus\": \"rigth\"}]}]"),
+                        "conductors[0].pairs[0].minus", "\"rigth\"",
+                        "unknown electrode 'rigth' (did you mean 'right'?); the electrodes are left, right"),
+                error("plate with material and conductivity", doc("  \"conductors\": [{\"kind\": \"plate\", \"id\": \"p\","
+                                + " \"outline\": [[0, 0], [1, 0], [0, 1]], \"thickness\": \"1 mm\", \"material\": \"copper\","
+                                + " \"conductivity\": \"58 MS/m\"}]"),
+                        "conductors[0]", "{\"kind\": \"plate\"",
+                        "a plate needs either \"material\" (copper, aluminium) or \"conductivity\", not both"),
+                error("temperature with a given conductivity", doc("  \"conductors\": [{\"kind\": \"plate\", \"id\": \"p\","
+                                + " \"outline\": [[0, 0], [1, 0], [0, 1]], \"thickness\": \"1 mm\", \"conductivity\": \"58 MS/m\","
+                                + " \"temperature\": \"80 degC\"}]"),
+                        "conductors[0]", "{\"kind\": \"plate\"", "a given \"conductivity\" is taken as it is"),
+                error("conductivity in a unit of the wrong dimension", doc("  \"conductors\": [{\"kind\": \"plate\", \"id\": \"p\","
+                                + " \"outline\": [[0, 0], [1, 0], [0, 1]], \"thickness\": \"1 mm\", \"conductivity\": \"5 mS\"}]"),
+                        "conductors[0].conductivity", "\"5 mS\"",
+                        "expected a conductivity such as '35 MS/m', got '5 mS' (unknown unit 'mS'"),
+                error("hole outside the plate", doc("  \"conductors\": [{\"kind\": \"plate\", \"id\": \"p\","
+                                + " \"outline\": [[0, 0], [1, 0], [1, 1], [0, 1]], \"holes\": [[[0.5, 0.5], [1.5, 0.5], [1.5, 0.6]]],"
+                                + " \"thickness\": \"1 mm\", \"material\": \"aluminium\"}]"),
+                        "conductors[0]", "{\"kind\": \"plate\"", "hole 0 must lie inside the outline"),
+                error("unknown flow profile", doc("  \"conductors\": [{\"kind\": \"channel\", \"id\": \"c\","
+                                + " \"start\": [0, 0], \"end\": [\"100 mm\", 0], \"width\": \"20 mm\", \"depth\": \"20 mm\","
+                                + " \"conductivity\": \"500 uS/cm\", \"profile\": \"turbulant\", \"flow\": {\"kind\": \"steady\", \"velocity\": \"1 m/s\"}}]"),
+                        "conductors[0].profile", "\"turbulant\"",
+                        "unknown value 'turbulant' (did you mean 'turbulent'?); use one of plug, laminar, turbulent"),
+                error("channel electrode off the walls", doc("  \"conductors\": [{\"kind\": \"channel\", \"id\": \"c\","
+                                + " \"start\": [0, 0], \"end\": [\"100 mm\", 0], \"width\": \"20 mm\", \"depth\": \"20 mm\","
+                                + " \"conductivity\": \"500 uS/cm\", \"profile\": \"plug\", \"flow\": {\"kind\": \"steady\", \"velocity\": \"1 m/s\"},"
+                                + " \"electrodes\": [{\"name\": \"inlet\", \"at\": [0, 0]}]}]"),
+                        "conductors[0].electrodes[0]", "{\"name\": \"inlet\"",
+                        "electrode 'inlet' at (0.0, 0.0) m is not on a wall of the channel"),
+                error("flow keys out of order", doc("  \"conductors\": [{\"kind\": \"channel\", \"id\": \"c\","
+                                + " \"start\": [0, 0], \"end\": [\"100 mm\", 0], \"width\": \"20 mm\", \"depth\": \"20 mm\","
+                                + " \"conductivity\": \"500 uS/cm\", \"profile\": \"plug\","
+                                + " \"flow\": {\"kind\": \"keys\", \"keys\": [{\"t\": \"2 s\", \"velocity\": 0}, {\"t\": \"1 s\", \"velocity\": 1}]}}]"),
+                        "conductors[0].flow", "{\"kind\": \"keys\"", "flow key times must increase: key 1 at 1.0 s follows 2.0 s"),
                 error("unknown choice", doc("  \"sources\": [{\"kind\": \"cylinder-magnet\", \"id\": \"m\", \"center\": [0, 0],"
                                 + " \"radius\": \"5 mm\", \"height\": \"3 mm\", \"standoff\": 0, \"side\": \"left\", \"remanence\": 1}]"),
                         "sources[0].side", "\"left\"", "unknown value 'left'; use one of below, above"),

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.kinduct.scene.units.Dimension.ACCELERATION;
 import static org.kinduct.scene.units.Dimension.ANGLE;
 import static org.kinduct.scene.units.Dimension.ANGULAR_SPEED;
+import static org.kinduct.scene.units.Dimension.CONDUCTIVITY;
 import static org.kinduct.scene.units.Dimension.CURRENT;
 import static org.kinduct.scene.units.Dimension.DAMPING;
 import static org.kinduct.scene.units.Dimension.DIMENSIONLESS;
@@ -80,6 +81,14 @@ class UnitsTest {
                 Arguments.of("30°", ANGLE, pi / 6),
                 Arguments.of("250 mrad", ANGLE, 0.25),
                 Arguments.of("600 rpm", ANGULAR_SPEED, 600 * 2 * pi / 60),
+                // Conductivity: S/cm = 100 S/m (SI prefixes on the metre); 100 % IACS = 58 MS/m
+                // (IEC 60028, ρ20 = 1/58 Ω·mm²/m).
+                Arguments.of("35 MS/m", CONDUCTIVITY, 35e6),
+                Arguments.of("5 mS/cm", CONDUCTIVITY, 0.5),
+                Arguments.of("500 µS/cm", CONDUCTIVITY, 0.05),
+                Arguments.of("500 uS/cm", CONDUCTIVITY, 0.05),
+                Arguments.of("61 % IACS", CONDUCTIVITY, 61 * 0.58e6),
+                Arguments.of("100%IACS", CONDUCTIVITY, 58e6),
                 Arguments.of("1 rev/s", ANGULAR_SPEED, 2 * pi),
                 Arguments.of("90 deg/s", ANGULAR_SPEED, pi / 2),
                 Arguments.of("1.5 min", TIME, 90),

@@ -6,13 +6,17 @@ import java.util.Locale;
 import java.util.Set;
 import java.util.stream.IntStream;
 import org.hipparchus.exception.MathRuntimeException;
+import org.kinduct.scene.Body;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Scenes;
+import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.Kinematics;
 import org.kinduct.solver.SceneField;
 import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.Snapshot;
@@ -23,6 +27,7 @@ import org.kinduct.solver.dynamics.CoupledSimulation;
 import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.dynamics.RunMonitor;
 import org.kinduct.solver.dynamics.SimulationCancelledException;
+import org.kinduct.solver.plate.Sheets;
 
 /**
  * The one way Kinduct turns a scene into results, for the editor, the exports and the command
@@ -58,6 +63,9 @@ public final class SceneRun {
     private final SceneSolver prescribed;
     /** Fields of the scene where it is drawn, prescribed motion. */
     private final SceneSolver fields;
+    /** Prescribed motion of the scene where it is drawn, which plates and channels are solved in. */
+    private final Kinematics motions;
+    private final Sheets sheets;
     private final RunMonitor monitor;
     private final boolean parallel;
     private InductanceAtStart inductance;
@@ -83,6 +91,8 @@ public final class SceneRun {
         this.local = origin.equals(Vec2.ZERO) ? scene : Scenes.movedBy(scene, origin.times(-1));
         this.prescribed = new SceneSolver(local);
         this.fields = local == scene ? prescribed : new SceneSolver(scene);
+        this.motions = Kinematics.prescribed(scene);
+        this.sheets = Sheets.of(scene);
     }
 
     public Scene scene() {
@@ -157,19 +167,20 @@ public final class SceneRun {
      */
     public SceneField fieldOf(double tS, Set<String> sourceIds) {
         boolean free = scene.sources().stream().anyMatch(s -> sourceIds.contains(s.id())
-                && scene.body(s.body()).orElseThrow().motion() instanceof org.kinduct.scene.Motion.Free);
+                && scene.body(s.body()).orElseThrow().motion() instanceof Motion.Free);
         return (free ? placement() : fields).fieldOf(tS, sourceIds);
     }
 
     /** A solver placing free bodies where the run has them (prescribed placement when there are none). */
     private SceneSolver placement() {
-        if (scene.bodies().stream().noneMatch(b -> b.motion() instanceof org.kinduct.scene.Motion.Free)) {
+        if (scene.bodies().stream().noneMatch(b -> b.motion() instanceof Motion.Free)) {
             return fields;
         }
         return new SceneSolver(scene, result().kinematics());
     }
 
     private RunResult coupled() {
+        requireSheetsOffFreeBodies();
         TimeSpan w = request.window();
         int steps = w.steps();
         double gridEnd = w.at(steps);
@@ -209,8 +220,52 @@ public final class SceneRun {
         if (request.extraInstantsS().contains(gridEnd)) {
             further.add(at, end);
         }
-        return result(samples, further, run.audit());
+        RunResult result = result(samples, further, run.audit());
+        if (sheets.isEmpty()) {
+            return result;
+        }
+        // Plates and channels feel the run's motion but act on nothing in it: their own field is
+        // neglected (resistive limit) and no free body carries them or a source.
+        Kinematics moved = result.kinematics();
+        return new RunResult(scene, plan(), withSheets(result.samples(), moved), withSheets(further, moved),
+                run.audit(), inductanceAtStart());
     }
+
+    private List<Snapshot> withSheets(List<Snapshot> states, Kinematics kinematics) {
+        return (parallel ? states.parallelStream() : states.stream())
+                .map(s -> s.withSheets(sheets.at(s.tS(), kinematics))).toList();
+    }
+
+    /**
+     * Plates and channels are not coupled into free-body runs yet: refuses a run in which one rides
+     * a free body, or a free body carries a source, since their drag (or its reaction on the
+     * source) would be missing from the motion.
+     */
+    private void requireSheetsOffFreeBodies() {
+        if (sheets.isEmpty()) {
+            return;
+        }
+        for (Body body : scene.bodies()) {
+            if (!(body.motion() instanceof Motion.Free)) {
+                continue;
+            }
+            for (Conductor c : scene.conductors()) {
+                if (c instanceof Conductor.Sheet && c.body().equals(body.id())) {
+                    throw new IllegalArgumentException("'" + c.id() + "' rides free body '" + body.id()
+                            + "': plates and channels are not coupled into free-body runs yet (their drag would be"
+                            + " missing from the motion); give the body a prescribed motion");
+                }
+            }
+            for (Source source : scene.sources()) {
+                if (source.body().equals(body.id())) {
+                    throw new IllegalArgumentException("source '" + source.id() + "' rides free body '" + body.id()
+                            + "' in a scene with plates or channels: their drag on it would be missing from its motion"
+                            + " (not coupled yet); give the body a prescribed motion");
+                }
+            }
+        }
+    }
+
 
     private RunResult instants() {
         TimeSpan w = request.window();
@@ -243,15 +298,15 @@ public final class SceneRun {
     private Snapshot solveInstant(double tS, InductanceAtStart start) {
         Snapshot s = prescribed.at(tS);
         List<ConductorState> states = new ArrayList<>(s.conductors().size());
-        for (int c = 0; c < s.conductors().size(); c++) {
-            ConductorState state = s.conductors().get(c);
-            Conductor conductor = scene.conductors().get(c);
+        for (ConductorState state : s.conductors()) {
+            Conductor conductor = scene.conductor(state.id()).orElseThrow();
             if (conductor instanceof Conductor.Loop loop && !loop.open()) {
                 state = state.withInductance(rigid(loop) ? start.selfH(loop.id()) : selfNow(loop, state.vertices()));
             }
             states.add(state);
         }
-        return drawn(new Snapshot(s.tS(), states, s.freeBodies()));
+        // Plates and channels are solved where the scene is drawn, after the move back.
+        return drawn(new Snapshot(s.tS(), states, s.freeBodies())).withSheets(sheets.at(tS, motions));
     }
 
     /** A state of {@link #local} where the scene is drawn. */

@@ -12,6 +12,7 @@ import org.kinduct.scene.units.Units;
 import org.kinduct.render.export.ExportInstant;
 import org.kinduct.render.export.Exporter;
 import org.kinduct.render.export.SnapshotOptions;
+import org.kinduct.render.paint.Layer;
 import org.kinduct.render.export.ViewChoice;
 import org.kinduct.solver.run.RunFailedException;
 import picocli.CommandLine.Command;
@@ -63,6 +64,10 @@ final class ExportCommand implements Callable<Integer> {
     @Option(names = "--json", paramLabel = "FILE", description = "Results as by 'kinduct solve --format json'.")
     Path json;
 
+    @Option(names = "--current-density", description = {"Colour plates and channels by |J|",
+            "(hides the field map under them; the streamlines stay)."})
+    boolean currentDensity;
+
     @Override
     public Integer call() {
         Exporter.Targets targets = Exporter.Targets.none().withPng(png).withSvg(svg).withPdf(pdf)
@@ -78,6 +83,9 @@ final class ExportCommand implements Callable<Integer> {
         try {
             ExportInstant instant = ExportInstant.parse(at, text -> Units.parse(text, Dimension.TIME));
             options = SnapshotOptions.standard(instant, widthPx, dpi, viewChoice(view), LocalDate.now(ZoneId.systemDefault()), Version.text());
+            if (currentDensity) {
+                options = options.withLayer(Layer.CURRENT_DENSITY);
+            }
         } catch (IllegalArgumentException e) {
             throw new BadInputException(e.getMessage());
         }

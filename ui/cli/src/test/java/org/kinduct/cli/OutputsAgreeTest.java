@@ -29,11 +29,12 @@ import org.w3c.dom.NodeList;
 
 /**
  * One export, one truth: {@code kinduct export --csv --json --svg} of one scene writes the same
- * EMFs, currents and senses in all three files, and the picture shows the instant of the largest
- * EMF (the default {@code --at peak}), for every demo and for a loop whose inductance
- * matters (200 turns, 100 × 100 mm, 1 mm copper wire, gliding at 1 m/s into a 0.5 T patch: L/R
- * of some milliseconds, so its current lags the EMF and the run is inductive). The picture's
- * table is read from the SVG, which is drawn from the same page as the PNG.
+ * EMFs, currents and senses, and the same drags and electrode voltages of plates and channels, in
+ * all three files, and the picture shows the instant of the largest EMF or electrode voltage (the
+ * default {@code --at peak}; the largest drag where there is no voltage), for every demo and for a
+ * loop whose inductance matters (200 turns, 100 × 100 mm, 1 mm copper wire, gliding at 1 m/s into a
+ * 0.5 T patch: L/R of some milliseconds, so its current lags the EMF and the run is inductive). The
+ * picture's tables are read from the SVG, which is drawn from the same page as the PNG.
  */
 class OutputsAgreeTest {
 
@@ -81,6 +82,7 @@ class OutputsAgreeTest {
         assertEquals(KinductMain.OK, KinductMain.run(args.toArray(String[]::new)));
         JsonNode results = new ObjectMapper().readTree(json.toFile());
         JsonNode samples = results.get("samples");
+        JsonNode plates = results.get("plates");
         if (name.equals("inductive-loop")) {
             assertEquals("inductive", results.get("circuit_model").asText(), "the lag is what this case is about");
         }
@@ -92,35 +94,35 @@ class OutputsAgreeTest {
         for (JsonNode s : samples) {
             byTime.computeIfAbsent(s.get("t").asDouble(), t -> new HashMap<>()).put(s.get("id").asText(), s);
         }
+        for (JsonNode p : plates) {
+            byTime.computeIfAbsent(p.get("t").asDouble(), t -> new HashMap<>()).put(p.get("id").asText(), p);
+        }
         assertEquals(byTime.size(), lines.size() - 1, "one CSV row per sampled time");
+        int compared = 0;
         for (String line : lines.subList(1, lines.size())) {
             String[] cells = line.split(",", -1);
             Map<String, JsonNode> at = byTime.get(Double.parseDouble(cells[0]));
             for (int col = 1; col < cells.length; col++) {
                 String[] idQuantity = header.get(col).split("\\.", 2);
-                JsonNode value = at.get(idQuantity[0]).get(idQuantity[1]);
+                JsonNode value = jsonValue(at.get(idQuantity[0]), idQuantity[1]);
                 if (value != null && !cells[col].isEmpty()) {
                     assertEquals(value.asDouble(), Double.parseDouble(cells[col]), 0.0,
                             name + " " + header.get(col) + " at t = " + cells[0]);
+                    compared++;
                 }
             }
         }
+        assertTrue(compared >= lines.size() - 1, name + ": compared " + compared + " values");
 
-        // The picture shows, by default, the peak |EMF|: of the samples within 1e-6 of it (a flat top),
-        // the earliest where every conductor's flux rule is a check, else the earliest.
-        Map<Double, Double> largest = new java.util.TreeMap<>();
-        Map<Double, Boolean> comparable = new java.util.TreeMap<>();
-        for (JsonNode s : samples) {
-            double at = s.get("t").asDouble();
-            largest.merge(at, Math.abs(s.get("emf_V").asDouble()), Math::max);
-            comparable.merge(at, !s.get("disagreement").isNull(), Boolean::logicalAnd);
-        }
-        double peak = largest.values().stream().mapToDouble(Double::doubleValue).max().orElse(0);
-        List<Double> flatTop = largest.entrySet().stream().filter(e -> e.getValue() >= (1 - 1e-6) * peak)
-                .map(Map.Entry::getKey).toList();
-        double t = flatTop.stream().filter(comparable::get).findFirst().orElse(flatTop.get(0));
+        // The picture shows, by default, the earliest sample of largest |EMF| or pair voltage (of
+        // largest drag without either); its tables hold the JSON's values there.
+        double t = peakTime(samples, plates);
         List<String> texts = texts(Files.readString(svg));
         assertTrue(texts.contains("t = " + Quantities.time(t)), name + ": the picture shows the peak at t = " + t);
+        checkPlates(name, plates, t, texts);
+        if (samples.isEmpty()) {
+            return;
+        }
         Map<String, Map<String, String>> table = table(texts);
         for (JsonNode s : samples) {
             if (s.get("t").asDouble() != t) {
@@ -138,6 +140,104 @@ class OutputsAgreeTest {
             if (closedLoop) {
                 assertPrinted(s.get("current_A").asDouble(), largest(samples, "current_A"), row.get("I"),
                         Dimension.CURRENT, name + " " + id + " current");
+            }
+        }
+    }
+
+    /**
+     * The value a wide-CSV column names in a JSON entry: a key of it, a component of the drag, or
+     * the voltage of the pair {@code plus-minus}; null where the entry has none.
+     */
+    private static JsonNode jsonValue(JsonNode entry, String quantity) {
+        if (quantity.equals("drag_x_N") || quantity.equals("drag_y_N")) {
+            return entry.get("drag_N").get(quantity.equals("drag_x_N") ? 0 : 1);
+        }
+        if (quantity.endsWith(".voltage_V")) {
+            String[] electrodes = quantity.substring(0, quantity.length() - ".voltage_V".length()).split("-", 2);
+            for (JsonNode pair : entry.get("pairs")) {
+                if (pair.get("plus").asText().equals(electrodes[0]) && pair.get("minus").asText().equals(electrodes[1])) {
+                    return pair.get("voltage_V");
+                }
+            }
+            return null;
+        }
+        return entry.get(quantity);
+    }
+
+    /**
+     * The instant the picture shows by default (ExportInstant.Peak's rule, from the JSON alone): the
+     * largest |EMF| or |pair voltage| (else |drag|); of the samples within 1e-6 of it (a plateau),
+     * the earliest where no loop is at a field edge (every disagreement a number), else the earliest.
+     */
+    private static double peakTime(JsonNode samples, JsonNode plates) {
+        boolean volts = !samples.isEmpty();
+        for (JsonNode p : plates) {
+            volts |= !p.get("pairs").isEmpty();
+        }
+        Map<Double, Double> largest = new java.util.TreeMap<>();
+        Map<Double, Boolean> checked = new HashMap<>();
+        for (JsonNode s : samples) {
+            double t = s.get("t").asDouble();
+            largest.merge(t, Math.abs(s.get("emf_V").asDouble()), Math::max);
+            checked.merge(t, !s.get("disagreement").isNull(), Boolean::logicalAnd);
+        }
+        for (JsonNode p : plates) {
+            double t = p.get("t").asDouble();
+            double value = Math.hypot(p.get("drag_N").get(0).asDouble(), p.get("drag_N").get(1).asDouble());
+            if (volts) {
+                value = 0;
+                for (JsonNode pair : p.get("pairs")) {
+                    value = Math.max(value, Math.abs(pair.get("voltage_V").asDouble()));
+                }
+            }
+            largest.merge(t, value, Math::max);
+            checked.putIfAbsent(t, true);
+        }
+        double peak = largest.values().stream().mapToDouble(Double::doubleValue).max().orElse(0);
+        Double first = null;
+        for (Map.Entry<Double, Double> e : largest.entrySet()) {
+            if (e.getValue() >= (1 - 1e-6) * peak) {
+                if (checked.get(e.getKey())) {
+                    return e.getKey();
+                }
+                first = first == null ? e.getKey() : first;
+            }
+        }
+        return first;
+    }
+
+    /**
+     * The picture's plate table (force and its direction) and electrode table (voltage and +
+     * electrode) hold what the JSON has at {@code t}.
+     */
+    private static void checkPlates(String name, JsonNode plates, double t, List<String> texts) {
+        double largestDrag = 0;
+        double largestVoltage = 0;
+        for (JsonNode p : plates) {
+            largestDrag = Math.max(largestDrag, Math.hypot(p.get("drag_N").get(0).asDouble(),
+                    p.get("drag_N").get(1).asDouble()));
+            for (JsonNode pair : p.get("pairs")) {
+                largestVoltage = Math.max(largestVoltage, Math.abs(pair.get("voltage_V").asDouble()));
+            }
+        }
+        for (JsonNode p : plates) {
+            if (p.get("t").asDouble() != t) {
+                continue;
+            }
+            String id = p.get("id").asText();
+            int row = texts.lastIndexOf(id);
+            assertTrue(row > texts.indexOf("plate/channel"), name + ": a plate table row for " + id);
+            double drag = Math.hypot(p.get("drag_N").get(0).asDouble(), p.get("drag_N").get(1).asDouble());
+            assertPrinted(drag, largestDrag, texts.get(row + 1).replaceAll(" ∠.*", ""), Dimension.FORCE,
+                    name + " " + id + " drag");
+            for (JsonNode pair : p.get("pairs")) {
+                int at = texts.indexOf(id + ": " + pair.get("plus").asText() + " − " + pair.get("minus").asText());
+                assertTrue(at > 0, name + ": an electrode row for " + id + " in " + texts);
+                assertPrinted(pair.get("voltage_V").asDouble(), largestVoltage, texts.get(at + 1), Dimension.VOLTAGE,
+                        name + " " + id + " voltage");
+                String positive = pair.get("positive").asText();
+                assertEquals(Labels.positiveElectrode(positive.equals("none") ? java.util.Optional.empty()
+                        : java.util.Optional.of(positive)), texts.get(at + 2), name + " " + id + " + electrode");
             }
         }
     }

@@ -10,7 +10,10 @@ import com.fasterxml.jackson.core.JsonToken;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.kinduct.cli.CliRun.Result;
@@ -66,8 +69,78 @@ class SolveOutputTest {
     }
 
     @Test
+    void plateEntriesBalanceHeatAgainstTheDragsWork() throws IOException {
+        // The product path for plates: the JSON's Joule power is the mechanical power the drag takes
+        // from the carriage, −F·v (energy conservation, Griffiths, Introduction to Electrodynamics,
+        // 4th ed., 2013, §8.1), to the solve's residual.
+        Result r = CliRun.run("solve", "--demo", "plate-brake", "--at", "20 ms", "--format", "json");
+        assertEquals(KinductMain.OK, r.code(), r.err());
+        JsonNode plates = new ObjectMapper().readTree(r.out()).get("plates");
+        assertEquals(2, plates.size());
+        for (JsonNode p : plates) {
+            for (String key : new String[] {"t", "id", "kind", "drag_N", "torque_Nm", "pivot_m", "joule_W",
+                    "peak_current_density_A_per_m2", "reynolds_magnetic", "resistive_limit", "mean_velocity_mps",
+                    "cell_m", "induced_e_included", "electrodes", "pairs"}) {
+                assertTrue(p.has(key), p.get("id") + " lacks " + key);
+            }
+            double heat = p.get("joule_W").asDouble();
+            assertEquals(heat, -p.get("drag_N").get(0).asDouble() * 0.5, 1e-8 * heat, p.get("id") + ": P = −F·v");
+            assertTrue(p.get("resistive_limit").asBoolean(), "Rm " + p.get("reynolds_magnetic"));
+        }
+    }
+
+    @Test
+    void channelPairNamesItsPositiveElectrodeInJsonAndCsv() throws IOException {
+        Result json = CliRun.run("solve", "--demo", "flow-electrodes", "--at", "0.6 s", "--format", "json");
+        assertEquals(KinductMain.OK, json.code(), json.err());
+        JsonNode pair = new ObjectMapper().readTree(json.out()).get("plates").get(0).get("pairs").get(0);
+        assertEquals("upper", pair.get("plus").asText());
+        assertEquals("upper", pair.get("positive").asText(), "v × B pushes + charge to the upper wall (B into the board)");
+        assertEquals(pair.get("voltage_V").asDouble() / pair.get("ideal_voltage_V").asDouble(),
+                pair.get("end_shorting").asDouble(), 1e-15);
+        Result csv = CliRun.run("solve", "--demo", "flow-electrodes", "--at", "0.6 s", "--format", "csv");
+        List<String> lines = csv.out().lines().toList();
+        assertTrue(lines.get(0).endsWith(",plus,minus,voltage_V,positive,ideal_voltage_V,end_shorting"), lines.get(0));
+        assertEquals(lines.get(0).split(",", -1).length, lines.get(1).split(",", -1).length, "every row fills the header");
+        assertTrue(lines.get(1).contains(",duct,channel,") && lines.get(1).contains(",upper,lower,"), lines.get(1));
+        assertEquals(pair.get("voltage_V").asDouble(), Double.parseDouble(lines.get(1).split(",", -1)[21]),
+                1e-9 * pair.get("voltage_V").asDouble(), "CSV and JSON voltage");
+    }
+
+    @Test
+    void tableGivesEachPlatesDragAndHeatAndEachPairsPositiveElectrode() {
+        Result brake = CliRun.run("solve", "--demo", "plate-brake");
+        assertEquals(KinductMain.OK, brake.code(), brake.err());
+        // The demo's answer: 3.03 N and 1.51 W solid, 2.35 N and 1.18 W slotted (heat = drag × 0.5 m/s).
+        assertTrue(brake.out().matches("(?s).*solid-plate +plate +3\\.03 N .* 1\\.51 W .*"), brake.out());
+        assertTrue(brake.out().matches("(?s).*slotted-plate +plate +2\\.35 N .* 1\\.18 W .*"), brake.out());
+        Result flow = CliRun.run("solve", "--demo", "flow-electrodes");
+        assertTrue(flow.out().matches("(?s).*duct +upper − lower +14\\.9 mV .*\\+ at upper +84\\.6 %.*"), flow.out());
+    }
+
+    @Test
+    void aFastThickCopperPlateIsFlaggedBeyondTheResistiveLimit() throws IOException {
+        // 5 mm copper at 5 m/s: Rm = μ0·σ·d·v = 1.26e-6 · 5.8e7 · 0.005 · 5 = 1.8, far above 0.1.
+        Path scene = Files.writeString(dir.resolve("fast.json"), """
+                {"format": "kinduct-scene", "version": 1, "name": "fast plate", "time": {"t0": 0, "t1": "1 ms", "dt": "1 ms"},
+                 "bodies": [{"id": "cart", "motion": {"kind": "glide", "velocity": ["5 m/s", 0]}}],
+                 "sources": [{"kind": "block-magnet", "id": "m", "center": [0, 0], "size": ["10 mm", "10 mm", "5 mm"],
+                   "standoff": "2 mm", "remanence": "1.2 T"}],
+                 "conductors": [{"kind": "plate", "id": "disc", "body": "cart", "thickness": "5 mm", "material": "copper",
+                   "outline": [["-30 mm", "-20 mm"], ["30 mm", "-20 mm"], ["30 mm", "20 mm"], ["-30 mm", "20 mm"]]}]}
+                """);
+        Result table = CliRun.run("solve", scene.toString());
+        assertEquals(KinductMain.OK, table.code(), table.err());
+        assertTrue(table.out().contains("Rm 1.8 > 0.1: beyond the resistive limit"), table.out());
+        Result json = CliRun.run("solve", scene.toString(), "--format", "json");
+        JsonNode plate = new ObjectMapper().readTree(json.out()).get("plates").get(0);
+        assertFalse(plate.get("resistive_limit").asBoolean());
+        assertEquals(1.25663706212e-6 * 5.8e7 * 0.005 * 5, plate.get("reynolds_magnetic").asDouble(), 1e-12);
+    }
+
+    @Test
     void csvHeaderCarriesUnits() {
-        Result r = CliRun.run("solve", "--demo", "flow-electrodes", "--format", "csv", "--at", "5 ms");
+        Result r = CliRun.run("solve", "--demo", "drive-sense-wire", "--format", "csv", "--at", "0 ms");
         assertEquals(KinductMain.OK, r.code(), r.err());
         String header = r.out().lines().findFirst().orElseThrow();
         assertTrue(header.startsWith("t_s,id,kind,flux_Wb"), header);

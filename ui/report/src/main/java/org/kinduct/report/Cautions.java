@@ -19,6 +19,9 @@ public final class Cautions {
     public static final String MAGNETS = "CAUTION: strong magnets pinch and fly together, and can upset implanted"
             + " medical devices. Follow local rules and licensed practice.";
 
+    public static final String FLOW = "CAUTION: flow sensing on people or for medical use must meet the applicable"
+            + " medical-device standards; these are plan-view design estimates.";
+
     public static final String GENERAL = "Kinduct gives plan-view estimates for design sketches, not safety"
             + " ratings. Strong magnets can pinch, shatter and turn tools into projectiles, and can disturb"
             + " pacemakers and other implanted devices (the 0.5 mT line is a common caution contour). Induced"

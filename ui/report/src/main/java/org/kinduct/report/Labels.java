@@ -4,7 +4,12 @@ import org.kinduct.solver.dynamics.CircuitModel;
 import org.kinduct.solver.Circulation;
 import org.kinduct.solver.ConductorState;
 import java.util.Locale;
+import java.util.Optional;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Circulation;
+import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Terminal;
+import org.kinduct.solver.dynamics.CircuitModel;
 import org.kinduct.solver.run.RunPlan;
 
 /**
@@ -101,6 +106,37 @@ public final class Labels {
             case CCW -> "ccw";
             case NONE -> "none";
         };
+    }
+
+    /** {@code plate} or {@code channel}. */
+    public static String sheetKind(SheetState.Kind kind) {
+        return switch (kind) {
+            case PLATE -> "plate";
+            case CHANNEL -> "channel";
+        };
+    }
+
+    /** Which electrode of a pair is positive, in words: "+ at a", or "no voltage" below the reporting threshold. */
+    public static String positiveElectrode(Optional<String> positive) {
+        return positive.map(name -> "+ at " + name).orElse("no voltage");
+    }
+
+    /** The name of a pair's positive electrode for data files, or {@code none}. */
+    public static String positiveName(Optional<String> positive) {
+        return positive.orElse("none");
+    }
+
+    /** "Rm 0.23 > 0.1: beyond the resistive limit", for a state whose own field is no longer small. */
+    public static String reynoldsWarning(double magneticReynolds) {
+        return String.format(Locale.ROOT, "Rm %.2g > %.1g: beyond the resistive limit", magneticReynolds,
+                SheetState.REYNOLDS_WARNING);
+    }
+
+    /** Direction of an in-plane vector as an angle from +x, counter-clockwise, in whole degrees (−179° … 180°). */
+    public static String direction(Vec2 v) {
+        long deg = Math.round(Math.toDegrees(Math.atan2(v.y(), v.x())));
+        long d = deg == -180 ? 180 : deg;
+        return (d < 0 ? "−" + -d : Long.toString(d)) + "°";
     }
 
     /** {@code instants} (each solved on its own) or {@code coupled run}. */

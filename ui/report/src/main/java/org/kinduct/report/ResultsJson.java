@@ -6,14 +6,16 @@ import java.io.IOException;
 import java.io.Writer;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.run.RunResult;
 
 /**
- * Machine-readable results: one object per conductor per time under {@code samples}, one per
- * free body per time under {@code bodies}, and the run's {@code energy_audit}; schema in
- * README.md ("Results JSON"). Shared by {@code kinduct solve --format json} and the export.
+ * Machine-readable results: one object per wire or loop per time under {@code samples}, one per
+ * plate or channel per time under {@code plates}, one per free body per time under {@code bodies},
+ * and the run's {@code energy_audit}; schema in README.md ("Results JSON"). Shared by
+ * {@code kinduct solve --format json} and the export.
  */
 public final class ResultsJson {
 
@@ -37,6 +39,13 @@ public final class ResultsJson {
             for (Snapshot s : results.samples()) {
                 for (ConductorState c : s.conductors()) {
                     writeSample(g, s.tS(), c);
+                }
+            }
+            g.writeEndArray();
+            g.writeArrayFieldStart("plates");
+            for (Snapshot s : results.samples()) {
+                for (SheetState p : s.sheets()) {
+                    writeSheet(g, s.tS(), p);
                 }
             }
             g.writeEndArray();
@@ -111,6 +120,45 @@ public final class ResultsJson {
         number(g, "resistance_Ohm", c.resistanceOhm());
         number(g, "inductance_H", c.inductanceH());
         g.writeBooleanField("induced_e_included", c.inducedFieldIncluded());
+        g.writeEndObject();
+    }
+
+    private static void writeSheet(JsonGenerator g, double tS, SheetState p) throws IOException {
+        g.writeStartObject();
+        g.writeNumberField("t", tS);
+        g.writeStringField("id", p.id());
+        g.writeStringField("kind", Labels.sheetKind(p.kind()));
+        pair(g, "drag_N", p.forceN());
+        g.writeNumberField("torque_Nm", p.torqueNm());
+        pair(g, "pivot_m", p.pivotM());
+        g.writeNumberField("joule_W", p.joulePowerW());
+        g.writeNumberField("peak_current_density_A_per_m2", p.peakCurrentDensityAPerM2());
+        g.writeNumberField("reynolds_magnetic", p.magneticReynolds());
+        g.writeBooleanField("resistive_limit", !p.beyondResistiveLimit());
+        number(g, "mean_velocity_mps", p.meanVelocityMPerS());
+        g.writeNumberField("cell_m", p.cellM());
+        g.writeBooleanField("induced_e_included", p.inducedFieldIncluded());
+        g.writeArrayFieldStart("electrodes");
+        for (SheetState.Electrode e : p.electrodes()) {
+            g.writeStartObject();
+            g.writeStringField("name", e.name());
+            pair(g, "position_m", e.atM());
+            g.writeNumberField("potential_V", e.potentialV());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        g.writeArrayFieldStart("pairs");
+        for (SheetState.Pair pair : p.pairs()) {
+            g.writeStartObject();
+            g.writeStringField("plus", pair.plus());
+            g.writeStringField("minus", pair.minus());
+            g.writeNumberField("voltage_V", pair.voltageV());
+            g.writeStringField("positive", Labels.positiveName(pair.positive()));
+            number(g, "ideal_voltage_V", pair.idealVoltageV());
+            number(g, "end_shorting", pair.endShortingRatio());
+            g.writeEndObject();
+        }
+        g.writeEndArray();
         g.writeEndObject();
     }
 

@@ -1,12 +1,14 @@
 package org.kinduct.report;
 
 import java.io.PrintWriter;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.units.Dimension;
 import org.kinduct.scene.units.Units;
 import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.Terminal;
 import org.kinduct.solver.dynamics.EnergyAudit;
@@ -33,8 +35,10 @@ public final class ResultsTable {
         ResultScales scales = results.scales();
         int idWidth = Math.max("conductor".length(), rows.stream().mapToInt(r -> r.id().length()).max().orElse(0));
         String fmt = "%-" + idWidth + "s  %-5s %12s %10s %12s  %-26s %12s %11s  %s%n";
-        out.printf(Locale.ROOT, fmt, "conductor", "kind", "peak EMF", "at", "RMS EMF", "polarity at peak",
-                "peak current", "L", "methods agree");
+        if (!rows.isEmpty()) {
+            out.printf(Locale.ROOT, fmt, "conductor", "kind", "peak EMF", "at", "RMS EMF", "polarity at peak",
+                    "peak current", "L", "methods agree");
+        }
         for (ConductorSummary r : rows) {
             double l = series.get(0).conductor(r.id()).orElseThrow().inductanceH();
             out.printf(Locale.ROOT, fmt, r.id(), r.kind() == ConductorState.Kind.LOOP ? "loop" : "wire",
@@ -45,7 +49,13 @@ public final class ResultsTable {
                             ? Units.format(scales.current(r.peakCurrentA()), Dimension.CURRENT) : "-",
                     Double.isNaN(l) ? "-" : Units.format(l, Dimension.INDUCTANCE), agreement(r));
         }
-        out.println();
+        if (!rows.isEmpty()) {
+            out.println();
+        }
+        List<SheetSummary> sheets = SheetSummary.of(series);
+        if (!sheets.isEmpty()) {
+            writeSheets(sheets, scales, out);
+        }
         String inductance = InductanceSummary.of(results.inductanceAtStart());
         if (results.inductanceAtStart().self().size() > 1 || !results.inductanceAtStart().allSelfKnown()) {
             out.println(inductance);
@@ -58,7 +68,63 @@ public final class ResultsTable {
             out.println("Note: a field patch moves; the induced electric field of an idealized patch is not known"
                     + " from B_z alone, so wire EMFs marked '*' include the v x B part only.");
         }
+        if (sheets.stream().anyMatch(r -> !r.inducedFieldIncluded())) {
+            out.println("Note: a field patch moves; plate and channel currents, forces and heat are exact, but"
+                    + " electrode voltages marked '*' lack the patch's w·A, unknown from B_z alone.");
+        }
         CautionCheck.lines(scene, series).forEach(out::println);
+    }
+
+    /**
+     * Plates and channels: peak force (the drag) with its time, peak torque, peak and mean Joule
+     * power, peak |J| and the largest Rm (flagged above {@link SheetState#REYNOLDS_WARNING}); then
+     * each electrode pair's peak voltage with its + electrode and, for channels, its share of B·w·v̄.
+     */
+    private static void writeSheets(List<SheetSummary> sheets, ResultScales scales, PrintWriter out) {
+        int idWidth = Math.max("plate/channel".length(), sheets.stream().mapToInt(r -> r.id().length()).max()
+                .orElse(0));
+        String fmt = "%-" + idWidth + "s  %-7s %11s %10s %12s %11s %11s %13s  %s%n";
+        out.printf(Locale.ROOT, fmt, "plate/channel", "kind", "peak force", "at", "peak torque", "peak heat",
+                "mean heat", "peak |J|", "Rm (largest)");
+        boolean starred = false;
+        for (SheetSummary r : sheets) {
+            out.printf(Locale.ROOT, fmt, r.id(), Labels.sheetKind(r.kind()),
+                    Units.format(Units.withoutNoise(r.peakForceN(), scales.forceN()), Dimension.FORCE),
+                    Units.format(r.peakForceTimeS(), Dimension.TIME),
+                    Units.format(scales.torque(r.peakTorqueNm()), Dimension.TORQUE),
+                    Units.format(scales.power(r.peakJouleW()), Dimension.POWER),
+                    Units.format(scales.power(r.meanJouleW()), Dimension.POWER),
+                    Units.format(r.peakCurrentDensityAPerM2(), Dimension.CURRENT_DENSITY),
+                    String.format(Locale.ROOT, "%.2g", r.largestReynolds())
+                            + (r.largestReynolds() > SheetState.REYNOLDS_WARNING ? "  " + Labels.reynoldsWarning(
+                            r.largestReynolds()) : ""));
+        }
+        List<String[]> pairs = new ArrayList<>();
+        for (SheetSummary r : sheets) {
+            for (SheetSummary.PairPeak p : r.pairs()) {
+                String star = r.inducedFieldIncluded() ? "" : " *";
+                starred |= !r.inducedFieldIncluded();
+                pairs.add(new String[] {r.id(), p.plus() + " − " + p.minus(),
+                    Units.format(scales.emf(p.peakVoltageV()), Dimension.VOLTAGE) + star,
+                    Units.format(p.peakTimeS(), Dimension.TIME), Labels.positiveElectrode(p.positive()),
+                    Double.isNaN(p.endShortingRatio()) ? "-"
+                            : String.format(Locale.ROOT, "%.1f %%", 100 * p.endShortingRatio())});
+            }
+        }
+        if (!pairs.isEmpty()) {
+            out.println();
+            int pairWidth = Math.max("electrodes".length(), pairs.stream().mapToInt(p -> p[1].length()).max().orElse(0));
+            String pairFmt = "%-" + idWidth + "s  %-" + pairWidth + "s %13s %10s  %-18s %9s%n";
+            out.printf(Locale.ROOT, pairFmt, "plate/channel", "electrodes", "peak voltage", "at", "polarity at peak",
+                    "of B·w·v̄");
+            for (String[] row : pairs) {
+                out.printf(Locale.ROOT, pairFmt, (Object[]) row);
+            }
+            out.println("Voltage U = φ(first) − φ(second) of each pair; B·w·v̄ of a channel with B at the electrodes'"
+                    + " midpoint (Shercliff's value for a field over the whole channel)"
+                    + (starred ? "; '*': see the note below." : "."));
+        }
+        out.println();
     }
 
     /**

@@ -110,6 +110,16 @@ final class PropertiesPanel extends ScrollPane {
             public String loop(Conductor.Loop loop) {
                 return "Loop";
             }
+
+            @Override
+            public String plate(Conductor.Plate plate) {
+                return "Plate";
+            }
+
+            @Override
+            public String channel(Conductor.Channel channel) {
+                return "Liquid channel";
+            }
         });
     }
 

@@ -72,6 +72,16 @@ public final class Picker {
             public Boolean loop(Conductor.Loop loop) {
                 return true;
             }
+
+            @Override
+            public Boolean plate(Conductor.Plate plate) {
+                return true;
+            }
+
+            @Override
+            public Boolean channel(Conductor.Channel channel) {
+                return true;
+            }
         });
     }
 

@@ -4,8 +4,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleFunction;
 import java.util.function.UnaryOperator;
+import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Material;
+import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
@@ -26,6 +28,8 @@ public final class PropertySheet {
     static final List<String> NORTH = List.of("north towards +z (⊙)", "north towards −z (⊗)");
     static final List<String> MATERIALS = List.of("copper", "aluminium");
     static final List<String> GAP = List.of("closed", "open (gap)");
+    /** In the order of {@link Conductor.Channel.Profile}. */
+    static final List<String> PROFILES = List.of("plug (uniform)", "laminar (parabolic)", "turbulent (1/7 power)");
 
     private PropertySheet() {
     }
@@ -237,7 +241,69 @@ public final class PropertySheet {
             public List<Property> loop(Conductor.Loop l) {
                 return loopProperties(l);
             }
+
+            @Override
+            public List<Property> plate(Conductor.Plate plate) {
+                return plateProperties(plate);
+            }
+
+            @Override
+            public List<Property> channel(Conductor.Channel channel) {
+                return channelProperties(channel);
+            }
         });
+    }
+
+    /** Thickness and conductivity; the outline is edited on the canvas, holes and electrodes in the file. */
+    private static List<Property> plateProperties(Conductor.Plate c) {
+        List<Property> p = new ArrayList<>();
+        p.add(quantity("Thickness", Dimension.LENGTH, c.thicknessM(), v -> replace(new Conductor.Plate(c.id(), c.body(),
+                c.outline(), c.holes(), v, c.conductivity(), c.electrodes(), c.pairs(), c.cellM()))));
+        p.add(quantity("Conductivity", Dimension.CONDUCTIVITY, c.sigmaSPerM(), v -> replace(new Conductor.Plate(c.id(),
+                c.body(), c.outline(), c.holes(), c.thicknessM(), new Conductivity.Given(v), c.electrodes(), c.pairs(),
+                c.cellM()))));
+        return p;
+    }
+
+    /** Section, conductivity, velocity profile and, for a steady flow, its mean velocity. */
+    private static List<Property> channelProperties(Conductor.Channel c) {
+        List<Property> p = new ArrayList<>();
+        p.add(quantity("Width", Dimension.LENGTH, c.widthM(), v -> replace(channel(c, c.start(), c.end(), v,
+                c.depthM(), c.sigmaSPerM(), c.profile(), c.flow()))));
+        p.add(quantity("Depth", Dimension.LENGTH, c.depthM(), v -> replace(channel(c, c.start(), c.end(), c.widthM(),
+                v, c.sigmaSPerM(), c.profile(), c.flow()))));
+        p.add(quantity("Conductivity", Dimension.CONDUCTIVITY, c.sigmaSPerM(), v -> replace(channel(c, c.start(),
+                c.end(), c.widthM(), c.depthM(), v, c.profile(), c.flow()))));
+        List<Conductor.Channel.Profile> profiles = List.of(Conductor.Channel.Profile.values());
+        p.add(choice("Velocity profile", PROFILES, profiles.indexOf(c.profile()), i -> replace(channel(c, c.start(),
+                c.end(), c.widthM(), c.depthM(), c.sigmaSPerM(), profiles.get(i), c.flow()))));
+        if (c.flow() instanceof MeanFlow.Steady steady) {
+            p.add(quantity("Mean flow velocity", Dimension.VELOCITY, steady.velocityMPerS(), v -> replace(channel(c,
+                    c.start(), c.end(), c.widthM(), c.depthM(), c.sigmaSPerM(), c.profile(), new MeanFlow.Steady(v)))));
+        }
+        return p;
+    }
+
+    /**
+     * {@code c} with a new centreline, section, conductivity, profile or flow; electrodes keep their
+     * place along the centreline (as a fraction of its length) and their wall.
+     */
+    static Conductor.Channel channel(Conductor.Channel c, Vec2 start, Vec2 end, double widthM, double depthM,
+                                     double sigmaSPerM, Conductor.Channel.Profile profile, MeanFlow flow) {
+        Vec2 along = c.end().minus(c.start());
+        double length = along.length();
+        Vec2 t = along.times(1 / length);
+        Vec2 newAlong = end.minus(start);
+        Vec2 newPerp = newAlong.times(1 / newAlong.length()).perp();
+        List<Conductor.Electrode> electrodes = c.electrodes().stream().map(e -> {
+            Vec2 r = e.at().minus(c.start());
+            double fraction = r.dot(t) / length;
+            double side = Math.signum(t.cross(r));
+            return new Conductor.Electrode(e.name(), start.plus(newAlong.times(fraction))
+                    .plus(newPerp.times(side * widthM / 2)));
+        }).toList();
+        return new Conductor.Channel(c.id(), c.body(), start, end, widthM, depthM, sigmaSPerM, profile, flow,
+                electrodes, c.pairs(), c.cellM());
     }
 
     private static List<Property> loopProperties(Conductor.Loop l) {

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.function.BiFunction;
 import java.util.function.UnaryOperator;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Scenes;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 
@@ -99,8 +100,14 @@ public final class Shapes {
         return mapByBody(c, (body, p) -> f.apply(p));
     }
 
-    /** Applies {@code f(body, point)} to every drawn vertex, told the id of the body that vertex rides. */
+    /**
+     * Applies {@code f(body, point)} to every drawn vertex, told the id of the body that vertex
+     * rides; a plate's or channel's every point (holes and electrodes too) rides its body.
+     */
     public static Conductor mapByBody(Conductor c, BiFunction<String, Vec2, Vec2> f) {
+        if (c instanceof Conductor.Sheet) {
+            return Scenes.mapPositions(c, p -> f.apply(c.body(), p));
+        }
         List<Conductor.Vertex> vs = new ArrayList<>(c.vertices().size());
         for (Conductor.Vertex v : c.vertices()) {
             vs.add(new Conductor.Vertex(f.apply(v.bodyOr(c.body()), v.at()), v.body()));
@@ -131,7 +138,34 @@ public final class Shapes {
             public Conductor loop(Conductor.Loop l) {
                 return new Conductor.Loop(id, body, vs, l.turns(), l.wire(), l.open(), l.loadOhm(), l.temperatureC());
             }
+
+            /** The outline's vertices are the plate's; holes and electrodes stay where they are. */
+            @Override
+            public Conductor plate(Conductor.Plate p) {
+                return new Conductor.Plate(id, body, vs.stream().map(Conductor.Vertex::at).toList(), p.holes(),
+                        p.thicknessM(), p.conductivity(), p.electrodes(), p.pairs(), p.cellM());
+            }
+
+            /**
+             * A channel's corners (start's right, end's right, end's left, start's left) set its
+             * ends at the middle of each end's corners and its width at their mean spacing.
+             */
+            @Override
+            public Conductor channel(Conductor.Channel ch) {
+                Vec2 start = midpoint(vs.get(0).at(), vs.get(3).at());
+                Vec2 end = midpoint(vs.get(1).at(), vs.get(2).at());
+                double width = 0.5 * (vs.get(3).at().minus(vs.get(0).at()).length()
+                        + vs.get(2).at().minus(vs.get(1).at()).length());
+                Conductor.Channel renamed = new Conductor.Channel(id, body, ch.start(), ch.end(), ch.widthM(),
+                        ch.depthM(), ch.sigmaSPerM(), ch.profile(), ch.flow(), ch.electrodes(), ch.pairs(), ch.cellM());
+                return PropertySheet.channel(renamed, start, end, width, ch.depthM(), ch.sigmaSPerM(), ch.profile(),
+                        ch.flow());
+            }
         });
+    }
+
+    private static Vec2 midpoint(Vec2 a, Vec2 b) {
+        return a.plus(b).times(0.5);
     }
 
     public static Source withId(Source s, String id) {

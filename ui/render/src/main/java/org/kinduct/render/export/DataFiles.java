@@ -8,6 +8,7 @@ import java.util.function.ToDoubleFunction;
 import org.kinduct.report.ResultsJson;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.SceneField;
+import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.run.RunResult;
 
@@ -34,10 +35,22 @@ public final class DataFiles {
             new Column("force_x_N", c -> c.forceN().x()), new Column("force_y_N", c -> c.forceN().y()));
     private static final List<Column> WIRE_COLUMNS = List.of(new Column("emf_V", ConductorState::emfV));
 
+    /** The columns of a plate or channel. */
+    private static final List<SheetColumn> SHEET_COLUMNS = List.of(new SheetColumn("drag_x_N", p -> p.forceN().x()),
+            new SheetColumn("drag_y_N", p -> p.forceN().y()), new SheetColumn("torque_Nm", SheetState::torqueNm),
+            new SheetColumn("joule_W", SheetState::joulePowerW),
+            new SheetColumn("peak_current_density_A_per_m2", SheetState::peakCurrentDensityAPerM2),
+            new SheetColumn("reynolds_magnetic", SheetState::magneticReynolds));
+
+    private record SheetColumn(String name, ToDoubleFunction<SheetState> value) {
+    }
+
     /**
      * One row per time; per conductor the columns that apply to it, named {@code id.quantity_unit}:
      * wires {@code emf_V}; loops {@code flux_Wb, linkage_Wb, emf_V, emf_flux_V, current_A,
-     * force_x_N, force_y_N}. Empty cells for values that are not finite.
+     * force_x_N, force_y_N}; plates and channels {@code drag_x_N, drag_y_N, torque_Nm, joule_W,
+     * peak_current_density_A_per_m2, reynolds_magnetic} and per electrode pair
+     * {@code id.plus-minus.voltage_V}. Empty cells for values that are not finite.
      */
     public static String seriesCsv(List<Snapshot> series) {
         StringBuilder out = new StringBuilder("t_s");
@@ -47,6 +60,15 @@ public final class DataFiles {
                     out.append(',').append(c.id()).append('.').append(col.name());
                 }
             }
+            for (SheetState p : series.get(0).sheets()) {
+                for (SheetColumn col : SHEET_COLUMNS) {
+                    out.append(',').append(p.id()).append('.').append(col.name());
+                }
+                for (SheetState.Pair pair : p.pairs()) {
+                    out.append(',').append(p.id()).append('.').append(pair.plus()).append('-').append(pair.minus())
+                            .append(".voltage_V");
+                }
+            }
         }
         out.append('\n');
         for (Snapshot s : series) {
@@ -54,6 +76,14 @@ public final class DataFiles {
             for (ConductorState c : s.conductors()) {
                 for (Column col : columns(c)) {
                     out.append(',').append(num(col.value().applyAsDouble(c)));
+                }
+            }
+            for (SheetState p : s.sheets()) {
+                for (SheetColumn col : SHEET_COLUMNS) {
+                    out.append(',').append(num(col.value().applyAsDouble(p)));
+                }
+                for (SheetState.Pair pair : p.pairs()) {
+                    out.append(',').append(num(pair.voltageV()));
                 }
             }
             out.append('\n');

@@ -4,6 +4,7 @@ import java.util.function.ToDoubleFunction;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
 import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.run.RunResult;
 
@@ -26,10 +27,12 @@ public sealed interface ExportInstant permits ExportInstant.At, ExportInstant.Pe
     }
 
     /**
-     * The sample of the run where |EMF| is largest, over every conductor or over the one named
-     * {@code conductorId} (null: every conductor): of the samples within {@value #TIE} of the peak
-     * (a plateau), the earliest where the flux rule is a check (no conductor at a field edge),
-     * else the earliest; the first sample when every EMF is zero.
+     * The sample of the run where the answer is largest: |EMF| of a wire or loop, or |voltage| of
+     * an electrode pair of a plate or channel, over every conductor or over the one named
+     * {@code conductorId} (null: every conductor); where there is no voltage at all (plates without
+     * electrodes), the force on the plates. Of the samples within {@value #TIE} of the peak (a
+     * plateau), the earliest where the flux rule is a check (no conductor at a field edge), else the
+     * earliest; the first sample when everything is zero.
      */
     record Peak(String conductorId) implements ExportInstant {
 
@@ -40,12 +43,20 @@ public sealed interface ExportInstant permits ExportInstant.At, ExportInstant.Pe
                         + " has " + run.scene().conductors().stream().map(Conductor::id).toList());
             }
             double peak = 0;
+            boolean volts = false;
             for (Snapshot s : run.samples()) {
-                peak = Math.max(peak, largest(s));
+                peak = Math.max(peak, largest(s, true));
+                volts |= hasVoltage(s);
+            }
+            boolean byVoltage = volts;
+            if (!byVoltage) {
+                for (Snapshot s : run.samples()) {
+                    peak = Math.max(peak, largest(s, false));
+                }
             }
             Snapshot first = null;
             for (Snapshot s : run.samples()) {
-                if (largest(s) >= (1 - TIE) * peak) {
+                if (largest(s, byVoltage) >= (1 - TIE) * peak) {
                     if (s.conductors().stream().noneMatch(c -> Double.isNaN(c.disagreement()))) {
                         return s;
                     }
@@ -58,14 +69,28 @@ public sealed interface ExportInstant permits ExportInstant.At, ExportInstant.Pe
         /** Relative nearness to the peak that counts as the peak (a flat top computed to rounding). */
         private static final double TIE = 1e-6;
 
-        private double largest(Snapshot s) {
+        /** The largest |EMF| or pair |voltage| of the conductors taken, or with {@code volts} false their largest force. */
+        private double largest(Snapshot s, boolean volts) {
             double m = 0;
             for (ConductorState c : s.conductors()) {
                 if (conductorId == null || c.id().equals(conductorId)) {
-                    m = Math.max(m, Math.abs(c.emfV()));
+                    m = Math.max(m, volts ? Math.abs(c.emfV()) : c.forceN().length());
+                }
+            }
+            for (SheetState p : s.sheets()) {
+                if (conductorId == null || p.id().equals(conductorId)) {
+                    m = Math.max(m, volts ? p.pairs().stream().mapToDouble(q -> Math.abs(q.voltageV())).max().orElse(0)
+                            : p.forceN().length());
                 }
             }
             return m;
+        }
+
+        /** Whether a conductor taken has a voltage to show: a wire or loop, or a plate or channel with a pair. */
+        private boolean hasVoltage(Snapshot s) {
+            return s.conductors().stream().anyMatch(c -> conductorId == null || c.id().equals(conductorId))
+                    || s.sheets().stream().anyMatch(p -> (conductorId == null || p.id().equals(conductorId))
+                    && !p.pairs().isEmpty());
         }
     }
 

@@ -8,11 +8,14 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.ToDoubleFunction;
 import org.kinduct.report.CautionCheck;
 import org.kinduct.report.RunSummary;
 import org.kinduct.solver.run.ResultScales;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.io.SceneFiles;
+import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.RunMonitor;
 import org.kinduct.solver.run.RunRequest;
@@ -26,6 +29,7 @@ import org.kinduct.render.paint.Java2dSurface;
 import org.kinduct.render.paint.Layer;
 import org.kinduct.render.paint.LineChart;
 import org.kinduct.scene.units.Dimension;
+import org.kinduct.scene.units.Units;
 import org.kinduct.render.view.ViewTransform;
 
 /**
@@ -213,23 +217,50 @@ public final class Exporter {
         return page;
     }
 
-    /** Every conductor's EMF over the run, noise read as 0, with the snapshot's instant marked; null without conductors. */
+    /**
+     * Every wire's and loop's EMF and every electrode pair's voltage over the run, noise read as 0,
+     * with the snapshot's instant marked; for a scene with neither (plates without electrodes), the
+     * force on each plate and channel; null when there is nothing to plot or only one sample.
+     */
     private LineChart.Content waveform(RunResult result) {
         List<Snapshot> samples = result.samples();
-        if (samples.size() < 2 || scene.conductors().isEmpty()) {
+        if (samples.size() < 2) {
             return null;
         }
         double[] t = samples.stream().mapToDouble(Snapshot::tS).toArray();
         List<LineChart.Series> lines = new ArrayList<>();
-        for (int c = 0; c < scene.conductors().size(); c++) {
-            double[] emf = new double[t.length];
-            for (int i = 0; i < t.length; i++) {
-                emf[i] = result.scales().emf(samples.get(i).conductors().get(c).emfV());
-            }
-            lines.add(new LineChart.Series(scene.conductors().get(c).id(), t, emf));
+        Snapshot first = samples.get(0);
+        for (ConductorState c : first.conductors()) {
+            lines.add(new LineChart.Series(c.id(), t, series(samples, s -> result.scales().emf(
+                    s.conductor(c.id()).orElseThrow().emfV()))));
         }
-        return new LineChart.Content("EMF over the run", lines, "t", Dimension.TIME, "EMF", Dimension.VOLTAGE,
-                snapshot().tS());
+        for (SheetState sheet : first.sheets()) {
+            for (int p = 0; p < sheet.pairs().size(); p++) {
+                int pair = p;
+                SheetState.Pair named = sheet.pairs().get(p);
+                lines.add(new LineChart.Series(sheet.id() + " " + named.plus() + "−" + named.minus(), t,
+                        series(samples, s -> result.scales().emf(s.sheet(sheet.id()).orElseThrow().pairs().get(pair)
+                                .voltageV()))));
+            }
+        }
+        if (!lines.isEmpty()) {
+            boolean emf = !first.conductors().isEmpty();
+            boolean pairs = lines.size() > first.conductors().size();
+            String title = emf && pairs ? "EMF and electrode voltages over the run"
+                    : emf ? "EMF over the run" : "Electrode voltages over the run";
+            return new LineChart.Content(title, lines, "t", Dimension.TIME, emf && !pairs ? "EMF" : "V", Dimension.VOLTAGE,
+                    snapshot().tS());
+        }
+        for (SheetState sheet : first.sheets()) {
+            lines.add(new LineChart.Series(sheet.id(), t, series(samples, s -> Units.withoutNoise(
+                    s.sheet(sheet.id()).orElseThrow().forceN().length(), result.scales().forceN()))));
+        }
+        return lines.isEmpty() ? null : new LineChart.Content("Force on the plates over the run (the drag)", lines,
+                "t", Dimension.TIME, "F", Dimension.FORCE, snapshot().tS());
+    }
+
+    private static double[] series(List<Snapshot> samples, ToDoubleFunction<Snapshot> value) {
+        return samples.stream().mapToDouble(value).toArray();
     }
 
     /** Output pixels per page unit. */

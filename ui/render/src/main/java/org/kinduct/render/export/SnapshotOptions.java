@@ -43,11 +43,22 @@ public record SnapshotOptions(ExportInstant instant, int widthPx, int dpi, ViewC
         layers = layers.isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(layers);
     }
 
-    /** The editor's default layers (all but the ⊙/⊗ symbol grid) and an automatic colour range. */
+    /**
+     * Every layer but the ⊙/⊗ symbol grid and the |J| colours (which hide the field map under plates
+     * and channels; their streamlines show the currents), and an automatic colour range.
+     */
     public static SnapshotOptions standard(ExportInstant instant, int widthPx, int dpi, ViewChoice view,
                                            LocalDate date, String version) {
-        return new SnapshotOptions(instant, widthPx, dpi, view, EnumSet.complementOf(EnumSet.of(Layer.SYMBOLS)),
-                ColourRange.automatic(), date, version);
+        return new SnapshotOptions(instant, widthPx, dpi, view,
+                EnumSet.complementOf(EnumSet.of(Layer.SYMBOLS, Layer.CURRENT_DENSITY)), ColourRange.automatic(), date,
+                version);
+    }
+
+    /** These options with {@code layer} shown too. */
+    public SnapshotOptions withLayer(Layer layer) {
+        EnumSet<Layer> more = layers.isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(layers);
+        more.add(layer);
+        return new SnapshotOptions(instant, widthPx, dpi, view, more, range, date, version);
     }
 
     /** {@link #standard(ExportInstant, int, int, ViewChoice, LocalDate, String)} at a given time. */

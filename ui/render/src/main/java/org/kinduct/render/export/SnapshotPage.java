@@ -13,6 +13,7 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Circulation;
 import org.kinduct.solver.ConductorState;
+import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.Terminal;
 import org.kinduct.render.paint.EditorMarks;
@@ -73,6 +74,13 @@ final class SnapshotPage {
     static final String SIGNS = "Signs: x right, y up; B_z > 0 out of the page (⊙), < 0 into it (⊗). EMF and"
             + " current are positive along each conductor's vertex order (loops: counter-clockwise); a wire's"
             + " EMF > 0 makes its last vertex the + end.";
+    static final String PATCH_POTENTIALS = "* A field patch moves: currents, forces and heat in plates and channels are"
+            + " exact, but electrode voltages lack the patch's w·A, unknown from B_z alone.";
+    /** Said after the warning of a state beyond the resistive limit. */
+    static final String RESISTIVE_LIMIT = "; its own field, neglected here, weakens the currents: drag and heat are"
+            + " overestimated.";
+    /** Gap between two tables, units. */
+    private static final double TABLE_GAP = 8;
     static final String MOTIONAL_ONLY = "* v × B part only: a moving field patch has no known induced electric"
             + " field.";
 
@@ -83,7 +91,8 @@ final class SnapshotPage {
     private final List<String> description;
     private final double mapTop;
     private final double mapHeight;
-    private final Table table;
+    /** Conductors, plates and channels, electrode pairs: those that have rows. */
+    private final List<Table> tables;
     private final ResultScales scales;
     /** The EMF over the run with the shown instant marked, or null for a page without one. */
     private final LineChart.Content waveform;
@@ -120,7 +129,7 @@ final class SnapshotPage {
             mapHeight = Math.max(MIN_BOX_HEIGHT, Math.min(MAX_MAP_HEIGHT, WIDTH * aspect));
             mapView = new ViewTransform(0, 0, 1, WIDTH, mapHeight).fitting(box.x0(), box.y0(), box.x1(), box.y1(), 0);
         }
-        table = table(scene, snapshot, scales, text);
+        tables = tables(scene, snapshot, scales, text);
         this.scales = scales;
         this.waveform = waveform;
         chartTop = mapTop + mapHeight + 8;
@@ -129,12 +138,25 @@ final class SnapshotPage {
         for (ConductorState c : snapshot.conductors()) {
             motionalOnly |= c.kind() == ConductorState.Kind.WIRE && !c.inducedFieldIncluded();
         }
+        boolean patchPotentials = snapshot.sheets().stream().anyMatch(p -> !p.inducedFieldIncluded());
+        List<String> limits = snapshot.sheets().stream().filter(SheetState::beyondResistiveLimit)
+                .map(p -> p.id() + ": " + Labels.reynoldsWarning(p.magneticReynolds()) + RESISTIVE_LIMIT).toList();
         for (String line : wrap(SIGNS, BODY, false, text)) {
             notes.add(new Note(line, MUTED, false));
         }
         if (motionalOnly) {
             for (String line : wrap(MOTIONAL_ONLY, BODY, false, text)) {
                 notes.add(new Note(line, MUTED, false));
+            }
+        }
+        if (patchPotentials) {
+            for (String line : wrap(PATCH_POTENTIALS, BODY, false, text)) {
+                notes.add(new Note(line, MUTED, false));
+            }
+        }
+        for (String limit : limits) {
+            for (String line : wrap(limit, BODY, true, text)) {
+                notes.add(new Note(line, WARNING, true));
             }
         }
         for (String remark : remarks) {
@@ -147,7 +169,7 @@ final class SnapshotPage {
                 notes.add(new Note(line, WARNING, true));
             }
         }
-        height = Math.ceil(tableTop + table.rows().size() * LINE + 10 + notes.size() * LINE + MARGIN);
+        height = Math.ceil(tableTop + tablesHeight() + 10 + notes.size() * LINE + MARGIN);
     }
 
     private static double clampMapHeight(double h) {
@@ -211,8 +233,12 @@ final class SnapshotPage {
         if (waveform != null) {
             LineChart.draw(s, MARGIN - 8, chartTop, WIDTH - 2 * MARGIN + 8, CHART_HEIGHT, waveform);
         }
-        drawTable(s);
-        double y = tableTop + table.rows().size() * LINE + 10;
+        double top = tableTop;
+        for (Table table : tables) {
+            drawTable(s, table, top);
+            top += table.rows().size() * LINE + TABLE_GAP;
+        }
+        double y = tableTop + tablesHeight() + 10;
         for (Note n : notes) {
             s.fill(n.colour());
             s.text(n.text(), MARGIN, y + LINE / 2, BODY, n.bold(), Surface.Anchor.LEFT);
@@ -246,8 +272,17 @@ final class SnapshotPage {
                 + Quantities.length(mapView.maxY() - mapView.minY());
     }
 
-    private void drawTable(Surface s) {
-        double y = tableTop;
+    /** The tables' height with the gaps between them, units. */
+    private double tablesHeight() {
+        double h = 0;
+        for (Table table : tables) {
+            h += table.rows().size() * LINE;
+        }
+        return h + TABLE_GAP * Math.max(0, tables.size() - 1);
+    }
+
+    private static void drawTable(Surface s, Table table, double top) {
+        double y = top;
         List<String[]> rows = table.rows();
         for (int r = 0; r < rows.size(); r++) {
             if (r > 0 && r % 2 == 0) {
@@ -274,17 +309,44 @@ final class SnapshotPage {
     }
 
     /**
-     * The results table at the snapshot time. Columns that apply to no conductor are left out; a
+     * The results tables at the snapshot time: wires and loops, plates and channels, and electrode
+     * pairs, each where it has rows.
+     */
+    private static List<Table> tables(Scene scene, Snapshot snap, ResultScales scales, double avail) {
+        List<Table> tables = new ArrayList<>();
+        List<String[]> conductors = new ArrayList<>();
+        for (ConductorState st : snap.conductors()) {
+            conductors.add(row(scene.conductor(st.id()).orElseThrow(), st, scales));
+        }
+        if (!conductors.isEmpty()) {
+            tables.add(table(new String[] {"conductor", "Φ per turn", "EMF", "methods agree", "I",
+                "polarity / sense", "force, direction"}, new boolean[] {false, true, true, false, true, false, false},
+                    conductors, avail));
+        }
+        List<String[]> sheets = new ArrayList<>();
+        List<String[]> pairs = new ArrayList<>();
+        for (SheetState st : snap.sheets()) {
+            sheets.add(sheetRow(st, scales));
+            for (SheetState.Pair p : st.pairs()) {
+                pairs.add(pairRow(st, p, scales));
+            }
+        }
+        if (!sheets.isEmpty()) {
+            tables.add(table(new String[] {"plate/channel", "force, direction", "torque", "Joule heat", "peak |J|",
+                "Rm"}, new boolean[] {false, false, true, true, true, true}, sheets, avail));
+        }
+        if (!pairs.isEmpty()) {
+            tables.add(table(new String[] {"electrodes", "U = φ+ − φ−", "polarity", "of B·w·v̄"},
+                    new boolean[] {false, true, false, true}, pairs, avail));
+        }
+        return tables;
+    }
+
+    /**
+     * A table of {@code all} under {@code header}. Columns that apply to no row are left out; a
      * table still too wide for {@code avail} units gets a smaller font, then shortened ids.
      */
-    private static Table table(Scene scene, Snapshot snap, ResultScales scales, double avail) {
-        String[] header = {"conductor", "Φ per turn", "EMF", "methods agree", "I", "polarity / sense",
-            "force, direction"};
-        boolean[] numeric = {false, true, true, false, true, false, false};
-        List<String[]> all = new ArrayList<>();
-        for (ConductorState st : snap.conductors()) {
-            all.add(row(scene.conductor(st.id()).orElseThrow(), st, scales));
-        }
+    private static Table table(String[] header, boolean[] numeric, List<String[]> all, double avail) {
         List<Integer> kept = new ArrayList<>();
         for (int col = 0; col < header.length; col++) {
             final int c = col;
@@ -330,6 +392,24 @@ final class SnapshotPage {
         return new Table(rows, left, width, right, font);
     }
 
+    /** A plate's or channel's row: id, force with its direction, torque, Joule power, peak |J|, Rm. */
+    private static String[] sheetRow(SheetState st, ResultScales scales) {
+        Vec2 force = scales.force(st.forceN());
+        double f = force.length();
+        return new String[] {st.id(), Quantities.force(f) + (f > 0 ? " ∠ " + Labels.direction(force) : ""),
+            Quantities.torque(scales.torque(st.torqueNm())), Quantities.power(scales.power(st.joulePowerW())),
+            Quantities.currentDensity(st.peakCurrentDensityAPerM2()),
+            String.format(Locale.ROOT, "%.2g", st.magneticReynolds()) + (st.beyondResistiveLimit() ? " !" : "")};
+    }
+
+    /** An electrode pair's row: conductor and electrodes, voltage, + electrode, share of B·w·v̄ (channels). */
+    private static String[] pairRow(SheetState st, SheetState.Pair p, ResultScales scales) {
+        return new String[] {st.id() + ": " + p.plus() + " − " + p.minus(),
+            Quantities.voltage(scales.emf(p.voltageV())) + (st.inducedFieldIncluded() ? "" : " *"),
+            Labels.positiveElectrode(p.positive()), Double.isNaN(p.endShortingRatio()) ? NOT_APPLICABLE
+                    : String.format(Locale.ROOT, "%.1f %%", 100 * p.endShortingRatio())};
+    }
+
     /** Widest cell per column, header in bold. */
     private static double[] widths(List<String[]> rows, double font) {
         double[] w = new double[rows.get(0).length];
@@ -372,15 +452,8 @@ final class SnapshotPage {
         Vec2 forceN = scales.force(st.forceN());
         double f = forceN.length();
         // A closed loop's force is a result even when it is zero; only its direction is then undefined.
-        String force = closedLoop ? Quantities.force(f) + (f > 0 ? " ∠ " + direction(forceN) : "") : NOT_APPLICABLE;
+        String force = closedLoop ? Quantities.force(f) + (f > 0 ? " ∠ " + Labels.direction(forceN) : "") : NOT_APPLICABLE;
         return new String[] {c.id(), flux, emf, agree, current, sense, force};
-    }
-
-    /** Direction of an in-plane vector as an angle from +x, counter-clockwise, in whole degrees (−179° … 180°). */
-    static String direction(Vec2 v) {
-        long deg = Math.round(Math.toDegrees(Math.atan2(v.y(), v.x())));
-        long d = deg == -180 ? 180 : deg;
-        return (d < 0 ? "−" + -d : Long.toString(d)) + "°";
     }
 
     /** Greedy word wrap to {@code width} units. */

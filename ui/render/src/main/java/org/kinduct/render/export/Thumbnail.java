@@ -26,7 +26,8 @@ import org.kinduct.render.view.ViewTransform;
 public final class Thumbnail {
 
     /** Only what identifies a scene at a glance; labels and legends are unreadable at this size. */
-    private static final Set<Layer> LAYERS = EnumSet.of(Layer.HEAT_MAP, Layer.SOURCES, Layer.CONDUCTORS, Layer.LENZ);
+    private static final Set<Layer> LAYERS = EnumSet.of(Layer.HEAT_MAP, Layer.SOURCES, Layer.CONDUCTORS,
+            Layer.EDDY_CURRENTS, Layer.LENZ);
     /** Screen pixels per field sample: coarse, a thumbnail has few pixels to fill. */
     private static final int MAP_STEP_PX = 3;
     /** Painter units per device pixel: the painter's fixed-size marks need a page a few hundred units wide. */

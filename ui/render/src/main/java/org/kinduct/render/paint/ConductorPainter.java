@@ -40,9 +40,10 @@ final class ConductorPainter {
             for (int pass = 0; pass < 2; pass++) {
                 s.stroke(pass == 0 ? (selected ? Palette.withAlpha(Palette.SELECTION, 0.55) : Palette.HALO)
                         : Palette.INK);
-                s.lineWidth(pass == 0 ? (selected ? 9 : 5.5) : 2.5);
+                double width = pass == 0 ? (selected ? 9 : 5.5) : 2.5;
+                s.lineWidth(width);
                 s.dash();
-                outline(s, v, c, pts);
+                outline(s, v, c, pts, placement, width);
             }
             slidingContacts(s, v, c, pts);
             if (selected) {
@@ -81,31 +82,49 @@ final class ConductorPainter {
         }
     }
 
-    /** The line a conductor runs along: a wire's polyline, a loop's polygon, an open loop's with its gap. */
-    private static void outline(Surface s, ViewTransform v, Conductor c, List<Vec2> pts) {
-        boolean gap = c.match(new Conductor.Cases<>() {
+    /**
+     * The line a conductor runs along: a wire's polyline, a loop's polygon, an open loop's with its
+     * gap, a plate's or channel's edges.
+     */
+    private static void outline(Surface s, ViewTransform v, Conductor c, List<Vec2> pts, Placement placement,
+                                double widthPx) {
+        c.match(new Conductor.Cases<Void>() {
             @Override
-            public Boolean wire(Conductor.Wire wire) {
-                return false;
+            public Void wire(Conductor.Wire wire) {
+                SourcePainter.polygon(s, v, pts, false);
+                s.strokePath();
+                return null;
             }
 
             @Override
-            public Boolean loop(Conductor.Loop loop) {
-                return loop.open();
+            public Void loop(Conductor.Loop loop) {
+                SourcePainter.polygon(s, v, pts, !loop.open());
+                if (loop.open()) {
+                    Vec2 last = pts.get(pts.size() - 1);
+                    Vec2 first = pts.get(0);
+                    Vec2 g1 = lerp(last, first, GAP_START);
+                    Vec2 g2 = lerp(last, first, GAP_END);
+                    s.moveTo(v.screenX(last.x()), v.screenY(last.y()));
+                    s.lineTo(v.screenX(g1.x()), v.screenY(g1.y()));
+                    s.moveTo(v.screenX(g2.x()), v.screenY(g2.y()));
+                    s.lineTo(v.screenX(first.x()), v.screenY(first.y()));
+                }
+                s.strokePath();
+                return null;
+            }
+
+            @Override
+            public Void plate(Conductor.Plate plate) {
+                SheetPainter.edges(s, v, plate, placement, widthPx);
+                return null;
+            }
+
+            @Override
+            public Void channel(Conductor.Channel channel) {
+                SheetPainter.edges(s, v, channel, placement, widthPx);
+                return null;
             }
         });
-        SourcePainter.polygon(s, v, pts, c instanceof Conductor.Loop && !gap);
-        if (gap) {
-            Vec2 last = pts.get(pts.size() - 1);
-            Vec2 first = pts.get(0);
-            Vec2 g1 = lerp(last, first, GAP_START);
-            Vec2 g2 = lerp(last, first, GAP_END);
-            s.moveTo(v.screenX(last.x()), v.screenY(last.y()));
-            s.lineTo(v.screenX(g1.x()), v.screenY(g1.y()));
-            s.moveTo(v.screenX(g2.x()), v.screenY(g2.y()));
-            s.lineTo(v.screenX(first.x()), v.screenY(first.y()));
-        }
-        s.strokePath();
     }
 
     static void drawLenz(Surface s, ViewTransform v, Scene scene, Snapshot snap, LabelPlacer placer) {
@@ -223,22 +242,21 @@ final class ConductorPainter {
         }
     }
 
-    static void placeCallouts(Surface s, ViewTransform v, Scene scene, Snapshot snap, ResultScales scales,
-                              LabelPlacer placer, List<Runnable> labels) {
+    static void placeCallouts(Surface s, ViewTransform v, Scene scene, Placement placement, Snapshot snap,
+                              ResultScales scales, LabelPlacer placer, List<Runnable> labels) {
         double lineH = ScenePainter.FONT + 3;
-        for (ConductorState st : snap.conductors()) {
-            reserveIfSmall(v, st.vertices(), placer);
-        }
         for (Conductor c : scene.conductors()) {
-            ConductorState st = snap.conductor(c.id()).orElse(null);
-            if (st == null) {
+            reserveIfSmall(v, placement.vertices(c), placer);
+        }
+        SheetPainter.reserveEddies(v, scene, snap, placement, placer);
+        for (Conductor c : scene.conductors()) {
+            String[] lines = calloutLines(c, snap, scales);
+            if (lines == null) {
                 continue;
             }
-            List<Vec2> pts = st.vertices();
-            Vec2 anchor = anchor(c, pts);
+            Vec2 anchor = anchor(c, placement.vertices(c));
             double ax = v.screenX(anchor.x());
             double ay = v.screenY(anchor.y());
-            String[] lines = calloutLines(c, st, scales);
             double w = 0;
             for (String line : lines) {
                 w = Math.max(w, s.textWidth(line, ScenePainter.FONT, false));
@@ -279,48 +297,70 @@ final class ConductorPainter {
         }
     }
 
-    /** Where a callout's leader points: a loop's upper-right-most vertex, a wire's middle. */
+    /**
+     * Where a callout's leader points: a wire's middle; the middle of a plate's or channel's top (its
+     * callout goes above it, clear of the eddies inside); a loop's upper-right-most vertex.
+     */
     private static Vec2 anchor(Conductor c, List<Vec2> pts) {
-        return c.match(new Conductor.Cases<>() {
-            @Override
-            public Vec2 wire(Conductor.Wire wire) {
-                int mid = (pts.size() - 1) / 2;
-                return lerp(pts.get(mid), pts.get(mid + 1), 0.5);
+        if (c instanceof Conductor.Wire) {
+            int mid = (pts.size() - 1) / 2;
+            return lerp(pts.get(mid), pts.get(mid + 1), 0.5);
+        }
+        Vec2 best = pts.get(0);
+        if (c instanceof Conductor.Sheet) {
+            Extent box = Extent.of(pts);
+            return new Vec2((box.minX() + box.maxX()) / 2, box.maxY());
+        }
+        for (Vec2 p : pts) {
+            if (p.x() + p.y() > best.x() + best.y()) {
+                best = p;
             }
-
-            @Override
-            public Vec2 loop(Conductor.Loop loop) {
-                Vec2 best = pts.get(0);
-                for (Vec2 p : pts) {
-                    if (p.x() + p.y() > best.x() + best.y()) {
-                        best = p;
-                    }
-                }
-                return best;
-            }
-        });
+        }
+        return best;
     }
 
-    /** The callout's lines: id, EMF and current or flux or polarity, noise read as 0 against {@code scales}. */
-    static String[] calloutLines(Conductor c, ConductorState st, ResultScales scales) {
-        String emf = "ε " + Quantities.voltage(scales.emf(st.emfV()));
+    /**
+     * The callout's lines: id, EMF and current or flux or polarity of a wire or loop, a plate's or
+     * channel's as {@link SheetPainter#calloutLines} has them, noise read as 0 against
+     * {@code scales}; null when the snapshot holds no state for the conductor.
+     */
+    static String[] calloutLines(Conductor c, Snapshot snap, ResultScales scales) {
         return c.match(new Conductor.Cases<>() {
             @Override
             public String[] wire(Conductor.Wire wire) {
-                return new String[] {c.id(), emf, Labels.polarity(st.positiveEnd(), false)};
+                return snap.conductor(c.id()).map(st -> new String[] {c.id(), emf(st, scales),
+                    Labels.polarity(st.positiveEnd(), false)}).orElse(null);
             }
 
             @Override
             public String[] loop(Conductor.Loop loop) {
-                if (loop.open()) {
-                    return new String[] {c.id(), emf + " across gap", "Φ " + Quantities.flux(scales.flux(st.fluxWb()))
-                            + (loop.turns() > 1 ? " per turn" : "")};
-                }
-                String arrow = Labels.senseArrow(st.direction());
-                return new String[] {c.id(), emf, "I " + Quantities.current(scales.current(st.currentA()))
-                        + (arrow.isEmpty() ? "" : " " + arrow)};
+                return snap.conductor(c.id()).map(st -> loopLines(loop, st, scales)).orElse(null);
+            }
+
+            @Override
+            public String[] plate(Conductor.Plate plate) {
+                return snap.sheet(c.id()).map(st -> SheetPainter.calloutLines(plate, st, scales)).orElse(null);
+            }
+
+            @Override
+            public String[] channel(Conductor.Channel channel) {
+                return snap.sheet(c.id()).map(st -> SheetPainter.calloutLines(channel, st, scales)).orElse(null);
             }
         });
+    }
+
+    private static String emf(ConductorState st, ResultScales scales) {
+        return "ε " + Quantities.voltage(scales.emf(st.emfV()));
+    }
+
+    private static String[] loopLines(Conductor.Loop loop, ConductorState st, ResultScales scales) {
+        if (loop.open()) {
+            return new String[] {loop.id(), emf(st, scales) + " across gap", "Φ "
+                    + Quantities.flux(scales.flux(st.fluxWb())) + (loop.turns() > 1 ? " per turn" : "")};
+        }
+        String arrow = Labels.senseArrow(st.direction());
+        return new String[] {loop.id(), emf(st, scales), "I " + Quantities.current(scales.current(st.currentA()))
+                + (arrow.isEmpty() ? "" : " " + arrow)};
     }
 
     static void drawMarks(Surface s, ViewTransform v, EditorMarks marks) {

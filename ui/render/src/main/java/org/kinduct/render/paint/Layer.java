@@ -8,6 +8,10 @@ public enum Layer {
     GRID("Grid"),
     SOURCES("Sources"),
     CONDUCTORS("Conductors"),
+    /** Streamlines of the eddy currents in plates and channels (contours of the stream function). */
+    EDDY_CURRENTS("Eddy-current streamlines"),
+    /** |J| colours over plates and channels; hides the field map under them. */
+    CURRENT_DENSITY("Current density |J|"),
     LENZ("Polarity and current arrows"),
     MOTION("Velocity arrows"),
     CALLOUTS("Value labels"),

@@ -9,7 +9,8 @@ import org.kinduct.scene.units.Dimension;
  * round ticks ({@link PlotAxis}, as the study plots use), a key naming each line in its colour,
  * and an optional marker at one x (the instant a picture shows). The y axis is symmetric about
  * zero when the data change sign (an EMF that reverses reads at a glance), else it starts at
- * zero. Stateless; every surface draws the same chart.
+ * zero; it reaches {@value #HEADROOM} of the range past the data, so a flat top is not drawn on
+ * the frame. Stateless; every surface draws the same chart.
  */
 public final class LineChart {
 
@@ -21,6 +22,8 @@ public final class LineChart {
     private static final double BOTTOM = 34;
     private static final double TOP = 20;
     private static final double RIGHT = 10;
+    /** Room above (and below, when symmetric) the data, as a fraction of their range. */
+    private static final double HEADROOM = 0.06;
 
     /** One line: its name and its values at the x's (NaN leaves a gap). */
     public record Series(String label, double[] x, double[] y) {
@@ -63,6 +66,9 @@ public final class LineChart {
             yLow = -1;
             yHigh = 1;
         }
+        double room = HEADROOM * (yHigh - yLow);
+        yHigh += room;
+        yLow -= yLow < 0 ? room : 0;
         double xLow = xr[0];
         double xHigh = xr[1] > xr[0] ? xr[1] : xr[0] + 1;
         PlotAxis xAxis = new PlotAxis(c.xName(), c.xUnit().siUnit().symbol(), false, xLow, xHigh);

@@ -45,6 +45,22 @@ public final class Quantities {
         return show(n, Dimension.FORCE);
     }
 
+    public static String torque(double nm) {
+        return show(nm, Dimension.TORQUE);
+    }
+
+    public static String power(double w) {
+        return show(w, Dimension.POWER);
+    }
+
+    public static String currentDensity(double aPerM2) {
+        return show(aPerM2, Dimension.CURRENT_DENSITY);
+    }
+
+    public static String velocity(double mps) {
+        return show(mps, Dimension.VELOCITY);
+    }
+
     public static String time(double s) {
         return show(s, Dimension.TIME);
     }

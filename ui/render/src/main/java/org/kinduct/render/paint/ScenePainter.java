@@ -71,6 +71,12 @@ public final class ScenePainter {
         if (legendBox != null) {
             fixed.add(legendBox);
         }
+        double peakJ = f.shows(Layer.CURRENT_DENSITY) ? SheetPainter.peakCurrentDensity(f.snapshot()) : 0;
+        LabelPlacer.Box densityKey = peakJ > 0 && legendBox != null ? new LabelPlacer.Box(legendBox.x(),
+                legendBox.y() - CurrentDensityMap.KEY_H - 6, CurrentDensityMap.KEY_W, CurrentDensityMap.KEY_H) : null;
+        if (densityKey != null) {
+            fixed.add(densityKey);
+        }
         // The axis values join the fixed boxes, so no callout or contour label covers them.
         if (f.shows(Layer.GRID)) {
             grid(s, v, fixed);
@@ -80,12 +86,14 @@ public final class ScenePainter {
         Placement placement = Placement.of(f.scene(), f.tS(), f.freeBodies());
         List<Runnable> sourceLabels = f.shows(Layer.SOURCES)
                 ? SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer) : List.of();
+        SheetPainter.drawInterior(s, v, f, placement);
         if (f.shows(Layer.CONDUCTORS)) {
             ConductorPainter.drawConductors(s, v, f.scene(), placement, f.marks());
             keepLabelsOffConductors(v, f.scene(), placement, placer);
         }
         if (f.shows(Layer.LENZ) && f.snapshot() != null) {
             ConductorPainter.drawLenz(s, v, f.scene(), f.snapshot(), placer);
+            SheetPainter.drawLenz(s, v, f, placement, placer);
         }
         // Source labels keep off the velocity arrows, and are placed before the velocity labels, so
         // a magnet keeps its label on its centre and those move instead.
@@ -95,10 +103,11 @@ public final class ScenePainter {
         sourceLabels.forEach(Runnable::run);
         if (f.shows(Layer.MOTION)) {
             MotionPainter.draw(s, v, f.scene(), placement, placer);
+            SheetPainter.drawFlow(s, v, f, placement, placer);
         }
         List<Runnable> labels = new ArrayList<>();
         if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
-            ConductorPainter.placeCallouts(s, v, f.scene(), f.snapshot(), f.scales(), placer, labels);
+            ConductorPainter.placeCallouts(s, v, f.scene(), placement, f.snapshot(), f.scales(), placer, labels);
         }
         contourLabels.forEach(c -> placeContourLabel(s, c, placer, labels));
         ConductorPainter.drawMarks(s, v, f.marks());
@@ -108,6 +117,9 @@ public final class ScenePainter {
         }
         if (legendBox != null) {
             legend(s, legendBox, scale, f.shows(Layer.CONTOURS), caution, f.raster() != null);
+        }
+        if (densityKey != null) {
+            CurrentDensityMap.key(s, densityKey.x(), densityKey.y(), peakJ);
         }
         header(s, f);
         s.restore();

@@ -1,0 +1,117 @@
+package org.kinduct.solver.plate;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.kinduct.scene.Pose;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Source;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.Kinematics;
+import org.kinduct.solver.SourceFields;
+import org.kinduct.solver.field.PhysicalSources;
+import org.kinduct.solver.field.PlaneField;
+
+/**
+ * Every source of a scene placed at one instant, with what the sheets need of it at a point of
+ * the plane: B_z, and the part of −∂A/∂t that drives current (see the package comment): for a
+ * source whose body moves with velocity field w, −w × B = (−w_y·B_z, w_x·B_z) in the plane; for an
+ * AC-driven coil, −(di/dt)·A₁. The gradient part ∇(w·A) is left to {@link #gaugeV}, which the
+ * electrodes' potentials add. Immutable; safe to share between the sheets of one instant.
+ */
+final class PlacedSources {
+
+    /** One placed source: its field, and its body's motion when it moves. */
+    private record Placed(PlaneField field, Pose moving, PlaneField perAmpere, double rateAPerS) {
+    }
+
+    private final Placed[] sources;
+    private final boolean inducedKnown;
+
+    private PlacedSources(Placed[] sources, boolean inducedKnown) {
+        this.sources = sources;
+        this.inducedKnown = inducedKnown;
+    }
+
+    static PlacedSources at(Scene scene, Kinematics kinematics, double tS) {
+        List<Placed> placed = new ArrayList<>();
+        boolean known = true;
+        for (Source s : scene.sources()) {
+            Pose pose = kinematics.poseAt(s.body(), tS);
+            PlaneField field = SourceFields.place(s, pose, tS);
+            boolean moves = !(s instanceof Source.UniformField)
+                    && (pose.omegaRadPerS() != 0 || !pose.velocity().equals(Vec2.ZERO));
+            PlaneField perAmpere = null;
+            double rate = 0;
+            if (s instanceof Source.SourceCoil coil && coil.alternates()) {
+                perAmpere = PhysicalSources.coil(new Source.SourceCoil(coil.id(), coil.body(), coil.shape(),
+                        coil.turns(), coil.planeZM(), Source.Drive.dc(1)), pose, tS);
+                rate = coil.drive().rateAt(tS);
+            }
+            known &= !moves || field.hasPhysicalPotential();
+            placed.add(new Placed(field, moves ? pose : null, perAmpere, rate));
+        }
+        return new PlacedSources(placed.toArray(Placed[]::new), known);
+    }
+
+    /**
+     * At (x, y): {@code out[0]} = B_z (T), {@code out[1..2]} = the current-driving part of −∂A/∂t
+     * (V/m), in scene coordinates.
+     */
+    void sample(double x, double y, double[] out, double[] scratch) {
+        double bz = 0;
+        double ex = 0;
+        double ey = 0;
+        for (Placed p : sources) {
+            double b = p.field().bz(x, y);
+            bz += b;
+            if (p.moving() != null) {
+                Pose pose = p.moving();
+                double armX = x - pose.pivot().x() - pose.offset().x();
+                double armY = y - pose.pivot().y() - pose.offset().y();
+                double wx = pose.velocity().x() - pose.omegaRadPerS() * armY;
+                double wy = pose.velocity().y() + pose.omegaRadPerS() * armX;
+                ex -= wy * b;
+                ey += wx * b;
+            }
+            if (p.perAmpere() != null) {
+                p.perAmpere().potential(x, y, scratch);
+                ex -= p.rateAPerS() * scratch[0];
+                ey -= p.rateAPerS() * scratch[1];
+            }
+        }
+        out[0] = bz;
+        out[1] = ex;
+        out[2] = ey;
+    }
+
+    /** B_z at (x, y), tesla. */
+    double bzT(double x, double y) {
+        double bz = 0;
+        for (Placed p : sources) {
+            bz += p.field().bz(x, y);
+        }
+        return bz;
+    }
+
+    /**
+     * Σ w·A over the moving physical sources at (x, y), volts: the gradient part of their induced
+     * field, which the potential carries (φ = φ' + w·A, see the package comment).
+     */
+    double gaugeV(double x, double y) {
+        double sum = 0;
+        double[] a = new double[2];
+        for (Placed p : sources) {
+            if (p.moving() != null && p.field().hasPhysicalPotential()) {
+                Vec2 w = p.moving().velocityAt(new Vec2(x, y));
+                p.field().potential(x, y, a);
+                sum += w.x() * a[0] + w.y() * a[1];
+            }
+        }
+        return sum;
+    }
+
+    /** False when a moving field patch's w·A, unknown from B_z, is missing from the potentials. */
+    boolean inducedKnown() {
+        return inducedKnown;
+    }
+}

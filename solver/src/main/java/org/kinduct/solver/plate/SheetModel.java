@@ -1,0 +1,114 @@
+package org.kinduct.solver.plate;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Polygons;
+import org.kinduct.scene.Scene;
+import org.kinduct.scene.Vec2;
+import org.kinduct.solver.SheetState;
+import org.kinduct.solver.sheet.ChannelFlow;
+import org.kinduct.solver.sheet.Electrode;
+import org.kinduct.solver.sheet.SheetConductor;
+import org.kinduct.solver.sheet.SheetGrid;
+import org.kinduct.solver.sheet.SheetShape;
+
+/**
+ * One plate or channel of a scene, ready to solve: its material, its electrodes moved onto the
+ * edge they lie on (the file allows a millionth of the conductor's size off it), its cell size and,
+ * built on first use and then kept, its grid in the body's drawn frame.
+ */
+final class SheetModel {
+
+    /** An automatic cell size that splits a narrow neck is halved at most this often. */
+    private static final int REFINEMENTS = 3;
+
+    private final Conductor.Sheet sheet;
+    private final SheetState.Kind kind;
+    private final SheetConductor material;
+    private final List<Electrode> electrodes;
+    private final double requestedCellM;
+    private final boolean automatic;
+    private SheetGrid grid;
+
+    SheetModel(Conductor.Sheet sheet, Scene scene) {
+        this.sheet = sheet;
+        kind = sheet instanceof Conductor.Channel ? SheetState.Kind.CHANNEL : SheetState.Kind.PLATE;
+        material = sheet instanceof Conductor.Channel channel
+                ? SheetConductor.liquid(channel.sigmaSPerM(), channel.depthM(), channel.widthM())
+                : SheetConductor.plate(sheet.sigmaSPerM(), sheet.thicknessM());
+        electrodes = new ArrayList<>();
+        for (Conductor.Electrode e : sheet.electrodes()) {
+            electrodes.add(new Electrode(e.name(), onEdge(e.at())));
+        }
+        automatic = sheet.cellM().isEmpty();
+        requestedCellM = automatic ? CellSize.automatic(sheet, scene) : sheet.cellM().getAsDouble();
+    }
+
+    Conductor.Sheet sheet() {
+        return sheet;
+    }
+
+    SheetState.Kind kind() {
+        return kind;
+    }
+
+    SheetConductor material() {
+        return material;
+    }
+
+    /** The electrodes in the drawn frame, each on the edge. */
+    List<Electrode> electrodes() {
+        return electrodes;
+    }
+
+    /**
+     * The grid, built on first use: with the file's cell size, or the automatic one, halved up to
+     * {@value #REFINEMENTS} times while its cells split a narrow neck of the shape.
+     *
+     * @throws IllegalArgumentException naming the conductor, when no grid can be built
+     */
+    synchronized SheetGrid grid() {
+        if (grid == null) {
+            SheetShape shape = new SheetShape(sheet.outline(), sheet.holes());
+            double h = requestedCellM;
+            for (int attempt = 0; grid == null; attempt++) {
+                try {
+                    grid = SheetGrid.withCellSize(shape, h);
+                } catch (IllegalArgumentException e) {
+                    if (!automatic || attempt == REFINEMENTS) {
+                        throw new IllegalArgumentException(kind.name().toLowerCase(java.util.Locale.ROOT) + " '"
+                                + sheet.id() + "': " + e.getMessage(), e);
+                    }
+                    h /= 2;
+                }
+            }
+        }
+        return grid;
+    }
+
+    /** A channel's flow in the drawn frame with mean velocity v̄ at {@code tS}; null for a plate. */
+    ChannelFlow flowAt(double tS) {
+        if (!(sheet instanceof Conductor.Channel c)) {
+            return null;
+        }
+        ChannelFlow.Profile profile = switch (c.profile()) {
+            case PLUG -> ChannelFlow.Profile.PLUG;
+            case LAMINAR -> ChannelFlow.Profile.LAMINAR;
+            case TURBULENT -> ChannelFlow.Profile.TURBULENT;
+        };
+        return new ChannelFlow(c.start(), c.end(), c.widthM(), c.flow().velocityAt(tS), profile);
+    }
+
+    /** The point of the outline or a hole's edge nearest to {@code p}. */
+    private Vec2 onEdge(Vec2 p) {
+        Vec2 best = Polygons.nearestEdgePoint(sheet.outline(), p);
+        for (List<Vec2> hole : sheet.holes()) {
+            Vec2 q = Polygons.nearestEdgePoint(hole, p);
+            if (q.minus(p).length() < best.minus(p).length()) {
+                best = q;
+            }
+        }
+        return best;
+    }
+}
