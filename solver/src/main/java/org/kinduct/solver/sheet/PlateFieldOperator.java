@@ -151,52 +151,93 @@ final class PlateFieldOperator {
     }
 
     /**
-     * out = F⁻¹[m(k)·F[in]] on the padded period, with the complex multiplier m(θx, θy) = re + i·im
-     * given for θ = 2π·k/P, Hermitian (m(−θ) = conj m(θ)) so that real stays real; in and out on
-     * the nodes, in taken on the interior nodes. For preconditioners: circular, not exact.
+     * A complex Fourier multiplier m(θx, θy) = re + i·im at θ = 2π·k/P, Hermitian (m(−θ) = conj
+     * m(θ)) so that real stays real, tabulated once per packed slot of the real transform.
      */
-    void applyMultiplier(double[] in, Multiplier m, double[] out) {
+    Prepared prepare(Multiplier m) {
+        int rows = periodY;
+        int cols = periodX;
+        double[] re = new double[rows * cols];
+        double[] im = new double[rows * cols];
+        double[] z = new double[2];
+        for (int r = 0; r < rows; r++) {
+            for (int c = 2; c < cols; c += 2) {
+                value(m, r, c / 2, z);
+                re[r * cols + c] = z[0];
+                im[r * cols + c] = z[1];
+            }
+            int s = r * cols;
+            if (r == 0 || r == rows / 2) {
+                value(m, r, 0, z);
+                re[s] = z[0];
+                value(m, r, cols / 2, z);
+                re[s + 1] = z[0];
+            } else if (r < rows / 2) {
+                value(m, r, 0, z);
+                re[s] = z[0];
+                im[s] = z[1];
+            } else {
+                value(m, rows - r, cols / 2, z);
+                re[s] = z[0];
+                im[s] = z[1];
+            }
+        }
+        return new Prepared(re, im);
+    }
+
+    /** A multiplier tabulated by {@link #prepare}: per pair of slots (Re, Im) its value at the first slot. */
+    record Prepared(double[] re, double[] im) {
+    }
+
+    /**
+     * out = F⁻¹[m·F[in]] on the padded period, in and out on the nodes, in taken on the interior
+     * nodes. For preconditioners: circular, not exact.
+     */
+    void applyMultiplier(double[] in, Prepared m, double[] out) {
         load(in);
         fft.realForward(work);
         int rows = periodY;
         int cols = periodX;
-        double[] z = new double[2];
+        double[] re = m.re();
+        double[] im = m.im();
         for (int r = 0; r < rows; r++) {
-            for (int c = 2; c < cols; c += 2) {
-                int s = r * cols + c;
-                multiply(m, r, c / 2, work[s], work[s + 1], z);
-                work[s] = z[0];
-                work[s + 1] = z[1];
+            int row = r * cols;
+            for (int s = row + 2; s < row + cols; s += 2) {
+                double x = work[s];
+                double y = work[s + 1];
+                work[s] = x * re[s] - y * im[s];
+                work[s + 1] = x * im[s] + y * re[s];
             }
-            int s = r * cols;
+            int s = row;
             if (r == 0 || r == rows / 2) {
-                multiply(m, r, 0, work[s], 0, z);
-                work[s] = z[0];
-                multiply(m, r, cols / 2, work[s + 1], 0, z);
-                work[s + 1] = z[0];
+                work[s] *= re[s];
+                work[s + 1] *= re[s + 1];
             } else if (r < rows / 2) {
-                multiply(m, r, 0, work[s], work[s + 1], z);
-                work[s] = z[0];
-                work[s + 1] = z[1];
+                double x = work[s];
+                double y = work[s + 1];
+                work[s] = x * re[s] - y * im[s];
+                work[s + 1] = x * im[s] + y * re[s];
             } else {
                 // Re of (rows − r, cols/2) at s + 1, −Im at s.
-                multiply(m, rows - r, cols / 2, work[s + 1], -work[s], z);
-                work[s + 1] = z[0];
-                work[s] = -z[1];
+                double x = work[s + 1];
+                double y = -work[s];
+                work[s + 1] = x * re[s] - y * im[s];
+                work[s] = -(x * im[s] + y * re[s]);
             }
         }
         fft.realInverse(work, true);
         store(out);
     }
 
-    private void multiply(Multiplier m, int k1, int k2, double re, double im, double[] out) {
+    /** Convenience for tests: prepare and apply once. */
+    void applyMultiplier(double[] in, Multiplier m, double[] out) {
+        applyMultiplier(in, prepare(m), out);
+    }
+
+    private void value(Multiplier m, int k1, int k2, double[] out) {
         double tx = 2 * Math.PI * k2 / periodX;
         double ty = 2 * Math.PI * k1 / periodY;
         m.at(tx, ty, symbol[k1 * (periodX / 2 + 1) + k2], out);
-        double a = out[0];
-        double b = out[1];
-        out[0] = re * a - im * b;
-        out[1] = re * b + im * a;
     }
 
     /** A Fourier multiplier m(θx, θy) given also the kernel's symbol there (henries). */
