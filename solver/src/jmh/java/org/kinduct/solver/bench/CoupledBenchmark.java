@@ -13,7 +13,7 @@ import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.scene.WireSpec;
 import org.kinduct.solver.dynamics.CoupledSimulation;
-import org.kinduct.solver.dynamics.Trajectory;
+import org.kinduct.solver.dynamics.CoupledRun;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -73,7 +73,7 @@ public class CoupledBenchmark {
     }
 
     @Benchmark
-    public Trajectory simulate() {
+    public CoupledRun simulate() {
         return CoupledSimulation.run(scene, 0, durationS, 0.01);
     }
 }

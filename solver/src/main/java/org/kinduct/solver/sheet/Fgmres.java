@@ -34,15 +34,39 @@ final class Fgmres {
      */
     static Outcome solve(Operator a, Operator preconditioner, double[] b, double[] x, double tolerance,
                          int maxIterations, int restart, String method) {
+        return solve(a, preconditioner, b, x, tolerance, maxIterations, new Workspace(b.length, restart), method);
+    }
+
+    /** The Krylov vectors of one size and restart length, kept between solves (they are most of the memory). */
+    static final class Workspace {
+        final int n;
+        final int restart;
+        final double[][] v;
+        final double[][] z;
+
+        Workspace(int n, int restart) {
+            this.n = n;
+            this.restart = restart;
+            v = new double[restart + 1][n];
+            z = new double[restart][n];
+        }
+    }
+
+    static Outcome solve(Operator a, Operator preconditioner, double[] b, double[] x, double tolerance,
+                         int maxIterations, Workspace space, String method) {
         int n = b.length;
+        int restart = space.restart;
+        if (space.n != n) {
+            throw new IllegalArgumentException("workspace for " + space.n + " unknowns, system has " + n);
+        }
         double bNorm = norm(b);
         if (bNorm == 0) {
             java.util.Arrays.fill(x, 0);
             return new Outcome(0, 0);
         }
         double target = tolerance * bNorm;
-        double[][] v = new double[restart + 1][n];
-        double[][] z = new double[restart][n];
+        double[][] v = space.v;
+        double[][] z = space.z;
         double[][] h = new double[restart + 1][restart];
         double[] cs = new double[restart];
         double[] sn = new double[restart];

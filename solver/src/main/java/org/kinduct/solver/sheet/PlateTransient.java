@@ -25,6 +25,9 @@ public final class PlateTransient {
     private final double theta;
     private double timeS;
     private double[] u;
+    /** ψ one step back, and that step's length, for the starting guess. */
+    private double[] previous;
+    private double previousDt = Double.NaN;
     private double[] sourceFlux;
     private int lastIterations;
     private double lastResidual;
@@ -62,6 +65,15 @@ public final class PlateTransient {
      * @return the state at the step's end
      */
     public PlateSolution step(double dtS) {
+        advance(dtS);
+        return state();
+    }
+
+    /**
+     * Advances by one step without making the outputs ({@link #state()} makes them: one more FFT
+     * convolution and the sources' field at every filament).
+     */
+    public void advance(double dtS) {
         if (!(dtS > 0) || !Double.isFinite(dtS)) {
             throw new IllegalArgumentException("time step must be positive and finite, got " + dtS + " s");
         }
@@ -93,16 +105,23 @@ public final class PlateTransient {
             cachedPreconditioner = plate.preconditioner(plate.stepMultiplier(dtS, theta), theta);
             cachedDt = dtS;
         }
+        // Start from ψ extrapolated linearly through the last two steps when they were as long.
         double[] x = u.clone();
+        if (previous != null && dtS == previousDt) {
+            for (int k = 0; k < x.length; k++) {
+                x[k] += u[k] - previous[k];
+            }
+        }
         PlateSolver settings = plate.settings();
         Fgmres.Outcome outcome = Fgmres.solve(a, cachedPreconditioner, b, x, settings.relativeTolerance(),
-                settings.maxIterations(), settings.restart(), "flexible GMRES (plate time step)");
+                settings.maxIterations(), plate.workspace(), "flexible GMRES (plate time step)");
+        previous = u;
+        previousDt = dtS;
         u = x;
         sourceFlux = next;
         timeS += dtS;
         lastIterations = outcome.iterations();
         lastResidual = outcome.relativeResidual();
-        return state();
     }
 
     /** The state now: currents, the plate's field, the force of the sources' field. */
