@@ -1,6 +1,7 @@
 package org.kinduct.solver;
 
 import java.util.List;
+import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.field.PhysicalConstants;
@@ -11,7 +12,8 @@ import org.kinduct.solver.field.PhysicalConstants;
  * |ω|·extent), the shortest length over which its field changes in the plane (metres; infinite for
  * a uniform field) and the order of magnitude of its strongest B_z there (tesla).
  *
- * <p>Field scales: a patch or uniform field its own B_z; a magnet its remanence (the field of a
+ * <p>Field scales: a patch or uniform field its own B_z; a field map its largest sample, and its
+ * sample spacing as the length over which it changes; a magnet its remanence (the field of a
  * uniformly magnetized body stays below Br outside it); a coil N·μ0·I_max/(2π·d) with d the
  * smaller of its plane distance and size, the field of a straight filament at distance d
  * (Biot–Savart; Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §5.2.2).
@@ -47,6 +49,14 @@ record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT) {
             @Override
             public SourceReach coil(Source.SourceCoil coil) {
                 return ofCoil(coil);
+            }
+
+            @Override
+            public SourceReach map(Source.FieldMap map) {
+                FieldGrid g = map.grid();
+                Vec2 center = new Vec2(0.5 * (g.x0M() + g.x1M()), 0.5 * (g.y0M() + g.y1M())).plus(map.offsetM());
+                return new SourceReach(center, 0.5 * Math.hypot(g.x1M() - g.x0M(), g.y1M() - g.y0M()),
+                        Math.min(g.dxM(), g.dyM()), g.peakT());
             }
         });
     }

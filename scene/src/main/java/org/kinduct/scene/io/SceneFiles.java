@@ -51,7 +51,8 @@ public final class SceneFiles {
     }
 
     /**
-     * The scene in {@code file}; problems are reported against the file name as given.
+     * The scene in {@code file}; problems are reported against the file name as given. Field maps
+     * are read from their files relative to {@code file}'s folder.
      *
      * @throws IOException with the path and the reason when the file is missing, a folder,
      *         unreadable or too large
@@ -59,7 +60,7 @@ public final class SceneFiles {
      */
     public static Scene read(Path file) throws IOException, SceneFormatException {
         String text = decode(readBytes(file), file.toString());
-        return SceneJson.read(text, file.toString());
+        return SceneJson.read(text, file.toString(), SceneFolder.ofSceneFile(file));
     }
 
     /**

@@ -8,6 +8,7 @@ import java.io.UncheckedIOException;
 import java.util.List;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -244,6 +245,24 @@ final class SceneWriter {
                     g.writeNumberField("frequency", c.drive().frequencyHz());
                     g.writeNumberField("phase", c.drive().phaseRad());
                     g.writeEndObject();
+                });
+            }
+
+            @Override
+            public Void map(Source.FieldMap m) {
+                return io(() -> {
+                    kind("field-map");
+                    idAndBody(m.id(), m.body());
+                    g.writeStringField("file", m.file());
+                    FieldGrid grid = m.grid();
+                    g.writeStringField("layout", Vocabulary.MAP_LAYOUT.name(grid.layout()));
+                    if (grid.layout() == FieldGrid.Layout.MATRIX) {
+                        point("origin", new Vec2(grid.x0M(), grid.y0M()));
+                        point("spacing", new Vec2(grid.dxM(), grid.dyM()));
+                        g.writeNumberField("bzUnit", grid.fileUnitT());
+                    }
+                    point("offset", m.offsetM());
+                    g.writeStringField("outside", Vocabulary.OUTSIDE.name(m.outside()));
                 });
             }
         });

@@ -2,6 +2,7 @@ package org.kinduct.scene.io;
 
 import static java.util.Map.entry;
 
+import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Source;
@@ -20,6 +21,12 @@ final class Vocabulary {
 
     static final Choices<Motion.Path.Blend> BLEND = Choices.of(
             entry("linear", Motion.Path.Blend.LINEAR), entry("smooth", Motion.Path.Blend.SMOOTH));
+
+    static final Choices<FieldGrid.Layout> MAP_LAYOUT = Choices.of(
+            entry("points", FieldGrid.Layout.POINTS), entry("matrix", FieldGrid.Layout.MATRIX));
+
+    static final Choices<Source.FieldMap.Outside> OUTSIDE = Choices.of(
+            entry("zero", Source.FieldMap.Outside.ZERO), entry("error", Source.FieldMap.Outside.ERROR));
 
     private Vocabulary() {
     }
