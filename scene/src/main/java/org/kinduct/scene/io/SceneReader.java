@@ -72,6 +72,11 @@ final class SceneReader {
         this.ctx = ctx;
     }
 
+    /** The source kinds this reader knows, as the file names them. */
+    List<String> sourceKinds() {
+        return sources.names();
+    }
+
     /** The scene, or null when problems were reported. */
     Scene scene(Json root) {
         Fields f = ctx.fields("", root, "a scene object { \"format\": \"" + Scene.FORMAT + "\", ... }");

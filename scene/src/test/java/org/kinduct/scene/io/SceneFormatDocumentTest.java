@@ -38,6 +38,13 @@ class SceneFormatDocumentTest {
         assertDoesNotThrow(() -> SceneJson.read(example, "scene-format.md example"));
     }
 
+    @Test
+    void sourceTableDescribesEverySourceKindTheReaderKnows() {
+        for (String kind : new SceneReader(new ReadContext(SceneFolder.NONE)).sourceKinds()) {
+            assertTrue(text.contains("| `" + kind + "` |"), "docs/scene-format.md has no row for source kind " + kind);
+        }
+    }
+
     @ParameterizedTest
     @EnumSource(value = Dimension.class, mode = EnumSource.Mode.EXCLUDE, names = "DIMENSIONLESS")
     void unitTableListsEveryAcceptedSpelling(Dimension d) {
