@@ -49,7 +49,7 @@ class FieldMapFilesTest {
     @Test
     void brokenGridsAreNamedByFileLineAndColumn() {
         assertEquals("scan.csv:1:5: column 'y' has no unit; write it as 'y_m' or 'y [mm]'", problem("x_m,y,Bz_T\n"));
-        assertEquals("scan.csv:3:7: B_z is NaN; every sample must be a finite number",
+        assertEquals("scan.csv:3:5: B_z is NaN; every sample must be a finite number",
                 problem("x_m,y_m,Bz_T\n0,0,1\n1,0,NaN\n"));
         assertEquals("scan.csv:3:5: missing B_z", problem("x_m,y_m,Bz_T\n0,0,1\n1,0,\n"));
         assertEquals("scan.csv:6: the row at y = 1 (from line 5) has 2 samples, the first row has 3; every row needs"

@@ -6,6 +6,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.io.SceneFiles;
+import org.kinduct.scene.io.SceneFolder;
 import org.kinduct.scene.io.SceneFormatException;
 import org.kinduct.scene.io.SceneJson;
 
@@ -29,7 +30,8 @@ final class JsonSceneStore implements SceneStore {
             if (in == null) {
                 throw new LoadFailure("No demo scene " + resource + " on the class path", null);
             }
-            return SceneJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8), resource);
+            return SceneJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8), resource,
+                    SceneFolder.ofResource(JsonSceneStore.class, resource));
         } catch (SceneFormatException e) {
             throw new LoadFailure(e.getMessage(), e);
         } catch (IOException e) {
