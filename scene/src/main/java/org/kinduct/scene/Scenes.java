@@ -55,6 +55,11 @@ public final class Scenes {
                 }
 
                 @Override
+                public List<Vec2> map(Source.FieldMap m) {
+                    return List.of(mapCorner(m, false), mapCorner(m, true));
+                }
+
+                @Override
                 public List<Vec2> coil(Source.SourceCoil c) {
                     return c.shape().match(new Source.CoilShape.Cases<>() {
                         @Override
@@ -72,6 +77,12 @@ public final class Scenes {
         }
         scene.conductors().forEach(c -> c.vertices().forEach(v -> out.add(v.at())));
         return out;
+    }
+
+    /** The first (lowest x and y) or last sample of a field map where it is drawn. */
+    private static Vec2 mapCorner(Source.FieldMap m, boolean last) {
+        return (last ? new Vec2(m.grid().x1M(), m.grid().y1M()) : new Vec2(m.grid().x0M(), m.grid().y0M()))
+                .plus(m.offsetM());
     }
 
     /** {@code scene} with {@code f} applied to every drawn position ({@link #positions}). */
@@ -103,6 +114,14 @@ public final class Scenes {
             @Override
             public Source patch(Source.FieldPatch p) {
                 return new Source.FieldPatch(p.id(), p.body(), p.outline().stream().map(f).toList(), p.bzT());
+            }
+
+            /** The map's samples stay as read; its offset moves its first corner as {@code f} moves that point. */
+            @Override
+            public Source map(Source.FieldMap m) {
+                Vec2 first = mapCorner(m, false);
+                return new Source.FieldMap(m.id(), m.body(), m.file(), m.grid(),
+                        m.offsetM().plus(f.apply(first).minus(first)), m.outside());
             }
 
             @Override

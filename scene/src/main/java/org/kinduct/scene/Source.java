@@ -9,7 +9,7 @@ import java.util.List;
  */
 public sealed interface Source
         permits Source.FieldPatch, Source.UniformField, Source.BlockMagnet, Source.CylinderMagnet,
-                Source.SourceCoil {
+                Source.SourceCoil, Source.FieldMap {
 
     String id();
 
@@ -39,6 +39,8 @@ public sealed interface Source
         R cylinder(CylinderMagnet cylinder);
 
         R coil(SourceCoil coil);
+
+        R map(FieldMap map);
     }
 
     /** An ideal region of uniform B_z (tesla, + out of the screen) bounded by a simple polygon. */
@@ -164,6 +166,45 @@ public sealed interface Source
         @Override
         public <R> R match(Cases<R> cases) {
             return cases.coil(this);
+        }
+    }
+
+    /**
+     * B_z given as samples on a regular grid (a Hall-probe scan, or a field exported from a detailed
+     * simulation or from Kinduct itself), read from a CSV file beside the scene. The grid's own
+     * coordinates, shifted by {@code offsetM}, are where it was drawn; it rides {@code body} like
+     * any source. Between samples the solver interpolates with a C¹ bicubic; outside the grid
+     * {@code outside} says what holds.
+     *
+     * @param file the CSV file as the scene names it, relative to the scene file's folder
+     * @param grid the samples read from it
+     * @param offsetM shift of the whole grid from the coordinates in the file, metres
+     */
+    record FieldMap(String id, String body, String file, FieldGrid grid, Vec2 offsetM, Outside outside)
+            implements Source {
+        public FieldMap {
+            Checks.id(id, "Source");
+            Checks.id(body, "Body");
+            Checks.nonNull(file, "file");
+            if (file.isBlank()) {
+                throw new IllegalArgumentException("a field map needs a file name");
+            }
+            Checks.nonNull(grid, "grid");
+            Checks.nonNull(offsetM, "offset");
+            Checks.nonNull(outside, "outside");
+        }
+
+        /** What B_z is beyond the outermost samples. */
+        public enum Outside {
+            /** Zero: the map holds all of the field there is. */
+            ZERO,
+            /** Unknown: a conductor that reaches beyond the map is an error. */
+            ERROR
+        }
+
+        @Override
+        public <R> R match(Cases<R> cases) {
+            return cases.map(this);
         }
     }
 

@@ -7,6 +7,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.Optional;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.io.SceneFolder;
 import org.kinduct.scene.io.SceneFormatException;
 import org.kinduct.scene.io.SceneJson;
 
@@ -52,7 +53,8 @@ public final class Demos {
             if (in == null) {
                 throw new IllegalStateException("demo resource missing from the build: " + path);
             }
-            return SceneJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8), name + ".json");
+            return SceneJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8), name + ".json",
+                    SceneFolder.ofResource(Demos.class, path));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read demo " + path, e);
         } catch (SceneFormatException e) {

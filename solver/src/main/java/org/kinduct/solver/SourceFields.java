@@ -4,6 +4,7 @@ import java.util.List;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.field.MapField;
 import org.kinduct.solver.field.PatchField;
 import org.kinduct.solver.field.PhysicalSources;
 import org.kinduct.solver.field.PlaneField;
@@ -17,7 +18,7 @@ public final class SourceFields {
 
     /**
      * The field of {@code source} when its body is at {@code pose}, at time {@code tS} (coil
-     * currents follow their drive). Field patches and uniform fields are evaluated here; magnets
+     * currents follow their drive). Field patches, uniform fields and field maps are evaluated here; magnets
      * and coils by {@link PhysicalSources}.
      */
     public static PlaneField place(Source source, Pose pose, double tS) {
@@ -53,6 +54,11 @@ public final class SourceFields {
             @Override
             public PlaneField coil(Source.SourceCoil coil) {
                 return PhysicalSources.coil(coil, pose, tS);
+            }
+
+            @Override
+            public PlaneField map(Source.FieldMap map) {
+                return new MapField(map, pose);
             }
         });
     }

@@ -1,6 +1,7 @@
 package org.kinduct.solver;
 
 import java.util.List;
+import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.field.PhysicalConstants;
@@ -10,10 +11,12 @@ import org.kinduct.solver.field.PhysicalConstants;
  * drawn anchor point, the source's extent around it (so a turning source's far edge counts at
  * |ω|·extent), the shortest length over which its field changes in the plane (metres; infinite for
  * a uniform field), the order of magnitude of its strongest B_z there (tesla), and whether B_z
- * jumps across edges in the plane (a patch's outline, the footprint of a magnet touching the
- * plane): the flux through a loop then kinks whenever a loop vertex crosses such an edge.
+ * jumps across edges in the plane (a patch's outline, a field map's edge where B_z falls to zero,
+ * the footprint of a magnet touching the plane): the flux through a loop then kinks whenever a
+ * loop vertex crosses such an edge.
  *
- * <p>Field scales: a patch or uniform field its own B_z; a magnet its remanence (the field of a
+ * <p>Field scales: a patch or uniform field its own B_z; a field map its largest sample, and its
+ * sample spacing as the length over which it changes; a magnet its remanence (the field of a
  * uniformly magnetized body stays below Br outside it); a coil N·μ0·I_max/(2π·d) with d the
  * smaller of its plane distance and size, the field of a straight filament at distance d
  * (Biot–Savart; Griffiths, <i>Introduction to Electrodynamics</i>, 4th ed., 2013, §5.2.2).
@@ -49,6 +52,14 @@ public record SourceReach(Vec2 anchor, double extentM, double lengthM, double fi
             @Override
             public SourceReach coil(Source.SourceCoil coil) {
                 return ofCoil(coil);
+            }
+
+            @Override
+            public SourceReach map(Source.FieldMap map) {
+                FieldGrid g = map.grid();
+                Vec2 center = new Vec2(0.5 * (g.x0M() + g.x1M()), 0.5 * (g.y0M() + g.y1M())).plus(map.offsetM());
+                return new SourceReach(center, 0.5 * Math.hypot(g.x1M() - g.x0M(), g.y1M() - g.y0M()),
+                        Math.min(g.dxM(), g.dyM()), g.peakT(), true);
             }
         });
     }

@@ -41,11 +41,21 @@ final class ReadContext {
     private record Ref(String id, String path, Json at) {
     }
 
+    private final SceneFolder folder;
     private final List<Problem> problems = new ArrayList<>();
     private final List<Ref> bodyDeclarations = new ArrayList<>();
     private final List<Ref> objectDeclarations = new ArrayList<>();
     private final List<Ref> bodyReferences = new ArrayList<>();
     private final Map<String, UnitTexts.Given> given = new LinkedHashMap<>();
+
+    /** @param folder where the files the scene names are found */
+    ReadContext(SceneFolder folder) {
+        this.folder = folder;
+    }
+
+    SceneFolder folder() {
+        return folder;
+    }
 
     List<Problem> problems() {
         return problems;

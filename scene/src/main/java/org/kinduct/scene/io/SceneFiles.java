@@ -63,7 +63,8 @@ public final class SceneFiles {
     }
 
     /**
-     * The scene in {@code file}; problems are reported against the file name as given.
+     * The scene in {@code file}; problems are reported against the file name as given. Field maps
+     * are read from their files relative to {@code file}'s folder.
      *
      * @throws IOException with the path and the reason when the file is missing, a folder,
      *         unreadable or too large
@@ -81,7 +82,7 @@ public final class SceneFiles {
      */
     public static SceneWithUnits readWithUnits(Path file) throws IOException, SceneFormatException {
         String text = decode(readBytes(file), file.toString());
-        return SceneJson.readWithUnits(text, file.toString());
+        return SceneJson.readWithUnits(text, file.toString(), SceneFolder.ofSceneFile(file));
     }
 
     /**

@@ -28,7 +28,22 @@ public final class SceneJson {
      *         all problems in document order; nothing else is thrown, whatever the text
      */
     public static Scene read(String text, String sourceName) throws SceneFormatException {
-        return readWithUnits(text, sourceName).scene();
+        return read(text, sourceName, SceneFolder.NONE);
+    }
+
+    /**
+     * The scene in {@code text}, whose field maps are found in {@code folder}; a field-map file
+     * that cannot be read is a problem at its {@code file} field, naming the file, line and column.
+     *
+     * @see #read(String, String)
+     */
+    public static Scene read(String text, String sourceName, SceneFolder folder) throws SceneFormatException {
+        return readWithUnits(text, sourceName, folder).scene();
+    }
+
+    /** {@link #readWithUnits(String, String, SceneFolder)} of a scene whose field maps, if any, have no folder. */
+    public static SceneWithUnits readWithUnits(String text, String sourceName) throws SceneFormatException {
+        return readWithUnits(text, sourceName, SceneFolder.NONE);
     }
 
     /**
@@ -36,7 +51,8 @@ public final class SceneJson {
      *
      * @throws SceneFormatException as {@link #read} does
      */
-    public static SceneWithUnits readWithUnits(String text, String sourceName) throws SceneFormatException {
+    public static SceneWithUnits readWithUnits(String text, String sourceName, SceneFolder folder)
+            throws SceneFormatException {
         List<Problem> problems = new ArrayList<>();
         Scene scene = null;
         UnitTexts units = UnitTexts.none();
@@ -46,7 +62,7 @@ public final class SceneJson {
             // A byte-order mark is not JSON, but editors add one; it carries no meaning here.
             Json root = JsonTreeReader.parse(text.startsWith("\uFEFF") ? text.substring(1) : text, problems);
             if (root != null) {
-                ReadContext ctx = new ReadContext();
+                ReadContext ctx = new ReadContext(folder);
                 scene = new SceneReader(ctx).scene(root);
                 problems.addAll(ctx.problems());
                 units = ctx.unitTexts();

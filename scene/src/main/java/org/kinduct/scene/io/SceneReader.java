@@ -19,6 +19,8 @@ import static org.kinduct.scene.units.Dimension.TEMPERATURE;
 import static org.kinduct.scene.units.Dimension.TIME;
 import static org.kinduct.scene.units.Dimension.VELOCITY;
 
+import java.io.IOException;
+import java.io.InputStream;
 import java.util.List;
 import java.util.OptionalDouble;
 import java.util.function.Function;
@@ -27,6 +29,7 @@ import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.MeanFlow;
+import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
@@ -71,7 +74,8 @@ final class SceneReader {
             entry("uniform-field", this::uniformField),
             entry("block-magnet", this::blockMagnet),
             entry("cylinder-magnet", this::cylinderMagnet),
-            entry("source-coil", this::sourceCoil));
+            entry("source-coil", this::sourceCoil),
+            entry("field-map", this::fieldMap));
 
     private final Choices<Function<Fields, Conductor>> conductors = Choices.of(
             entry("wire", this::wire),
@@ -86,6 +90,11 @@ final class SceneReader {
 
     SceneReader(ReadContext ctx) {
         this.ctx = ctx;
+    }
+
+    /** The source kinds this reader knows, as the file names them. */
+    List<String> sourceKinds() {
+        return sources.names();
     }
 
     /** The scene, or null when problems were reported. */
@@ -305,6 +314,57 @@ final class SceneReader {
         Double z = f.req("z", ctx.quantity(LENGTH));
         Source.Drive drive = f.req("current", this::drive);
         return f.build(() -> new Source.SourceCoil(id, body, polygon != null ? polygon : circle, turns, z, drive));
+    }
+
+    private Source fieldMap(Fields f) {
+        String id = f.req("id", ctx.objectDeclaration("Source"));
+        String body = f.opt("body", ctx.bodyReference(), Body.FIXED);
+        Located<String> file = f.req("file", located(ctx.text()));
+        FieldGrid.Layout layout = f.opt("layout", ctx.choice(Vocabulary.MAP_LAYOUT), FieldGrid.Layout.POINTS);
+        boolean matrix = layout == FieldGrid.Layout.MATRIX;
+        for (String name : List.of("origin", "spacing", "bzUnit")) {
+            if (layout != null && f.has(name) != matrix) {
+                f.problem(matrix ? "a matrix field map needs \"origin\", \"spacing\" and \"bzUnit\"; \"" + name
+                        + "\" is missing" : "\"" + name + "\" belongs to \"layout\": \"matrix\"; a points file"
+                        + " carries its own coordinates and units");
+            }
+        }
+        Vec2 origin = f.opt("origin", ctx.point(LENGTH), null);
+        Vec2 spacing = f.opt("spacing", ctx.point(LENGTH), null);
+        Double unit = f.opt("bzUnit", ctx.quantity(FLUX_DENSITY), null);
+        Vec2 offset = f.opt("offset", ctx.point(LENGTH), Vec2.ZERO);
+        Source.FieldMap.Outside outside = f.opt("outside", ctx.choice(Vocabulary.OUTSIDE),
+                Source.FieldMap.Outside.ZERO);
+        if (file == null || layout == null || (matrix && (origin == null || spacing == null || unit == null))) {
+            return f.build(() -> null);
+        }
+        FieldGrid grid = grid(file, layout, origin, spacing, unit);
+        return f.build(() -> new Source.FieldMap(id, body, file.value(), grid, offset, outside));
+    }
+
+    /** The samples of a field-map file, or null after reporting at the file name why they cannot be read. */
+    private FieldGrid grid(Located<String> file, FieldGrid.Layout layout, Vec2 origin, Vec2 spacing, Double unit) {
+        String name = ctx.folder().describe(file.value());
+        try (InputStream in = ctx.folder().open(file.value())) {
+            return layout == FieldGrid.Layout.MATRIX ? FieldMapCsv.readMatrix(in, name, origin, spacing, unit)
+                    : FieldMapCsv.readPoints(in, name);
+        } catch (FieldMapFormatException e) {
+            ctx.problem(file.path(), file.at(), "field map " + e.getMessage());
+        } catch (IOException e) {
+            ctx.problem(file.path(), file.at(), "cannot read field map " + name + ": " + e.getMessage());
+        }
+        return null;
+    }
+
+    /** A value with where it was read, for problems found after the read. */
+    private record Located<T>(T value, String path, Json at) {
+    }
+
+    private static <T> ReadContext.Conv<Located<T>> located(ReadContext.Conv<T> conv) {
+        return (path, node) -> {
+            T value = conv.read(path, node);
+            return value == null ? null : new Located<>(value, path, node);
+        };
     }
 
     private Source.CoilShape coilPolygon(String path, Json node) {

@@ -11,6 +11,7 @@ import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.MeanFlow;
+import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -231,6 +232,24 @@ final class SceneWriter {
                         number("frequency", c.drive().frequencyHz());
                         number("phase", c.drive().phaseRad());
                     });
+                });
+            }
+
+            @Override
+            public Void map(Source.FieldMap m) {
+                return io(() -> {
+                    kind("field-map");
+                    idAndBody(m.id(), m.body());
+                    g.writeStringField("file", m.file());
+                    FieldGrid grid = m.grid();
+                    g.writeStringField("layout", Vocabulary.MAP_LAYOUT.name(grid.layout()));
+                    if (grid.layout() == FieldGrid.Layout.MATRIX) {
+                        point("origin", new Vec2(grid.x0M(), grid.y0M()));
+                        point("spacing", new Vec2(grid.dxM(), grid.dyM()));
+                        number("bzUnit", grid.fileUnitT());
+                    }
+                    point("offset", m.offsetM());
+                    g.writeStringField("outside", Vocabulary.OUTSIDE.name(m.outside()));
                 });
             }
         });

@@ -3,6 +3,7 @@ package org.kinduct.scene.io;
 import static java.util.Map.entry;
 
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Source;
@@ -25,6 +26,11 @@ final class Vocabulary {
     static final Choices<Conductor.Channel.Profile> PROFILE = Choices.of(
             entry("plug", Conductor.Channel.Profile.PLUG), entry("laminar", Conductor.Channel.Profile.LAMINAR),
             entry("turbulent", Conductor.Channel.Profile.TURBULENT));
+    static final Choices<FieldGrid.Layout> MAP_LAYOUT = Choices.of(
+            entry("points", FieldGrid.Layout.POINTS), entry("matrix", FieldGrid.Layout.MATRIX));
+
+    static final Choices<Source.FieldMap.Outside> OUTSIDE = Choices.of(
+            entry("zero", Source.FieldMap.Outside.ZERO), entry("error", Source.FieldMap.Outside.ERROR));
 
     private Vocabulary() {
     }

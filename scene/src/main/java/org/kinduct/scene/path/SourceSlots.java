@@ -60,4 +60,10 @@ final class SourceSlots implements Source.Cases<Slots> {
                         .number("amplitude", CURRENT, "amplitudeA").number("frequency", FREQUENCY, "frequencyHz")
                         .number("phase", ANGLE, "phaseRad"));
     }
+
+    /** Only the shift: the samples and their grid come from the file. */
+    @Override
+    public Slots map(Source.FieldMap map) {
+        return new Slots().point("offset", LENGTH, "offsetM");
+    }
 }

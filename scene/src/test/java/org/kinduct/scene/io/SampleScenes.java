@@ -1,5 +1,9 @@
 package org.kinduct.scene.io;
 
+import java.io.ByteArrayInputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
@@ -8,6 +12,7 @@ import org.kinduct.scene.Body;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.Motion;
@@ -24,6 +29,42 @@ public final class SampleScenes {
     }
 
     /** Every motion, source, coil shape, conductor, vertex form and wire form at least once. */
+    /** The text of the sample's field map, a 3 × 3 matrix in millitesla. */
+    static final String HEAD_CSV = "0,1,2\n3,4,5\n6,7,8\n";
+
+    /** Where the sample scene's field map is found: {@link #HEAD_CSV} as {@code maps/head.csv}. */
+    public static final SceneFolder FOLDER = new SceneFolder() {
+        @Override
+        public InputStream open(String relative) throws IOException {
+            if (!relative.equals("maps/head.csv")) {
+                throw new IOException("no file " + relative);
+            }
+            return new ByteArrayInputStream(HEAD_CSV.getBytes(StandardCharsets.UTF_8));
+        }
+
+        @Override
+        public String describe(String relative) {
+            return relative;
+        }
+    };
+
+    /** {@link #HEAD_CSV} as the reader makes it: each number times the unit, 1 mT. */
+    private static FieldGrid headGrid() {
+        double[] samples = new double[9];
+        for (int k = 0; k < 9; k++) {
+            samples[k] = k * 1e-3;
+        }
+        return new FieldGrid(FieldGrid.Layout.MATRIX, 3, 3, -1e-3, -1e-3, 1e-3, 1e-3, 1e-3, samples);
+    }
+
+    /** {@link #everyVariant()} without its field map: a scene that names no other file. */
+    public static Scene withoutFiles() {
+        Scene every = everyVariant();
+        return new Scene(every.name(), every.description(), every.bodies(),
+                every.sources().stream().filter(s -> !(s instanceof Source.FieldMap)).toList(), every.conductors(),
+                every.time(), every.gravity());
+    }
+
     public static Scene everyVariant() {
         List<Body> bodies = List.of(
                 new Body("carriage", "Carriage", Vec2.ZERO, new Motion.Glide(new Vec2(0.5, 0))),
@@ -52,7 +93,9 @@ public final class SampleScenes {
                 new Source.SourceCoil("coil1", "idle", new Source.CoilShape.Polygon(square(0.05, 0, 0.01)), 20, -3e-3,
                         new Source.Drive(0.5, 0.1, 50, 0.3)),
                 new Source.SourceCoil("coil2", "shaker", new Source.CoilShape.Circle(new Vec2(0, -0.04), 0.02), 1,
-                        4e-3, Source.Drive.dc(1)));
+                        4e-3, Source.Drive.dc(1)),
+                new Source.FieldMap("scan", "idle", "maps/head.csv", headGrid(), new Vec2(0.002, -0.001),
+                        Source.FieldMap.Outside.ERROR));
         List<Conductor> conductors = List.of(
                 new Conductor.Wire("probe", Body.FIXED, List.of(Conductor.Vertex.at(0, 0),
                         Conductor.Vertex.at(0.01, 0.001), Conductor.Vertex.at(0.02, -0.003))),

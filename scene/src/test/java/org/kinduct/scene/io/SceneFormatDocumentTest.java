@@ -43,6 +43,13 @@ class SceneFormatDocumentTest {
         assertTrue(examples >= 2, "examples found: " + examples);
     }
 
+    @Test
+    void sourceTableDescribesEverySourceKindTheReaderKnows() {
+        for (String kind : new SceneReader(new ReadContext(SceneFolder.NONE)).sourceKinds()) {
+            assertTrue(text.contains("| `" + kind + "` |"), "docs/scene-format.md has no row for source kind " + kind);
+        }
+    }
+
     @ParameterizedTest
     @EnumSource(value = Dimension.class, mode = EnumSource.Mode.EXCLUDE, names = "DIMENSIONLESS")
     void unitTableListsEveryAcceptedSpelling(Dimension d) {

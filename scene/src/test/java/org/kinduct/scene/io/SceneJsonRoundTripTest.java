@@ -28,7 +28,7 @@ class SceneJsonRoundTripTest {
     void everyRecordVariantSurvivesWriteThenRead() throws SceneFormatException {
         Scene scene = SampleScenes.everyVariant();
 
-        Scene back = SceneJson.read(SceneJson.write(scene), "every-variant.json");
+        Scene back = SceneJson.read(SceneJson.write(scene), "every-variant.json", SampleScenes.FOLDER);
 
         assertEquals(scene, back);
     }

@@ -36,7 +36,7 @@ class SceneValuesTest {
                 "sled.motion.acceleration.y", "shaker.motion.amplitude", "rotor.motion.omega",
                 "arm.motion.keys[1].offset.x", "arm.motion.keys[2].t", "bar.motion.springs[0].anchor.y",
                 "bar.motion.springs[1].stiffness", "bar.motion.forceFrequency", "bar.motion.mass", "time.t1",
-                "time.dt", "gravity.y")) {
+                "time.dt", "gravity.y", "scan.offset.x")) {
             assertTrue(paths.contains(p), p + " in " + paths);
         }
         // The second spring hangs on a body, not an anchor point; the fixed frame has no values.

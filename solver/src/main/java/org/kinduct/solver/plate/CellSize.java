@@ -78,6 +78,12 @@ final class CellSize {
             public Double coil(Source.SourceCoil coil) {
                 return SourceReach.of(coil).lengthM();
             }
+
+            /** A map holds nothing finer than its spacing: cells as fine as its samples are enough. */
+            @Override
+            public Double map(Source.FieldMap map) {
+                return CELLS_PER_FIELD_LENGTH * SourceReach.of(map).lengthM();
+            }
         });
     }
 

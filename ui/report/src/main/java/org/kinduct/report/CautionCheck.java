@@ -96,6 +96,11 @@ public final class CautionCheck {
             public Boolean coil(Source.SourceCoil coil) {
                 return false;
             }
+
+            @Override
+            public Boolean map(Source.FieldMap map) {
+                return map.grid().peakT() >= Cautions.STRONG_MAP_FIELD_T;
+            }
         });
     }
 }

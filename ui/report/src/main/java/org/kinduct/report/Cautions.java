@@ -13,6 +13,15 @@ public final class Cautions {
      */
     public static final double STRONG_MAGNET_T = 0.8;
 
+    /**
+     * Measured B_z above which a field map is taken to come from strong magnets: half the largest
+     * ferrite remanence above. B_z on the face of a uniformly magnetized body never exceeds Br/2
+     * (charge model, the pole face of a semi-infinite block: the on-axis block formula of Camacho &amp;
+     * Sosa, Rev. Mex. Fís. E 59, 2013, at zero distance, (Br/π)·atan(∞)), so a ferrite magnet stays
+     * below 0.2 T and a field above it takes a stronger magnet (or an electromagnet).
+     */
+    public static final double STRONG_MAP_FIELD_T = 0.2;
+
     public static final String VOLTAGE = "CAUTION: induced voltage above extra-low-voltage levels"
             + " (IEC 61140: 50 V AC rms, 120 V ripple-free DC). Follow local electrical codes and licensed practice.";
 

@@ -1,6 +1,8 @@
 package org.kinduct.ui.app;
 
 import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.CompletableFuture;
@@ -8,9 +10,11 @@ import java.util.concurrent.Executor;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.io.FieldMapCsv;
 import org.kinduct.scene.io.SceneWithUnits;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.SceneDocument;
+import org.kinduct.ui.edit.ShapeFactory;
 
 /**
  * The file side of one editor window: new scene, open, open a demo, save, save as, the question
@@ -162,6 +166,33 @@ final class DocumentFiles {
             vm.zoomToFit();
             return true;
         }));
+    }
+
+    // ---- field maps ----
+
+    /**
+     * Edit ▸ Add field map…: the chosen file is read on the file thread (a large map takes a moment)
+     * and added as a source named by its path relative to the scene's folder, or by its full path
+     * while the scene has no file.
+     */
+    void addFieldMap() {
+        Path sceneFolder = folder();
+        dialogs.mapToOpen(sceneFolder).ifPresent(file -> Futures.watched(onIo(() -> {
+            try (InputStream in = Files.newInputStream(file)) {
+                return FieldMapCsv.readPoints(in, file.toString());
+            }
+        }).handle((grid, failure) -> {
+            if (failure != null) {
+                dialogs.error("Could not read the field map " + file.getFileName(), message(failure));
+                return null;
+            }
+            Path absolute = file.toAbsolutePath();
+            String name = sceneFolder != null ? sceneFolder.relativize(absolute).toString().replace('\\', '/')
+                    : absolute.toString();
+            document().add("Add field map", scene -> ShapeFactory.addFieldMap(scene, name, grid));
+            vm.say("Added field map " + file.getFileName() + ": " + grid.nx() + " × " + grid.ny() + " samples");
+            return null;
+        })));
     }
 
     // ---- save ----

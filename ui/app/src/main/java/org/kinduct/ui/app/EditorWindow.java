@@ -219,7 +219,8 @@ final class EditorWindow {
                 item("Select all", "Shortcut+A", document::selectAll),
                 new SeparatorMenuItem(),
                 item("Add uniform background field", null,
-                        () -> document.add("Add background field", ShapeFactory::addBackground)));
+                        () -> document.add("Add background field", ShapeFactory::addBackground)),
+                item("Add field map…", null, files::addFieldMap));
         Menu viewMenu = new Menu("View");
         viewMenu.getItems().add(item("Zoom to fit  (F)", null, vm::zoomToFit));
         viewMenu.getItems().add(new SeparatorMenuItem());

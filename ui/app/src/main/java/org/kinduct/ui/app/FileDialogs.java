@@ -19,6 +19,9 @@ interface FileDialogs {
     /** A scene file to open, starting in {@code folder} (null: the system's choice). */
     Optional<Path> fileToOpen(Path folder);
 
+    /** A field-map file (comma-separated x, y, B_z) to add, starting in {@code folder} (null: the system's choice). */
+    Optional<Path> mapToOpen(Path folder);
+
     /** Where to save, starting in {@code folder} with {@code suggestedName}. */
     Optional<Path> fileToSave(Path folder, String suggestedName);
 

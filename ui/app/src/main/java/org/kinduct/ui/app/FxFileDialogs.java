@@ -26,6 +26,19 @@ final class FxFileDialogs implements FileDialogs {
     }
 
     @Override
+    public Optional<Path> mapToOpen(Path folder) {
+        FileChooser chooser = new FileChooser();
+        chooser.setTitle("Add field map");
+        chooser.getExtensionFilters().addAll(
+                new FileChooser.ExtensionFilter("Field maps: x, y, B_z with units (*.csv, *.txt)", "*.csv", "*.txt"),
+                new FileChooser.ExtensionFilter("All files", "*"));
+        if (folder != null && Files.isDirectory(folder)) {
+            chooser.setInitialDirectory(folder.toFile());
+        }
+        return Optional.ofNullable(chooser.showOpenDialog(owner)).map(File::toPath);
+    }
+
+    @Override
     public Optional<Path> fileToSave(Path folder, String suggestedName) {
         FileChooser chooser = chooser(folder);
         chooser.setInitialFileName(suggestedName);

@@ -5,6 +5,7 @@ import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import org.kinduct.scene.io.SceneFiles;
+import org.kinduct.scene.io.SceneFolder;
 import org.kinduct.scene.io.SceneFormatException;
 import org.kinduct.scene.io.SceneJson;
 import org.kinduct.scene.io.SceneWithUnits;
@@ -29,7 +30,8 @@ final class JsonSceneStore implements SceneStore {
             if (in == null) {
                 throw new LoadFailure("No demo scene " + resource + " on the class path", null);
             }
-            return SceneJson.readWithUnits(new String(in.readAllBytes(), StandardCharsets.UTF_8), resource);
+            return SceneJson.readWithUnits(new String(in.readAllBytes(), StandardCharsets.UTF_8), resource,
+                    SceneFolder.ofResource(JsonSceneStore.class, resource));
         } catch (SceneFormatException e) {
             throw new LoadFailure(e.getMessage(), e);
         } catch (IOException e) {

@@ -96,6 +96,11 @@ final class PropertiesPanel extends ScrollPane {
             public String coil(Source.SourceCoil coil) {
                 return "Source coil";
             }
+
+            @Override
+            public String map(Source.FieldMap map) {
+                return "Field map";
+            }
         });
     }
 

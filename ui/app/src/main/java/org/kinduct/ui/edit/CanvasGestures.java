@@ -352,6 +352,11 @@ public final class CanvasGestures {
                     }
                 });
             }
+
+            @Override
+            public List<Vec2> map(Source.FieldMap map) {
+                return List.of();
+            }
         });
     }
 

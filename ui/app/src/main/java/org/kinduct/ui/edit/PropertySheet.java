@@ -6,6 +6,7 @@ import java.util.function.DoubleFunction;
 import java.util.function.UnaryOperator;
 import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.Scene;
@@ -131,7 +132,32 @@ public final class PropertySheet {
             public List<Property> coil(Source.SourceCoil c) {
                 return coilProperties(c);
             }
+
+            @Override
+            public List<Property> map(Source.FieldMap m) {
+                return mapProperties(m);
+            }
         });
+    }
+
+    /** The file and its grid are shown, not edited: a map is changed by loading another file. */
+    private static List<Property> mapProperties(Source.FieldMap m) {
+        List<String> outside = List.of("zero", "error");
+        FieldGrid g = m.grid();
+        return List.of(
+                new Property("File (beside the scene)", m.file(), List.of(), text -> {
+                    throw new IllegalArgumentException("to use another file, add a new field map (Edit ▸ Add field map…)");
+                }),
+                new Property("Samples", g.nx() + " × " + g.ny() + ", spacing " + Units.format(g.dxM(), Dimension.LENGTH)
+                        + " × " + Units.format(g.dyM(), Dimension.LENGTH), List.of(), text -> {
+                            throw new IllegalArgumentException("the samples come from the file");
+                        }),
+                coordinate("Offset x", m.offsetM().x(), m.offsetM(), v -> replace(new Source.FieldMap(m.id(), m.body(),
+                        m.file(), g, new Vec2(v, m.offsetM().y()), m.outside()))),
+                coordinate("Offset y", m.offsetM().y(), m.offsetM(), v -> replace(new Source.FieldMap(m.id(), m.body(),
+                        m.file(), g, new Vec2(m.offsetM().x(), v), m.outside()))),
+                choice("Beyond the samples", outside, m.outside().ordinal(), i -> replace(new Source.FieldMap(m.id(),
+                        m.body(), m.file(), g, m.offsetM(), Source.FieldMap.Outside.values()[i]))));
     }
 
     private static List<Property> blockProperties(Source.BlockMagnet m) {

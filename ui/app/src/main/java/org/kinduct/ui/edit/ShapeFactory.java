@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Scene;
@@ -65,6 +66,12 @@ public final class ShapeFactory {
     public static Scene addBackground(Scene scene) {
         return SceneEdits.addSource(scene, new Source.UniformField(SceneEdits.uniqueId(scene, "background"),
                 BACKGROUND_BZ_T));
+    }
+
+    /** Adds the samples read from {@code file} as a field map on the fixed frame, in the file's own coordinates. */
+    public static Scene addFieldMap(Scene scene, String file, FieldGrid grid) {
+        return SceneEdits.addSource(scene, new Source.FieldMap(SceneEdits.uniqueId(scene, "map"), Body.FIXED, file,
+                grid, Vec2.ZERO, Source.FieldMap.Outside.ZERO));
     }
 
     /** The outline a tool shows while drawing: as clicked, or the rectangle or circle it implies. */

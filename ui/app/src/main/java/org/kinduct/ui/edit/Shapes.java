@@ -59,6 +59,15 @@ public final class Shapes {
                 });
                 return new Source.SourceCoil(c.id(), c.body(), shape, c.turns(), c.planeZM(), c.drive());
             }
+
+            /** A map moves with its centre; its samples keep their axes, so it turns only with its body. */
+            @Override
+            public Source map(Source.FieldMap m) {
+                Vec2 center = new Vec2(0.5 * (m.grid().x0M() + m.grid().x1M()), 0.5 * (m.grid().y0M() + m.grid().y1M()))
+                        .plus(m.offsetM());
+                return new Source.FieldMap(m.id(), m.body(), m.file(), m.grid(),
+                        m.offsetM().plus(f.apply(center).minus(center)), m.outside());
+            }
         });
     }
 
@@ -91,6 +100,11 @@ public final class Shapes {
 
             @Override
             public Boolean coil(Source.SourceCoil coil) {
+                return true;
+            }
+
+            @Override
+            public Boolean map(Source.FieldMap map) {
                 return true;
             }
         });
@@ -206,6 +220,11 @@ public final class Shapes {
             @Override
             public Source coil(Source.SourceCoil c) {
                 return new Source.SourceCoil(id, body, c.shape(), c.turns(), c.planeZM(), c.drive());
+            }
+
+            @Override
+            public Source map(Source.FieldMap m) {
+                return new Source.FieldMap(id, body, m.file(), m.grid(), m.offsetM(), m.outside());
             }
         });
     }

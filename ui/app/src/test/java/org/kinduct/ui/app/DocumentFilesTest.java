@@ -61,6 +61,12 @@ class DocumentFilesTest {
         }
 
         @Override
+        public Optional<Path> mapToOpen(Path folder) {
+            asked.add("map");
+            return Optional.of((Path) answers.remove());
+        }
+
+        @Override
         public Optional<Path> fileToSave(Path folder, String suggestedName) {
             asked.add("save as");
             return Optional.of((Path) answers.remove());

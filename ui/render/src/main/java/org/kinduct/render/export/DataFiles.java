@@ -100,13 +100,18 @@ public final class DataFiles {
      * evaluated exactly (not taken from the display raster); rows from bottom to top, x fastest.
      */
     public static String fieldCsv(SceneField field, ViewChoice.Box box) {
-        double cell = (box.x1() - box.x0()) / FIELD_COLUMNS;
+        return fieldCsv(field, box, FIELD_COLUMNS);
+    }
+
+    /** As {@link #fieldCsv(SceneField, ViewChoice.Box)} with {@code columns} columns (a finer or coarser grid). */
+    public static String fieldCsv(SceneField field, ViewChoice.Box box, int columns) {
+        double cell = (box.x1() - box.x0()) / columns;
         int rows = Math.max(1, (int) Math.round((box.y1() - box.y0()) / cell));
         double cellY = (box.y1() - box.y0()) / rows;
-        StringBuilder out = new StringBuilder(FIELD_COLUMNS * rows * 40).append("x_m,y_m,Bz_T\n");
+        StringBuilder out = new StringBuilder(columns * rows * 40).append("x_m,y_m,Bz_T\n");
         for (int r = 0; r < rows; r++) {
             double y = box.y0() + (r + 0.5) * cellY;
-            for (int c = 0; c < FIELD_COLUMNS; c++) {
+            for (int c = 0; c < columns; c++) {
                 double x = box.x0() + (c + 0.5) * cell;
                 out.append(num(x)).append(',').append(num(y)).append(',').append(num(field.bz(x, y))).append('\n');
             }

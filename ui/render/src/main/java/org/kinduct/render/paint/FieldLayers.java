@@ -112,6 +112,12 @@ public final class FieldLayers {
             public Boolean coil(Source.SourceCoil coil) {
                 return false;
             }
+
+            /** A map is a measured or simulated real magnet (or coil), so its 0.5 mT line is worth a caution too. */
+            @Override
+            public Boolean map(Source.FieldMap map) {
+                return true;
+            }
         });
     }
 

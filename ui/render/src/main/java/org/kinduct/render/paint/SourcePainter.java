@@ -78,6 +78,20 @@ public final class SourcePainter {
                     label(s, v, centroid(outline), coil.turns() + " turns", 0);
                     return null;
                 }
+
+                /** The sampled rectangle, dashed: the colours inside come from the samples themselves. */
+                @Override
+                public Void map(Source.FieldMap map) {
+                    polygon(s, v, outline, true);
+                    s.stroke(Palette.INK);
+                    s.lineWidth(1.5);
+                    s.dash(2, 3);
+                    s.strokePath();
+                    s.dash();
+                    Vec2 corner = outline.get(3);
+                    label(s, v, corner, map.id() + " · " + map.grid().nx() + " × " + map.grid().ny() + " samples", 2);
+                    return null;
+                }
             });
             if (marks.selected().contains(src.id())) {
                 polygon(s, v, outline, true);
@@ -162,7 +176,21 @@ public final class SourcePainter {
                 });
                 return placement.place(c.body(), drawn);
             }
+
+            @Override
+            public List<Vec2> map(Source.FieldMap m) {
+                return placement.place(m.body(), mapRectangle(m));
+            }
         });
+    }
+
+    /** The corners of a map's sampled rectangle as drawn, counter-clockwise from the lower left. */
+    public static List<Vec2> mapRectangle(Source.FieldMap m) {
+        double x0 = m.grid().x0M() + m.offsetM().x();
+        double y0 = m.grid().y0M() + m.offsetM().y();
+        double x1 = m.grid().x1M() + m.offsetM().x();
+        double y1 = m.grid().y1M() + m.offsetM().y();
+        return List.of(new Vec2(x0, y0), new Vec2(x1, y0), new Vec2(x1, y1), new Vec2(x0, y1));
     }
 
     private static List<Vec2> circle(Vec2 center, double r) {
