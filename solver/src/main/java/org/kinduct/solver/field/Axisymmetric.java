@@ -13,6 +13,14 @@ final class Axisymmetric {
     private Axisymmetric() {
     }
 
+    /**
+     * |(dx, dy)| as √(dx² + dy²): scene lengths lie far from where the squares over- or underflow,
+     * so the care (and cost) of {@link Math#hypot} buys nothing here; within an ulp of it.
+     */
+    static double distance(double dx, double dy) {
+        return Math.sqrt(dx * dx + dy * dy);
+    }
+
     /** (A_x, A_y) at offset (dx, dy) from the axis, ρ = |(dx, dy)| &gt; 0, into out[0..1]. */
     static void potential(double dx, double dy, double rho, double aPhi, double[] out) {
         double g = aPhi / rho;

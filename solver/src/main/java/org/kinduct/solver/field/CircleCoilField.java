@@ -33,14 +33,14 @@ public final class CircleCoilField extends CurrentSourceField {
 
     @Override
     public double bz(double x, double y) {
-        return CircularFilament.bz(radiusM, z0M, ampereTurns, Math.hypot(x - cx, y - cy));
+        return CircularFilament.bz(radiusM, z0M, ampereTurns, Axisymmetric.distance(x - cx, y - cy));
     }
 
     @Override
     public void potential(double x, double y, double[] out) {
         double dx = x - cx;
         double dy = y - cy;
-        double rho = Math.hypot(dx, dy);
+        double rho = Axisymmetric.distance(dx, dy);
         if (rho == 0) {
             out[0] = 0;
             out[1] = 0;
@@ -54,7 +54,7 @@ public final class CircleCoilField extends CurrentSourceField {
     public void jet(double x, double y, double[] out) {
         double dx = x - cx;
         double dy = y - cy;
-        double rho = Math.hypot(dx, dy);
+        double rho = Axisymmetric.distance(dx, dy);
         double aPhi = rho == 0 ? 0 : CircularFilament.aPhi(radiusM, z0M, ampereTurns, rho);
         Axisymmetric.jet(dx, dy, rho, aPhi, CircularFilament.bz(radiusM, z0M, ampereTurns, rho), out);
     }

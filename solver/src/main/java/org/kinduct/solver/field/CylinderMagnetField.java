@@ -81,7 +81,7 @@ public final class CylinderMagnetField extends CurrentSourceField {
 
     @Override
     public double bz(double x, double y) {
-        return bzAt(Math.hypot(x - cx, y - cy));
+        return bzAt(Axisymmetric.distance(x - cx, y - cy));
     }
 
     private double bzAt(double rho) {
@@ -107,7 +107,7 @@ public final class CylinderMagnetField extends CurrentSourceField {
     public void potential(double x, double y, double[] out) {
         double dx = x - cx;
         double dy = y - cy;
-        double rho = Math.hypot(dx, dy);
+        double rho = Axisymmetric.distance(dx, dy);
         if (rho == 0) {
             out[0] = 0;
             out[1] = 0;
@@ -121,7 +121,7 @@ public final class CylinderMagnetField extends CurrentSourceField {
     public void jet(double x, double y, double[] out) {
         double dx = x - cx;
         double dy = y - cy;
-        double rho = Math.hypot(dx, dy);
+        double rho = Axisymmetric.distance(dx, dy);
         Axisymmetric.jet(dx, dy, rho, rho == 0 ? 0 : aPhi(rho), bzAt(rho), out);
     }
 
