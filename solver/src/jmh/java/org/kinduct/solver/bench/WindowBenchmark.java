@@ -2,13 +2,13 @@ package org.kinduct.solver.bench;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.function.DoubleFunction;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.TimeSpan;
+import org.kinduct.scene.io.SceneFormatException;
 import org.kinduct.scene.io.SceneJson;
 import org.kinduct.solver.SceneSolver;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -49,7 +49,7 @@ public class WindowBenchmark {
     private int instant;
 
     @Setup
-    public void setUp() {
+    public void setUp() throws IOException, SceneFormatException {
         Scene s = scene.equals("twenty") ? TwentyObjectBenchmark.scene() : demo("carriage-pickup");
         window = s.time();
         if (solver.equals("baseline")) {
@@ -62,15 +62,13 @@ public class WindowBenchmark {
     }
 
     /** A demo scene as the editor opens it. */
-    static Scene demo(String name) {
+    static Scene demo(String name) throws IOException, SceneFormatException {
         String path = "/org/kinduct/demo/" + name + ".json";
         try (InputStream in = WindowBenchmark.class.getResourceAsStream(path)) {
             if (in == null) {
                 throw new IllegalStateException("no demo resource " + path);
             }
             return SceneJson.read(new String(in.readAllBytes(), StandardCharsets.UTF_8), name + ".json");
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
         }
     }
 
