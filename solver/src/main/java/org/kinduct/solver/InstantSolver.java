@@ -8,6 +8,7 @@ import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.field.GradientField;
 
 /**
  * Solves every conductor of a scene at one instant; {@link SceneSolver} states the physics.
@@ -171,22 +172,48 @@ final class InstantSolver {
         int turns = loop.turns();
         int n = at.xs().length;
         int sources = index.sourceCount();
+        boolean[] paired = pairedSources(c);
         double[] fluxNow = new double[sources];
         double flux = 0;
+        double stencilFlux = 0;
+        double pairedRate = 0;
+        double pairedMotional = 0;
+        double pairedForceX = 0;
+        double pairedForceY = 0;
+        boolean anyStencil = false;
         for (int s = 0; s < sources; s++) {
-            fluxNow[s] = now.field(s).flux(at.xs(), at.ys());
+            if (paired[s]) {
+                RigidPair pair = RigidPair.of((GradientField) now.field(s), now.pose(index.sourceBody(s)), at,
+                        now.pose(index.vertexBody(c, 0)));
+                fluxNow[s] = pair.fluxWb();
+                pairedRate += pair.fluxRateWbPerS();
+                pairedMotional += pair.motionalV();
+                pairedForceX += pair.forceXNPerA();
+                pairedForceY += pair.forceYNPerA();
+            } else {
+                fluxNow[s] = now.field(s).flux(at.xs(), at.ys());
+                stencilFlux += fluxNow[s];
+                anyStencil = true;
+            }
             flux += fluxNow[s];
         }
-        EdgeSums sums = EdgeSums.along(field, at);
+        boolean[] stencilMask = new boolean[sources];
+        for (int s = 0; s < sources; s++) {
+            stencilMask[s] = !paired[s];
+        }
+        EdgeSums sums = EdgeSums.along(now.only(stencilMask), at);
 
         double[] moved = new double[around.length];
         double[] frozen = new double[around.length];
         double[] xs = new double[n];
         double[] ys = new double[n];
-        for (int k = 0; k < around.length; k++) {
+        for (int k = 0; anyStencil && k < around.length; k++) {
             index.place(c, around[k], xs, ys);
             boolean still = Arrays.equals(xs, at.xs()) && Arrays.equals(ys, at.ys());
             for (int s = 0; s < sources; s++) {
+                if (paired[s]) {
+                    continue;
+                }
                 double placedFlux = still && unchanged[k][s] ? fluxNow[s] : around[k].field(s).flux(xs, ys);
                 moved[k] += placedFlux;
                 if (varying[s]) {
@@ -194,15 +221,17 @@ final class InstantSolver {
                 }
             }
         }
-        double emfFlux = turns * DifferenceStep.negativeDerivative(moved, h);
+        double emfFlux = turns * (DifferenceStep.negativeDerivative(moved, h) - pairedRate);
         double transformer = anyVarying ? DifferenceStep.negativeDerivative(frozen, h) : 0;
-        double emf = turns * (sums.motionalV() + transformer);
+        double emf = turns * (pairedMotional + sums.motionalV() + transformer);
         double scale = turns * emfScale(at);
         double threshold = TERMINAL_ABS_V + TERMINAL_REL * scale;
         double denominator = Math.max(Math.max(Math.abs(emfFlux), Math.abs(emf)), DISAGREEMENT_FLOOR * scale);
-        double disagreement = DifferenceStep.smooth(flux, moved, DISAGREEMENT_FLOOR * scale / turns, h)
+        double disagreement = DifferenceStep.smooth(stencilFlux, moved, DISAGREEMENT_FLOOR * scale / turns, h)
                 ? (denominator > 0 ? Math.abs(emfFlux - emf) / denominator : 0)
                 : Double.NaN;
+        double forceX = pairedForceX + sums.forceXNPerA();
+        double forceY = pairedForceY + sums.forceYNPerA();
 
         double resistance = LoopResistance.ohms(loop, at.lengthM());
         List<Vec2> vertices = vertices(at);
@@ -212,11 +241,36 @@ final class InstantSolver {
                     resistance, Double.NaN, true);
         }
         double current = emf / resistance;
-        Vec2 force = new Vec2(turns * current * sums.forceXNPerA(), turns * current * sums.forceYNPerA());
+        Vec2 force = new Vec2(turns * current * forceX, turns * current * forceY);
         return new ConductorState(loop.id(), ConductorState.Kind.LOOP, vertices, flux, turns * flux, emfFlux, emf,
                 emf, disagreement, threshold, Terminal.NONE, current,
                 Circulation.of(current, Polygons.signedArea(vertices), threshold / resistance), force, resistance,
                 Double.NaN, true);
+    }
+
+    /**
+     * The sources whose share of loop {@code c} comes from one instant ({@link RigidPair}): the
+     * loop rides one body, and the source keeps its strength (no AC drive) and has a closed-form
+     * potential gradient that is smooth in the plane (a magnet face lying in the plane makes B_z
+     * jump at its footprint's edge; such a magnet keeps the time difference, as do patches).
+     */
+    private boolean[] pairedSources(int c) {
+        boolean[] paired = new boolean[index.sourceCount()];
+        for (int i = 1; i < index.vertexCount(c); i++) {
+            if (index.vertexBody(c, i) != index.vertexBody(c, 0)) {
+                return paired;
+            }
+        }
+        List<Source> sources = index.scene().sources();
+        for (int s = 0; s < paired.length; s++) {
+            paired[s] = now.field(s) instanceof GradientField && !driven(s) && !touchesPlane(sources.get(s));
+        }
+        return paired;
+    }
+
+    private static boolean touchesPlane(Source source) {
+        return source instanceof Source.BlockMagnet block && block.standoffM() == 0
+                || source instanceof Source.CylinderMagnet cylinder && cylinder.standoffM() == 0;
     }
 
     private ConductorState wire(int c, Conductor wire) {

@@ -80,7 +80,7 @@ public final class BlockMagnetField extends CurrentSourceField {
     }
 
     @Override
-    EdgeQuadrature.Breaks breaks() {
+    public EdgeQuadrature.Breaks breaks() {
         if (zLowM != 0 && zHighM != 0) {
             return super.breaks();
         }
@@ -113,15 +113,29 @@ public final class BlockMagnetField extends CurrentSourceField {
 
     /** atan[X·Y/(Z·R)]; Z = ±0 gives ±π/2·sign(XY), and XY = 0 gives 0 (mean of both sides). */
     private static double corner(double dx, double dy, double dz) {
-        double n = dx * dy;
-        if (n == 0) {
-            return 0;
-        }
-        return Math.atan(n / (dz * Math.sqrt(dx * dx + dy * dy + dz * dz)));
+        return corner(dx, dy, dz, Math.sqrt(dx * dx + dy * dy + dz * dz));
     }
 
     @Override
     public void potential(double x, double y, double[] out) {
+        evaluate(x, y, out, false);
+    }
+
+    /**
+     * A and its gradient from the same ribbon terms: with R(t, c) = G(t, c, zHigh) − G(t, c, zLow),
+     * ∂R/∂t = asinh(zHigh/ρ) − asinh(zLow/ρ) (the {@link #faceAsinh} of the corner) and ∂R/∂c =
+     * −[atan(t·zHigh/(c·r)) − atan(t·zLow/(c·r))] (G's derivatives, as in the class documentation:
+     * by Euler's theorem for the degree-1 homogeneous G, G = z·∂G/∂z + t·∂G/∂t + c·∂G/∂c), so a
+     * ribbon's c-derivative is minus its {@link #atanDifference}. B_z comes from the corner
+     * arctangents (the class documentation's sum), sharing the corner distances.
+     */
+    @Override
+    public void jet(double x, double y, double[] out) {
+        evaluate(x, y, out, true);
+    }
+
+    /** A at (x, y) into out[0..1]; with {@code gradient} also out[2..6] as {@link #jet} states. */
+    private void evaluate(double x, double y, double[] out, boolean gradient) {
         double dx = x - cx;
         double dy = y - cy;
         double u = cos * dx + sin * dy;
@@ -148,12 +162,55 @@ public final class BlockMagnetField extends CurrentSourceField {
         double f21 = faceAsinh(p21, high21, low21, zLowM, zHighM);
         double f12 = faceAsinh(p12, high12, low12, zLowM, zHighM);
         double f22 = faceAsinh(p22, high22, low22, zLowM, zHighM);
-        double au = brOver4Pi * (ribbon(tx1, tx2, Math.abs(ty1), zLowM, zHighM, low11, low21, high11, high21, f11, f21)
-                - ribbon(tx1, tx2, Math.abs(ty2), zLowM, zHighM, low12, low22, high12, high22, f12, f22));
-        double av = brOver4Pi * (ribbon(ty1, ty2, Math.abs(tx2), zLowM, zHighM, low21, low22, high21, high22, f21, f22)
-                - ribbon(ty1, ty2, Math.abs(tx1), zLowM, zHighM, low11, low12, high11, high12, f11, f12));
+        double cy1 = Math.abs(ty1);
+        double cy2 = Math.abs(ty2);
+        double cx2 = Math.abs(tx2);
+        double cx1 = Math.abs(tx1);
+        double dUy1 = atanDifference(tx1, tx2, cy1, zHighM, zLowM, high11, high21, low11, low21);
+        double dUy2 = atanDifference(tx1, tx2, cy2, zHighM, zLowM, high12, high22, low12, low22);
+        double dVx2 = atanDifference(ty1, ty2, cx2, zHighM, zLowM, high21, high22, low21, low22);
+        double dVx1 = atanDifference(ty1, ty2, cx1, zHighM, zLowM, high11, high12, low11, low12);
+        double au = brOver4Pi * (ribbon(tx1, tx2, cy1, zLowM, zHighM, low11, low21, high11, high21, f11, f21, dUy1)
+                - ribbon(tx1, tx2, cy2, zLowM, zHighM, low12, low22, high12, high22, f12, f22, dUy2));
+        double av = brOver4Pi * (ribbon(ty1, ty2, cx2, zLowM, zHighM, low21, low22, high21, high22, f21, f22, dVx2)
+                - ribbon(ty1, ty2, cx1, zLowM, zHighM, low11, low12, high11, high12, f11, f12, dVx1));
         out[0] = cos * au - sin * av;
         out[1] = sin * au + cos * av;
+        if (!gradient) {
+            return;
+        }
+        // In the magnet's frame: t along a ribbon falls as u (or v) grows, c = |t across| grows with |t|.
+        double duu = brOver4Pi * (f11 - f21 - f12 + f22);
+        double duv = brOver4Pi * (Math.signum(ty1) * dUy1 - Math.signum(ty2) * dUy2);
+        double dvu = brOver4Pi * (Math.signum(tx2) * dVx2 - Math.signum(tx1) * dVx1);
+        // J = R·J'·Rᵀ with R the rotation by the magnet's angle; J' is traceless.
+        double c2 = cos * cos - sin * sin;
+        double s2 = 2 * sin * cos;
+        double symmetric = 0.5 * (duv + dvu);
+        double antisymmetric = 0.5 * (dvu - duv);
+        double diagonal = c2 * duu - s2 * symmetric;
+        double offDiagonal = s2 * duu + c2 * symmetric;
+        out[2] = diagonal;
+        out[3] = offDiagonal - antisymmetric;
+        out[4] = offDiagonal + antisymmetric;
+        out[5] = -diagonal;
+        double x1 = -tx1;
+        double x2 = -tx2;
+        double y1 = -ty1;
+        double y2 = -ty2;
+        out[6] = brOver4Pi * (-corner(x1, y1, dzBottom, low11) + corner(x2, y1, dzBottom, low21)
+                + corner(x1, y2, dzBottom, low12) - corner(x2, y2, dzBottom, low22)
+                + corner(x1, y1, dzTop, high11) - corner(x2, y1, dzTop, high21)
+                - corner(x1, y2, dzTop, high12) + corner(x2, y2, dzTop, high22));
+    }
+
+    /** {@link #corner(double, double, double)} given the corner distance r. */
+    private static double corner(double dx, double dy, double dz, double r) {
+        double n = dx * dy;
+        if (n == 0) {
+            return 0;
+        }
+        return Math.atan(n / (dz * r));
     }
 
     /**
@@ -168,7 +225,8 @@ public final class BlockMagnetField extends CurrentSourceField {
         double high1 = Math.sqrt(p1 + zHigh * zHigh);
         double high2 = Math.sqrt(p2 + zHigh * zHigh);
         return ribbon(t1, t2, c, zLow, zHigh, low1, low2, high1, high2,
-                faceAsinh(p1, high1, low1, zLow, zHigh), faceAsinh(p2, high2, low2, zLow, zHigh));
+                faceAsinh(p1, high1, low1, zLow, zHigh), faceAsinh(p2, high2, low2, zLow, zHigh),
+                atanDifference(t1, t2, c, zHigh, zLow, high1, high2, low1, low2));
     }
 
     /**
@@ -176,10 +234,10 @@ public final class BlockMagnetField extends CurrentSourceField {
      * F = asinh(zHigh/ρ) − asinh(zLow/ρ) ({@link #faceAsinh}), ρ = √(c² + t²): [G(t2, c, z) −
      * G(t1, c, z)] between the faces, G the antiderivative in the class documentation, with the terms
      * of both faces that share t paired so that each pair takes one logarithm, t·F, and the c·atan
-     * terms as one arctangent ({@link #atanDifference}). G(t, c, 0) = 0.
+     * terms as one arctangent ({@link #atanDifference}, given). G(t, c, 0) = 0.
      */
     private static double ribbon(double t1, double t2, double c, double zLow, double zHigh, double low1, double low2,
-                                 double high1, double high2, double f1, double f2) {
+                                 double high1, double high2, double f1, double f2, double atans) {
         double g = t2 * f2 - t1 * f1;
         if (zHigh != 0) {
             g += zHigh * StraightFilament.asinhDifference(t2, t1, high2, high1, c * c + zHigh * zHigh, t2 - t1);
@@ -187,10 +245,7 @@ public final class BlockMagnetField extends CurrentSourceField {
         if (zLow != 0) {
             g -= zLow * StraightFilament.asinhDifference(t2, t1, low2, low1, c * c + zLow * zLow, t2 - t1);
         }
-        if (c != 0) {
-            g -= c * atanDifference(t1, t2, c, zHigh, zLow, high1, high2, low1, low2);
-        }
-        return g;
+        return g - c * atans;
     }
 
     /**
@@ -215,10 +270,14 @@ public final class BlockMagnetField extends CurrentSourceField {
      * sign, free of cancellation. Both faces' angles lie in (0, π) for z &gt; 0 and in (−π, 0) for
      * z &lt; 0 (0 for z = 0), and the faces do not straddle the plane, so their difference lies in
      * (−π, π) and is the angle of (X_h·X_l + Y_h·Y_l, Y_h·X_l − X_h·Y_l). Rounding moves the result
-     * by a few ulp of π, as it would each of the four arctangents.
+     * by a few ulp of π, as it would each of the four arctangents. 0 for c = 0, the limit from
+     * either side (zHigh and zLow share a sign, so the four ±π/2 cancel).
      */
     private static double atanDifference(double t1, double t2, double c, double zHigh, double zLow,
                                          double r1High, double r2High, double r1Low, double r2Low) {
+        if (c == 0) {
+            return 0;
+        }
         double xHigh = c * c * r1High * r2High + t1 * t2 * zHigh * zHigh;
         double yHigh = c * zHigh * cross(t1, t2, c, zHigh, r1High, r2High);
         double xLow = c * c * r1Low * r2Low + t1 * t2 * zLow * zLow;

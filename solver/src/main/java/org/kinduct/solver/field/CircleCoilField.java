@@ -33,21 +33,29 @@ public final class CircleCoilField extends CurrentSourceField {
 
     @Override
     public double bz(double x, double y) {
-        return CircularFilament.bz(radiusM, z0M, ampereTurns, Math.hypot(x - cx, y - cy));
+        return CircularFilament.bz(radiusM, z0M, ampereTurns, Axisymmetric.distance(x - cx, y - cy));
     }
 
     @Override
     public void potential(double x, double y, double[] out) {
         double dx = x - cx;
         double dy = y - cy;
-        double rho = Math.hypot(dx, dy);
+        double rho = Axisymmetric.distance(dx, dy);
         if (rho == 0) {
             out[0] = 0;
             out[1] = 0;
             return;
         }
-        double aOverRho = CircularFilament.aPhi(radiusM, z0M, ampereTurns, rho) / rho;
-        out[0] = -aOverRho * dy;
-        out[1] = aOverRho * dx;
+        Axisymmetric.potential(dx, dy, rho, CircularFilament.aPhi(radiusM, z0M, ampereTurns, rho), out);
+    }
+
+    /** A, its gradient from A_φ and B_z ({@link Axisymmetric#jet}), and B_z. */
+    @Override
+    public void jet(double x, double y, double[] out) {
+        double dx = x - cx;
+        double dy = y - cy;
+        double rho = Axisymmetric.distance(dx, dy);
+        double aPhi = rho == 0 ? 0 : CircularFilament.aPhi(radiusM, z0M, ampereTurns, rho);
+        Axisymmetric.jet(dx, dy, rho, aPhi, CircularFilament.bz(radiusM, z0M, ampereTurns, rho), out);
     }
 }

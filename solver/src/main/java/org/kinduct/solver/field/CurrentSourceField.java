@@ -7,9 +7,10 @@ import org.kinduct.scene.Checks;
  * equivalent surface currents): their vector potential is physical, the flux through a polygon
  * is Φ = ∮ A·dl (Stokes' theorem), and the B_z moments along a segment are line integrals of B_z;
  * both by {@link EdgeQuadrature#STANDARD}. Stokes' theorem over the polygon's edges counts each
- * region with its winding number, as {@link PlaneField#flux} requires.
+ * region with its winding number, as {@link PlaneField#flux} requires. Their potentials' gradients
+ * are closed form ({@link GradientField}).
  */
-abstract sealed class CurrentSourceField implements PlaneField
+abstract sealed class CurrentSourceField implements GradientField
         permits PolygonCoilField, CircleCoilField, BlockMagnetField, CylinderMagnetField {
 
     @Override
@@ -48,7 +49,8 @@ abstract sealed class CurrentSourceField implements PlaneField
      * accurate, and smooth in time as a loop moves, to a few ulp instead of the 1e-5 a singularity
      * inside a panel left. None for fields smooth in the plane.
      */
-    EdgeQuadrature.Breaks breaks() {
+    @Override
+    public EdgeQuadrature.Breaks breaks() {
         return EdgeQuadrature.Breaks.NONE;
     }
 

@@ -80,14 +80,17 @@ public final class CylinderMagnetField extends CurrentSourceField {
     }
 
     @Override
-    EdgeQuadrature.Breaks breaks() {
+    public EdgeQuadrature.Breaks breaks() {
         return zLowM == 0 || zHighM == 0
                 ? (ax, ay, bx, by) -> Crossings.ofCircle(ax, ay, bx, by, cx, cy, radiusM) : super.breaks();
     }
 
     @Override
     public double bz(double x, double y) {
-        double rho = Math.hypot(x - cx, y - cy);
+        return bzAt(Axisymmetric.distance(x - cx, y - cy));
+    }
+
+    private double bzAt(double rho) {
         double sum = radiusM + rho;
         double diff = radiusM - rho;
         double gamma = diff / sum;
@@ -110,15 +113,22 @@ public final class CylinderMagnetField extends CurrentSourceField {
     public void potential(double x, double y, double[] out) {
         double dx = x - cx;
         double dy = y - cy;
-        double rho = Math.hypot(dx, dy);
+        double rho = Axisymmetric.distance(dx, dy);
         if (rho == 0) {
             out[0] = 0;
             out[1] = 0;
             return;
         }
-        double aOverRho = aPhi(rho) / rho;
-        out[0] = -aOverRho * dy;
-        out[1] = aOverRho * dx;
+        Axisymmetric.potential(dx, dy, rho, aPhi(rho), out);
+    }
+
+    /** A, its gradient from A_φ and B_z ({@link Axisymmetric#jet}), and B_z. */
+    @Override
+    public void jet(double x, double y, double[] out) {
+        double dx = x - cx;
+        double dy = y - cy;
+        double rho = Axisymmetric.distance(dx, dy);
+        Axisymmetric.jet(dx, dy, rho, rho == 0 ? 0 : aPhi(rho), bzAt(rho), out);
     }
 
     /** A_φ at distance ρ from the axis, T·m; see the class documentation. */

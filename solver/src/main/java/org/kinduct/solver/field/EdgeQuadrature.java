@@ -119,6 +119,16 @@ public final class EdgeQuadrature {
 
     private static final double[] NO_BREAKS = {};
 
+    /** Several integrands along an edge at once, sharing their evaluation at each node. */
+    @FunctionalInterface
+    public interface EdgeIntegrands {
+        /**
+         * Writes the integrands' values at (x, y) on an edge whose vector is (dx, dy) to
+         * {@code out[0..components-1]}; see {@link EdgeIntegrand}.
+         */
+        void values(double x, double y, double dx, double dy, double[] out);
+    }
+
     /**
      * A line integral over a polygon's edges, with its first moment and error estimate.
      *
@@ -160,11 +170,30 @@ public final class EdgeQuadrature {
 
     /** As {@link #closedPath(EdgeIntegrand, double[], double[])}, with the first panels split at {@code breaks}. */
     public Estimate closedPath(EdgeIntegrand f, double[] xs, double[] ys, Breaks breaks) {
-        if (xs.length != ys.length || xs.length < 2) {
-            throw new IllegalArgumentException("a closed path needs matching coordinate arrays of at least 2 "
-                    + "vertices, got " + xs.length + " x and " + ys.length + " y");
-        }
-        return new Run(f, xs, ys, xs.length, false, breaks).integrate();
+        requireClosedPath(xs, ys);
+        Run run = new Run(scalar(f), 1, xs, ys, xs.length, false, breaks);
+        return run.integrate();
+    }
+
+    /**
+     * Σ over the edges of the closed polygon of ∫₀¹ f_c ds for each of {@code out.length}
+     * integrands at once, written to {@code out}. Each integral meets the tolerance on its own
+     * (relative to its value, or to {@value #CANCELLATION_FLOOR} times the sum of its parts'
+     * magnitudes); the panel refined next is the one furthest over any integrand's share.
+     *
+     * @return the first integrand's estimate; converged only when every integrand's is
+     */
+    public Estimate closedPath(EdgeIntegrands f, double[] xs, double[] ys, double[] out) {
+        return closedPath(f, xs, ys, out, Breaks.NONE);
+    }
+
+    /** As {@link #closedPath(EdgeIntegrands, double[], double[], double[])}, with the first panels split at {@code breaks}. */
+    public Estimate closedPath(EdgeIntegrands f, double[] xs, double[] ys, double[] out, Breaks breaks) {
+        requireClosedPath(xs, ys);
+        Run run = new Run(f, out.length, xs, ys, xs.length, false, breaks);
+        Estimate first = run.integrate();
+        System.arraycopy(run.sums0, 0, out, 0, out.length);
+        return first;
     }
 
     /**
@@ -177,12 +206,27 @@ public final class EdgeQuadrature {
 
     /** As {@link #segment(EdgeIntegrand, double, double, double, double)}, with the first panels split at {@code breaks}. */
     public Estimate segment(EdgeIntegrand f, double ax, double ay, double bx, double by, Breaks breaks) {
-        return new Run(f, new double[] {ax, bx}, new double[] {ay, by}, 1, true, breaks).integrate();
+        return new Run(scalar(f), 1, new double[] {ax, bx}, new double[] {ay, by}, 1, true, breaks).integrate();
     }
 
-    /** The state of one integration; panels live in parallel primitive arrays. */
+    private static EdgeIntegrands scalar(EdgeIntegrand f) {
+        return (x, y, dx, dy, out) -> out[0] = f.value(x, y, dx, dy);
+    }
+
+    private static void requireClosedPath(double[] xs, double[] ys) {
+        if (xs.length != ys.length || xs.length < 2) {
+            throw new IllegalArgumentException("a closed path needs matching coordinate arrays of at least 2 "
+                    + "vertices, got " + xs.length + " x and " + ys.length + " y");
+        }
+    }
+
+    /**
+     * The state of one integration; panels live in parallel primitive arrays, the values of the
+     * {@code k} integrands of panel i at [i·k, i·k + k).
+     */
     private final class Run {
-        private final EdgeIntegrand f;
+        private final EdgeIntegrands f;
+        private final int k;
         private final double[] xs;
         private final double[] ys;
         private final int edges;
@@ -198,23 +242,49 @@ public final class EdgeQuadrature {
         private double[] moment1;
         private double[] magnitude;
         private double[] error;
-        private final double[] nodeValues = new double[KRONROD_POINTS];
+        private final double[] nodeValues;
+        private final double[] point;
+        private final double[] k0;
+        private final double[] k1;
+        private final double[] g0;
+        private final double[] g1;
+        private final double[] abs;
+        private final double[] atLo;
+        private final double[] atHi;
+        final double[] sums0;
+        private final double[] sums1;
+        private final double[] parts;
+        private final double[] totalError;
 
-        Run(EdgeIntegrand f, double[] xs, double[] ys, int edges, boolean controlFirstMoment, Breaks breaks) {
+        Run(EdgeIntegrands f, int k, double[] xs, double[] ys, int edges, boolean controlFirstMoment, Breaks breaks) {
             this.f = f;
+            this.breaks = breaks;
+            this.k = k;
             this.xs = xs;
             this.ys = ys;
             this.edges = edges;
             this.controlFirstMoment = controlFirstMoment;
-            this.breaks = breaks;
             int capacity = Math.max(16, 2 * edges);
             edge = new int[capacity];
             lo = new double[capacity];
             hi = new double[capacity];
-            moment0 = new double[capacity];
-            moment1 = new double[capacity];
-            magnitude = new double[capacity];
-            error = new double[capacity];
+            moment0 = new double[capacity * k];
+            moment1 = new double[capacity * k];
+            magnitude = new double[capacity * k];
+            error = new double[capacity * k];
+            nodeValues = new double[KRONROD_POINTS * k];
+            point = new double[k];
+            k0 = new double[k];
+            k1 = new double[k];
+            g0 = new double[k];
+            g1 = new double[k];
+            abs = new double[k];
+            atLo = new double[k];
+            atHi = new double[k];
+            sums0 = new double[k];
+            sums1 = new double[k];
+            parts = new double[k];
+            totalError = new double[k];
         }
 
         Estimate integrate() {
@@ -234,43 +304,61 @@ public final class EdgeQuadrature {
                 panel(count++, e, start, 1);
             }
             while (true) {
-                double sum0 = 0;
-                double sum1 = 0;
-                double parts = 0;
-                double totalError = 0;
-                double worstError = -1;
-                int worst = -1;
+                Arrays.fill(sums0, 0);
+                Arrays.fill(sums1, 0);
+                Arrays.fill(parts, 0);
+                Arrays.fill(totalError, 0);
                 for (int i = 0; i < count; i++) {
-                    sum0 += moment0[i];
-                    sum1 += moment1[i];
-                    parts += magnitude[i];
-                    totalError += error[i];
-                    if (error[i] > worstError && hi[i] - lo[i] > SMALLEST_PANEL) {
-                        worstError = error[i];
-                        worst = i;
+                    for (int c = 0; c < k; c++) {
+                        int at = i * k + c;
+                        sums0[c] += moment0[at];
+                        sums1[c] += moment1[at];
+                        parts[c] += magnitude[at];
+                        totalError[c] += error[at];
                     }
                 }
-                double scale = controlFirstMoment ? Math.abs(sum0) + Math.abs(sum1) : Math.abs(sum0);
-                double tolerance = Math.max(relativeTolerance * scale, CANCELLATION_FLOOR * parts);
-                if (totalError <= tolerance) {
-                    return new Estimate(sum0, sum1, totalError, evaluations, true);
+                boolean met = true;
+                double worstShare = -1;
+                int worst = -1;
+                for (int c = 0; c < k; c++) {
+                    double scale = controlFirstMoment ? Math.abs(sums0[c]) + Math.abs(sums1[c]) : Math.abs(sums0[c]);
+                    double tolerance = Math.max(relativeTolerance * scale, CANCELLATION_FLOOR * parts[c]);
+                    met &= totalError[c] <= tolerance;
+                    for (int i = 0; i < count; i++) {
+                        double e = error[i * k + c];
+                        double panelShare = e == 0 ? 0 : e / tolerance;
+                        if (panelShare > worstShare && hi[i] - lo[i] > SMALLEST_PANEL) {
+                            worstShare = panelShare;
+                            worst = i;
+                        }
+                    }
+                }
+                if (met) {
+                    return new Estimate(sums0[0], sums1[0], totalError[0], evaluations, true);
                 }
                 if (worst < 0 || evaluations + 2 * PANEL_EVALUATIONS > maxEvaluations) {
-                    return new Estimate(sum0, sum1, totalError, evaluations, false);
+                    return new Estimate(sums0[0], sums1[0], totalError[0], evaluations, false);
                 }
-                int e = edge[worst];
-                double a = lo[worst];
-                double b = hi[worst];
-                double mid = 0.5 * (a + b);
-                if (count == edge.length) {
-                    grow();
-                }
-                double parent0 = moment0[worst];
-                double parent1 = moment1[worst];
-                int right = count++;
-                panel(worst, e, a, mid);
-                panel(right, e, mid, b);
-                distrustSilentHalves(worst, right, parent0, parent1);
+                split(worst);
+            }
+        }
+
+        /** Bisects panel {@code i} into itself and a new panel. */
+        private void split(int i) {
+            int e = edge[i];
+            double a = lo[i];
+            double b = hi[i];
+            double mid = 0.5 * (a + b);
+            if (count == edge.length) {
+                grow();
+            }
+            double[] parent0 = Arrays.copyOfRange(moment0, i * k, i * k + k);
+            double[] parent1 = Arrays.copyOfRange(moment1, i * k, i * k + k);
+            int right = count++;
+            panel(i, e, a, mid);
+            panel(right, e, mid, b);
+            for (int c = 0; c < k; c++) {
+                distrustSilentHalves(i * k + c, right * k + c, parent0[c], parent1[c]);
             }
         }
 
@@ -307,39 +395,54 @@ public final class EdgeQuadrature {
             double dy = ys[next] - y0;
             double centre = 0.5 * (a + b);
             double half = 0.5 * (b - a);
-            double k0 = 0;
-            double k1 = 0;
-            double g0 = 0;
-            double g1 = 0;
-            double abs = 0;
+            Arrays.fill(k0, 0);
+            Arrays.fill(k1, 0);
+            Arrays.fill(g0, 0);
+            Arrays.fill(g1, 0);
+            Arrays.fill(abs, 0);
             for (int j = 0; j < KRONROD_POINTS; j++) {
                 double s = centre + half * ASCENDING_NODES[j];
-                double v = f.value(x0 + s * dx, y0 + s * dy, dx, dy);
-                nodeValues[j] = v;
-                k0 += ASCENDING_KRONROD_WEIGHTS[j] * v;
-                k1 += ASCENDING_KRONROD_WEIGHTS[j] * s * v;
-                abs += ASCENDING_KRONROD_WEIGHTS[j] * Math.abs(v);
-                g0 += ASCENDING_GAUSS_WEIGHTS[j] * v;
-                g1 += ASCENDING_GAUSS_WEIGHTS[j] * s * v;
+                f.values(x0 + s * dx, y0 + s * dy, dx, dy, point);
+                double wk = ASCENDING_KRONROD_WEIGHTS[j];
+                double wg = ASCENDING_GAUSS_WEIGHTS[j];
+                for (int c = 0; c < k; c++) {
+                    double v = point[c];
+                    nodeValues[j * k + c] = v;
+                    k0[c] += wk * v;
+                    k1[c] += wk * s * v;
+                    abs[c] += wk * Math.abs(v);
+                    g0[c] += wg * v;
+                    g1[c] += wg * s * v;
+                }
             }
-            double atLo = 0;
-            double atHi = 0;
+            Arrays.fill(atLo, 0);
+            Arrays.fill(atHi, 0);
             for (int j = 0; j < KRONROD_POINTS; j++) {
-                atHi += UPPER_END_LAGRANGE[j] * nodeValues[j];
-                atLo += UPPER_END_LAGRANGE[j] * nodeValues[KRONROD_POINTS - 1 - j];
+                double up = UPPER_END_LAGRANGE[j];
+                for (int c = 0; c < k; c++) {
+                    atHi[c] += up * nodeValues[j * k + c];
+                    atLo[c] += up * nodeValues[(KRONROD_POINTS - 1 - j) * k + c];
+                }
             }
-            double missed = (1 - XGK[0]) * half * (Math.abs(f.value(x0 + a * dx, y0 + a * dy, dx, dy) - atLo)
-                    + Math.abs(f.value(x0 + b * dx, y0 + b * dy, dx, dy) - atHi));
+            f.values(x0 + a * dx, y0 + a * dy, dx, dy, point);
+            for (int c = 0; c < k; c++) {
+                atLo[c] = Math.abs(point[c] - atLo[c]);
+            }
+            f.values(x0 + b * dx, y0 + b * dy, dx, dy, point);
             evaluations += PANEL_EVALUATIONS;
             edge[i] = e;
             lo[i] = a;
             hi[i] = b;
-            moment0[i] = k0 * half;
-            moment1[i] = k1 * half;
-            magnitude[i] = abs * half;
-            double err = Math.abs(k0 - g0) * half + missed;
-            // With s ≤ b ≤ 1 the first moment's sliver term is at most b times the zeroth's.
-            error[i] = controlFirstMoment ? err + Math.abs(k1 - g1) * half + b * missed : err;
+            for (int c = 0; c < k; c++) {
+                double missed = (1 - XGK[0]) * half * (atLo[c] + Math.abs(point[c] - atHi[c]));
+                int at = i * k + c;
+                moment0[at] = k0[c] * half;
+                moment1[at] = k1[c] * half;
+                magnitude[at] = abs[c] * half;
+                double err = Math.abs(k0[c] - g0[c]) * half + missed;
+                // With s ≤ b ≤ 1 the first moment's sliver term is at most b times the zeroth's.
+                error[at] = controlFirstMoment ? err + Math.abs(k1[c] - g1[c]) * half + b * missed : err;
+            }
         }
 
         private void grow() {
@@ -347,10 +450,10 @@ public final class EdgeQuadrature {
             edge = Arrays.copyOf(edge, capacity);
             lo = Arrays.copyOf(lo, capacity);
             hi = Arrays.copyOf(hi, capacity);
-            moment0 = Arrays.copyOf(moment0, capacity);
-            moment1 = Arrays.copyOf(moment1, capacity);
-            magnitude = Arrays.copyOf(magnitude, capacity);
-            error = Arrays.copyOf(error, capacity);
+            moment0 = Arrays.copyOf(moment0, capacity * k);
+            moment1 = Arrays.copyOf(moment1, capacity * k);
+            magnitude = Arrays.copyOf(magnitude, capacity * k);
+            error = Arrays.copyOf(error, capacity * k);
         }
     }
 }

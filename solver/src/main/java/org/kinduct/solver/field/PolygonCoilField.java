@@ -1,5 +1,6 @@
 package org.kinduct.solver.field;
 
+import java.util.Arrays;
 import org.kinduct.scene.Checks;
 
 /**
@@ -72,5 +73,14 @@ public final class PolygonCoilField extends CurrentSourceField {
         }
         out[0] = ax;
         out[1] = ay;
+    }
+
+    /** The filaments' shares summed ({@link StraightFilament#addJet}). */
+    @Override
+    public void jet(double x, double y, double[] out) {
+        Arrays.fill(out, 0, JET_SIZE, 0);
+        for (int i = 0; i < xs.length; i++) {
+            StraightFilament.addJet(xs[i], ys[i], ux[i], uy[i], length[i], z0M, ampereTurns, x, y, out);
+        }
     }
 }

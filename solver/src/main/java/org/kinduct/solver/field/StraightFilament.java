@@ -78,16 +78,64 @@ public final class StraightFilament {
     }
 
     /**
+     * Adds the filament's share of {@link GradientField#jet} at (x, y, 0) to {@code out[0..6]}, for
+     * a segment given as in {@link #bz(double, double, double, double, double, double, double, double, double)}.
+     * With A = a·û: ∂a/∂t = (μ0 I/4π)(1/R1 − 1/R2) along û (t1 and t2 move together) and ∂a/∂n =
+     * −B_z across it (n̂ = ẑ × û, the derivative of the asinh difference through d, which is the
+     * Biot–Savart form above), so ∂A_i/∂x_j = û_i·∂a/∂x_j.
+     */
+    static void addJet(double ax, double ay, double ux, double uy, double len, double z0M, double currentA,
+                       double x, double y, double[] out) {
+        double rx = x - ax;
+        double ry = y - ay;
+        double cross = ux * ry - uy * rx;
+        double t1 = ux * rx + uy * ry;
+        double t2 = t1 - len;
+        double d2 = cross * cross + z0M * z0M;
+        double r1 = Math.sqrt(t1 * t1 + d2);
+        double r2 = Math.sqrt(t2 * t2 + d2);
+        double k = MU_0_OVER_4PI * currentA;
+        double a = k * asinhDifference(t1, t2, r1, r2, d2, len);
+        double cosDifferenceOverD2 = t1 * t2 > 0
+                ? len * (t1 + t2) / (r1 * r2 * (t1 * r2 + t2 * r1))
+                : (t1 / r1 - t2 / r2) / d2;
+        double bz = k * cross * cosDifferenceOverD2;
+        // 1/R1 − 1/R2 = (R2 − R1)/(R1·R2), R2 − R1 = (t2² − t1²)/(R1 + R2) = −len·(t1 + t2)/(R1 + R2).
+        double along = -k * len * (t1 + t2) / ((r1 + r2) * r1 * r2);
+        double ddx = along * ux + bz * uy;
+        double ddy = along * uy - bz * ux;
+        out[0] += a * ux;
+        out[1] += a * uy;
+        out[2] += ux * ddx;
+        out[3] += ux * ddy;
+        out[4] += uy * ddx;
+        out[5] += uy * ddy;
+        out[6] += bz;
+    }
+
+    /**
      * asinh(t1/d) − asinh(t2/d) for t1 − t2 = len &gt; 0, R_i = √(t_i² + d²): the log of a ratio near 1
      * goes through log1p when t1, t2 share a sign, otherwise the two asinh add without cancelling.
      */
     static double asinhDifference(double t1, double t2, double r1, double r2, double d2, double len) {
         if (t2 >= 0) {
-            return Math.log1p(len * (1 + (t1 + t2) / (r1 + r2)) / (t2 + r2));
+            return log1p(len * (1 + (t1 + t2) / (r1 + r2)) / (t2 + r2));
         }
         if (t1 <= 0) {
-            return Math.log1p(len * (1 - (t1 + t2) / (r1 + r2)) / (r1 - t1));
+            return log1p(len * (1 - (t1 + t2) / (r1 + r2)) / (r1 - t1));
         }
         return Math.log((t1 + r1) * (r2 - t2) / d2);
+    }
+
+    /**
+     * ln(1 + x) for x ≥ 0 through the intrinsic {@link Math#log}: with u = 1 + x rounded,
+     * ln(u)·x/(u − 1) is within a few ulp of ln(1 + x) (D. Goldberg, "What every computer scientist
+     * should know about floating-point arithmetic", ACM Comput. Surv. 23(1), 1991, Theorem 4), and
+     * x itself when u rounds to 1. {@link Math#log1p} gives the same accuracy several times slower,
+     * and the closed-form potentials call it in every ribbon and filament term.
+     */
+    static double log1p(double x) {
+        double u = 1 + x;
+        return u == 1 ? x : Math.log(u) * x / (u - 1);
     }
 }

@@ -95,4 +95,16 @@ class StraightFilamentTest {
         assertEquals(1, Math.signum(left));
         assertEquals(-1, Math.signum(right));
     }
+
+    /** The fast ln(1 + x) against the library's {@link Math#log1p} (Goldberg 1991, Theorem 4: a few ulp). */
+    @org.junit.jupiter.api.Test
+    void log1pThroughLogIsWithinAFewUlpOfTheLibrary() {
+        java.util.SplittableRandom r = new java.util.SplittableRandom(0x1091_9L);
+        for (int i = 0; i < 100_000; i++) {
+            double x = Math.scalb(r.nextDouble(1, 2), r.nextInt(-60, 8));
+            double expected = Math.log1p(x);
+            assertEquals(expected, StraightFilament.log1p(x), 8 * Math.ulp(expected), "x = " + x);
+        }
+        assertEquals(0.0, StraightFilament.log1p(0.0));
+    }
 }
