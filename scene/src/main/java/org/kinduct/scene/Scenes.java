@@ -17,8 +17,8 @@ public final class Scenes {
 
     /**
      * Every drawn position of the scene, in no particular order: body pivots, spring anchors, patch
-     * and coil outlines, magnet and coil centres, conductor vertices (a plate's or channel's outline
-     * corners; holes and electrodes lie within). Directions, offsets and
+     * and coil outlines, magnet and coil centres, a field map's offset, conductor vertices, a plate's outline (its holes
+     * and electrodes lie within), a channel's ends. Directions, offsets and
      * velocities are not positions. (Read where they are, without rebuilding the scene as
      * {@link #mapPositions} does, whose checks cost time on large outlines.)
      */
@@ -54,9 +54,10 @@ public final class Scenes {
                     return List.of(m.center());
                 }
 
+                /** Where the map's grid origin (0, 0) is drawn: its samples sit at their grid coordinates from there. */
                 @Override
                 public List<Vec2> map(Source.FieldMap m) {
-                    return List.of(mapCorner(m, false), mapCorner(m, true));
+                    return List.of(m.offsetM());
                 }
 
                 @Override
@@ -75,14 +76,30 @@ public final class Scenes {
                 }
             }));
         }
-        scene.conductors().forEach(c -> c.vertices().forEach(v -> out.add(v.at())));
-        return out;
-    }
+        for (Conductor c : scene.conductors()) {
+            out.addAll(c.match(new Conductor.Cases<List<Vec2>>() {
+                @Override
+                public List<Vec2> wire(Conductor.Wire wire) {
+                    return wire.vertices().stream().map(Conductor.Vertex::at).toList();
+                }
 
-    /** The first (lowest x and y) or last sample of a field map where it is drawn. */
-    private static Vec2 mapCorner(Source.FieldMap m, boolean last) {
-        return (last ? new Vec2(m.grid().x1M(), m.grid().y1M()) : new Vec2(m.grid().x0M(), m.grid().y0M()))
-                .plus(m.offsetM());
+                @Override
+                public List<Vec2> loop(Conductor.Loop loop) {
+                    return loop.vertices().stream().map(Conductor.Vertex::at).toList();
+                }
+
+                @Override
+                public List<Vec2> plate(Conductor.Plate plate) {
+                    return plate.outline();
+                }
+
+                @Override
+                public List<Vec2> channel(Conductor.Channel channel) {
+                    return List.of(channel.start(), channel.end());
+                }
+            }));
+        }
+        return out;
     }
 
     /** {@code scene} with {@code f} applied to every drawn position ({@link #positions}). */
@@ -116,12 +133,10 @@ public final class Scenes {
                 return new Source.FieldPatch(p.id(), p.body(), p.outline().stream().map(f).toList(), p.bzT());
             }
 
-            /** The map's samples stay as read; its offset moves its first corner as {@code f} moves that point. */
+            /** The map's samples stay as read; its offset, where the grid's origin is drawn, moves. */
             @Override
             public Source map(Source.FieldMap m) {
-                Vec2 first = mapCorner(m, false);
-                return new Source.FieldMap(m.id(), m.body(), m.file(), m.grid(),
-                        m.offsetM().plus(f.apply(first).minus(first)), m.outside());
+                return new Source.FieldMap(m.id(), m.body(), m.file(), m.grid(), f.apply(m.offsetM()), m.outside());
             }
 
             @Override

@@ -143,6 +143,8 @@ public final class FieldMapCsv {
         private double rowY;
         private int rowCount;
         private int rowLine;
+        /** The line of the last sample placed: where a short row ends. */
+        private int lastLine;
 
         PointsReader(CsvScanner csv) {
             this.csv = csv;
@@ -180,7 +182,7 @@ public final class FieldMapCsv {
                 }
                 sample(csv.line(), xCell, yCell, bzValue);
             }
-            endRow(csv.line());
+            endRow();
             if (nx < 0) {
                 throw csv.error(0, 0, "the file holds a header but no samples");
             }
@@ -249,7 +251,7 @@ public final class FieldMapCsv {
         /** Places one sample: the next in the current row, or the first of a new row. */
         private void sample(int line, Cell xCell, Cell yCell, double bzValue) throws FieldMapFormatException {
             if (rowYText == null || yCell.value() != rowY) {
-                endRow(line);
+                endRow();
                 startRow(line, yCell);
             }
             if (nx < 0) {
@@ -276,6 +278,7 @@ public final class FieldMapCsv {
             }
             samples.add(bzValue);
             rowCount++;
+            lastLine = line;
         }
 
         private void startRow(int line, Cell yCell) throws FieldMapFormatException {
@@ -296,14 +299,14 @@ public final class FieldMapCsv {
             ny++;
         }
 
-        private void endRow(int line) throws FieldMapFormatException {
+        private void endRow() throws FieldMapFormatException {
             if (rowYText == null) {
                 return;
             }
             if (nx < 0) {
                 nx = rowCount;
             } else if (rowCount != nx) {
-                throw csv.error(line, 0, "the row at y = " + rowYText + " (from line " + rowLine + ") has " + rowCount
+                throw csv.error(lastLine, 0, "the row at y = " + rowYText + " (from line " + rowLine + ") has " + rowCount
                         + " samples, the first row has " + nx + "; every row needs the same x positions");
             }
         }

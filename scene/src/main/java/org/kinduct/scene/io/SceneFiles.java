@@ -106,7 +106,7 @@ public final class SceneFiles {
     public static void write(SceneWithUnits scene, Path file) throws IOException {
         String text = SceneJson.write(scene);
         try {
-            SceneJson.read(text, file.toString());
+            SceneJson.read(text, file.toString(), SceneFolder.ofSceneFile(file));
         } catch (SceneFormatException e) {
             throw new IOException("cannot save to " + file + ": the scene would not open again:\n" + e.getMessage(), e);
         }

@@ -105,7 +105,7 @@ class SceneJsonUnitsTest {
         // Doubles are written with a point or an exponent; whole numbers (version, turns, awg) stay numbers.
         String texts = Pattern.compile("(?<=[\\[\\s,:])(-?\\d+\\.\\d+(?:[eE][-+]?\\d+)?|-?\\d+[eE][-+]?\\d+)")
                 .matcher(si).replaceAll("\"$1\"");
-        SceneWithUnits read = SceneJson.readWithUnits(texts, "texts.json");
+        SceneWithUnits read = SceneJson.readWithUnits(texts, "texts.json", SampleScenes.FOLDER);
         assertEquals(SampleScenes.everyVariant(), read.scene());
 
         String written = SceneJson.write(read);

@@ -28,8 +28,9 @@ class ScenesTest {
 
     @Test
     void everyKindOfPositionIsFound() {
-        // 8 pivots, 1 spring anchor, 4 + 4 outline points, 2 magnet and 1 coil centre, 3 + 4 + 3 + 3 vertices.
-        assertEquals(33, Scenes.positions(SampleScenes.everyVariant()).size());
+        // 8 pivots, 1 spring anchor, 4 + 4 outline points, 2 magnet and 1 coil centre, 1 field-map offset,
+        // 3 + 4 + 3 + 3 vertices, 4 + 3 plate outline points, 3 × 2 channel ends.
+        assertEquals(47, Scenes.positions(SampleScenes.everyVariant()).size());
         assertNotEquals(SampleScenes.everyVariant(), Scenes.movedBy(SampleScenes.everyVariant(), BY));
     }
 }

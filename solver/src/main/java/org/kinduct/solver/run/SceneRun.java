@@ -197,7 +197,7 @@ public final class SceneRun {
         } catch (SimulationCancelledException stopped) {
             if (budget.exceeded()) {
                 throw new RunFailedException(String.format(Locale.ROOT, "the coupled run would take about %.3g"
-                        + " integrator steps (at most %.0f are taken here: 10 million, and 1000 per sample): the scene"
+                        + " integrator steps (at most %.0f are taken here: 1000 per sample, at least a million, at most 10 million): the scene"
                         + " changes far faster than the sampling step dt = %s s can follow (a stiff spring, strong"
                         + " damping or a light free body, a loop's L/R much shorter than dt with --circuit inductive,"
                         + " or a prescribed motion much faster than dt)", budget.projectedSteps(), budget.maxSteps(),

@@ -7,7 +7,8 @@ import org.kinduct.solver.dynamics.RunMonitor;
  * Bounds the work of a coupled run: once {@value #PROJECT_AFTER_STEPS} integrator steps are done,
  * the steps still to come are projected from the fraction of the window covered; a run projected
  * to need more than {@link TimeSpan#MAX_STEPS} steps (as many as a window may have samples), or
- * more than {@value #MAX_STEPS_PER_SAMPLE} per sample, is stopped at once instead of running for
+ * more than {@value #MAX_STEPS_PER_SAMPLE} per sample but at least {@value #LEAST_STEPS} (a short
+ * window of a fast circuit still runs: seconds of work), is stopped at once instead of running for
  * hours. A stiff free body or circuit (a response much faster than the sampling step), or a
  * prescribed motion far faster than the samples can show, makes the integrator take tiny steps
  * throughout, so the projection is reliable early (well-sampled runs take a few steps per
@@ -19,6 +20,8 @@ final class StepBudget implements RunMonitor {
     static final int PROJECT_AFTER_STEPS = 1000;
     /** Most integrator steps per sample. */
     static final int MAX_STEPS_PER_SAMPLE = 1000;
+    /** Steps any run may take, however few its samples. */
+    static final int LEAST_STEPS = 1_000_000;
 
     private final RunMonitor caller;
     private final double maxSteps;
@@ -29,7 +32,7 @@ final class StepBudget implements RunMonitor {
     /** @param samples the samples the run makes */
     StepBudget(RunMonitor caller, int samples) {
         this.caller = caller;
-        this.maxSteps = Math.min(TimeSpan.MAX_STEPS, (double) MAX_STEPS_PER_SAMPLE * samples);
+        this.maxSteps = Math.min(TimeSpan.MAX_STEPS, Math.max(LEAST_STEPS, (double) MAX_STEPS_PER_SAMPLE * samples));
     }
 
     @Override

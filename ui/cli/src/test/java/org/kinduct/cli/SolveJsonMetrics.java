@@ -28,6 +28,9 @@ final class SolveJsonMetrics {
         if (List.of("final_speed", "terminal_speed", "settling_time").contains(key)) {
             return body(key, id);
         }
+        if (List.of("mean_drag", "mean_eddy_power", "peak_pair_voltage").contains(key)) {
+            return sheet(key, id);
+        }
         List<JsonNode> s = new ArrayList<>();
         root.path("samples").forEach(n -> {
             if (n.path("id").asText().equals(id)) {
@@ -195,5 +198,34 @@ final class SolveJsonMetrics {
             m = Math.max(m, x);
         }
         return m;
+    }
+
+    /** A plate or channel metric from the JSON's "plates" entries of {@code id}. */
+    private double sheet(String key, String id) {
+        List<JsonNode> p = new ArrayList<>();
+        root.path("plates").forEach(n -> {
+            if (n.path("id").asText().equals(id)) {
+                p.add(n);
+            }
+        });
+        int n = p.size();
+        double[] t = new double[n];
+        double[] v = new double[n];
+        for (int i = 0; i < n; i++) {
+            JsonNode e = p.get(i);
+            t[i] = e.path("t").asDouble();
+            switch (key) {
+                case "mean_drag" -> v[i] = Math.hypot(e.path("drag_N").get(0).asDouble(), e.path("drag_N").get(1).asDouble());
+                case "mean_eddy_power" -> v[i] = e.path("joule_W").asDouble();
+                default -> {
+                    JsonNode pairs = e.path("pairs");
+                    if (pairs.isEmpty()) {
+                        return Double.NaN;
+                    }
+                    v[i] = Math.abs(pairs.get(0).path("voltage_V").asDouble());
+                }
+            }
+        }
+        return key.equals("peak_pair_voltage") ? max(v) : trapezoid(t, v) / (t[n - 1] - t[0]);
     }
 }

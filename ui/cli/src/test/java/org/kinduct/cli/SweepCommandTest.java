@@ -127,7 +127,10 @@ class SweepCommandTest {
                 case SCENE -> out.add(new String[] {k.key(), null});
                 case FREE_BODY -> scene.bodies().stream().filter(b -> b.motion() instanceof Motion.Free)
                         .forEach(b -> out.add(new String[] {k.key(), b.id()}));
-                case CONDUCTOR -> scene.conductors().forEach(c -> out.add(new String[] {k.key(), c.id()}));
+                case CONDUCTOR -> scene.conductors().stream().filter(c -> !(c instanceof Conductor.Sheet))
+                        .forEach(c -> out.add(new String[] {k.key(), c.id()}));
+                case SHEET -> scene.conductors().stream().filter(c -> c instanceof Conductor.Sheet)
+                        .forEach(c -> out.add(new String[] {k.key(), c.id()}));
                 case LOOP -> scene.conductors().stream().filter(c -> c instanceof Conductor.Loop)
                         .forEach(c -> out.add(new String[] {k.key(), c.id()}));
                 case CLOSED_LOOP -> scene.conductors().stream().filter(c -> c instanceof Conductor.Loop l && !l.open())

@@ -13,13 +13,17 @@ import org.kinduct.solver.run.RunResult;
  * The answer to "how many volts, how much power, how fast" in one line per conductor and per
  * free body, from the same metrics a design study reads ({@link MetricKind}): peak and RMS EMF
  * and when the peak comes, the dominant frequency, and for closed loops the peak current and the
- * mean power into the load resistor; the final and terminal speed of each free body.
+ * mean power into the load resistor; the mean drag and eddy-current power of each plate and
+ * channel and the peak voltage of its first electrode pair; the final and terminal speed of each
+ * free body.
  */
 public final class RunSummary {
 
     private static final List<MetricKind> EVERY_CONDUCTOR = List.of(MetricKind.PEAK_EMF, MetricKind.PEAK_TIME,
             MetricKind.RMS_EMF, MetricKind.DOMINANT_FREQUENCY);
     private static final List<MetricKind> CLOSED_LOOPS = List.of(MetricKind.PEAK_CURRENT, MetricKind.MEAN_LOAD_POWER);
+    private static final List<MetricKind> SHEETS = List.of(MetricKind.MEAN_DRAG, MetricKind.MEAN_EDDY_POWER,
+            MetricKind.PEAK_PAIR_VOLTAGE);
     private static final List<MetricKind> FREE_BODIES = List.of(MetricKind.FINAL_SPEED, MetricKind.TERMINAL_SPEED);
 
     private RunSummary() {
@@ -32,6 +36,10 @@ public final class RunSummary {
             return out;
         }
         for (Conductor c : run.scene().conductors()) {
+            if (c instanceof Conductor.Sheet) {
+                out.add(line(run, c.id(), SHEETS));
+                continue;
+            }
             List<MetricKind> kinds = new ArrayList<>(EVERY_CONDUCTOR);
             if (c instanceof Conductor.Loop loop && !loop.open()) {
                 kinds.addAll(CLOSED_LOOPS);

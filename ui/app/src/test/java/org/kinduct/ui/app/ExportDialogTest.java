@@ -49,6 +49,13 @@ class ExportDialogTest {
         WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> robot.lookup("#export-dialog").tryQuery().isPresent());
     }
 
+    /** Cancels the dialog once its buttons are on screen (it may still be opening its window). */
+    private static void cancel(FxRobot robot) throws TimeoutException {
+        WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS,
+                () -> robot.lookup("Cancel").queryAll().stream().anyMatch(javafx.scene.Node::isVisible));
+        robot.clickOn("Cancel");
+    }
+
     @Test
     void dialogStartsFromTheRememberedChoices(FxRobot robot) throws Exception {
         new ExportPreferences(ExportPreferences.Format.SVG, 2222, 150, true, null).save(home);
@@ -61,7 +68,7 @@ class ExportDialogTest {
         DialogPane pane = robot.lookup("#export-dialog").queryAs(DialogPane.class);
         WritableImage shot = WaitForAsyncUtils.asyncFx(() -> pane.snapshot(null, null)).get(10, TimeUnit.SECONDS);
         ImageIO.write(SwingFXUtils.fromFXImage(shot, null), "png", Path.of("target", "export-dialog.png").toFile());
-        robot.clickOn("Cancel");
+        cancel(robot);
     }
 
     @Test
@@ -75,7 +82,7 @@ class ExportDialogTest {
             assertTrue(offered.contains("peak of " + c.id()), offered.toString());
         }
         assertTrue(offered.get(offered.size() - 1).startsWith("the time shown"), offered.toString());
-        robot.clickOn("Cancel");
+        cancel(robot);
     }
 
     @Test
@@ -89,6 +96,6 @@ class ExportDialogTest {
 
         assertTrue(robot.lookup("#export-dialog").tryQuery().isPresent(), "dialog still open");
         assertTrue(vm.statusProperty().get().contains("whole numbers"), vm.statusProperty().get());
-        robot.clickOn("Cancel");
+        cancel(robot);
     }
 }

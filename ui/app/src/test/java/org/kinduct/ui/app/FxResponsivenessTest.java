@@ -128,7 +128,11 @@ class FxResponsivenessTest {
     @Test
     void theUiThreadAnswersPromptlyWhileACoupledRunGoesOnAndAnEditStopsIt(FxRobot robot) throws Exception {
         WaitForAsyncUtils.asyncFx(() -> vm.load(longCoupledRun(), null, false)).get(10, TimeUnit.SECONDS);
-        WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> vm.results().simulationProgressProperty().get() > 0);
+        try {
+            WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> vm.results().simulationProgressProperty().get() > 0);
+        } catch (TimeoutException e) {
+            fail("no progress of the run within 30 s; the editor says: " + vm.statusProperty().get());
+        }
         Label readout = robot.lookup("#cursor-readout").queryAs(Label.class);
         SplittableRandom random = new SplittableRandom(SEED);
         List<Long> roundTrips = new ArrayList<>();

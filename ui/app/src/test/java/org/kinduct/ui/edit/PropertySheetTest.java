@@ -65,7 +65,7 @@ class PropertySheetTest {
         Scene s = Fixtures.loopAndMagnet();
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> find(PropertySheet.of(s, "magnet"), "Size x").check(s, "-3 mm"));
-        assertTrue(e.getMessage().contains("positive"), e.getMessage());
+        assertTrue(e.getMessage().startsWith("size x must be at least 1 nm, got -0.003 m"), e.getMessage());
         IllegalArgumentException turns = assertThrows(IllegalArgumentException.class,
                 () -> find(PropertySheet.of(s, "loop"), "Turns").check(s, "2.5"));
         assertTrue(turns.getMessage().contains("whole number"), turns.getMessage());

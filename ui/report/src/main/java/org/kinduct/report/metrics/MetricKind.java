@@ -4,6 +4,7 @@ import java.util.List;
 import org.kinduct.report.ConductorSummary;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.units.Dimension;
+import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.run.RunResult;
 
@@ -52,6 +53,15 @@ public enum MetricKind {
             }),
     PEAK_FORCE("peak_force", Scope.CLOSED_LOOP, Dimension.FORCE, "largest magnitude of the magnetic force on the loop",
             (run, w, id) -> ConductorSeries.largestMagnitude(new ConductorSeries(w, id).forceN)),
+    MEAN_DRAG("mean_drag", Scope.SHEET, Dimension.FORCE,
+            "time average of the magnitude of the magnetic force on the plate or channel (trapezoidal rule)",
+            (run, w, id) -> SheetSeries.timeAverage(w, id, s -> s.forceN().length())),
+    MEAN_EDDY_POWER("mean_eddy_power", Scope.SHEET, Dimension.POWER,
+            "time average of the Joule power of the eddy currents (trapezoidal rule)",
+            (run, w, id) -> SheetSeries.timeAverage(w, id, SheetState::joulePowerW)),
+    PEAK_PAIR_VOLTAGE("peak_pair_voltage", Scope.SHEET, Dimension.VOLTAGE,
+            "largest |voltage| of the first electrode pair; empty when there is none",
+            (run, w, id) -> SheetSeries.peakFirstPairVoltage(w, id)),
     FINAL_SPEED("final_speed", Scope.FREE_BODY, Dimension.VELOCITY, "speed of the body's pivot at the last sample",
             (run, w, id) -> new BodySpeeds(w, id).last()),
     TERMINAL_SPEED("terminal_speed", Scope.FREE_BODY, Dimension.VELOCITY,
@@ -68,11 +78,13 @@ public enum MetricKind {
     /** What a metric is about. */
     public enum Scope {
         /** Any wire or loop. */
-        CONDUCTOR("a conductor"),
+        CONDUCTOR("a wire or loop"),
         /** A loop, open or closed (it has a flux). */
         LOOP("a loop"),
         /** A closed loop (it carries a current). */
         CLOSED_LOOP("a closed loop"),
+        /** A plate or a liquid channel. */
+        SHEET("a plate or channel"),
         /** A body that moves under forces. */
         FREE_BODY("a free body"),
         /** The whole run. */

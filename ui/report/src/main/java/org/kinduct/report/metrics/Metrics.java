@@ -107,7 +107,9 @@ public final class Metrics {
         switch (scope) {
             case FREE_BODY -> scene.bodies().stream().filter(b -> b.motion() instanceof Motion.Free).map(Body::id)
                     .forEach(out::add);
-            case CONDUCTOR -> scene.conductors().forEach(c -> out.add(c.id()));
+            case CONDUCTOR -> scene.conductors().stream().filter(c -> !(c instanceof Conductor.Sheet))
+                    .forEach(c -> out.add(c.id()));
+            case SHEET -> scene.conductors().stream().filter(c -> c instanceof Conductor.Sheet).forEach(c -> out.add(c.id()));
             case LOOP -> scene.conductors().stream().filter(c -> c instanceof Conductor.Loop).forEach(c -> out.add(c.id()));
             case CLOSED_LOOP -> scene.conductors().stream().filter(c -> c instanceof Conductor.Loop l && !l.open())
                     .forEach(c -> out.add(c.id()));

@@ -154,7 +154,7 @@ class MetricsTest {
     void wrongExpressionsNameTheNearestRightOnes() {
         Scene s = oscillating();
         assertMessage("unknown metric 'peak_emv' (did you mean peak_emf", () -> Metrics.parse("peak_emv:coil", s));
-        assertMessage("no conductor 'coll' (did you mean coil?); peak_emf applies to coil",
+        assertMessage("no wire or loop 'coll' (did you mean coil?); peak_emf applies to coil",
                 () -> Metrics.parse("peak_emf:coll", s));
         assertMessage("terminal_speed needs the id of a free body", () -> Metrics.parse("terminal_speed", s));
         assertMessage("audit_residual is about the whole run and takes no id", () -> Metrics.parse("audit_residual:coil", s));
