@@ -91,8 +91,9 @@ public final class WireClearance {
         double clearance = firstRadiusM + secondRadiusM;
         Side[] close = firstNearPair(sides, clearance, (f, g) -> f.loop() != g.loop() && tooClose(f, g, clearance));
         if (close != null) {
-            Side a = close[0].loop() == 0 ? close[0] : close[1];
-            Side b = a == close[0] ? close[1] : close[0];
+            boolean firstIsA = close[0].loop() == 0;
+            Side a = firstIsA ? close[0] : close[1];
+            Side b = firstIsA ? close[1] : close[0];
             throw tooClose("side " + a.index() + " of the first loop", "side " + b.index() + " of the second loop",
                     clearance);
         }
@@ -136,8 +137,9 @@ public final class WireClearance {
 
     /** Neighbouring sides: the shorter one's free end lies within the clearance of the other. */
     private static boolean foldedBack(Side f, Side g, double clearance) {
-        Side shorter = f.length() <= g.length() ? f : g;
-        Side longer = shorter == f ? g : f;
+        boolean fShorter = f.length() <= g.length();
+        Side shorter = fShorter ? f : g;
+        Side longer = fShorter ? g : f;
         return Math.max(toSegment(shorter.a(), longer), toSegment(shorter.b(), longer)) < clearance;
     }
 

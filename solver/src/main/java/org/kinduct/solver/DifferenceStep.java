@@ -100,7 +100,7 @@ final class DifferenceStep {
     }
 
     /** The pace of the scene at {@code now}, given every conductor as placed there. */
-    Pace pace(SceneIndex index, Frame now, List<PlacedConductor> conductors) {
+    Pace pace(SceneIndex index, PlacedInstant now, List<PlacedConductor> conductors) {
         double shortest = Double.POSITIVE_INFINITY;
         double fastest = 0;
         double turn = now.fastestTurnRadPerS();

@@ -44,8 +44,8 @@ final class InstantSolver {
     private final SceneField[] aroundDriven;
     /** Magnets and steady coils that move: their induced field along a wire is closed form. */
     private final boolean[] rigidlyMoving;
-    private final Frame now;
-    private final Frame[] around;
+    private final PlacedInstant now;
+    private final PlacedInstant[] around;
     private final boolean[] varying;
     /** unchanged[k][s]: source s has at stencil time k exactly the field it has now. */
     private final boolean[][] unchanged;
@@ -95,7 +95,7 @@ final class InstantSolver {
         idealVarying = ideal;
         pieceM = piece;
 
-        around = new Frame[DifferenceStep.OFFSETS.length];
+        around = new PlacedInstant[DifferenceStep.OFFSETS.length];
         aroundDriven = new SceneField[around.length];
         unchanged = new boolean[around.length][sources];
         for (int k = 0; k < around.length; k++) {
@@ -269,8 +269,8 @@ final class InstantSolver {
     }
 
     private static boolean touchesPlane(Source source) {
-        return source instanceof Source.BlockMagnet block && block.standoffM() == 0
-                || source instanceof Source.CylinderMagnet cylinder && cylinder.standoffM() == 0;
+        return (source instanceof Source.BlockMagnet block && block.standoffM() == 0)
+                || (source instanceof Source.CylinderMagnet cylinder && cylinder.standoffM() == 0);
     }
 
     private ConductorState wire(int c, Conductor wire) {

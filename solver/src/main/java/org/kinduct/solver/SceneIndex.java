@@ -127,12 +127,12 @@ public final class SceneIndex {
         return drawn[conductor][i];
     }
 
-    Frame frame(Kinematics kinematics, double tS) {
+    PlacedInstant frame(Kinematics kinematics, double tS) {
         Pose[] poses = new Pose[bodyIds.length];
         for (int b = 0; b < poses.length; b++) {
             poses[b] = kinematics.poseAt(bodyIds[b], tS);
         }
-        return new Frame(tS, poses, fields(poses, tS));
+        return new PlacedInstant(tS, poses, fields(poses, tS));
     }
 
     /** Every source's field at {@code tS}, each placed by the pose of its body in {@code poses}. */
@@ -146,7 +146,7 @@ public final class SceneIndex {
     }
 
     /** Writes conductor {@code c}'s vertices at {@code frame} into xs, ys. */
-    void place(int c, Frame frame, double[] xs, double[] ys) {
+    void place(int c, PlacedInstant frame, double[] xs, double[] ys) {
         for (int i = 0; i < xs.length; i++) {
             Vec2 p = frame.pose(vertexBody[c][i]).place(drawn[c][i]);
             xs[i] = p.x();
@@ -164,7 +164,7 @@ public final class SceneIndex {
     }
 
     /** Writes the velocities of conductor {@code c}'s vertices, now at xs, ys, into vx, vy. */
-    void velocities(int c, Frame frame, double[] xs, double[] ys, double[] vx, double[] vy) {
+    void velocities(int c, PlacedInstant frame, double[] xs, double[] ys, double[] vx, double[] vy) {
         for (int i = 0; i < xs.length; i++) {
             Vec2 v = frame.pose(vertexBody[c][i]).velocityAt(new Vec2(xs[i], ys[i]));
             vx[i] = v.x();

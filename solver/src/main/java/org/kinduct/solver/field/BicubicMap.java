@@ -133,7 +133,7 @@ final class BicubicMap {
     }
 
     /** What is done with each piece of a segment that lies in one cell column and one cell row. */
-    private abstract class Pieces {
+    private abstract static class Pieces {
         double ax;
         double ay;
         double dx;

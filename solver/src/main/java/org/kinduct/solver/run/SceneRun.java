@@ -90,7 +90,7 @@ public final class SceneRun {
         this.origin = LocalOrigin.of(scene);
         this.local = origin.equals(Vec2.ZERO) ? scene : Scenes.movedBy(scene, origin.times(-1));
         this.prescribed = new SceneSolver(local);
-        this.fields = local == scene ? prescribed : new SceneSolver(scene);
+        this.fields = origin.equals(Vec2.ZERO) ? prescribed : new SceneSolver(scene);
         this.motions = Kinematics.prescribed(scene);
         this.sheets = Sheets.of(scene);
     }

@@ -34,6 +34,8 @@ final class CliMonitor implements RunMonitor {
     }
 
     /** Progress on standard error when the command runs in a terminal ({@code System.console() != null}). */
+    // On Java 17, which Kinduct targets, console() is null exactly when no terminal is attached.
+    @SuppressWarnings("SystemConsoleNull")
     static CliMonitor forThisProcess() {
         return new CliMonitor(System.console() != null ? System.err : null, System::nanoTime);
     }

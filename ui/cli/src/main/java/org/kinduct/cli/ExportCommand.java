@@ -68,6 +68,8 @@ final class ExportCommand implements Callable<Integer> {
             "(hides the field map under them; the streamlines stay)."})
     boolean currentDensity;
 
+    // The Ctrl-C watch acts by being open over the run; its body never names it.
+    @SuppressWarnings("try")
     @Override
     public Integer call() {
         Exporter.Targets targets = Exporter.Targets.none().withPng(png).withSvg(svg).withPdf(pdf)

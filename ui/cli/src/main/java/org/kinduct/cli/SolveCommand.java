@@ -94,6 +94,8 @@ final class SolveCommand implements Callable<Integer> {
         return KinductMain.OK;
     }
 
+    // The Ctrl-C watch acts by being open over the run; its body never names it.
+    @SuppressWarnings("try")
     private RunResult solve(Scene scene) {
         TimeSpan span = scene.time();
         double from = t0 == null ? span.t0S() : time("--t0", t0);

@@ -10,7 +10,7 @@ import javafx.scene.image.PixelFormat;
 import javafx.scene.image.WritableImage;
 import javafx.stage.Window;
 import org.kinduct.render.paint.FieldBackdrop;
-import org.kinduct.render.paint.Frame;
+import org.kinduct.render.paint.Picture;
 import org.kinduct.render.paint.Java2dSurface;
 import org.kinduct.render.paint.ScenePainter;
 
@@ -47,7 +47,7 @@ final class CanvasFrames {
     }
 
     /** Draws {@code f} (field layers from {@code backdrop} when it fits) and puts it on the canvas. */
-    void show(Frame f, FieldBackdrop backdrop) {
+    void show(Picture f, FieldBackdrop backdrop) {
         double w = canvas.getWidth();
         double h = canvas.getHeight();
         if (w < 1 || h < 1) {

@@ -47,7 +47,7 @@ final class DocumentFiles {
         this.dialogs = dialogs;
         this.io = io;
         this.ui = ui;
-        Futures.watched(onIo(home::recent).thenAccept(recent::setAll));
+        Futures.watch(onIo(home::recent).thenAccept(recent::setAll));
     }
 
     private SceneDocument document() {
@@ -120,7 +120,7 @@ final class DocumentFiles {
 
     /** Runs {@code action} once nothing unsaved is left to lose (see {@link #confirmDiscard()}). */
     void afterAsking(Runnable action) {
-        Futures.watched(confirmDiscard().thenAccept(ok -> {
+        Futures.watch(confirmDiscard().thenAccept(ok -> {
             if (ok) {
                 action.run();
             }
@@ -136,7 +136,9 @@ final class DocumentFiles {
 
     /** File ▸ Open: asks about unsaved changes, then for the file. */
     void openChosen() {
-        afterAsking(() -> dialogs.fileToOpen(folder()).ifPresent(this::open));
+        afterAsking(() -> dialogs.fileToOpen(folder()).ifPresent(file -> {
+            var unused = open(file); // watched: its failures are reported by its own chain
+        }));
     }
 
     /** Opens a scene file; on failure the current scene stays and the user is told what is wrong. */
@@ -177,7 +179,7 @@ final class DocumentFiles {
      */
     void addFieldMap() {
         Path sceneFolder = folder();
-        dialogs.mapToOpen(sceneFolder).ifPresent(file -> Futures.watched(onIo(() -> {
+        dialogs.mapToOpen(sceneFolder).ifPresent(file -> Futures.watch(onIo(() -> {
             try (InputStream in = Files.newInputStream(file)) {
                 return FieldMapCsv.readPoints(in, file.toString());
             }
@@ -245,7 +247,7 @@ final class DocumentFiles {
 
     /** Quits once nothing unsaved is left to lose: removes this window's autosave, then {@code close}s. */
     void quit(Runnable close) {
-        afterAsking(() -> Futures.watched(onIo(() -> {
+        afterAsking(() -> Futures.watch(onIo(() -> {
             autosave.release();
             return null;
         }).whenComplete((x, failure) -> {
@@ -293,7 +295,7 @@ final class DocumentFiles {
     }
 
     private void remember(Path file) {
-        Futures.watched(onIo(() -> home.remember(file)).thenAccept(recent::setAll));
+        Futures.watch(onIo(() -> home.remember(file)).thenAccept(recent::setAll));
     }
 
     /** Where file choosers start: the document's folder, if it has a file. */

@@ -19,7 +19,7 @@ import javafx.scene.layout.Pane;
 import javafx.util.Duration;
 import org.kinduct.render.paint.FieldBackdrop;
 import org.kinduct.render.paint.FieldRaster;
-import org.kinduct.render.paint.Frame;
+import org.kinduct.render.paint.Picture;
 import org.kinduct.render.paint.Quantities;
 import org.kinduct.render.view.ViewTransform;
 import org.kinduct.scene.Vec2;
@@ -196,7 +196,7 @@ final class EditorCanvas extends Pane {
         long t0 = System.nanoTime();
         String note = showFrameTime
                 ? String.format(Locale.ROOT, "paint: last %.1f ms, average %.1f ms", lastFrameMs, frameMs) : "";
-        Frame frame = gestures.frame(note);
+        Picture frame = gestures.frame(note);
         frames.show(frame, backdrop);
         double ms = (System.nanoTime() - t0) * 1e-6;
         lastFrameMs = ms;

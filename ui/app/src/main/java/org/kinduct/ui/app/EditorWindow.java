@@ -189,6 +189,16 @@ final class EditorWindow {
 
     // ---- menus ----
 
+    /** File ▸ Save; the save's own chain reports a failure. */
+    private void save() {
+        var unused = files.save();
+    }
+
+    /** File ▸ Save as…; the save's own chain reports a failure. */
+    private void saveAs() {
+        var unused = files.saveAs();
+    }
+
     private MenuBar menuBar() {
         SceneDocument document = vm.document();
         ViewSettings view = vm.view();
@@ -200,8 +210,8 @@ final class EditorWindow {
                 recentMenu,
                 item("Open demo…", null, this::browseDemos),
                 new SeparatorMenuItem(),
-                item("Save", "Shortcut+S", files::save),
-                item("Save as…", "Shortcut+Shift+S", files::saveAs),
+                item("Save", "Shortcut+S", this::save),
+                item("Save as…", "Shortcut+Shift+S", this::saveAs),
                 item("Export…", "Shortcut+E", () -> ExportDialog.show(stage, vm, home.dir(), io)),
                 new SeparatorMenuItem(),
                 item("Quit", "Shortcut+Q", () -> files.quit(stage::close)));
@@ -300,7 +310,7 @@ final class EditorWindow {
             demoBrowser = CompletableFuture.supplyAsync(DemoBrowserModel::shipped, io)
                     .thenApplyAsync(DemoBrowser::new, Platform::runLater);
         }
-        Futures.watched(demoBrowser.handleAsync((browser, failure) -> {
+        Futures.watch(demoBrowser.handleAsync((browser, failure) -> {
             if (failure != null) {
                 // Asked for again next time.
                 demoBrowser = null;
@@ -308,7 +318,9 @@ final class EditorWindow {
                 return null;
             }
             browser.choose(stage).flatMap(e -> Demos.resource(e.name()))
-                    .ifPresent(r -> files.afterAsking(() -> files.openDemo(r)));
+                    .ifPresent(r -> files.afterAsking(() -> {
+                        var unused = files.openDemo(r); // watched by its own chain
+                    }));
             return null;
         }, Platform::runLater));
     }
@@ -450,7 +462,9 @@ final class EditorWindow {
     private void refreshRecent() {
         recentMenu.getItems().clear();
         for (Path p : files.recent()) {
-            recentMenu.getItems().add(item(p.toString(), null, () -> files.afterAsking(() -> files.open(p))));
+            recentMenu.getItems().add(item(p.toString(), null, () -> files.afterAsking(() -> {
+                var unused = files.open(p); // watched by its own chain
+            })));
         }
         recentMenu.setDisable(files.recent().isEmpty());
     }

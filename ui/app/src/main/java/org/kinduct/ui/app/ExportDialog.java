@@ -10,6 +10,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
+import java.time.ZoneId;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
@@ -71,7 +72,7 @@ public final class ExportDialog {
      */
     public static void show(Window owner, EditorViewModel vm, Path home, Executor io) {
         ExportDialog dialog = new ExportDialog(owner, vm, home, io);
-        Futures.watched(CompletableFuture.supplyAsync(() -> ExportPreferences.load(home), io)
+        Futures.watch(CompletableFuture.supplyAsync(() -> ExportPreferences.load(home), io)
                 .thenAcceptAsync(dialog::run, Platform::runLater));
     }
 
@@ -145,7 +146,7 @@ public final class ExportDialog {
             EnumSet<Layer> layers = vm.view().layers().isEmpty() ? EnumSet.noneOf(Layer.class)
                     : EnumSet.copyOf(vm.view().layers());
             SnapshotOptions options = new SnapshotOptions(t, w, r, view, layers, vm.view().rangeProperty().get(),
-                    LocalDate.now(), Version.text());
+                    LocalDate.now(ZoneId.systemDefault()), Version.text());
             return new Choice(format.getValue(), options);
         } catch (NumberFormatException e) {
             vm.say("Export: width and resolution must be whole numbers");

@@ -15,13 +15,20 @@ final class Futures {
      * completes it, which the editor has autosave and report, instead of vanishing in the future.
      */
     static <T> CompletableFuture<T> watched(CompletableFuture<T> f) {
+        watch(f);
+        return f;
+    }
+
+    /** Watches {@code f} as {@link #watched} does, for work whose outcome nothing else waits for. */
+    // The watching stage exists for its side effect alone; nothing needs its future.
+    @SuppressWarnings("FutureReturnValueIgnored")
+    static void watch(CompletableFuture<?> f) {
         f.whenComplete((x, failure) -> {
             if (failure != null) {
                 Thread t = Thread.currentThread();
                 t.getUncaughtExceptionHandler().uncaughtException(t, cause(failure));
             }
         });
-        return f;
     }
 
     /** The failure a future's chain wrapped. */

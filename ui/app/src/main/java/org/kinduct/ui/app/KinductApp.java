@@ -39,7 +39,7 @@ public final class KinductApp extends Application {
         });
         stage.show();
         vm.zoomToFit();
-        window.files().start(GuiLauncher.initialFile(), GuiLauncher.initialDemo());
+        var unused = window.files().start(GuiLauncher.initialFile(), GuiLauncher.initialDemo()); // watched by its own chain
         window.canvas().requestFocus();
     }
 

@@ -133,7 +133,7 @@ final class ReadoutTable extends TableView<ReadoutTable.Row> {
     private void widen(List<Row> shown) {
         for (Column c : columns) {
             double w = 0;
-            for (String line : c.heading().split("\n")) {
+            for (String line : c.heading().split("\n", -1)) {
                 w = Math.max(w, textWidth(line, HEADING_FONT));
             }
             for (Row r : shown) {

@@ -8,7 +8,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.function.UnaryOperator;
 import org.kinduct.render.paint.EditorMarks;
-import org.kinduct.render.paint.Frame;
+import org.kinduct.render.paint.Picture;
 import org.kinduct.render.paint.Placement;
 import org.kinduct.render.view.SceneBounds;
 import org.kinduct.render.view.ViewTransform;
@@ -367,14 +367,14 @@ public final class CanvasGestures {
      * numbers, which belong to the scene before the drag), else the scene with the snapshot shown,
      * at the instant its numbers are for, so overlays sit on their conductors.
      */
-    public Frame frame(String note) {
+    public Picture frame(String note) {
         Snapshot snap = preview != null ? null : vm.results().snapshot();
         double t = snap != null ? snap.tS() : vm.clock().time();
         Set<String> selected = vm.document().selection();
         EditorMarks marks = drawing != null ? drawing.marks(selected)
                 : new EditorMarks(selected, drag == Drag.BAND ? band() : List.of(), true, null, "");
         ViewSettings settings = vm.view();
-        return new Frame(preview != null ? preview : vm.scene(), t, snap, vm.maps().raster(), settings.view(),
+        return new Picture(preview != null ? preview : vm.scene(), t, snap, vm.maps().raster(), settings.view(),
                 settings.layers(), settings.rangeProperty().get(), marks, note, vm.results().scalesNow());
     }
 

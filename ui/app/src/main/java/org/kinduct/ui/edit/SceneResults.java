@@ -130,6 +130,8 @@ public final class SceneResults {
      * Shows the current run's sample nearest to {@code tS} at once (playback) and fetches its
      * field for the cursor readout.
      */
+    // The same sample object means the same state of the same run: nothing new to show.
+    @SuppressWarnings("ReferenceEquality")
     void showSample(RunResult current, double tS) {
         Snapshot sample = current.nearest(tS);
         if (sample == snapshot.get()) {

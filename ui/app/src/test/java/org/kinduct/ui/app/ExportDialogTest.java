@@ -49,11 +49,16 @@ class ExportDialogTest {
         WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> robot.lookup("#export-dialog").tryQuery().isPresent());
     }
 
-    /** Cancels the dialog once its buttons are on screen (it may still be opening its window). */
-    private static void cancel(FxRobot robot) throws TimeoutException {
-        WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS,
-                () -> robot.lookup("Cancel").queryAll().stream().anyMatch(javafx.scene.Node::isVisible));
-        robot.clickOn("Cancel");
+    /**
+     * Presses the dialog's Cancel button on the UI thread (a robot click found the button hidden
+     * while the dialog's window was still opening on a loaded machine).
+     */
+    private static void cancel(FxRobot robot) throws Exception {
+        DialogPane pane = robot.lookup("#export-dialog").queryAs(DialogPane.class);
+        WaitForAsyncUtils.asyncFx(() -> ((javafx.scene.control.Button) pane.lookupButton(
+                javafx.scene.control.ButtonType.CANCEL)).fire()).get(10, TimeUnit.SECONDS);
+        WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> robot.lookup("#export-dialog").tryQuery().isEmpty()
+                || !robot.lookup("#export-dialog").query().getScene().getWindow().isShowing());
     }
 
     @Test

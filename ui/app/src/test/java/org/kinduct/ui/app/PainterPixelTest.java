@@ -29,7 +29,7 @@ import org.kinduct.render.paint.ColourRange;
 import org.kinduct.render.paint.EditorMarks;
 import org.kinduct.render.paint.FieldBackdrop;
 import org.kinduct.render.paint.FieldRaster;
-import org.kinduct.render.paint.Frame;
+import org.kinduct.render.paint.Picture;
 import org.kinduct.render.paint.Layer;
 import org.kinduct.render.view.ViewTransform;
 import org.testfx.framework.junit5.ApplicationExtension;
@@ -75,7 +75,7 @@ class PainterPixelTest {
     /** Shows a frame the way the editor does, the field layers from a backdrop when asked. */
     private static PixelReader render(Scene scene, Snapshot snap, String name, boolean backdrop) throws Exception {
         EnumSet<Layer> layers = EnumSet.of(Layer.HEAT_MAP, Layer.CONDUCTORS, Layer.LENZ);
-        Frame f = new Frame(scene, 0, snap, halves(), VIEW, layers, ColourRange.automatic(), EditorMarks.none(), "");
+        Picture f = new Picture(scene, 0, snap, halves(), VIEW, layers, ColourRange.automatic(), EditorMarks.none(), "");
         FieldBackdrop drawn = backdrop ? FieldBackdrop.render(halves(), VIEW, ColourRange.automatic().scaleFor(halves()), layers) : null;
         WritableImage img = WaitForAsyncUtils.asyncFx(() -> {
             Canvas c = new Canvas(W, H);

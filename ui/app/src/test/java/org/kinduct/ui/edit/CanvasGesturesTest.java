@@ -13,7 +13,7 @@ import java.util.Set;
 import java.util.concurrent.Executor;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
-import org.kinduct.render.paint.Frame;
+import org.kinduct.render.paint.Picture;
 import org.kinduct.render.view.ViewTransform;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
@@ -91,7 +91,7 @@ class CanvasGesturesTest {
         assertEquals(Set.of("a"), vm.document().selection(), "pressing on a wire selects it");
         g.dragged(sx(vm, 0.03), sy(vm, 0.02));
 
-        Frame preview = g.frame("");
+        Picture preview = g.frame("");
         assertSame(before, vm.scene(), "nothing is edited while dragging");
         assertTrue(firstVertex(preview.scene(), "a").eq(new Vec2(-0.03, 0.02), GEOMETRY_TOL), "the preview moved");
         assertNull(preview.snapshot(), "the numbers belong to the scene before the drag");

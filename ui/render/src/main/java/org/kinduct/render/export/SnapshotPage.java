@@ -20,7 +20,7 @@ import org.kinduct.render.paint.EditorMarks;
 import org.kinduct.render.paint.FieldRaster;
 import org.kinduct.render.paint.Layer;
 import org.kinduct.render.paint.LineChart;
-import org.kinduct.render.paint.Frame;
+import org.kinduct.render.paint.Picture;
 import org.kinduct.render.paint.Quantities;
 import org.kinduct.render.paint.ScenePainter;
 import org.kinduct.render.paint.Surface;
@@ -223,7 +223,7 @@ final class SnapshotPage {
         // The title block states the time, so the map does not repeat it.
         EnumSet<Layer> layers = EnumSet.copyOf(options.layers());
         layers.remove(Layer.TIME);
-        ScenePainter.draw(new Viewport(s, WIDTH, mapHeight), new Frame(scene, snapshot.tS(), snapshot, raster, mapView,
+        ScenePainter.draw(new Viewport(s, WIDTH, mapHeight), new Picture(scene, snapshot.tS(), snapshot, raster, mapView,
                 layers, options.range(), EditorMarks.none(), "", scales));
         s.restore();
         s.stroke(RULE);

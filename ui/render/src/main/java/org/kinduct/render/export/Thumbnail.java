@@ -12,7 +12,7 @@ import org.kinduct.solver.run.SceneRun;
 import org.kinduct.render.field.FieldMapper;
 import org.kinduct.render.field.MapRequest;
 import org.kinduct.render.paint.ColourRange;
-import org.kinduct.render.paint.Frame;
+import org.kinduct.render.paint.Picture;
 import org.kinduct.render.paint.Java2dSurface;
 import org.kinduct.render.paint.Layer;
 import org.kinduct.render.paint.ScenePainter;
@@ -59,7 +59,7 @@ public final class Thumbnail {
             g.setColor(Color.WHITE);
             g.fillRect(0, 0, widthPx, heightPx);
             g.scale(1 / PAGE_PER_PX, 1 / PAGE_PER_PX);
-            ScenePainter.draw(new Java2dSurface(g, pageW, pageH), new Frame(scene, t, snapshot, raster, view, LAYERS,
+            ScenePainter.draw(new Java2dSurface(g, pageW, pageH), new Picture(scene, t, snapshot, raster, view, LAYERS,
                     ColourRange.automatic(), null, ""));
         } finally {
             g.dispose();

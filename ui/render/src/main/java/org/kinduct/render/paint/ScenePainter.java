@@ -10,7 +10,7 @@ import org.kinduct.scene.Vec2;
 import org.kinduct.render.view.ViewTransform;
 
 /**
- * Draws a whole {@link Frame} on a {@link Surface}: the {@link FieldLayers} (colours, contours,
+ * Draws a whole {@link Picture} on a {@link Surface}: the {@link FieldLayers} (colours, contours,
  * symbols), grid, sources, conductors, polarity and current overlays, value and contour labels,
  * legend and scale bar. Stateless; the live view and every export call the same {@link #draw}.
  */
@@ -39,7 +39,7 @@ public final class ScenePainter {
     private ScenePainter() {
     }
 
-    public static void draw(Surface s, Frame f) {
+    public static void draw(Surface s, Picture f) {
         draw(s, f, null);
     }
 
@@ -47,7 +47,7 @@ public final class ScenePainter {
      * Draws {@code f}, taking the field layers from {@code backdrop} when it shows the same ones
      * (the live view renders it off the UI thread), else drawing them from the frame's map.
      */
-    public static void draw(Surface s, Frame f, FieldBackdrop backdrop) {
+    public static void draw(Surface s, Picture f, FieldBackdrop backdrop) {
         ViewTransform v = f.view();
         s.save();
         s.clipRect(0, 0, s.width(), s.height());
@@ -328,7 +328,7 @@ public final class ScenePainter {
         s.fillPath();
     }
 
-    private static void header(Surface s, Frame f) {
+    private static void header(Surface s, Picture f) {
         if (f.shows(Layer.TIME)) {
             s.fill(Palette.LABEL_BOX);
             s.fillRect(HEADER.x(), HEADER.y(), HEADER.w(), HEADER.h());

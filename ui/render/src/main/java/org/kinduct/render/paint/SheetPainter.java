@@ -42,7 +42,7 @@ final class SheetPainter {
     }
 
     /** Tint, |J| colours and streamlines of every plate and channel, as the frame's layers ask. */
-    static void drawInterior(Surface s, ViewTransform v, Frame f, Placement placement) {
+    static void drawInterior(Surface s, ViewTransform v, Picture f, Placement placement) {
         Snapshot snap = f.snapshot();
         double top = 0;
         if (snap != null) {
@@ -139,7 +139,7 @@ final class SheetPainter {
     }
 
     /** The Lenz reading of every plate and channel: eddy centres, drag arrows, electrodes. */
-    static void drawLenz(Surface s, ViewTransform v, Frame f, Placement placement, LabelPlacer placer) {
+    static void drawLenz(Surface s, ViewTransform v, Picture f, Placement placement, LabelPlacer placer) {
         Snapshot snap = f.snapshot();
         for (Conductor c : f.scene().conductors()) {
             if (!(c instanceof Conductor.Sheet sheet)) {
@@ -357,7 +357,7 @@ final class SheetPainter {
      * A channel's flow: an arrow along its centreline a quarter of its length from the inlet (its
      * middle is where the electrodes and the field usually are), with the mean velocity now.
      */
-    static void drawFlow(Surface s, ViewTransform v, Frame f, Placement placement, LabelPlacer placer) {
+    static void drawFlow(Surface s, ViewTransform v, Picture f, Placement placement, LabelPlacer placer) {
         for (Conductor c : f.scene().conductors()) {
             if (!(c instanceof Conductor.Channel channel)) {
                 continue;

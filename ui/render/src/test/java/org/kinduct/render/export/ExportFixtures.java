@@ -75,7 +75,7 @@ final class ExportFixtures {
                 Conductor.Vertex.at(0.3, ROD / 2)));
         Source.FieldPatch patch = new Source.FieldPatch("pole", Body.FIXED, List.of(new Vec2(0, -0.5), new Vec2(1, -0.5),
                 new Vec2(1, 0.5), new Vec2(0, 0.5)), B);
-        return new Scene("Frame entering a pole", "", List.of(cart()), List.of(patch), List.of(frame, rod),
+        return new Scene("Picture entering a pole", "", List.of(cart()), List.of(patch), List.of(frame, rod),
                 new TimeSpan(0, 0.02, 0.001));
     }
 

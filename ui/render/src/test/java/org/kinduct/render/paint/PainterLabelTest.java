@@ -40,7 +40,7 @@ class PainterLabelTest {
                     }
                     default -> null;
                 });
-        ScenePainter.draw(s, new Frame(Scene.empty("t"), 0, null, raster, VIEW, layers, ColourRange.automatic(),
+        ScenePainter.draw(s, new Picture(Scene.empty("t"), 0, null, raster, VIEW, layers, ColourRange.automatic(),
                 EditorMarks.none(), ""));
         return out;
     }

@@ -62,7 +62,7 @@ class SheetPainterTest {
     private static BufferedImage paint(Scene scene, Snapshot snap, Set<Layer> layers) {
         BufferedImage img = new BufferedImage((int) W, (int) H, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
-        ScenePainter.draw(new Java2dSurface(g, W, H), new Frame(scene, 0, snap, null, VIEW, layers,
+        ScenePainter.draw(new Java2dSurface(g, W, H), new Picture(scene, 0, snap, null, VIEW, layers,
                 ColourRange.automatic(), EditorMarks.none(), ""));
         g.dispose();
         return img;
@@ -135,7 +135,7 @@ class SheetPainterTest {
                     }
                     default -> null;
                 });
-        ScenePainter.draw(s, new Frame(scene, 0, snap, null, VIEW, EnumSet.of(Layer.LENZ, Layer.CALLOUTS),
+        ScenePainter.draw(s, new Picture(scene, 0, snap, null, VIEW, EnumSet.of(Layer.LENZ, Layer.CALLOUTS),
                 ColourRange.automatic(), EditorMarks.none(), ""));
         String positive = snap.sheet("strip").orElseThrow().pairs().get(0).positive().orElseThrow();
         assertTrue(texts.stream().anyMatch(t -> t.startsWith("U top−bottom ") && t.contains("+ at " + positive)),

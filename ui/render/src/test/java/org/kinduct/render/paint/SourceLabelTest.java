@@ -71,7 +71,7 @@ class SourceLabelTest {
                     }
                     default -> null;
                 });
-        ScenePainter.draw(s, new Frame(scene, 0, null, null, VIEW, layers, ColourRange.automatic(),
+        ScenePainter.draw(s, new Picture(scene, 0, null, null, VIEW, layers, ColourRange.automatic(),
                 EditorMarks.none(), ""));
         return out;
     }

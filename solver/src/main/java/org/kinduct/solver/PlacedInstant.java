@@ -9,13 +9,13 @@ import org.kinduct.solver.field.PlaneField;
  * Every body's pose and every source's placed field at one instant, indexed as in
  * {@link SceneIndex}.
  */
-final class Frame {
+final class PlacedInstant {
 
     private final double tS;
     private final Pose[] poses;
     private final PlaneField[] fields;
 
-    Frame(double tS, Pose[] poses, PlaneField[] fields) {
+    PlacedInstant(double tS, Pose[] poses, PlaneField[] fields) {
         this.tS = tS;
         this.poses = poses;
         this.fields = fields;

@@ -20,10 +20,10 @@ import org.kinduct.render.view.ViewTransform;
  * @param scales what the value labels are read against so rounding noise prints as 0 (those of
  *        the whole run where there is one); null for those of the snapshot alone
  */
-public record Frame(Scene scene, double tS, Snapshot snapshot, FieldRaster raster, ViewTransform view,
+public record Picture(Scene scene, double tS, Snapshot snapshot, FieldRaster raster, ViewTransform view,
                     Set<Layer> layers, ColourRange range, EditorMarks marks, String note, ResultScales scales) {
 
-    public Frame {
+    public Picture {
         layers = layers.isEmpty() ? EnumSet.noneOf(Layer.class) : EnumSet.copyOf(layers);
         marks = marks == null ? EditorMarks.none() : marks;
         note = note == null ? "" : note;
@@ -32,8 +32,8 @@ public record Frame(Scene scene, double tS, Snapshot snapshot, FieldRaster raste
         }
     }
 
-    /** A frame whose value labels are read against its own snapshot. */
-    public Frame(Scene scene, double tS, Snapshot snapshot, FieldRaster raster, ViewTransform view,
+    /** A picture whose value labels are read against its own snapshot. */
+    public Picture(Scene scene, double tS, Snapshot snapshot, FieldRaster raster, ViewTransform view,
                  Set<Layer> layers, ColourRange range, EditorMarks marks, String note) {
         this(scene, tS, snapshot, raster, view, layers, range, marks, note, null);
     }
