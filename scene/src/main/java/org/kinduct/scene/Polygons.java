@@ -120,6 +120,24 @@ public final class Polygons {
 
     /** Largest side of the axis-parallel box around {@code pts}, metres. */
     public static double extentM(List<Vec2> pts) {
+        return box(pts).extentM();
+    }
+
+    /** The axis-parallel box around some points (empty: infinite bounds the wrong way round). */
+    public record Box(double minX, double minY, double maxX, double maxY) {
+
+        public Vec2 centre() {
+            return new Vec2(0.5 * (minX + maxX), 0.5 * (minY + maxY));
+        }
+
+        /** Its larger side. */
+        public double extentM() {
+            return Math.max(maxX - minX, maxY - minY);
+        }
+    }
+
+    /** The axis-parallel box around {@code pts}. */
+    public static Box box(List<Vec2> pts) {
         double minX = Double.POSITIVE_INFINITY;
         double minY = Double.POSITIVE_INFINITY;
         double maxX = Double.NEGATIVE_INFINITY;
@@ -130,7 +148,7 @@ public final class Polygons {
             maxX = Math.max(maxX, p.x());
             maxY = Math.max(maxY, p.y());
         }
-        return Math.max(maxX - minX, maxY - minY);
+        return new Box(minX, minY, maxX, maxY);
     }
 
     /** True when the closed segments properly cross or touch (collinear overlap counts). */

@@ -1,6 +1,7 @@
 package org.kinduct.solver.run;
 
 import java.util.List;
+import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Scenes;
 import org.kinduct.scene.Vec2;
@@ -26,18 +27,9 @@ final class LocalOrigin {
         if (positions.isEmpty()) {
             return Vec2.ZERO;
         }
-        double minX = Double.POSITIVE_INFINITY;
-        double minY = Double.POSITIVE_INFINITY;
-        double maxX = Double.NEGATIVE_INFINITY;
-        double maxY = Double.NEGATIVE_INFINITY;
-        for (Vec2 p : positions) {
-            minX = Math.min(minX, p.x());
-            minY = Math.min(minY, p.y());
-            maxX = Math.max(maxX, p.x());
-            maxY = Math.max(maxY, p.y());
-        }
-        Vec2 centre = new Vec2(0.5 * (minX + maxX), 0.5 * (minY + maxY));
-        double size = Math.max(maxX - minX, maxY - minY);
+        Polygons.Box box = Polygons.box(positions);
+        Vec2 centre = box.centre();
+        double size = box.extentM();
         return centre.length() > FAR_SIZES * size ? centre : Vec2.ZERO;
     }
 }
