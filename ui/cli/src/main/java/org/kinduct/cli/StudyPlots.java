@@ -12,9 +12,10 @@ import org.kinduct.study.StudyTable;
 
 /**
  * The plot of a study: its metrics against the first varied value (one varied value, or values
- * paired), or one metric as a map over two varied values taken in a grid.
+ * paired), or one metric as a map over two varied values taken in a grid. The command line's
+ * {@code --png}/{@code --svg} and the editor's sweep window draw the same plot.
  */
-final class StudyPlots {
+public final class StudyPlots {
 
     /** Room above and below the plotted values, as a fraction of their range. */
     private static final double MARGIN = 0.05;
@@ -23,11 +24,13 @@ final class StudyPlots {
     }
 
     /**
+     * The plot of {@code table}'s rows.
+     *
      * @param chosen metric expressions as given to {@code --metric} (spaces ignored); empty for
      *        the first metric and those in its unit
      * @throws IllegalArgumentException when the study or the choice cannot be plotted, saying why
      */
-    static Plot of(StudyTable table, List<String> chosen) {
+    public static Plot of(StudyTable table, List<String> chosen) {
         List<Integer> metrics = check(table.header(), chosen);
         return isMap(table.header()) ? map(table, metrics.get(0)) : lines(table, metrics);
     }

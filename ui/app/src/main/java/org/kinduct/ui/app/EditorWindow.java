@@ -2,6 +2,7 @@ package org.kinduct.ui.app;
 
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Set;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
 import javafx.animation.KeyFrame;
@@ -189,6 +190,12 @@ final class EditorWindow {
 
     // ---- menus ----
 
+    /** Edit ▸ Vary a value…, of the one selected object, or of the whole scene. */
+    private void varyValue() {
+        Set<String> selection = vm.document().selection();
+        SweepWindow.show(stage, vm, selection.size() == 1 ? selection.iterator().next() : null);
+    }
+
     /** File ▸ Save; the save's own chain reports a failure. */
     private void save() {
         var unused = files.save();
@@ -230,7 +237,9 @@ final class EditorWindow {
                 new SeparatorMenuItem(),
                 item("Add uniform background field", null,
                         () -> document.add("Add background field", ShapeFactory::addBackground)),
-                item("Add field map…", null, files::addFieldMap));
+                item("Add field map…", null, files::addFieldMap),
+                new SeparatorMenuItem(),
+                item("Vary a value…", "Shortcut+Shift+V", this::varyValue));
         Menu viewMenu = new Menu("View");
         viewMenu.getItems().add(item("Zoom to fit  (F)", null, vm::zoomToFit));
         viewMenu.getItems().add(new SeparatorMenuItem());

@@ -8,6 +8,7 @@ import javafx.collections.SetChangeListener;
 import javafx.geometry.Insets;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Control;
+import javafx.scene.control.Hyperlink;
 import javafx.scene.control.Label;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.Separator;
@@ -55,6 +56,10 @@ final class PropertiesPanel extends ScrollPane {
         String id = selection.isEmpty() ? null : selection.iterator().next();
         heading(id == null ? "Scene" : describe(scene, id));
         addAll(PropertySheet.of(scene, id));
+        Hyperlink vary = new Hyperlink(id == null ? "Vary a value of the scene…" : "Vary a value of " + id + "…");
+        vary.setId("vary-value");
+        vary.setOnAction(e -> SweepWindow.show(getScene().getWindow(), vm, id));
+        box.getChildren().add(vary);
         if (id != null) {
             box.getChildren().add(new Separator());
             heading("Motion");

@@ -102,7 +102,7 @@ public final class Metrics {
     }
 
     /** Ids the scope applies to, in scene order. */
-    private static List<String> candidates(MetricKind.Scope scope, Scene scene) {
+    public static List<String> candidates(MetricKind.Scope scope, Scene scene) {
         List<String> out = new ArrayList<>();
         switch (scope) {
             case FREE_BODY -> scene.bodies().stream().filter(b -> b.motion() instanceof Motion.Free).map(Body::id)
