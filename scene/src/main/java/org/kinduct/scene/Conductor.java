@@ -126,6 +126,12 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conduc
         /** An electrode must lie on the edge to within this fraction of the conductor's size. */
         double ON_EDGE = 1e-6;
 
+        /**
+         * Vertices closer than this fraction of the conductor's size are refused: the region
+         * work counts points within 1e-10 of the size as one.
+         */
+        double CLOSEST_VERTICES = 1e-9;
+
         String id();
 
         /** The body the whole conductor rides. */
@@ -168,6 +174,11 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conduc
             Checks.id(body, "Body");
             outline = Polygons.requireSimple(outline, "plate outline");
             holes = Polygons.requireHoles(outline, holes);
+            double gap = CLOSEST_VERTICES * Polygons.extentM(outline);
+            Polygons.requireSpaced(outline, gap, "plate outline");
+            for (int h = 0; h < holes.size(); h++) {
+                Polygons.requireSpaced(holes.get(h), gap, "hole " + h);
+            }
             Checks.positive(thicknessM, "thickness");
             Checks.nonNull(conductivity, "conductivity");
             electrodes = List.copyOf(Checks.nonNull(electrodes, "electrodes"));
@@ -225,6 +236,11 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conduc
             }
             Checks.positive(widthM, "width");
             Checks.positive(depthM, "depth");
+            double length = end.minus(start).length();
+            if (Math.min(length, widthM) < CLOSEST_VERTICES * Math.max(length, widthM)) {
+                throw new IllegalArgumentException("a channel " + length + " m long and " + widthM + " m wide is"
+                        + " too thin to solve: its length and width must be within a billion times each other");
+            }
             Checks.positive(sigmaSPerM, "conductivity");
             Checks.nonNull(profile, "profile");
             Checks.nonNull(flow, "flow");

@@ -39,6 +39,21 @@ public final class Polygons {
         return copy;
     }
 
+    /**
+     * Refuses neighbouring vertices of a closed polygon closer than {@code gapM}: geometry
+     * libraries count points that close as one and then find an edge with no direction.
+     */
+    public static void requireSpaced(List<Vec2> pts, double gapM, String what) {
+        for (int i = 0; i < pts.size(); i++) {
+            int next = (i + 1) % pts.size();
+            if (pts.get(i).minus(pts.get(next)).length() < gapM) {
+                throw new IllegalArgumentException(what + ": vertices " + i + " and " + next + " are " + pts.get(i)
+                        .minus(pts.get(next)).length() + " m apart, closer than " + gapM + " m (a billionth of its"
+                        + " size); merge them");
+            }
+        }
+    }
+
     /** Shoelace signed area, m²: positive for counter-clockwise vertex order. */
     public static double signedArea(List<Vec2> pts) {
         double twice = 0;

@@ -38,6 +38,8 @@ class SceneFuzzTest {
 
     private static final long FIRST_SEED = 0x5eed_f00dL;
     private static final int INPUTS = Integer.getInteger("kinduct.fuzz.inputs", 300);
+    /** Seeds to replay instead of the range ({@code -Dkinduct.fuzz.seeds=1592652005,1592652203}). */
+    private static final String REPLAY = System.getProperty("kinduct.fuzz.seeds", "");
     private static final int STEPS = 2;
     private static final long DEADLINE_S = 60;
     private static final int SHOWN_FAILURES = 20;
@@ -51,8 +53,9 @@ class SceneFuzzTest {
         Map<Outcome, Integer> outcomes = new EnumMap<>(Outcome.class);
         long slowestNs = 0;
         long slowestSeed = 0;
-        for (int i = 0; i < INPUTS; i++) {
-            long seed = FIRST_SEED + i;
+        long[] seeds = REPLAY.isBlank() ? java.util.stream.LongStream.range(FIRST_SEED, FIRST_SEED + INPUTS).toArray()
+                : java.util.Arrays.stream(REPLAY.split(",", -1)).mapToLong(t -> Long.parseLong(t.strip())).toArray();
+        for (long seed : seeds) {
             SplittableRandom r = new SplittableRandom(seed);
             String input = SceneMutations.mutate(r, texts.get(r.nextInt(texts.size())));
             long start = System.nanoTime();
@@ -68,10 +71,10 @@ class SceneFuzzTest {
             }
         }
         System.out.printf("fuzz: %d inputs: %d refused with a located message, %d solved finite, %d stopped by the"
-                        + " run with the reason, %d failed; slowest %.2f s (seed %d)%n", INPUTS,
+                        + " run with the reason, %d failed; slowest %.2f s (seed %d)%n", seeds.length,
                 outcomes.getOrDefault(Outcome.REFUSED, 0), outcomes.getOrDefault(Outcome.SOLVED, 0),
                 outcomes.getOrDefault(Outcome.STOPPED, 0), failures.size(), slowestNs / 1e9, slowestSeed);
-        assertTrue(failures.isEmpty(), failures.size() + " of " + INPUTS + " inputs failed, e.g.:\n"
+        assertTrue(failures.isEmpty(), failures.size() + " of " + seeds.length + " inputs failed, e.g.:\n"
                 + String.join("\n", failures.subList(0, Math.min(SHOWN_FAILURES, failures.size()))));
     }
 

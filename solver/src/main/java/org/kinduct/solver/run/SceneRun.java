@@ -106,7 +106,11 @@ public final class SceneRun {
     /** The loops' inductances at the start of the window. */
     public synchronized InductanceAtStart inductanceAtStart() {
         if (inductance == null) {
-            inductance = InductanceAtStart.of(local, request.window().t0S());
+            try {
+                inductance = InductanceAtStart.of(local, request.window().t0S());
+            } catch (IllegalArgumentException refused) {
+                throw new RunFailedException(refused.getMessage(), refused);
+            }
         }
         return inductance;
     }
@@ -114,7 +118,12 @@ public final class SceneRun {
     /** How the window is computed; see {@link RunPlan}. */
     public synchronized RunPlan plan() {
         if (plan == null) {
-            plan = RunPlan.choose(scene, request, inductanceAtStart());
+            try {
+                plan = RunPlan.choose(scene, request, inductanceAtStart());
+            } catch (IllegalArgumentException refused) {
+                // A loop whose inductance could not be computed leaves no circuit model to choose.
+                throw new RunFailedException(refused.getMessage(), refused);
+            }
         }
         return plan;
     }
@@ -197,7 +206,7 @@ public final class SceneRun {
         } catch (SimulationCancelledException stopped) {
             if (budget.exceeded()) {
                 throw new RunFailedException(String.format(Locale.ROOT, "the coupled run would take about %.3g"
-                        + " integrator steps (at most %.0f are taken here: 1000 per sample, at least a million, at most 10 million): the scene"
+                        + " integrator steps (at most %.0f are taken here: 1000 per sample, at least 100 000, at most 10 million): the scene"
                         + " changes far faster than the sampling step dt = %s s can follow (a stiff spring, strong"
                         + " damping or a light free body, a loop's L/R much shorter than dt with --circuit inductive,"
                         + " or a prescribed motion much faster than dt)", budget.projectedSteps(), budget.maxSteps(),
