@@ -24,8 +24,8 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
- * Today's solver against the baseline ({@link org.kinduct.solver.baseline}, the solver before
- * issue 17) in one run: one instant, and the scene's whole time window, both on the calling
+ * Today's solver against the baseline ({@link org.kinduct.solver.baseline}, the solver as of
+ * commit 65ff77a) in one run: one instant, and the scene's whole time window, both on the calling
  * thread alone (as the editor solves), for the 20-object reference scene ({@link TwentyObjectBenchmark})
  * and the carriage demo (six magnets, a 200-turn pickup riding past them, 401 instants). The
  * ratio baseline/today of the same benchmark and scene is the speed-up.
