@@ -1,6 +1,7 @@
 package org.kinduct.ui.app;
 
 import java.util.List;
+import java.util.Optional;
 import javafx.scene.canvas.Canvas;
 import javafx.scene.canvas.GraphicsContext;
 import javafx.scene.layout.Pane;
@@ -18,6 +19,9 @@ import org.kinduct.render.paint.Quantities;
  * time; clicking seeks.
  */
 final class TimePlot extends Pane {
+
+    /** Said while coarse samples stand in for the run being computed. */
+    static final String FILLING = " — filling in (coarse samples until the run is done)…";
 
     private static final Color[] LINE_COLOURS = {
         Color.web("#1b6ca8"), Color.web("#c65d00"), Color.web("#4b1d8f"), Color.web("#2f7d32"), Color.web("#8a1c3c")};
@@ -41,6 +45,7 @@ final class TimePlot extends Pane {
         widthProperty().addListener(o -> draw());
         heightProperty().addListener(o -> draw());
         vm.results().resultProperty().addListener(o -> relines());
+        vm.results().previewProperty().addListener(o -> relines());
         vm.document().sceneProperty().addListener(o -> relines());
         vm.clock().timeProperty().addListener(o -> draw());
         vm.document().selection().addListener((javafx.collections.SetChangeListener<String>) c -> relines());
@@ -56,8 +61,8 @@ final class TimePlot extends Pane {
 
     /** Takes the lines from the current scene's run (none while it is computed). */
     private void relines() {
-        lines = vm.results().currentResult().map(run -> PlotSeries.lines(run, vm.document().selection(), quantity))
-                .orElse(List.of());
+        lines = vm.results().currentResult().or(() -> Optional.ofNullable(vm.results().previewProperty().get()))
+                .map(run -> PlotSeries.lines(run, vm.document().selection(), quantity)).orElse(List.of());
         peak = 0;
         for (PlotSeries.Line line : lines) {
             for (double v : line.values()) {
@@ -67,6 +72,11 @@ final class TimePlot extends Pane {
             }
         }
         draw();
+    }
+
+    /** Whether the lines drawn are the coarse preview while the full run is computed. */
+    private boolean filling() {
+        return vm.results().currentResult().isEmpty();
     }
 
     /** Why there are no lines: the run is still being computed, or there is nothing to plot. */
@@ -113,7 +123,7 @@ final class TimePlot extends Pane {
         g.fillText("0", LEFT - 4, top + ph / 2 + 4);
         g.fillText(peak > 0 ? "−" + Units.format(lim, quantity.dimension) : "", LEFT - 4, top + ph);
         g.setTextAlign(TextAlignment.LEFT);
-        g.fillText(quantity + (lines.isEmpty() ? emptyNote() : ""), LEFT, 13);
+        g.fillText(quantity + (lines.isEmpty() ? emptyNote() : filling() ? FILLING : ""), LEFT, 13);
         g.fillText(Quantities.time(t0), LEFT, h - 5);
         g.setTextAlign(TextAlignment.RIGHT);
         g.fillText(Quantities.time(t1), LEFT + pw, h - 5);

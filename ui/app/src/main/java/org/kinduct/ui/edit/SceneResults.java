@@ -19,6 +19,7 @@ import org.kinduct.render.field.LatestOnly;
 import org.kinduct.render.view.SceneBounds;
 import org.kinduct.report.InductanceSummary;
 import org.kinduct.scene.Scene;
+import org.kinduct.scene.TimeSpan;
 import org.kinduct.solver.SceneField;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.RunMonitor;
@@ -41,6 +42,8 @@ import org.kinduct.solver.run.SceneRun;
 public final class SceneResults {
 
     private static final String SIMULATING = "Running the coupled simulation…";
+    /** Intervals of the coarse run shown while a long window is computed. */
+    static final int PREVIEW_SAMPLES = 40;
     private static final ResultScales NO_SCALES = ResultScales.of(List.of());
     private static final SceneField NO_FIELD = new SceneField(List.of());
 
@@ -52,6 +55,8 @@ public final class SceneResults {
     private final LatestOnly runJobs;
     private final ReadOnlyObjectWrapper<Snapshot> snapshot = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyObjectWrapper<RunResult> result = new ReadOnlyObjectWrapper<>();
+    /** A coarse run of the revision shown while its full run is computed, else null. */
+    private final ReadOnlyObjectWrapper<RunResult> preview = new ReadOnlyObjectWrapper<>();
     /** What the result's scene covers over its window, found with the result (it reads every sample). */
     private SceneBounds extent;
     private final ReadOnlyStringWrapper inductanceLine = new ReadOnlyStringWrapper("");
@@ -88,6 +93,7 @@ public final class SceneResults {
             watch.outdate();
         }
         revision = rev;
+        preview.set(null);
         watch = new RunWatch(clockNs, percent -> ui.execute(() -> showProgress(rev, percent)));
         run = runs.apply(scene, watch);
         computeRun();
@@ -175,6 +181,7 @@ public final class SceneResults {
     private void computeRun() {
         SceneRun r = run;
         long rev = revision;
+        RunWatch stops = watch;
         // A simulated scene keeps showing the last good run until the new one is done.
         inductanceLine.set("");
         simulating.set(false);
@@ -193,6 +200,9 @@ public final class SceneResults {
                     }
                 });
                 long started = clockNs.getAsLong();
+                if (!coupled) {
+                    preview(r, rev, stops);
+                }
                 RunResult done = r.result();
                 double seconds = (clockNs.getAsLong() - started) * 1e-9;
                 SceneBounds covered = SceneBounds.ofWindow(done.scene(), done.samples());
@@ -200,6 +210,7 @@ public final class SceneResults {
                     if (revision == rev) {
                         resultRevision = rev;
                         extent = covered;
+                        preview.set(null);
                         result.set(done);
                         if (coupled) {
                             simulating.set(false);
@@ -215,6 +226,27 @@ public final class SceneResults {
                         say.accept("Run: " + describe(e));
                     }
                 });
+            }
+        });
+    }
+
+    /**
+     * Fills the time plot in behind the instant shown: for a long quasi-static window, the same
+     * scene over at most {@value #PREVIEW_SAMPLES} intervals, each instant solved exactly as the
+     * full run will, shown until the full run is in (a small share of its cost).
+     */
+    private void preview(SceneRun full, long rev, RunWatch stops) {
+        TimeSpan w = full.scene().time();
+        int steps = w.steps();
+        if (steps <= 2 * PREVIEW_SAMPLES) {
+            return;
+        }
+        int stride = (steps + PREVIEW_SAMPLES - 1) / PREVIEW_SAMPLES;
+        Scene coarse = full.scene().withTime(new TimeSpan(w.t0S(), w.t1S(), stride * w.dtS()));
+        RunResult quick = runs.apply(coarse, stops).result();
+        ui.execute(() -> {
+            if (revision == rev && !resultIsCurrent()) {
+                preview.set(quick);
             }
         });
     }
@@ -284,6 +316,11 @@ public final class SceneResults {
      */
     public ReadOnlyObjectProperty<RunResult> resultProperty() {
         return result.getReadOnlyProperty();
+    }
+
+    /** A coarse run of the scene shown while its full run is computed (null otherwise): for plots marked as filling in. */
+    public ReadOnlyObjectProperty<RunResult> previewProperty() {
+        return preview.getReadOnlyProperty();
     }
 
     /** The loops' inductances at the start of the current scene's run, in words; empty without closed loops. */
