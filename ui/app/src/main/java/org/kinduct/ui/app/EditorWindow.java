@@ -230,7 +230,8 @@ final class EditorWindow {
                 new SeparatorMenuItem(),
                 item("Add uniform background field", null,
                         () -> document.add("Add background field", ShapeFactory::addBackground)),
-                item("Add field map…", null, files::addFieldMap));
+                item("Add field map…", null, files::addFieldMap),
+                item("Earth's field…", null, () -> EarthFieldDialog.show(stage, document)));
         Menu viewMenu = new Menu("View");
         viewMenu.getItems().add(item("Zoom to fit  (F)", null, vm::zoomToFit));
         viewMenu.getItems().add(new SeparatorMenuItem());
