@@ -61,8 +61,8 @@ public sealed interface Source
 
     /**
      * Uniform B_z everywhere (tesla), e.g. the normal component of the Earth's field. When made
-     * from geomagnetic elements, {@code earth} holds them and B_z is theirs (so a file can keep
-     * and re-edit the elements rather than one number).
+     * from geomagnetic elements, {@code earth} holds them and B_z is theirs, replacing any
+     * {@code bzT} given (so a file can keep and re-edit the elements rather than one number).
      */
     record UniformField(String id, double bzT, Optional<EarthField> earth) implements Source {
         public UniformField {

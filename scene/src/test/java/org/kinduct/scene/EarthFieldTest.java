@@ -2,12 +2,15 @@ package org.kinduct.scene;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.SplittableRandom;
 import java.util.stream.LongStream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.kinduct.scene.io.SceneFormatException;
+import org.kinduct.scene.io.SceneJson;
 
 /**
  * B_z of the Earth's field normal to a board, against cases worked by hand. Components
@@ -93,7 +96,22 @@ class EarthFieldTest {
     void inclinationBeyondTheVerticalIsRefused() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> board(50, 91, 0, 0, 0, EarthField.Face.UP));
-        assertEquals(true, e.getMessage().contains("inclination"), e.getMessage());
+        assertTrue(e.getMessage().contains("inclination"), e.getMessage());
+    }
+
+    private static String refusal(String source) {
+        String text = "{\"format\": \"kinduct-scene\", \"version\": 1, \"sources\": [" + source + "]}";
+        return assertThrows(SceneFormatException.class, () -> SceneJson.read(text, "t.json")).getMessage();
+    }
+
+    @Test
+    void fileRefusesBzBesideTheElementsAndAnInclinationPastVertical() {
+        String both = refusal("{\"kind\": \"uniform-field\", \"id\": \"e\", \"bz\": \"1 uT\","
+                + " \"earth\": {\"intensity\": \"48 uT\", \"inclination\": \"66 deg\"}}");
+        assertTrue(both.contains("either \"bz\" or \"earth\""), both);
+        String steep = refusal("{\"kind\": \"uniform-field\", \"id\": \"e\","
+                + " \"earth\": {\"intensity\": \"48 uT\", \"inclination\": \"100 deg\"}}");
+        assertTrue(steep.contains("sources[0].earth") && steep.contains("inclination"), steep);
     }
 
     @Test
