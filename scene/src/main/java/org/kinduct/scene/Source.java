@@ -1,6 +1,7 @@
 package org.kinduct.scene;
 
 import java.util.List;
+import java.util.Optional;
 
 /**
  * A source of magnetic field. Only B_z, the component normal to the drawing plane, enters the
@@ -58,11 +59,29 @@ public sealed interface Source
         }
     }
 
-    /** Uniform B_z everywhere (tesla), e.g. the normal component of the Earth's field. */
-    record UniformField(String id, double bzT) implements Source {
+    /**
+     * Uniform B_z everywhere (tesla), e.g. the normal component of the Earth's field. When made
+     * from geomagnetic elements, {@code earth} holds them and B_z is theirs, replacing any
+     * {@code bzT} given (so a file can keep and re-edit the elements rather than one number).
+     */
+    record UniformField(String id, double bzT, Optional<EarthField> earth) implements Source {
         public UniformField {
             Checks.id(id, "Source");
+            Checks.nonNull(earth, "earth");
+            if (earth.isPresent()) {
+                bzT = earth.get().bzT();
+            }
             Checks.finite(bzT, "B_z");
+        }
+
+        /** A field given by its value alone. */
+        public UniformField(String id, double bzT) {
+            this(id, bzT, Optional.empty());
+        }
+
+        /** The Earth's field normal to the board. */
+        public static UniformField earth(String id, EarthField earth) {
+            return new UniformField(id, earth.bzT(), Optional.of(earth));
         }
 
         @Override

@@ -27,7 +27,9 @@ public final class Demos {
             "gradiometer",
             "spinning-coil-generator",
             "rail-sled",
-            "drive-sense-wire");
+            "drive-sense-wire",
+            "scanned-head",
+            "earth-rail-loop");
 
     private Demos() {
     }

@@ -139,6 +139,44 @@ class DemoHandCalculationTest {
         assertEquals(0, loop.forceN().y(), EXACT * force);
     }
 
+    /**
+     * The Earth's field normal to the tilted board, by hand: X = F·cos I·cos D (north),
+     * Z = F·sin I (down) (the standard geomagnetic element relations; Campbell, Introduction to
+     * Geomagnetic Fields, 2nd ed., 2003, §1.2; from memory). The board's +x points east and its
+     * north edge is raised 30°, so its normal leans 30° from the vertical toward the south:
+     * n = (−sin 30°, 0, −cos 30°) in north-east-down, and B_z = −X·sin 30° − Z·cos 30°.
+     */
+    private static double earthRailLoopBzT() {
+        double f = 49e-6;
+        double i = Math.toRadians(66);
+        double d = Math.toRadians(2);
+        double tilt = Math.toRadians(30);
+        return -f * Math.cos(i) * Math.cos(d) * Math.sin(tilt) - f * Math.sin(i) * Math.cos(tilt);
+    }
+
+    @Test
+    void earthRailLoopEmfIsMinusBzTimesTheRateOfAreaGrowth() {
+        // The bar (rails 0.5 m apart) slides at 1.5 m/s: the loop, drawn counter-clockwise, grows by
+        // L·v each second, so EMF = −dΦ/dt = −B_z·L·v (Griffiths §7.1.3); about +36 µV here.
+        double bz = earthRailLoopBzT();
+        double emf = -bz * 0.5 * 1.5;
+        ConductorState loop = new SceneSolver(Demos.load("earth-rail-loop")).at(0.2).conductor("rail-loop")
+                .orElseThrow();
+        // Degrees convert through a decimal in the file and π/180 here: rounding only.
+        assertEquals(emf, loop.emfV(), EXACT * Math.abs(emf));
+    }
+
+    @Test
+    void earthSenseWireIsBLvWithItsNorthEndPositive() {
+        // v = +x, B_z < 0 (into the board): v × B points +y, so the upper (last) vertex is + and
+        // EMF = −B_z·L·v along the wire (Griffiths §7.1.3, Eq. 7.13).
+        double emf = -earthRailLoopBzT() * 0.5 * 1.5;
+        ConductorState wire = new SceneSolver(Demos.load("earth-rail-loop")).at(0.2).conductor("sense-wire")
+                .orElseThrow();
+        assertEquals(emf, wire.emfV(), EXACT * Math.abs(emf));
+        assertEquals(Terminal.LAST, wire.positiveEnd());
+    }
+
     @Test
     void railSledOutsideTheGapCarriesNoCurrent() {
         List<Snapshot> series = new SceneSolver(Demos.load("rail-sled")).series(0, 0.018, 0.001);

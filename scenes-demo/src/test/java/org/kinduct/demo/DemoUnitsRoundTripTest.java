@@ -9,6 +9,7 @@ import java.nio.charset.StandardCharsets;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.kinduct.scene.io.SceneFormatException;
+import org.kinduct.scene.io.SceneFolder;
 import org.kinduct.scene.io.SceneJson;
 import org.kinduct.scene.io.SceneWithUnits;
 
@@ -27,10 +28,12 @@ class DemoUnitsRoundTripTest {
         try (InputStream in = Demos.class.getResourceAsStream(resource)) {
             text = new String(in.readAllBytes(), StandardCharsets.UTF_8);
         }
-        SceneWithUnits read = SceneJson.readWithUnits(text, resource);
+        // Field maps are read beside the demo's resource, on reading and on reading back.
+        SceneFolder folder = SceneFolder.ofResource(Demos.class, resource);
+        SceneWithUnits read = SceneJson.readWithUnits(text, resource, folder);
         assertFalse(read.units().paths().isEmpty(), name + " gives its values with units");
 
-        SceneWithUnits back = SceneJson.readWithUnits(SceneJson.write(read), name + " saved");
+        SceneWithUnits back = SceneJson.readWithUnits(SceneJson.write(read), name + " saved", folder);
 
         assertEquals(read.scene(), back.scene());
         for (String path : read.units().paths()) {

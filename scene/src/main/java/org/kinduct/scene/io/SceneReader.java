@@ -28,6 +28,7 @@ import java.util.function.Predicate;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.EarthField;
 import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Material;
@@ -269,8 +270,31 @@ final class SceneReader {
 
     private Source uniformField(Fields f) {
         String id = f.req("id", ctx.objectDeclaration("Source"));
+        boolean value = f.has("bz");
+        if (f.has("earth")) {
+            if (value) {
+                f.problem("a uniform field takes either \"bz\" or \"earth\", not both: with \"earth\" its B_z"
+                        + " follows from the geomagnetic elements and the board's orientation");
+            }
+            EarthField earth = f.req("earth", this::earth);
+            return f.build(() -> Source.UniformField.earth(id, earth));
+        }
         Double bz = f.req("bz", ctx.quantity(FLUX_DENSITY));
         return f.build(() -> new Source.UniformField(id, bz));
+    }
+
+    private EarthField earth(String path, Json node) {
+        Fields f = ctx.fields(path, node, "Earth's field {\"intensity\": ..., \"inclination\": ..., \"declination\": ...}");
+        if (f == null) {
+            return null;
+        }
+        Double intensity = f.req("intensity", ctx.quantity(FLUX_DENSITY));
+        Double inclination = f.req("inclination", ctx.quantity(ANGLE));
+        Double declination = f.opt("declination", ctx.quantity(ANGLE), 0.0);
+        Double tilt = f.opt("tilt", ctx.quantity(ANGLE), 0.0);
+        Double heading = f.opt("heading", ctx.quantity(ANGLE), 0.0);
+        EarthField.Face face = f.opt("face", ctx.choice(Vocabulary.FACE), EarthField.Face.UP);
+        return f.build(() -> new EarthField(intensity, inclination, declination, tilt, heading, face));
     }
 
     private Source blockMagnet(Fields f) {

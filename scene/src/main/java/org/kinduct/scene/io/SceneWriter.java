@@ -10,6 +10,7 @@ import java.util.Optional;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.EarthField;
 import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Motion;
@@ -190,7 +191,19 @@ final class SceneWriter {
                 return io(() -> {
                     kind("uniform-field");
                     g.writeStringField("id", u.id());
-                    number("bz", u.bzT());
+                    if (u.earth().isPresent()) {
+                        EarthField e = u.earth().get();
+                        object("earth", () -> {
+                            number("intensity", e.intensityT());
+                            number("inclination", e.inclinationRad());
+                            number("declination", e.declinationRad());
+                            number("tilt", e.tiltRad());
+                            number("heading", e.headingRad());
+                            g.writeStringField("face", Vocabulary.FACE.name(e.face()));
+                        });
+                    } else {
+                        number("bz", u.bzT());
+                    }
                 });
             }
 

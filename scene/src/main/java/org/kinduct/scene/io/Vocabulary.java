@@ -3,6 +3,7 @@ package org.kinduct.scene.io;
 import static java.util.Map.entry;
 
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.EarthField;
 import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.Motion;
@@ -31,6 +32,9 @@ final class Vocabulary {
 
     static final Choices<Source.FieldMap.Outside> OUTSIDE = Choices.of(
             entry("zero", Source.FieldMap.Outside.ZERO), entry("error", Source.FieldMap.Outside.ERROR));
+
+    static final Choices<EarthField.Face> FACE = Choices.of(
+            entry("up", EarthField.Face.UP), entry("down", EarthField.Face.DOWN));
 
     private Vocabulary() {
     }

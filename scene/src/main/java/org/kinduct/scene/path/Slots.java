@@ -5,6 +5,7 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.function.BiFunction;
 import java.util.function.Function;
 import org.kinduct.scene.Vec2;
@@ -50,6 +51,14 @@ final class Slots {
     Slots nest(String name, String component, Slots inner) {
         inner.byName.forEach((n, s) -> put(join(name, n), s.through(o -> RecordComponents.get(o, component),
                 (o, part) -> RecordComponents.with(o, component, part))));
+        return this;
+    }
+
+    /** The values of an {@link Optional} record component that is present, under {@code name}. */
+    Slots present(String name, String component, Slots inner) {
+        inner.byName.forEach((n, s) -> put(join(name, n), s.through(
+                o -> ((Optional<?>) RecordComponents.get(o, component)).orElseThrow(),
+                (o, part) -> RecordComponents.with(o, component, Optional.of(part)))));
         return this;
     }
 

@@ -22,7 +22,12 @@ final class SourceSlots implements Source.Cases<Slots> {
 
     @Override
     public Slots uniform(Source.UniformField uniform) {
-        return new Slots().number("bz", FLUX_DENSITY, "bzT");
+        // With geomagnetic elements B_z is theirs: the elements are the values to vary.
+        return uniform.earth().isPresent()
+                ? new Slots().present("earth", "earth", new Slots().number("intensity", FLUX_DENSITY, "intensityT")
+                        .number("inclination", ANGLE, "inclinationRad").number("declination", ANGLE, "declinationRad")
+                        .number("tilt", ANGLE, "tiltRad").number("heading", ANGLE, "headingRad"))
+                : new Slots().number("bz", FLUX_DENSITY, "bzT");
     }
 
     @Override

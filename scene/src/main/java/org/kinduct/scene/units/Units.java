@@ -104,6 +104,9 @@ public final class Units {
         return m.matches() ? m.group(2).strip() : "";
     }
 
+    /** Longest plain decimal {@link #exactly} writes: 17 digits, a sign, a point and a few zeros. */
+    private static final int PLAIN_LIMIT = 24;
+
     /**
      * {@code si} written in the unit spelled {@code unit} with the fewest digits that
      * {@link #parse} reads back as exactly {@code si} ("12.5 mm"), so a file keeps its units
@@ -117,8 +120,10 @@ public final class Units {
         }
         BigDecimal inUnit = u.get().fromSi(new BigDecimal(si));
         for (int digits = 1; digits <= 17; digits++) {
-            String text = inUnit.round(new MathContext(digits, RoundingMode.HALF_EVEN)).stripTrailingZeros()
-                    .toString() + " " + unit;
+            BigDecimal rounded = inUnit.round(new MathContext(digits, RoundingMode.HALF_EVEN)).stripTrailingZeros();
+            // "50 uT", not "5E+1 uT"; an exponent only where plain digits would run long (1e-300 T).
+            String plain = rounded.toPlainString();
+            String text = (plain.length() <= PLAIN_LIMIT ? plain : rounded.toString()) + " " + unit;
             if (Double.compare(parse(text, d), si) == 0) { // −0.0 is not 0.0 to a record
                 return Optional.of(text);
             }

@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.OptionalDouble;
 import java.util.SplittableRandom;
 import org.kinduct.scene.Body;
+import org.kinduct.scene.EarthField;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
@@ -85,7 +86,8 @@ public final class SampleScenes {
                         new Motion.Path.Key(1, new Vec2(0.1, 0), 0)), Motion.Path.Blend.LINEAR)));
         List<Source> sources = List.of(
                 new Source.FieldPatch("gap", Body.FIXED, square(0, 0, 0.02), -0.08),
-                new Source.UniformField("earth", -45e-6),
+                new Source.UniformField("background", -45e-6),
+                Source.UniformField.earth("earth", new EarthField(48e-6, 1.15, 0.035, 0.5, 1.6, EarthField.Face.DOWN)),
                 new Source.BlockMagnet("m1", "rotor", new Vec2(0.01, 0), 10e-3, 5e-3, 3e-3, 0.2, 2e-3,
                         Source.Side.ABOVE, 1.2, Source.Magnetization.MINUS_Z),
                 new Source.CylinderMagnet("m2", Body.FIXED, new Vec2(-0.02, 0.01), 5e-3, 3e-3, 1e-3,
@@ -210,7 +212,9 @@ public final class SampleScenes {
             case 0:
                 return new Source.FieldPatch(id, body, convex(r), any(r));
             case 1:
-                return new Source.UniformField(id, any(r));
+                return r.nextBoolean() ? new Source.UniformField(id, any(r)) : Source.UniformField.earth(id,
+                        new EarthField(positive(r), r.nextDouble(-1.5, 1.5), any(r), any(r), any(r),
+                                r.nextBoolean() ? EarthField.Face.UP : EarthField.Face.DOWN));
             case 2:
                 return new Source.BlockMagnet(id, body, point(r), size(r), size(r), size(r), any(r),
                         nonNegative(r), side, positive(r), north);

@@ -274,7 +274,7 @@ class SceneJsonValidationTest {
                 at(text, "1,\n  \"bodies\"") + "name: expected a text in double quotes, got '1'",
                 at(text, "\"2 mm\"") + "bodies[0].motion.velocity[1]: expected a velocity such as '0.5 m/s', got '2 mm'"
                         + " (mm is a unit of length)",
-                at(text, "\"body\": \"cart\"") + "sources[0].body: unknown field 'body'; the fields here are kind, id, bz",
+                at(text, "\"body\": \"cart\"") + "sources[0].body: unknown field 'body'; the fields here are kind, id, bz, earth",
                 at(text, "{\"kind\": \"wire\"") + "conductors[0]: a wire needs at least 2 vertices, got 1",
                 at(text, "\"earth\", \"body\"") + "conductors[0].id: id 'earth' is already used at sources[0].id (line 6)",
                 at(text, "\"cat\"") + "conductors[0].body: unknown body 'cat' (did you mean 'cart'?); the bodies are fixed, cart"),

@@ -29,7 +29,7 @@ class SceneValuesTest {
     void everyFieldOfTheFileFormatHasAPathNamedAsInTheFile() {
         List<String> paths = SceneValues.of(EVERY).paths();
         for (String p : List.of("m1.standoff", "m1.size.x", "m1.size.z", "m1.angle", "m1.remanence", "m1.center.y",
-                "m2.radius", "m2.height", "gap.outline[2].x", "gap.bz", "earth.bz", "coil1.polygon[3].y", "coil1.turns",
+                "m2.radius", "m2.height", "gap.outline[2].x", "gap.bz", "background.bz", "earth.earth.tilt", "earth.earth.intensity", "coil1.polygon[3].y", "coil1.turns",
                 "coil1.z", "coil1.current.frequency", "coil2.circle.radius", "coil2.circle.center.x",
                 "pickup.vertices[1].x", "pickup.turns", "pickup.wire.diameter", "pickup.load", "pickup.temperature",
                 "probe.vertices[2].y", "carriage.pivot.x", "carriage.motion.velocity.x",
@@ -53,6 +53,15 @@ class SceneValuesTest {
         assertEquals(-9.81, v.read("gravity.y"));
         assertEquals(Dimension.RESISTANCE, v.find("pickup.load").dimension());
         assertTrue(v.find("pickup.turns").whole());
+    }
+
+    @Test
+    void writingAnEarthElementRecomputesBz() {
+        Scene s = SceneValues.of(EVERY).write("earth.earth.tilt", 0.0);
+        org.kinduct.scene.Source.UniformField u = (org.kinduct.scene.Source.UniformField) s.source("earth").orElseThrow();
+        // Level, face down: B_z = +Z = F·sin I (the standard geomagnetic element relations; from memory).
+        assertEquals(48e-6 * Math.sin(1.15), u.bzT(), 1e-12 * 48e-6);
+        assertTrue(!SceneValues.of(EVERY).paths().contains("earth.bz"), "an Earth field's B_z is set by its elements");
     }
 
     @Test

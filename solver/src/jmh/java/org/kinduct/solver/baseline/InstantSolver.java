@@ -132,6 +132,16 @@ final class InstantSolver {
                 public ConductorState loop(Conductor.Loop loop) {
                     return InstantSolver.this.loop(index, loop);
                 }
+
+                @Override
+                public ConductorState plate(Conductor.Plate plate) {
+                    throw new UnsupportedOperationException("the baseline solver predates plates");
+                }
+
+                @Override
+                public ConductorState channel(Conductor.Channel channel) {
+                    throw new UnsupportedOperationException("the baseline solver predates channels");
+                }
             }));
         }
         return new Snapshot(tS, states);

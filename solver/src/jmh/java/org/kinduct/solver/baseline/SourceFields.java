@@ -54,6 +54,11 @@ public final class SourceFields {
             public PlaneField coil(Source.SourceCoil coil) {
                 return PhysicalSources.coil(coil, pose, tS);
             }
+
+            @Override
+            public PlaneField map(Source.FieldMap map) {
+                throw new UnsupportedOperationException("the baseline solver predates field maps");
+            }
         });
     }
 }

@@ -48,6 +48,11 @@ record SourceReach(Vec2 anchor, double extentM, double lengthM, double fieldT) {
             public SourceReach coil(Source.SourceCoil coil) {
                 return ofCoil(coil);
             }
+
+            @Override
+            public SourceReach map(Source.FieldMap map) {
+                throw new UnsupportedOperationException("the baseline solver predates field maps");
+            }
         });
     }
 

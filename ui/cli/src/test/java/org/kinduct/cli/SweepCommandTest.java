@@ -51,6 +51,17 @@ class SweepCommandTest {
         return LongStream.range(0, 6);
     }
 
+    /** A demo's field maps are read beside its resource; a copy of the scene needs them beside it too. */
+    private static void copyMapsBeside(Scene scene, Path dir) throws IOException {
+        for (org.kinduct.scene.Source s : scene.sources()) {
+            if (s instanceof org.kinduct.scene.Source.FieldMap map) {
+                try (java.io.InputStream in = Demos.class.getResourceAsStream("/org/kinduct/demo/" + map.file())) {
+                    Files.copy(in, dir.resolve(map.file()), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+                }
+            }
+        }
+    }
+
     /**
      * Random demo, random value, two random values of it: every metric that applies, for every
      * conductor and free body, equals the one computed from {@code kinduct solve --format json} of
@@ -83,6 +94,7 @@ class SweepCommandTest {
             }
         }
         Path scene = dir.resolve("base.json");
+        copyMapsBeside(base, dir);
         SceneFiles.write(base, scene);
         List<String[]> metrics = metricsOf(base);
         List<String> args = new ArrayList<>(List.of("sweep", scene.toString(), "--vary",

@@ -238,6 +238,7 @@ final class EditorWindow {
                 item("Add uniform background field", null,
                         () -> document.add("Add background field", ShapeFactory::addBackground)),
                 item("Add field map…", null, files::addFieldMap),
+                item("Earth's field…", null, () -> EarthFieldDialog.show(stage, document)),
                 new SeparatorMenuItem(),
                 item("Vary a value…", "Shortcut+Shift+V", this::varyValue));
         Menu viewMenu = new Menu("View");

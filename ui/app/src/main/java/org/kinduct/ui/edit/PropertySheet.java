@@ -6,6 +6,7 @@ import java.util.function.DoubleFunction;
 import java.util.function.UnaryOperator;
 import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.EarthField;
 import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Material;
 import org.kinduct.scene.MeanFlow;
@@ -114,8 +115,9 @@ public final class PropertySheet {
 
             @Override
             public List<Property> uniform(Source.UniformField u) {
-                return List.of(quantity("B_z everywhere (+ out of screen)", Dimension.FLUX_DENSITY, u.bzT(),
-                        v -> replace(new Source.UniformField(u.id(), v))));
+                return u.earth().map(e -> earthProperties(u.id(), e)).orElseGet(() -> List.of(quantity(
+                        "B_z everywhere (+ out of screen)", Dimension.FLUX_DENSITY, u.bzT(),
+                        v -> replace(new Source.UniformField(u.id(), v)))));
             }
 
             @Override
@@ -138,6 +140,32 @@ public final class PropertySheet {
                 return mapProperties(m);
             }
         });
+    }
+
+    /** The elements are edited; B_z follows from them. */
+    private static List<Property> earthProperties(String id, EarthField e) {
+        return List.of(
+                new Property("B_z (+ out of screen)", Units.format(e.bzT(), Dimension.FLUX_DENSITY), List.of(), text -> {
+                    throw new IllegalArgumentException("B_z follows from the Earth's field elements; change them"
+                            + " (or Edit ▸ Earth's field…)");
+                }),
+                quantity("Total intensity F", Dimension.FLUX_DENSITY, e.intensityT(), v -> replace(earth(id,
+                        new EarthField(v, e.inclinationRad(), e.declinationRad(), e.tiltRad(), e.headingRad(), e.face())))),
+                quantity("Inclination I", Dimension.ANGLE, e.inclinationRad(), v -> replace(earth(id,
+                        new EarthField(e.intensityT(), v, e.declinationRad(), e.tiltRad(), e.headingRad(), e.face())))),
+                quantity("Declination D", Dimension.ANGLE, e.declinationRad(), v -> replace(earth(id,
+                        new EarthField(e.intensityT(), e.inclinationRad(), v, e.tiltRad(), e.headingRad(), e.face())))),
+                quantity("Board tilt", Dimension.ANGLE, e.tiltRad(), v -> replace(earth(id,
+                        new EarthField(e.intensityT(), e.inclinationRad(), e.declinationRad(), v, e.headingRad(), e.face())))),
+                quantity("Heading of +x", Dimension.ANGLE, e.headingRad(), v -> replace(earth(id,
+                        new EarthField(e.intensityT(), e.inclinationRad(), e.declinationRad(), e.tiltRad(), v, e.face())))),
+                choice("Board face", EarthFieldForm.FACES, e.face().ordinal(), i -> replace(earth(id,
+                        new EarthField(e.intensityT(), e.inclinationRad(), e.declinationRad(), e.tiltRad(), e.headingRad(),
+                                EarthField.Face.values()[i])))));
+    }
+
+    private static Source earth(String id, EarthField e) {
+        return Source.UniformField.earth(id, e);
     }
 
     /** The file and its grid are shown, not edited: a map is changed by loading another file. */

@@ -202,7 +202,7 @@ public final class Shapes {
                 if (!body.equals(u.body())) {
                     throw new IllegalArgumentException("a uniform field belongs to the fixed frame");
                 }
-                return new Source.UniformField(id, u.bzT());
+                return new Source.UniformField(id, u.bzT(), u.earth());
             }
 
             @Override
