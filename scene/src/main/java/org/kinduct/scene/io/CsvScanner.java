@@ -1,5 +1,6 @@
 package org.kinduct.scene.io;
 
+import com.fasterxml.jackson.core.io.NumberInput;
 import java.io.IOException;
 import java.io.Reader;
 
@@ -123,7 +124,8 @@ final class CsvScanner {
         }
         double v;
         try {
-            v = Double.parseDouble(text());
+            // Jackson's fast_float port, correctly rounded: most of a large map's load time was Double.parseDouble.
+            v = NumberInput.parseDouble(text(), true);
         } catch (NumberFormatException e) {
             throw error(fieldLine, fieldColumn, what + " '" + text() + "' is not a number");
         }
