@@ -116,8 +116,10 @@ final class EditorWindow {
         VBox plotBox = new VBox(2, plotWhat, plot);
         VBox.setVgrow(plot, Priority.ALWAYS);
         ReadoutTable table = new ReadoutTable(vm);
-        VBox tableBox = new VBox(2, table, inductanceLine(), energyLine());
+        SheetReadoutTable sheets = new SheetReadoutTable(vm);
+        VBox tableBox = new VBox(2, table, sheets, inductanceLine(), energyLine());
         VBox.setVgrow(table, Priority.ALWAYS);
+        VBox.setVgrow(sheets, Priority.ALWAYS);
         SplitPane lower = new SplitPane(plotBox, tableBox);
         // The table's eight columns take more room than the plot needs.
         lower.setDividerPositions(0.34);
