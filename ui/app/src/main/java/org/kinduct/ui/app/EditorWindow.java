@@ -118,6 +118,9 @@ final class EditorWindow {
         plotWhat.getItems().setAll(PlotSeries.Quantity.values());
         plotWhat.setValue(PlotSeries.Quantity.EMF);
         plotWhat.setOnAction(e -> plot.setQuantity(plotWhat.getValue()));
+        Runnable fit = () -> plotWhat.setValue(PlotSeries.fitting(vm.scene(), plotWhat.getValue()));
+        vm.document().sceneProperty().addListener((obs, old, scene) -> fit.run());
+        fit.run();
         VBox plotBox = new VBox(2, plotWhat, plot);
         VBox.setVgrow(plot, Priority.ALWAYS);
         ReadoutTable table = new ReadoutTable(vm);

@@ -83,10 +83,6 @@ abstract class WideningTable<R> extends TableView<R> {
         widen(List.of());
     }
 
-    final ObservableList<R> rows() {
-        return rows;
-    }
-
     /** Widens each column to its heading and widest text now shown. */
     private void widen(List<R> shown) {
         for (Column<R> c : columns) {

@@ -180,14 +180,15 @@ public final class CanvasGestures {
         vertexHit = null;
     }
 
-    /** A click (press and release in place): places a point of the drawing; a double click finishes it. */
+    /** A click (press and release in place): places a point of the drawing; a double click on the last point finishes it. */
     public void clicked(double x, double y, Button button, int count) {
         if (drawing == null || button != Button.PRIMARY || spaceDown
                 || Math.hypot(x - pressX, y - pressY) > CLICK_SLOP_PX) {
             return;
         }
         if (count == 2) {
-            drawing.finish().ifPresent(this::commitDrawing);
+            drawing.doubleClick(view().toScene(x, y), vm.view().snapper(), snapVertices())
+                    .ifPresent(this::commitDrawing);
         } else {
             drawing.click(view().toScene(x, y), vm.view().snapper(), snapVertices()).ifPresent(this::commitDrawing);
         }

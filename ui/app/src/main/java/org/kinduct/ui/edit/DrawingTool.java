@@ -67,6 +67,17 @@ public final class DrawingTool {
     }
 
     /**
+     * The second click of a double click: it finishes the shape where it lands on the last point
+     * placed; elsewhere it places a point like any click, since quick clicks at separate spots can
+     * count as one double click (the toolkit's distance allowance varies by platform).
+     */
+    public Optional<UnaryOperator<Scene>> doubleClick(Vec2 raw, Snapper snapper, List<Vec2> vertices) {
+        hover(raw, snapper, vertices);
+        Vec2 from = last();
+        return from != null && same(from, cursor.point()) ? finish() : addPoint(cursor.point());
+    }
+
+    /**
      * Numeric entry: "x, y" places a point at those coordinates; a single length places the next
      * point that far from the last one towards the cursor (or the radius of a circle, or along +x
      * when there is no direction yet).

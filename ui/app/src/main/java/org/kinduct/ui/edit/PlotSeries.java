@@ -10,6 +10,7 @@ import org.kinduct.render.paint.SheetTexts;
 import org.kinduct.solver.run.ResultScales;
 import org.kinduct.solver.run.RunResult;
 import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.units.Dimension;
@@ -86,6 +87,21 @@ public final class PlotSeries {
     }
 
     private PlotSeries() {
+    }
+
+    /**
+     * What to plot for {@code scene} when {@code shown} was chosen: a wire or loop quantity gives
+     * way to the pair voltages (the drag when there is no pair) in a scene of plates and channels
+     * alone, where it would have no line; anything else stays.
+     */
+    public static Quantity fitting(Scene scene, Quantity shown) {
+        List<Conductor> all = scene.conductors();
+        boolean sheetsOnly = !all.isEmpty() && all.stream().allMatch(c -> c instanceof Conductor.Sheet);
+        if (!sheetsOnly || shown.ofSheets() || shown.ofBodies()) {
+            return shown;
+        }
+        boolean pairs = all.stream().anyMatch(c -> !((Conductor.Sheet) c).pairs().isEmpty());
+        return pairs ? Quantity.PAIR_VOLTAGE : Quantity.DRAG;
     }
 
     /** The lines of {@code q} over the run's samples; free bodies are read from the samples. */

@@ -31,6 +31,7 @@ import org.kinduct.solver.Snapshot;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.SceneEdits;
 import org.kinduct.ui.edit.ShapeFactory;
+import org.kinduct.ui.edit.ToolKind;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
@@ -76,6 +77,13 @@ class PlateEditingTest {
                 v.screenY(y) - window.canvas().getHeight() / 2)).query();
     }
 
+    /** Picks a tool from the tool bar and checks it is the one drawing now. */
+    private void pick(FxRobot robot, String id, ToolKind kind) {
+        robot.clickOn(id);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(kind, vm.view().toolProperty().get(), id);
+    }
+
     private void clickAll(FxRobot robot, double[][] pts) {
         for (double[] p : pts) {
             robot.clickOn(screenOf(robot, p[0], p[1]));
@@ -104,15 +112,19 @@ class PlateEditingTest {
     @Test
     void aPlateWithAHoleAndTwoElectrodesGlidingPastTheMagnetReadsItsVoltagePlusElectrodeAndDrag(FxRobot robot)
             throws Exception {
-        robot.clickOn("#tool-plate");
+        pick(robot, "#tool-plate", ToolKind.PLATE);
         clickAll(robot, new double[][] {{-0.04, -0.02}, {0.04, -0.02}, {0.04, 0.02}, {-0.04, 0.02}, {-0.04, -0.02}});
         WaitForAsyncUtils.waitForFxEvents();
         Conductor.Plate plate = (Conductor.Plate) vm.scene().conductors().get(0);
         assertEquals("plate", plate.id());
-        robot.clickOn("#tool-hole");
+        assertEquals(1, vm.scene().conductors().size(), vm.statusProperty().get());
+        pick(robot, "#tool-hole", ToolKind.HOLE);
         // A slot beside the magnet, symmetric about y = 0 like the plate.
         clickAll(robot, new double[][] {{0.02, -0.01}, {0.03, -0.01}, {0.03, 0.01}, {0.02, 0.01}, {0.02, -0.01}});
-        robot.clickOn("#tool-electrode");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(1, ((Conductor.Plate) vm.scene().conductor("plate").orElseThrow()).holes().size(),
+                vm.statusProperty().get());
+        pick(robot, "#tool-electrode", ToolKind.ELECTRODE);
         clickAll(robot, new double[][] {{0, 0.0205}, {0, -0.0205}});
         robot.type(KeyCode.ESCAPE);
         WaitForAsyncUtils.waitForFxEvents();

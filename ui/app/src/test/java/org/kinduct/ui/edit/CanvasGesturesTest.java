@@ -359,4 +359,17 @@ class CanvasGesturesTest {
         Vec2 at = ((Conductor.Plate) vm.scene().conductor("p").orElseThrow()).electrodes().get(0).at();
         assertTrue(at.eq(new Vec2(0.04, 0.04), GEOMETRY_TOL), "drawn on the plate's top edge: " + at);
     }
+
+    @Test
+    void quickClicksAtSeparateSpotsThatCountAsADoubleClickStillPlaceTheirPoints() {
+        EditorViewModel vm = vm(Scene.empty("draw"));
+        CanvasGestures g = gestures(vm);
+        vm.view().toolProperty().set(ToolKind.LOOP);
+        click(vm, g, 0, 0, 1);
+        click(vm, g, 0.06, 0, 2);
+        assertTrue(vm.scene().conductors().isEmpty(), "a double click away from the last point is a click");
+        click(vm, g, 0.03, 0.05, 1);
+        click(vm, g, 0.03, 0.05, 2);
+        assertEquals(3, vm.scene().conductors().get(0).vertices().size());
+    }
 }

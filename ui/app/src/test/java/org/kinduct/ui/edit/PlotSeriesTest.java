@@ -152,4 +152,21 @@ class PlotSeriesTest {
                     voltage.get(0).values()[i], 0);
         }
     }
+
+    @Test
+    void aSceneOfPlatesAloneTurnsAWireQuantityIntoItsPairVoltagesOrDragAndOtherwiseTheChoiceStays() {
+        Scene plate = Scene.empty("plate").withConductors(List.of(new Conductor.Plate("plate", Body.FIXED,
+                List.of(new Vec2(0, 0), new Vec2(0.06, 0), new Vec2(0.06, 0.04), new Vec2(0, 0.04)), List.of(), 0.002,
+                ShapeFactory.PLATE_CONDUCTIVITY, List.of(), List.of(), java.util.OptionalDouble.empty())));
+        assertEquals(PlotSeries.Quantity.DRAG, PlotSeries.fitting(plate, PlotSeries.Quantity.EMF));
+        Scene paired = SheetEdits.addElectrode(SheetEdits.addElectrode(plate, "plate", new Vec2(0.03, 0), 1e-6),
+                "plate", new Vec2(0.03, 0.04), 1e-6);
+        assertEquals(PlotSeries.Quantity.PAIR_VOLTAGE, PlotSeries.fitting(paired, PlotSeries.Quantity.CURRENT));
+        assertEquals(PlotSeries.Quantity.DRAG, PlotSeries.fitting(paired, PlotSeries.Quantity.DRAG));
+        assertEquals(PlotSeries.Quantity.SPEED, PlotSeries.fitting(paired, PlotSeries.Quantity.SPEED));
+        Scene withLoop = paired.withConductors(List.of(paired.conductors().get(0),
+                Fixtures.loopAndMagnet().conductors().get(0)));
+        assertEquals(PlotSeries.Quantity.EMF, PlotSeries.fitting(withLoop, PlotSeries.Quantity.EMF));
+        assertEquals(PlotSeries.Quantity.EMF, PlotSeries.fitting(Scene.empty("none"), PlotSeries.Quantity.EMF));
+    }
 }
