@@ -3,6 +3,7 @@ package org.kinduct.ui.app;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import javafx.scene.control.Label;
 import org.kinduct.render.paint.SheetTexts;
 import org.kinduct.report.Labels;
 import org.kinduct.scene.Conductor;
@@ -32,6 +33,8 @@ final class SheetReadoutTable extends WideningTable<SheetReadoutTable.Row> {
         super(vm, r -> r.state().id());
         this.vm = vm;
         setId("sheet-readouts");
+        // Shown only with a plate or channel in the scene, so an empty table means its run is not in yet.
+        setPlaceholder(new Label("Solving…"));
         column("Plate /\nchannel", "The plate's or channel's id", r -> r.state().id());
         column("Drag,\nangle", "Force of the field on the eddy currents and its direction from +x (on a moving plate"
                 + " the drag; on a channel the force on the liquid)", r -> SheetTexts.drag(r.state(), scales));
