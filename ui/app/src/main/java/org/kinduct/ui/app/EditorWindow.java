@@ -1,6 +1,7 @@
 package org.kinduct.ui.app;
 
 import java.nio.file.Path;
+import java.util.EnumSet;
 import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.CompletableFuture;
@@ -22,6 +23,7 @@ import javafx.scene.control.Menu;
 import javafx.scene.control.MenuBar;
 import javafx.scene.control.MenuItem;
 import javafx.scene.control.ProgressIndicator;
+import javafx.scene.control.Separator;
 import javafx.scene.control.SeparatorMenuItem;
 import javafx.scene.control.Slider;
 import javafx.scene.control.SplitPane;
@@ -29,11 +31,11 @@ import javafx.scene.control.TextField;
 import javafx.scene.control.TextInputDialog;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
-import javafx.scene.control.ToolBar;
 import javafx.scene.control.Tooltip;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyCombination;
 import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
@@ -66,6 +68,8 @@ final class EditorWindow {
     static final Duration AUTOSAVE_EVERY = Duration.seconds(30);
     private static final double ROTATE_STEP_RAD = Math.toRadians(15);
     private static final double HELP_WIDTH_PX = 640;
+    /** The first tool of each group after the selection tool; a separator stands before each. */
+    private static final Set<ToolKind> GROUP_STARTS = EnumSet.of(ToolKind.WIRE, ToolKind.PATCH, ToolKind.PLATE);
 
     private final Stage stage;
     private final EditorViewModel vm;
@@ -114,11 +118,16 @@ final class EditorWindow {
         plotWhat.getItems().setAll(PlotSeries.Quantity.values());
         plotWhat.setValue(PlotSeries.Quantity.EMF);
         plotWhat.setOnAction(e -> plot.setQuantity(plotWhat.getValue()));
+        Runnable fit = () -> plotWhat.setValue(PlotSeries.fitting(vm.scene(), plotWhat.getValue()));
+        vm.document().sceneProperty().addListener((obs, old, scene) -> fit.run());
+        fit.run();
         VBox plotBox = new VBox(2, plotWhat, plot);
         VBox.setVgrow(plot, Priority.ALWAYS);
         ReadoutTable table = new ReadoutTable(vm);
-        VBox tableBox = new VBox(2, table, inductanceLine(), energyLine());
+        SheetReadoutTable sheets = new SheetReadoutTable(vm);
+        VBox tableBox = new VBox(2, table, sheets, inductanceLine(), energyLine());
         VBox.setVgrow(table, Priority.ALWAYS);
+        VBox.setVgrow(sheets, Priority.ALWAYS);
         SplitPane lower = new SplitPane(plotBox, tableBox);
         // The table's eight columns take more room than the plot needs.
         lower.setDividerPositions(0.34);
@@ -344,10 +353,19 @@ final class EditorWindow {
         return m;
     }
 
-    private ToolBar toolBar() {
-        ToolBar bar = new ToolBar();
+    /**
+     * The tools, in groups (selection; wires and loops; sources; plates and channels), wrapping
+     * onto a second row in a narrow window rather than hiding tools behind an overflow button.
+     */
+    private FlowPane toolBar() {
+        FlowPane bar = new FlowPane(4, 4);
+        bar.getStyleClass().add("tool-bar");
+        bar.setPadding(new Insets(4, 6, 4, 6));
         ToggleGroup tools = new ToggleGroup();
         for (ToolKind kind : ToolKind.values()) {
+            if (GROUP_STARTS.contains(kind)) {
+                bar.getChildren().add(new Separator(Orientation.VERTICAL));
+            }
             ToggleButton b = new ToggleButton(kind.label());
             b.setId("tool-" + kind.name().toLowerCase(Locale.ROOT).replace('_', '-'));
             b.setTooltip(new Tooltip(kind.help()));
@@ -361,7 +379,7 @@ final class EditorWindow {
                 canvas.requestFocus();
             });
             vm.view().toolProperty().addListener((obs, old, t) -> b.setSelected(t == kind));
-            bar.getItems().add(b);
+            bar.getChildren().add(b);
         }
         return bar;
     }

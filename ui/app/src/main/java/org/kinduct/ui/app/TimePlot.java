@@ -84,7 +84,12 @@ final class TimePlot extends Pane {
         if (vm.results().currentResult().isEmpty()) {
             return " — computing the run…";
         }
-        return quantity.ofBodies() ? " — no moving bodies" : " — no conductors";
+        return switch (quantity) {
+            case POSITION_X, POSITION_Y, SPEED -> " — no moving bodies";
+            case PAIR_VOLTAGE -> " — no electrode pairs";
+            case DRAG -> " — no plates or channels";
+            case EMF, CURRENT, FLUX, FORCE_X, FORCE_Y -> " — no wires or loops";
+        };
     }
 
     private void seek(double x) {

@@ -48,6 +48,8 @@ public final class CanvasGestures {
     private static final double BAND_MIN_PX = 3;
     /** Duplicates land this far (pixels) right of and below their originals. */
     private static final double DUPLICATE_OFFSET_PX = 20;
+    /** An electrode click this close to an edge (pixels) lands on it: twice a pick's reach, as an edge is a thin target. */
+    static final double ELECTRODE_REACH_PX = 2 * Picker.REACH_PX;
 
     private final EditorViewModel vm;
     private final Runnable viewMoving;
@@ -71,8 +73,8 @@ public final class CanvasGestures {
     public CanvasGestures(EditorViewModel vm, Runnable viewMoving) {
         this.vm = vm;
         this.viewMoving = viewMoving;
-        vm.view().toolProperty().addListener((obs, old, t) ->
-                drawing = t == ToolKind.SELECT ? null : new DrawingTool(t));
+        vm.view().toolProperty().addListener((obs, old, t) -> drawing = t == ToolKind.SELECT ? null
+                : t.onSheet() ? new DrawingTool(t, pts -> onSelectedSheet(t, pts)) : new DrawingTool(t));
     }
 
     // ---- mouse ----
@@ -178,14 +180,15 @@ public final class CanvasGestures {
         vertexHit = null;
     }
 
-    /** A click (press and release in place): places a point of the drawing; a double click finishes it. */
+    /** A click (press and release in place): places a point of the drawing; a double click on the last point finishes it. */
     public void clicked(double x, double y, Button button, int count) {
         if (drawing == null || button != Button.PRIMARY || spaceDown
                 || Math.hypot(x - pressX, y - pressY) > CLICK_SLOP_PX) {
             return;
         }
         if (count == 2) {
-            drawing.finish().ifPresent(this::commitDrawing);
+            drawing.doubleClick(view().toScene(x, y), vm.view().snapper(), snapVertices())
+                    .ifPresent(this::commitDrawing);
         } else {
             drawing.click(view().toScene(x, y), vm.view().snapper(), snapVertices()).ifPresent(this::commitDrawing);
         }
@@ -266,8 +269,36 @@ public final class CanvasGestures {
     }
 
     private void commitDrawing(UnaryOperator<Scene> edit) {
-        vm.document().add("Add " + drawing.kind().label().toLowerCase(Locale.ROOT), edit);
+        String label = "Add " + drawing.kind().label().toLowerCase(Locale.ROOT);
+        if (drawing.kind().onSheet()) {
+            // The sheet stays selected, so its next hole or electrode goes on it too.
+            vm.document().apply(label, edit);
+        } else {
+            vm.document().add(label, edit);
+        }
         drawing.cancel();
+    }
+
+    /**
+     * The edit a hole or electrode tool makes of its clicked points: on the one selected plate or
+     * channel, the points taken back to where it was drawn (its body may have moved by the time shown).
+     */
+    private UnaryOperator<Scene> onSelectedSheet(ToolKind kind, List<Vec2> pts) {
+        Placement seen = vm.seen();
+        Set<String> selected = Set.copyOf(vm.document().selection());
+        double reachM = ELECTRODE_REACH_PX / view().pxPerM();
+        return scene -> {
+            List<Conductor> sheets = scene.conductors().stream()
+                    .filter(c -> c instanceof Conductor.Sheet && selected.contains(c.id())).toList();
+            if (sheets.size() != 1) {
+                throw new IllegalArgumentException("select one " + (kind == ToolKind.HOLE ? "plate" : "plate or channel")
+                        + " first (" + sheets.size() + " selected)");
+            }
+            Conductor sheet = sheets.get(0);
+            List<Vec2> drawn = pts.stream().map(p -> seen.drawn(sheet.body(), p)).toList();
+            return kind == ToolKind.HOLE ? SheetEdits.addHole(scene, sheet.id(), drawn)
+                    : SheetEdits.addElectrode(scene, sheet.id(), drawn.get(0), reachM);
+        };
     }
 
     /** Adds every object lying wholly inside the band to the selection; a band too small to mean one adds nothing. */

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import java.util.function.Function;
 import java.util.function.UnaryOperator;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
@@ -21,14 +22,22 @@ public final class DrawingTool {
     private static final double SAME_POINT_M = 1e-9;
 
     private final ToolKind kind;
+    private final Function<List<Vec2>, UnaryOperator<Scene>> build;
     private final List<Vec2> points = new ArrayList<>();
     private Snapper.Snap cursor;
 
+    /** A tool that adds a new object ({@link ShapeFactory}). */
     public DrawingTool(ToolKind kind) {
+        this(kind, pts -> scene -> ShapeFactory.add(scene, kind, pts));
+    }
+
+    /** A tool whose finished points become the edit {@code build} makes of them (a hole, an electrode). */
+    public DrawingTool(ToolKind kind, Function<List<Vec2>, UnaryOperator<Scene>> build) {
         if (kind == ToolKind.SELECT) {
             throw new IllegalArgumentException("the selection tool does not draw");
         }
         this.kind = kind;
+        this.build = build;
     }
 
     public ToolKind kind() {
@@ -41,6 +50,11 @@ public final class DrawingTool {
 
     /** Updates the cursor; {@code vertices} are the existing vertices it may snap to. */
     public void hover(Vec2 raw, Snapper snapper, List<Vec2> vertices) {
+        if (kind.gesture() == ToolKind.Gesture.POINT) {
+            // A point tool (the electrode) snaps onto an edge when placed; the grid would pull it off.
+            cursor = new Snapper.Snap(raw, "");
+            return;
+        }
         // A rectangle's second corner is free in both axes: no 15° steps from the first one.
         Vec2 from = kind.gesture() == ToolKind.Gesture.RECTANGLE ? null : last();
         cursor = snapper.snap(raw, from, vertices);
@@ -50,6 +64,17 @@ public final class DrawingTool {
     public Optional<UnaryOperator<Scene>> click(Vec2 raw, Snapper snapper, List<Vec2> vertices) {
         hover(raw, snapper, vertices);
         return addPoint(cursor.point());
+    }
+
+    /**
+     * The second click of a double click: it finishes the shape where it lands on the last point
+     * placed; elsewhere it places a point like any click, since quick clicks at separate spots can
+     * count as one double click (the toolkit's distance allowance varies by platform).
+     */
+    public Optional<UnaryOperator<Scene>> doubleClick(Vec2 raw, Snapper snapper, List<Vec2> vertices) {
+        hover(raw, snapper, vertices);
+        Vec2 from = last();
+        return from != null && same(from, cursor.point()) ? finish() : addPoint(cursor.point());
     }
 
     /**
@@ -143,7 +168,7 @@ public final class DrawingTool {
 
     private UnaryOperator<Scene> edit(List<Vec2> pts) {
         points.clear();
-        return scene -> ShapeFactory.add(scene, kind, pts);
+        return build.apply(pts);
     }
 
     private Vec2 last() {

@@ -2,10 +2,13 @@ package org.kinduct.ui.edit;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
 import org.kinduct.scene.Body;
+import org.kinduct.scene.Conductivity;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.FieldGrid;
 import org.kinduct.scene.Material;
+import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -32,6 +35,13 @@ public final class ShapeFactory {
      * NOAA World Magnetic Model documentation; from memory).
      */
     public static final double BACKGROUND_BZ_T = -45e-6;
+    public static final double PLATE_THICKNESS_M = 0.002;
+    public static final Conductivity PLATE_CONDUCTIVITY = new Conductivity.OfMaterial(Material.ALUMINIUM, 20);
+    public static final double CHANNEL_WIDTH_M = 0.02;
+    public static final double CHANNEL_DEPTH_M = 0.01;
+    /** Tap water, 500 µS/cm (drinking water lies between about 50 and 1500 µS/cm; common practice). */
+    public static final double CHANNEL_SIGMA_S_PER_M = 0.05;
+    public static final double CHANNEL_SPEED_M_PER_S = 1;
     private static final int ROUND_LOOP_SEGMENTS = 36;
 
     private ShapeFactory() {
@@ -58,6 +68,12 @@ public final class ShapeFactory {
             case COIL -> SceneEdits.addSource(scene, coil(id, new Source.CoilShape.Polygon(pts)));
             case ROUND_COIL -> SceneEdits.addSource(scene,
                     coil(id, new Source.CoilShape.Circle(pts.get(0), radius(pts))));
+            case PLATE -> SceneEdits.addConductor(scene, new Conductor.Plate(id, Body.FIXED,
+                    Polygons.requireSimple(pts, "plate outline"), List.of(), PLATE_THICKNESS_M, PLATE_CONDUCTIVITY,
+                    List.of(), List.of(), OptionalDouble.empty()));
+            case CHANNEL -> SceneEdits.addConductor(scene, channel(id, pts.get(0), pts.get(1)));
+            case HOLE, ELECTRODE -> throw new IllegalArgumentException(kind.label()
+                    + " is drawn on the selected plate or channel, not as an object of its own");
             case SELECT -> throw new IllegalArgumentException("the selection tool draws nothing");
         };
     }
@@ -83,6 +99,9 @@ public final class ShapeFactory {
         if (pts.size() == 2 && kind.gesture() == ToolKind.Gesture.CIRCLE && radius(pts) > 0) {
             return circle(pts.get(0), radius(pts));
         }
+        if (pts.size() == 2 && kind == ToolKind.CHANNEL && radius(pts) > 0) {
+            return channel("preview", pts.get(0), pts.get(1)).outline();
+        }
         return pts;
     }
 
@@ -93,7 +112,9 @@ public final class ShapeFactory {
             case PATCH, RECT_PATCH -> "patch";
             case BLOCK_MAGNET, DISC_MAGNET -> "magnet";
             case COIL, ROUND_COIL -> "coil";
-            case SELECT -> "object";
+            case PLATE -> "plate";
+            case CHANNEL -> "channel";
+            case HOLE, ELECTRODE, SELECT -> "object";
         };
     }
 
@@ -106,6 +127,12 @@ public final class ShapeFactory {
         double h = Math.abs(b.y() - a.y());
         return new Source.BlockMagnet(id, Body.FIXED, a.plus(b).times(0.5), w, h, MAGNET_HEIGHT_M, 0,
                 MAGNET_STANDOFF_M, Source.Side.BELOW, MAGNET_REMANENCE_T, Source.Magnetization.PLUS_Z);
+    }
+
+    private static Conductor.Channel channel(String id, Vec2 start, Vec2 end) {
+        return new Conductor.Channel(id, Body.FIXED, start, end, CHANNEL_WIDTH_M, CHANNEL_DEPTH_M,
+                CHANNEL_SIGMA_S_PER_M, Conductor.Channel.Profile.PLUG, new MeanFlow.Steady(CHANNEL_SPEED_M_PER_S),
+                List.of(), List.of(), OptionalDouble.empty());
     }
 
     private static Source.SourceCoil coil(String id, Source.CoilShape shape) {

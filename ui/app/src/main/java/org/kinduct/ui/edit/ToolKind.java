@@ -12,10 +12,14 @@ public enum ToolKind {
     BLOCK_MAGNET("Block magnet", Gesture.RECTANGLE, "Click two opposite corners"),
     DISC_MAGNET("Disc magnet", Gesture.CIRCLE, "Click the centre, then a point on the rim"),
     COIL("Polygon coil", Gesture.POLYGON, "Click the outline; Enter closes it"),
-    ROUND_COIL("Round coil", Gesture.CIRCLE, "Click the centre, then a point on the rim");
+    ROUND_COIL("Round coil", Gesture.CIRCLE, "Click the centre, then a point on the rim"),
+    PLATE("Plate", Gesture.POLYGON, "Click the outline; click the first point or press Enter to close it"),
+    HOLE("Hole", Gesture.POLYGON, "Select a plate, then click a hole's outline strictly inside it; Enter closes it"),
+    CHANNEL("Channel", Gesture.SEGMENT, "Click the centreline's start, then its end (the flow runs that way)"),
+    ELECTRODE("Electrode", Gesture.POINT, "Select a plate or channel, then click near its edge");
 
     /** How a tool is drawn with the mouse. */
-    public enum Gesture { NONE, POLYLINE, POLYGON, RECTANGLE, CIRCLE }
+    public enum Gesture { NONE, POINT, SEGMENT, POLYLINE, POLYGON, RECTANGLE, CIRCLE }
 
     private final String label;
     private final Gesture gesture;
@@ -39,15 +43,25 @@ public enum ToolKind {
         return help;
     }
 
-    /** Points that finish the gesture by themselves (rectangle, circle), or 0 when the user finishes it. */
+    /** Points that finish the gesture by themselves (point, segment, rectangle, circle), or 0 when the user finishes it. */
     public int fixedPoints() {
-        return gesture == Gesture.RECTANGLE || gesture == Gesture.CIRCLE ? 2 : 0;
+        return switch (gesture) {
+            case POINT -> 1;
+            case SEGMENT, RECTANGLE, CIRCLE -> 2;
+            case POLYLINE, POLYGON, NONE -> 0;
+        };
+    }
+
+    /** Whether the tool draws on the selected plate or channel rather than adding an object. */
+    public boolean onSheet() {
+        return this == HOLE || this == ELECTRODE;
     }
 
     /** Fewest points the finished shape needs. */
     public int minPoints() {
         return switch (gesture) {
-            case POLYLINE, RECTANGLE, CIRCLE -> 2;
+            case POINT -> 1;
+            case SEGMENT, POLYLINE, RECTANGLE, CIRCLE -> 2;
             case POLYGON -> 3;
             case NONE -> 0;
         };

@@ -17,9 +17,11 @@ import org.kinduct.render.paint.Picture;
 import org.kinduct.render.view.ViewTransform;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Motion;
 import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
+import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.ui.edit.CanvasGestures.Button;
 import org.kinduct.ui.edit.CanvasGestures.Key;
@@ -280,5 +282,94 @@ class CanvasGesturesTest {
         Conductor copy = vm.scene().conductors().get(2);
         Vec2 shift = copy.vertices().get(0).at().minus(firstVertex(vm.scene(), "a"));
         assertTrue(shift.eq(new Vec2(20 / VIEW.pxPerM(), -20 / VIEW.pxPerM()), GEOMETRY_TOL), "shift " + shift);
+    }
+
+    /** Clicks the points in turn, then the first one again. */
+    private static void outline(EditorViewModel vm, CanvasGestures g, double[][] pts) {
+        for (double[] p : pts) {
+            click(vm, g, p[0], p[1], 1);
+        }
+        click(vm, g, pts[0][0], pts[0][1], 1);
+    }
+
+    private static Conductor.Plate plate(EditorViewModel vm) {
+        return assertInstanceOf(Conductor.Plate.class, vm.scene().conductors().get(0));
+    }
+
+    @Test
+    void aPlateIsClosedOnItsFirstPointThenTheHoleAndElectrodeToolsWorkOnItAndAMissIsRefusedLosingNothing() {
+        EditorViewModel vm = vm(Scene.empty("plate").withTime(new TimeSpan(0, 0.01, 0.01)));
+        CanvasGestures g = gestures(vm);
+        vm.view().toolProperty().set(ToolKind.PLATE);
+        outline(vm, g, new double[][] {{-0.04, -0.02}, {0.04, -0.02}, {0.04, 0.02}, {-0.04, 0.02}});
+        Conductor.Plate plate = plate(vm);
+        assertEquals(0.08 * 0.04, Polygons.signedArea(plate.outline()), GEOMETRY_TOL);
+        assertEquals(ShapeFactory.PLATE_THICKNESS_M, plate.thicknessM());
+        assertEquals(Set.of(plate.id()), vm.document().selection(), "the new plate is selected");
+
+        vm.view().toolProperty().set(ToolKind.HOLE);
+        outline(vm, g, new double[][] {{-0.01, -0.01}, {0.01, -0.01}, {0.01, 0.01}, {-0.01, 0.01}});
+        assertEquals(1, plate(vm).holes().size());
+        assertEquals(0.02 * 0.02, Polygons.signedArea(plate(vm).holes().get(0)), GEOMETRY_TOL);
+        assertEquals(Set.of(plate.id()), vm.document().selection(), "the plate stays selected for its electrodes");
+
+        vm.view().toolProperty().set(ToolKind.ELECTRODE);
+        // 1 mm and 1.5 mm off the edges (2 and 3 px), not on the grid: they land on the edges.
+        click(vm, g, 0.0003, 0.021, 1);
+        click(vm, g, 0.0003, -0.0215, 1);
+        List<Conductor.Electrode> electrodes = plate(vm).electrodes();
+        assertTrue(electrodes.get(0).at().eq(new Vec2(0.0003, 0.02), GEOMETRY_TOL), "" + electrodes);
+        assertTrue(electrodes.get(1).at().eq(new Vec2(0.0003, -0.02), GEOMETRY_TOL), "" + electrodes);
+        assertEquals(List.of(new Conductor.ElectrodePair("e1", "e2")), plate(vm).pairs());
+
+        Scene before = vm.scene();
+        // 15 mm (30 px) from the outline and the hole alike.
+        click(vm, g, 0.025, 0, 1);
+        assertSame(before, vm.scene(), "a miss changes nothing");
+        assertTrue(vm.statusProperty().get().startsWith("Add electrode refused: click on the edge"),
+                vm.statusProperty().get());
+        vm.view().toolProperty().set(ToolKind.HOLE);
+        outline(vm, g, new double[][] {{0.03, 0}, {0.05, 0}, {0.05, 0.01}});
+        assertSame(before, vm.scene(), "a hole across the outline changes nothing");
+        assertTrue(vm.statusProperty().get().startsWith("Add hole refused: a hole must lie strictly inside"),
+                vm.statusProperty().get());
+        vm.document().undo();
+        assertTrue(plate(vm).pairs().isEmpty() && plate(vm).electrodes().size() == 1, "each electrode is one edit");
+    }
+
+    @Test
+    void onAMovedPlateAnElectrodeLandsWhereTheClickIsOnScreenAndTheHoleToolWantsAPlate() {
+        Conductor.Plate drawn = new Conductor.Plate("p", "cart", List.of(new Vec2(0, 0), new Vec2(0.06, 0),
+                new Vec2(0.06, 0.04), new Vec2(0, 0.04)), List.of(), 0.002, ShapeFactory.PLATE_CONDUCTIVITY, List.of(),
+                List.of(), java.util.OptionalDouble.empty());
+        Scene s = Scene.empty("moving plate").withTime(new TimeSpan(0, 0.2, 0.1))
+                .withBodies(List.of(new Body("cart", "cart", Vec2.ZERO, new Motion.Glide(new Vec2(0.1, 0)))))
+                .withConductors(List.of(drawn));
+        EditorViewModel vm = vm(s);
+        CanvasGestures g = gestures(vm);
+        vm.view().toolProperty().set(ToolKind.HOLE);
+        outline(vm, g, new double[][] {{0.02, 0.01}, {0.04, 0.01}, {0.03, 0.03}});
+        assertTrue(vm.statusProperty().get().contains("select one plate first"), vm.statusProperty().get());
+
+        vm.clock().seek(0.1);
+        vm.document().select(Set.of("p"));
+        vm.view().toolProperty().set(ToolKind.ELECTRODE);
+        // Seen 10 mm to the right of where it was drawn.
+        click(vm, g, 0.05, 0.0405, 1);
+        Vec2 at = ((Conductor.Plate) vm.scene().conductor("p").orElseThrow()).electrodes().get(0).at();
+        assertTrue(at.eq(new Vec2(0.04, 0.04), GEOMETRY_TOL), "drawn on the plate's top edge: " + at);
+    }
+
+    @Test
+    void quickClicksAtSeparateSpotsThatCountAsADoubleClickStillPlaceTheirPoints() {
+        EditorViewModel vm = vm(Scene.empty("draw"));
+        CanvasGestures g = gestures(vm);
+        vm.view().toolProperty().set(ToolKind.LOOP);
+        click(vm, g, 0, 0, 1);
+        click(vm, g, 0.06, 0, 2);
+        assertTrue(vm.scene().conductors().isEmpty(), "a double click away from the last point is a click");
+        click(vm, g, 0.03, 0.05, 1);
+        click(vm, g, 0.03, 0.05, 2);
+        assertEquals(3, vm.scene().conductors().get(0).vertices().size());
     }
 }

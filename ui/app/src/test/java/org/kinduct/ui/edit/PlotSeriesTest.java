@@ -124,4 +124,49 @@ class PlotSeriesTest {
         }
         assertTrue(text.contains("work in 1.00 mJ"), text);
     }
+
+    @Test
+    void aPlateInAUniformFieldPlotsTheRodEmfAcrossItsElectrodesAndNoDrag() {
+        // 60 mm × 40 mm plate gliding along +x at 1 m/s through a uniform 0.1 T, electrodes on its top and bottom edges.
+        Scene s = Scene.empty("plate").withSources(List.of(new org.kinduct.scene.Source.UniformField("b", 0.1)))
+                .withConductors(List.of(new Conductor.Plate("plate", Body.FIXED, List.of(new Vec2(0, 0),
+                        new Vec2(0.06, 0), new Vec2(0.06, 0.04), new Vec2(0, 0.04)), List.of(), 0.002,
+                        ShapeFactory.PLATE_CONDUCTIVITY, List.of(), List.of(), java.util.OptionalDouble.empty())));
+        s = SheetEdits.addElectrode(s, "plate", new Vec2(0.03, 0.04), 1e-6);
+        s = SheetEdits.addElectrode(s, "plate", new Vec2(0.03, 0), 1e-6);
+        s = SceneEdits.setMotion(s, "plate", new Motion.Glide(new Vec2(1, 0)), Vec2.ZERO);
+        RunResult run = run(s, new TimeSpan(0, 0.02, 0.01));
+        List<PlotSeries.Line> voltage = PlotSeries.lines(run, Set.of(), PlotSeries.Quantity.PAIR_VOLTAGE);
+        assertEquals(1, voltage.size());
+        assertEquals("plate: e1 − e2", voltage.get(0).id());
+        for (double v : voltage.get(0).values()) {
+            // v × B = (0, −v·B) drives charge to −y: φ(top) − φ(bottom) = −B·L·v (Griffiths (2013) §7.1.3).
+            assertEquals(-0.1 * 0.04 * 1, v, 1e-9 * 0.004);
+        }
+        List<PlotSeries.Line> drag = PlotSeries.lines(run, Set.of("plate"), PlotSeries.Quantity.DRAG);
+        assertEquals(List.of("plate"), drag.stream().map(PlotSeries.Line::id).toList());
+        for (int i = 0; i < run.samples().size(); i++) {
+            // No eddy current in a uniform field, hence no drag (same reference).
+            assertEquals(0, drag.get(0).values()[i], 1e-9);
+            assertEquals(run.samples().get(i).sheet("plate").orElseThrow().pairs().get(0).voltageV(),
+                    voltage.get(0).values()[i], 0);
+        }
+    }
+
+    @Test
+    void aSceneOfPlatesAloneTurnsAWireQuantityIntoItsPairVoltagesOrDragAndOtherwiseTheChoiceStays() {
+        Scene plate = Scene.empty("plate").withConductors(List.of(new Conductor.Plate("plate", Body.FIXED,
+                List.of(new Vec2(0, 0), new Vec2(0.06, 0), new Vec2(0.06, 0.04), new Vec2(0, 0.04)), List.of(), 0.002,
+                ShapeFactory.PLATE_CONDUCTIVITY, List.of(), List.of(), java.util.OptionalDouble.empty())));
+        assertEquals(PlotSeries.Quantity.DRAG, PlotSeries.fitting(plate, PlotSeries.Quantity.EMF));
+        Scene paired = SheetEdits.addElectrode(SheetEdits.addElectrode(plate, "plate", new Vec2(0.03, 0), 1e-6),
+                "plate", new Vec2(0.03, 0.04), 1e-6);
+        assertEquals(PlotSeries.Quantity.PAIR_VOLTAGE, PlotSeries.fitting(paired, PlotSeries.Quantity.CURRENT));
+        assertEquals(PlotSeries.Quantity.DRAG, PlotSeries.fitting(paired, PlotSeries.Quantity.DRAG));
+        assertEquals(PlotSeries.Quantity.SPEED, PlotSeries.fitting(paired, PlotSeries.Quantity.SPEED));
+        Scene withLoop = paired.withConductors(List.of(paired.conductors().get(0),
+                Fixtures.loopAndMagnet().conductors().get(0)));
+        assertEquals(PlotSeries.Quantity.EMF, PlotSeries.fitting(withLoop, PlotSeries.Quantity.EMF));
+        assertEquals(PlotSeries.Quantity.EMF, PlotSeries.fitting(Scene.empty("none"), PlotSeries.Quantity.EMF));
+    }
 }

@@ -23,6 +23,7 @@ import org.kinduct.render.paint.LineChart;
 import org.kinduct.render.paint.Picture;
 import org.kinduct.render.paint.Quantities;
 import org.kinduct.render.paint.ScenePainter;
+import org.kinduct.render.paint.SheetTexts;
 import org.kinduct.render.paint.Surface;
 import org.kinduct.render.paint.TextMetrics;
 import org.kinduct.render.view.ViewTransform;
@@ -394,20 +395,15 @@ final class SnapshotPage {
 
     /** A plate's or channel's row: id, force with its direction, torque, Joule power, peak |J|, Rm. */
     private static String[] sheetRow(SheetState st, ResultScales scales) {
-        Vec2 force = scales.force(st.forceN());
-        double f = force.length();
-        return new String[] {st.id(), Quantities.force(f) + (f > 0 ? " ∠ " + Labels.direction(force) : ""),
-            Quantities.torque(scales.torque(st.torqueNm())), Quantities.power(scales.power(st.joulePowerW())),
-            Quantities.currentDensity(st.peakCurrentDensityAPerM2()),
-            String.format(Locale.ROOT, "%.2g", st.magneticReynolds()) + (st.beyondResistiveLimit() ? " !" : "")};
+        return new String[] {st.id(), SheetTexts.drag(st, scales), SheetTexts.torque(st, scales),
+            SheetTexts.joule(st, scales), SheetTexts.peakCurrentDensity(st),
+            SheetTexts.reynolds(st) + (st.beyondResistiveLimit() ? " !" : "")};
     }
 
     /** An electrode pair's row: conductor and electrodes, voltage, + electrode, share of B·w·v̄ (channels). */
     private static String[] pairRow(SheetState st, SheetState.Pair p, ResultScales scales) {
-        return new String[] {st.id() + ": " + p.plus() + " − " + p.minus(),
-            Quantities.voltage(scales.emf(p.voltageV())) + (st.inducedFieldIncluded() ? "" : " *"),
-            Labels.positiveElectrode(p.positive()), Double.isNaN(p.endShortingRatio()) ? NOT_APPLICABLE
-                    : String.format(Locale.ROOT, "%.1f %%", 100 * p.endShortingRatio())};
+        return new String[] {st.id() + ": " + SheetTexts.pair(p), SheetTexts.voltage(st, p, scales),
+            Labels.positiveElectrode(p.positive()), SheetTexts.endShorting(p)};
     }
 
     /** Widest cell per column, header in bold. */
