@@ -23,7 +23,7 @@ public final class SourcePainter {
     }
 
     /**
-     * Draws the sources; returns their labels (a patch's ⊙/⊗ and B_z, a magnet's pole), to be
+     * Draws the sources; returns their labels (a patch's ⊙/⊗ and B_z, a magnet's pole, a coil's turns), to be
      * placed once conductors and their arrows have claimed their room, so a conductor crossing a
      * source's centre neither runs through its label nor hides it.
      */
@@ -77,7 +77,8 @@ public final class SourcePainter {
                     s.strokePath();
                     s.dash();
                     coilArrows(s, v, outline, coil.drive().dcA() + coil.drive().amplitudeA() >= 0);
-                    label(s, v, centroid(outline), coil.turns() + " turns", 0);
+                    Vec2 c = centroid(outline);
+                    labels.add(() -> turnsLabel(s, placer, v.screenX(c.x()), v.screenY(c.y()), coil.turns()));
                     return null;
                 }
 
@@ -257,6 +258,22 @@ public final class SourcePainter {
         s.fill(Palette.INK);
         s.text(pole, b.centerX(), b.centerY() - 1, 15, true, Surface.Anchor.BOTTOM_CENTER);
         s.text(moment, b.centerX(), b.centerY() + 1, 11, false, Surface.Anchor.TOP_CENTER);
+    }
+
+    /**
+     * A coil's turn count in the free box nearest its centre (cx, cy), off the conductors that may
+     * cross it; none when the centre is out of view (a floor coil around the whole scene).
+     */
+    private static void turnsLabel(Surface s, LabelPlacer placer, double cx, double cy, int turns) {
+        if (cx < 0 || cy < 0 || cx > s.width() || cy > s.height()) {
+            return;
+        }
+        String text = turns + " turns";
+        LabelPlacer.Box b = placer.placeAround(cx, cy, s.textWidth(text, 11, false) + 6, 14);
+        s.fill(0xC0FFFFFF);
+        s.fillRect(b.x(), b.y(), b.w(), b.h());
+        s.fill(Palette.INK);
+        s.text(text, b.centerX(), b.centerY(), 11, false, Surface.Anchor.CENTER);
     }
 
     private static void coilArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward) {

@@ -180,6 +180,24 @@ class SourceLabelTest {
     }
 
     @Test
+    void aWireAcrossACoilsCentreDoesNotRunThroughItsTurnCount() {
+        Source.SourceCoil coil = new Source.SourceCoil("floor", Body.FIXED,
+                new Source.CoilShape.Circle(Vec2.ZERO, 0.1), 10, -0.3, Source.Drive.dc(1));
+        Scene scene = Scene.empty("t").withSources(List.of(coil))
+                .withConductors(List.of(wire(new Vec2(-0.1, 0), new Vec2(0.1, 0))));
+        List<TextBox> turns = named(texts(scene), "10 turns");
+        assertEquals(1, turns.size(), turns.toString());
+        assertFalse(turns.get(0).touches(new Vec2(-0.1, 0), new Vec2(0.1, 0)), turns + " lies on the wire");
+    }
+
+    @Test
+    void aCoilWhoseCentreIsOutOfViewHasNoTurnCountAtTheEdge() {
+        Source.SourceCoil coil = new Source.SourceCoil("floor", Body.FIXED,
+                new Source.CoilShape.Circle(new Vec2(1, 0), 0.9), 10, -0.3, Source.Drive.dc(1));
+        assertEquals(List.of(), named(texts(Scene.empty("t").withSources(List.of(coil))), "10 turns"));
+    }
+
+    @Test
     void aVelocityArrowFromAFieldPatchsCentreDoesNotRunThroughItsMark() {
         Source.FieldPatch patch = new Source.FieldPatch("gap", Body.FIXED, List.of(new Vec2(-0.02, -0.025),
                 new Vec2(0.02, -0.025), new Vec2(0.02, 0.025), new Vec2(-0.02, 0.025)), 0.5);
