@@ -108,7 +108,7 @@ final class ReadoutTable extends TableView<ReadoutTable.Row> {
     private void show() {
         Snapshot snap = vm.results().snapshot();
         Scene scene = vm.scene();
-        placeholder.setText(scene.conductors().isEmpty() ? "No conductors: draw a wire or a loop" : "Solving…");
+        placeholder.setText(emptyNote(scene));
         if (snap == null) {
             rows.clear();
             // Another scene is coming (or nothing could be solved): its rows size the columns afresh.
@@ -127,6 +127,20 @@ final class ReadoutTable extends TableView<ReadoutTable.Row> {
             rows.setAll(now);
         }
         widen(now);
+    }
+
+    /**
+     * Why the table has no rows: its rows are wires and loops only, so a scene of plates and channels
+     * alone is told where their figures are rather than left "solving" for good.
+     */
+    private static String emptyNote(Scene scene) {
+        boolean filaments = scene.conductors().stream()
+                .anyMatch(c -> c instanceof Conductor.Wire || c instanceof Conductor.Loop);
+        if (filaments) {
+            return "Solving…";
+        }
+        return scene.conductors().isEmpty() ? "No conductors: draw a wire or a loop"
+                : "No wires or loops: drag and heat of plates and channels are in their callouts";
     }
 
     /** Widens each column to its heading and widest text now shown. */

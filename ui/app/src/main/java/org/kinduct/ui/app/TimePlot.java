@@ -74,7 +74,7 @@ final class TimePlot extends Pane {
         if (vm.results().currentResult().isEmpty()) {
             return " — computing the run…";
         }
-        return quantity.ofBodies() ? " — no moving bodies" : " — no conductors";
+        return quantity.ofBodies() ? " — no moving bodies" : " — no wires or loops";
     }
 
     private void seek(double x) {

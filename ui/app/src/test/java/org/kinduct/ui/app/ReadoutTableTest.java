@@ -123,4 +123,21 @@ class ReadoutTableTest {
             }
         }
     }
+
+    /** Plates and channels have no rows here: once solved, the table says where their figures are. */
+    @Test
+    void aSceneOfPlatesAloneSaysWhereTheirFiguresAreInsteadOfSolvingForGood() throws Exception {
+        Conductor.Plate plate = new Conductor.Plate("plate", Body.FIXED, List.of(new Vec2(-0.02, -0.01),
+                new Vec2(0.02, -0.01), new Vec2(0.02, 0.01), new Vec2(-0.02, 0.01)), List.of(), 0.002,
+                new org.kinduct.scene.Conductivity.OfMaterial(org.kinduct.scene.Material.ALUMINIUM, 20), List.of(),
+                List.of(), java.util.OptionalDouble.empty());
+        Platform.runLater(() -> vm.load(new Scene("plate", "", List.of(), List.of(), List.of(plate),
+                new TimeSpan(0, 0.01, 0.01)), null, false));
+        WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, () -> vm.scene().conductor("plate").isPresent()
+                && vm.results().snapshot() != null);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(table.getItems().isEmpty());
+        assertEquals("No wires or loops: drag and heat of plates and channels are in their callouts",
+                ((Label) table.getPlaceholder()).getText());
+    }
 }
