@@ -186,6 +186,7 @@ class UnitsTest {
                 Arguments.of(4700.0, RESISTANCE, "4.70 kΩ"),
                 Arguments.of(2e-7, INERTIA, "2.00 g·cm²"),
                 Arguments.of(5000.0, STIFFNESS, "5.00 N/mm"),
+                Arguments.of(1.31e-9, Dimension.POWER, "1.31 nW"),
                 Arguments.of(Double.NaN, LENGTH, "NaN m"),
                 Arguments.of(Double.NEGATIVE_INFINITY, VOLTAGE, "−∞ V"));
     }

@@ -141,13 +141,25 @@ final class SolveJsonMetrics {
         return c - (c - b) * (c - b) / ((c - b) - (b - a));
     }
 
-    /** Largest |DFT| bin above zero of the mean-free signal zero-padded to the power of two ≥ 8n, by direct summation. */
+    /**
+     * Largest |DFT| bin above zero of the mean-free signal zero-padded to the power of two ≥ 8n, by direct
+     * summation; 0 for a steady signal, whose spread about the mean is below 1e-9 of its largest value.
+     */
     private static double dominantFrequency(double[] x, double dt) {
         int n = x.length;
         int size = Integer.highestOneBit(8 * n - 1) << 1;
         double mean = 0;
         for (double v : x) {
             mean += v / n;
+        }
+        double spread = 0;
+        double largestValue = 0;
+        for (double v : x) {
+            spread = Math.max(spread, Math.abs(v - mean));
+            largestValue = Math.max(largestValue, Math.abs(v));
+        }
+        if (spread < 1e-9 * largestValue) {
+            return 0;
         }
         int best = 0;
         double largest = 0;

@@ -61,7 +61,8 @@ public final class RunSummary {
         List<String> parts = new ArrayList<>();
         for (MetricKind k : kinds) {
             double v = k.of(run, id);
-            if (!Double.isFinite(v) || k == MetricKind.PEAK_TIME) {
+            // A steady EMF has no frequency to tell (0 Hz by the metric's definition).
+            if (!Double.isFinite(v) || k == MetricKind.PEAK_TIME || (k == MetricKind.DOMINANT_FREQUENCY && v == 0)) {
                 continue;
             }
             String text = name(k) + " " + Units.format(v, k.dimension());

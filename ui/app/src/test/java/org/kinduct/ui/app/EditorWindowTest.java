@@ -287,13 +287,17 @@ class EditorWindowTest {
     }
 
     @Test
-    void theWindowTitleFollowsOpenEditAndSave() throws Exception {
+    void theWindowTitleFollowsOpenEditSaveNewAndOpenAgain() throws Exception {
         assertTrue(onFx(() -> window.files().openDemo(org.kinduct.demo.Demos.resource("rail-sled").orElseThrow())));
         assertEquals("Sled on rails crossing a pole gap — Kinduct", stage.getTitle());
         interact(() -> vm.document().apply("Rename", s -> s.withText("sled", s.description())));
         assertEquals("• sled — Kinduct", stage.getTitle());
         Path file = home.resolve("sled.json");
         assertTrue(onFx(() -> window.files().saveTo(file)));
+        assertEquals("sled — sled.json — Kinduct", stage.getTitle());
+        interact(() -> window.files().newScene());
+        assertEquals("untitled — Kinduct", stage.getTitle());
+        assertTrue(onFx(() -> window.files().open(file)));
         assertEquals("sled — sled.json — Kinduct", stage.getTitle());
     }
 

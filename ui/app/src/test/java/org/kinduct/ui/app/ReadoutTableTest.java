@@ -123,4 +123,20 @@ class ReadoutTableTest {
             }
         }
     }
+
+    /** Plates and channels have no rows here: with them alone the table steps aside for theirs, never "solving" for good. */
+    @Test
+    void aSceneOfPlatesAloneLeavesTheWireTableToTheirOwn() throws Exception {
+        Conductor.Plate plate = new Conductor.Plate("plate", Body.FIXED, List.of(new Vec2(-0.02, -0.01),
+                new Vec2(0.02, -0.01), new Vec2(0.02, 0.01), new Vec2(-0.02, 0.01)), List.of(), 0.002,
+                new org.kinduct.scene.Conductivity.OfMaterial(org.kinduct.scene.Material.ALUMINIUM, 20), List.of(),
+                List.of(), java.util.OptionalDouble.empty());
+        Platform.runLater(() -> vm.load(new Scene("plate", "", List.of(), List.of(), List.of(plate),
+                new TimeSpan(0, 0.01, 0.01)), null, false));
+        WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, () -> vm.scene().conductor("plate").isPresent()
+                && vm.results().snapshot() != null);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(table.getItems().isEmpty());
+        assertFalse(table.isVisible(), "the plate's own table shows its figures");
+    }
 }

@@ -265,15 +265,7 @@ final class ConductorPainter {
             double h = lines.length * lineH + 6;
             LabelPlacer.Box b = placer.place(ax, ay, w, h);
             labels.add(() -> {
-                double lx = Math.max(b.x(), Math.min(b.x() + b.w(), ax));
-                double ly = Math.max(b.y(), Math.min(b.y() + b.h(), ay));
-                s.stroke(Palette.LABEL_EDGE);
-                s.lineWidth(1);
-                s.dash();
-                s.beginPath();
-                s.moveTo(lx, ly);
-                s.lineTo(ax, ay);
-                s.strokePath();
+                Glyphs.leader(s, b, ax, ay);
                 s.fill(Palette.LABEL_BOX);
                 s.fillRect(b.x(), b.y(), b.w(), b.h());
                 s.stroke(Palette.LABEL_EDGE);

@@ -26,6 +26,17 @@ final class Glyphs {
         }
     }
 
+    /** A thin line from the nearest point of a placed label's box to the anchor (ax, ay) it names. */
+    static void leader(Surface s, LabelPlacer.Box b, double ax, double ay) {
+        s.stroke(Palette.LABEL_EDGE);
+        s.lineWidth(1);
+        s.dash();
+        s.beginPath();
+        s.moveTo(b.nearestX(ax), b.nearestY(ay));
+        s.lineTo(ax, ay);
+        s.strokePath();
+    }
+
     /** Filled arrowhead with its tip at (x, y) pointing along (dx, dy) (a unit vector, screen). */
     static void arrowHead(Surface s, double x, double y, double dx, double dy, double size) {
         double bx = x - dx * size;

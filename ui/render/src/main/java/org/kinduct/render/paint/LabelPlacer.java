@@ -22,6 +22,20 @@ public final class LabelPlacer {
             return ox > 0 && oy > 0 ? ox * oy : 0;
         }
 
+        /** The point of this box nearest (px, py): where a leader to that point leaves it. */
+        public double nearestX(double px) {
+            return Math.max(x, Math.min(x + w, px));
+        }
+
+        public double nearestY(double py) {
+            return Math.max(y, Math.min(y + h, py));
+        }
+
+        /** Distance from (px, py) to this box, 0 inside it. */
+        public double distanceTo(double px, double py) {
+            return Math.hypot(px - nearestX(px), py - nearestY(py));
+        }
+
         public double centerX() {
             return x + w / 2;
         }

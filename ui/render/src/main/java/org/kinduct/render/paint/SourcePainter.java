@@ -16,12 +16,14 @@ public final class SourcePainter {
     private static final double PATCH_MARK_H = 34;
     /** Height of a magnet's pole label: the 15 px pole letter above the 11 px magnetization. */
     private static final double POLE_LABEL_H = 30;
+    /** A pole label this far from its magnet's centre or farther gets a leader: nearer, it plainly sits on it. */
+    private static final double LEADER_MIN_PX = 8;
 
     private SourcePainter() {
     }
 
     /**
-     * Draws the sources; returns their labels (a patch's ⊙/⊗ and B_z, a magnet's pole), to be
+     * Draws the sources; returns their labels (a patch's ⊙/⊗ and B_z, a magnet's pole, a coil's turns), to be
      * placed once conductors and their arrows have claimed their room, so a conductor crossing a
      * source's centre neither runs through its label nor hides it.
      */
@@ -75,7 +77,8 @@ public final class SourcePainter {
                     s.strokePath();
                     s.dash();
                     coilArrows(s, v, outline, coil.drive().dcA() + coil.drive().amplitudeA() >= 0);
-                    label(s, v, centroid(outline), coil.turns() + " turns", 0);
+                    Vec2 c = centroid(outline);
+                    labels.add(() -> turnsLabel(s, placer, v.screenX(c.x()), v.screenY(c.y()), coil.turns()));
                     return null;
                 }
 
@@ -230,7 +233,9 @@ public final class SourcePainter {
     /**
      * The face the viewer sees (+z side), N for a magnet magnetized towards +z, in the free box
      * nearest its centre (cx, cy): whole on the surface, off conductors; on a light box where it
-     * had to leave the centre. A magnet whose centre is out of view gets none.
+     * had to leave the centre, with a leader to a dot on the centre where the box has moved away
+     * from it, so a label pushed aside by plates or callouts still names its own magnet. A magnet whose
+     * centre is out of view gets none.
      */
     private static void poleLabel(Surface s, LabelPlacer placer, double cx, double cy, Source.Magnetization north) {
         if (cx < 0 || cy < 0 || cx > s.width() || cy > s.height()) {
@@ -242,12 +247,33 @@ public final class SourcePainter {
         double w = Math.max(s.textWidth(pole, 15, true), s.textWidth(moment, 11, false)) + 6;
         LabelPlacer.Box b = placer.placeAround(cx, cy, w, POLE_LABEL_H);
         if (Math.abs(b.centerX() - cx) > 0.5 || Math.abs(b.centerY() - cy) > 0.5) {
+            if (b.distanceTo(cx, cy) > LEADER_MIN_PX) {
+                Glyphs.leader(s, b, cx, cy);
+                s.fill(Palette.LABEL_EDGE);
+                s.fillOval(cx, cy, 2.5);
+            }
             s.fill(0xC0FFFFFF);
             s.fillRect(b.x(), b.y(), b.w(), b.h());
         }
         s.fill(Palette.INK);
         s.text(pole, b.centerX(), b.centerY() - 1, 15, true, Surface.Anchor.BOTTOM_CENTER);
         s.text(moment, b.centerX(), b.centerY() + 1, 11, false, Surface.Anchor.TOP_CENTER);
+    }
+
+    /**
+     * A coil's turn count in the free box nearest its centre (cx, cy), off the conductors that may
+     * cross it; none when the centre is out of view (a floor coil around the whole scene).
+     */
+    private static void turnsLabel(Surface s, LabelPlacer placer, double cx, double cy, int turns) {
+        if (cx < 0 || cy < 0 || cx > s.width() || cy > s.height()) {
+            return;
+        }
+        String text = turns + " turns";
+        LabelPlacer.Box b = placer.placeAround(cx, cy, s.textWidth(text, 11, false) + 6, 14);
+        s.fill(0xC0FFFFFF);
+        s.fillRect(b.x(), b.y(), b.w(), b.h());
+        s.fill(Palette.INK);
+        s.text(text, b.centerX(), b.centerY(), 11, false, Surface.Anchor.CENTER);
     }
 
     private static void coilArrows(Surface s, ViewTransform v, List<Vec2> pts, boolean forward) {

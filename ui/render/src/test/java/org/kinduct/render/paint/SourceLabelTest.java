@@ -39,17 +39,41 @@ class SourceLabelTest {
         }
     }
 
+    /** What the painter drew: texts, straight segments (screen px) and filled dots' centres. */
+    private record Drawing(List<TextBox> texts, List<double[]> segments, List<double[]> dots) {
+    }
+
     private static List<TextBox> texts(Scene scene) {
         return texts(scene, LAYERS);
     }
 
     private static List<TextBox> texts(Scene scene, EnumSet<Layer> layers) {
-        List<TextBox> out = new ArrayList<>();
+        return draw(scene, layers).texts();
+    }
+
+    private static Drawing draw(Scene scene, EnumSet<Layer> layers) {
+        Drawing out = new Drawing(new ArrayList<>(), new ArrayList<>(), new ArrayList<>());
+        double[] pen = new double[2];
         Surface s = (Surface) Proxy.newProxyInstance(Surface.class.getClassLoader(), new Class<?>[] {Surface.class},
                 (proxy, method, args) -> switch (method.getName()) {
                     case "width" -> W;
                     case "height" -> H;
                     case "textWidth" -> 0.6 * (double) args[1] * ((String) args[0]).length();
+                    case "moveTo" -> {
+                        pen[0] = (double) args[0];
+                        pen[1] = (double) args[1];
+                        yield null;
+                    }
+                    case "lineTo" -> {
+                        out.segments().add(new double[] {pen[0], pen[1], (double) args[0], (double) args[1]});
+                        pen[0] = (double) args[0];
+                        pen[1] = (double) args[1];
+                        yield null;
+                    }
+                    case "fillOval" -> {
+                        out.dots().add(new double[] {(double) args[0], (double) args[1]});
+                        yield null;
+                    }
                     case "text" -> {
                         String text = (String) args[0];
                         double x = (double) args[1];
@@ -66,7 +90,7 @@ class SourceLabelTest {
                             case RIGHT, TOP_RIGHT, BOTTOM_RIGHT -> x - w;
                             default -> x - w / 2;
                         };
-                        out.add(new TextBox(text, left, top, w, size));
+                        out.texts().add(new TextBox(text, left, top, w, size));
                         yield null;
                     }
                     default -> null;
@@ -74,6 +98,11 @@ class SourceLabelTest {
         ScenePainter.draw(s, new Picture(scene, 0, null, null, VIEW, layers, ColourRange.automatic(),
                 EditorMarks.none(), ""));
         return out;
+    }
+
+    /** The drawn segments that end on screen point (x, y). */
+    private static List<double[]> segmentsEndingAt(Drawing d, double x, double y) {
+        return d.segments().stream().filter(g -> Math.abs(g[2] - x) < 1e-9 && Math.abs(g[3] - y) < 1e-9).toList();
     }
 
     private static Source.BlockMagnet magnet(double x, double y) {
@@ -116,6 +145,56 @@ class SourceLabelTest {
     void aMagnetLabelStaysOnItsCentreWhenNothingIsInTheWay() {
         List<TextBox> pole = named(texts(Scene.empty("t").withSources(List.of(magnet(0, 0)))), "S");
         assertEquals(VIEW.screenX(0), pole.get(0).x() + pole.get(0).w() / 2, 1e-9);
+    }
+
+    @Test
+    void aPoleLabelPushedAwayByConductorsGetsALeaderToItsMagnetsCentre() {
+        // Nine wires 5 px apart across the magnet's centre: the 30 px label cannot sit within 20 px of it.
+        List<Conductor> wires = new ArrayList<>();
+        for (int k = -4; k <= 4; k++) {
+            double y = k * 0.0025;
+            wires.add(new Conductor.Wire("w" + k, Body.FIXED, List.of(new Conductor.Vertex(new Vec2(-0.1, y), null),
+                    new Conductor.Vertex(new Vec2(0.1, y), null))));
+        }
+        Drawing d = draw(Scene.empty("t").withSources(List.of(magnet(0, 0))).withConductors(wires), LAYERS);
+        double cx = VIEW.screenX(0);
+        double cy = VIEW.screenY(0);
+        TextBox pole = named(d.texts(), "S").get(0);
+        List<double[]> leaders = segmentsEndingAt(d, cx, cy);
+        assertEquals(1, leaders.size(), "one leader to the magnet's centre");
+        double[] g = leaders.get(0);
+        // The label's box as the painter sizes it (the wider of "S" and "M −z", 6 px margin, 30 px tall),
+        // centred 16 px below the top of the pole letter; the leader leaves its point nearest the centre.
+        LabelPlacer.Box box = new LabelPlacer.Box(pole.x() + pole.w() / 2 - (0.6 * 11 * 4 + 6) / 2, pole.y() + 1,
+                0.6 * 11 * 4 + 6, 30);
+        assertEquals(box.nearestX(cx), g[0], 1e-9);
+        assertEquals(box.nearestY(cy), g[1], 1e-9);
+        assertTrue(box.distanceTo(cx, cy) > 20, "the label had to move off the wires: " + box);
+        assertTrue(d.dots().stream().anyMatch(p -> p[0] == cx && p[1] == cy), "a dot marks the centre");
+    }
+
+    @Test
+    void aPoleLabelOnItsMagnetsCentreHasNoLeader() {
+        Drawing d = draw(Scene.empty("t").withSources(List.of(magnet(0, 0))), LAYERS);
+        assertEquals(List.of(), segmentsEndingAt(d, VIEW.screenX(0), VIEW.screenY(0)));
+    }
+
+    @Test
+    void aWireAcrossACoilsCentreDoesNotRunThroughItsTurnCount() {
+        Source.SourceCoil coil = new Source.SourceCoil("floor", Body.FIXED,
+                new Source.CoilShape.Circle(Vec2.ZERO, 0.1), 10, -0.3, Source.Drive.dc(1));
+        Scene scene = Scene.empty("t").withSources(List.of(coil))
+                .withConductors(List.of(wire(new Vec2(-0.1, 0), new Vec2(0.1, 0))));
+        List<TextBox> turns = named(texts(scene), "10 turns");
+        assertEquals(1, turns.size(), turns.toString());
+        assertFalse(turns.get(0).touches(new Vec2(-0.1, 0), new Vec2(0.1, 0)), turns + " lies on the wire");
+    }
+
+    @Test
+    void aCoilWhoseCentreIsOutOfViewHasNoTurnCountAtTheEdge() {
+        Source.SourceCoil coil = new Source.SourceCoil("floor", Body.FIXED,
+                new Source.CoilShape.Circle(new Vec2(1, 0), 0.9), 10, -0.3, Source.Drive.dc(1));
+        assertEquals(List.of(), named(texts(Scene.empty("t").withSources(List.of(coil))), "10 turns"));
     }
 
     @Test

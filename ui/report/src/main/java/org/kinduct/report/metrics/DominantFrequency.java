@@ -4,6 +4,7 @@ import org.hipparchus.complex.Complex;
 import org.hipparchus.transform.DftNormalization;
 import org.hipparchus.transform.FastFourierTransformer;
 import org.hipparchus.transform.TransformType;
+import org.kinduct.scene.units.Units;
 
 /**
  * The frequency of the largest peak of a uniformly sampled signal's amplitude spectrum: the mean
@@ -24,7 +25,9 @@ final class DominantFrequency {
      * The frequency of the largest spectral peak.
      *
      * @param values samples at a constant spacing {@code dtS}
-     * @return hertz; 0 when the signal is constant or has fewer than two samples
+     * @return hertz; 0 when the signal is constant (its spread about the mean below
+     *     {@link Units#NOISE_FRACTION} of its size, rounding only: a steady EMF's spectrum is noise)
+     *     or has fewer than two samples
      */
     static double of(double[] values, double dtS) {
         int n = values.length;
@@ -35,6 +38,15 @@ final class DominantFrequency {
         for (double v : values) {
             mean += v / n;
         }
+        double spread = 0;
+        double magnitude = 0;
+        for (double v : values) {
+            spread = Math.max(spread, Math.abs(v - mean));
+            magnitude = Math.max(magnitude, Math.abs(v));
+        }
+        if (Units.withoutNoise(spread, magnitude) == 0) {
+            return 0;
+        }
         int size = Integer.highestOneBit(PADDING * n - 1) << 1;
         double[] padded = new double[size];
         for (int i = 0; i < n; i++) {
@@ -44,9 +56,9 @@ final class DominantFrequency {
         int best = 0;
         double largest = 0;
         for (int k = 1; k <= size / 2; k++) {
-            double magnitude = spectrum[k].norm();
-            if (magnitude > largest) {
-                largest = magnitude;
+            double height = spectrum[k].norm();
+            if (height > largest) {
+                largest = height;
                 best = k;
             }
         }

@@ -23,7 +23,8 @@ public enum MetricKind {
     PEAK_TIME("peak_time", Scope.CONDUCTOR, Dimension.TIME, "time of the largest |EMF| (the first, if it repeats)",
             (run, w, id) -> summary(w, id).peakTimeS()),
     DOMINANT_FREQUENCY("dominant_frequency", Scope.CONDUCTOR, Dimension.FREQUENCY,
-            "frequency of the largest peak of the EMF's spectrum (mean removed, zero-padded FFT, resolution 1/(8·T))",
+            "frequency of the largest peak of the EMF's spectrum (mean removed, zero-padded FFT, resolution 1/(8·T));"
+                    + " 0 for a steady EMF",
             (run, w, id) -> {
                 ConductorSeries s = new ConductorSeries(w, id);
                 return DominantFrequency.of(s.emfV, s.spacingS());

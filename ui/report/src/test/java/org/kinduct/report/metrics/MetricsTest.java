@@ -80,6 +80,22 @@ class MetricsTest {
         assertEquals(F, read(s, "dominant_frequency:coil"), 0.5 / (2048 * DT));
     }
 
+    /** A steady EMF whose samples differ in their last bits only (as a run's do) has no dominant frequency. */
+    @Test
+    void aSteadyEmfWithRoundingNoiseHasNoDominantFrequency() {
+        double[] steady = new double[41];
+        for (int i = 0; i < steady.length; i++) {
+            steady[i] = Math.nextUp(36.5e-6) + (i % 3) * Math.ulp(36.5e-6);
+        }
+        assertEquals(0, DominantFrequency.of(steady, DT));
+        // A ripple of a millionth is no rounding: it has its frequency, 1/(4·Δt).
+        double[] ripple = steady.clone();
+        for (int i = 0; i < ripple.length; i++) {
+            ripple[i] += 36.5e-12 * Math.cos(Math.PI / 2 * i);
+        }
+        assertEquals(1 / (4 * DT), DominantFrequency.of(ripple, DT), 0.5 / (512 * DT));
+    }
+
     @Test
     void currentMetricsFollowFromTheEmfAndTheResistance() {
         Scene s = oscillating();
