@@ -1,6 +1,8 @@
 package org.kinduct.ui.app;
 
 import java.nio.file.Path;
+import java.util.logging.Level;
+import java.util.logging.Logger;
 import javafx.application.Application;
 import org.kinduct.cli.EditorLauncher;
 
@@ -9,6 +11,13 @@ import org.kinduct.cli.EditorLauncher;
  * open; the command line finds it as its {@link EditorLauncher} service.
  */
 public final class GuiLauncher implements EditorLauncher {
+
+    /**
+     * JavaFX's own logger, kept reachable: Kinduct ships JavaFX on the class path inside one jar,
+     * which JavaFX warns about at every start ("Unsupported JavaFX configuration"); the all-in-one
+     * jar is how Kinduct is meant to run, so only JavaFX's errors are shown.
+     */
+    private static final Logger JAVAFX_LOG = Logger.getLogger("javafx");
 
     private static volatile Path initialFile;
     private static volatile String initialDemo;
@@ -27,6 +36,7 @@ public final class GuiLauncher implements EditorLauncher {
     public static void launch(Path sceneFileOrNull, String demoResourceOrNull) {
         initialFile = sceneFileOrNull;
         initialDemo = demoResourceOrNull;
+        JAVAFX_LOG.setLevel(Level.SEVERE);
         Application.launch(KinductApp.class);
     }
 
