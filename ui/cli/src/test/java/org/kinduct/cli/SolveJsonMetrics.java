@@ -85,6 +85,13 @@ final class SolveJsonMetrics {
                 }
                 return trapezoid(t, p) / (t[n - 1] - t[0]);
             }
+            case "load_energy": {
+                double[] p = new double[n];
+                for (int i = 0; i < n; i++) {
+                    p[i] = current[i] * current[i] * loadOhm;
+                }
+                return trapezoid(t, p);
+            }
             case "joule_heat": {
                 double[] p = new double[n];
                 for (int i = 0; i < n; i++) {

@@ -116,7 +116,7 @@ class SweepCommandTest {
             SolveJsonMetrics reference = new SolveJsonMetrics(solve.out());
             for (int m = 0; m < metrics.size(); m++) {
                 String[] metric = metrics.get(m);
-                double load = metric[0].equals("mean_load_power")
+                double load = metric[0].equals("mean_load_power") || metric[0].equals("load_energy")
                         ? ((Conductor.Loop) edited.conductor(metric[1]).orElseThrow()).loadOhm() : Double.NaN;
                 double expected = reference.metric(metric[0], metric[1], load);
                 double got = row.metrics()[m];

@@ -15,7 +15,7 @@ import org.kinduct.solver.run.RunResult;
  * and when the peak comes, the dominant frequency, and for closed loops the peak current and the
  * mean power into the load resistor; the mean drag and eddy-current power of each plate and
  * channel and the peak voltage of its first electrode pair; the final and terminal speed of each
- * free body.
+ * free body; for a coupled run, the share of the work put in that reached the load resistors.
  */
 public final class RunSummary {
 
@@ -54,7 +54,30 @@ public final class RunSummary {
                 out.add(line(run, b.id(), FREE_BODIES));
             }
         }
+        loadShare(run).ifPresent(out::add);
         return out;
+    }
+
+    /**
+     * How much of the work put into a coupled run reached the load resistors: the sum of their
+     * {@link MetricKind#LOAD_ENERGY} against the energy audit's work in (a harvester's efficiency
+     * over the run, build-up included).
+     */
+    private static java.util.Optional<String> loadShare(RunResult run) {
+        double workJ = run.audit().map(a -> a.suppliedJ()).orElse(0.0);
+        double loadJ = 0;
+        for (Conductor c : run.scene().conductors()) {
+            if (c instanceof Conductor.Loop loop && !loop.open() && loop.loadOhm() > 0) {
+                loadJ += MetricKind.LOAD_ENERGY.of(run, loop.id());
+            }
+        }
+        if (!(workJ > 0) || loadJ == 0) {
+            return java.util.Optional.empty();
+        }
+        return java.util.Optional.of(String.format(java.util.Locale.ROOT,
+                "Into the load resistors: %s, %.1f %% of the work put in (%s) over the run",
+                Units.format(loadJ, MetricKind.LOAD_ENERGY.dimension()), 100 * loadJ / workJ,
+                Units.format(workJ, MetricKind.LOAD_ENERGY.dimension())));
     }
 
     private static String line(RunResult run, String id, List<MetricKind> kinds) {

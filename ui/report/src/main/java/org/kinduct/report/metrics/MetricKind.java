@@ -43,6 +43,16 @@ public enum MetricKind {
                 }
                 return Window.timeAverage(s.times, power);
             }),
+    LOAD_ENERGY("load_energy", Scope.CLOSED_LOOP, Dimension.ENERGY,
+            "∫ I²·R_load dt, the energy into the load resistor (trapezoidal rule over the samples)", (run, w, id) -> {
+                ConductorSeries s = new ConductorSeries(w, id);
+                double load = ((Conductor.Loop) run.scene().conductor(id).orElseThrow()).loadOhm();
+                double[] power = new double[s.currentA.length];
+                for (int i = 0; i < power.length; i++) {
+                    power[i] = s.currentA[i] * s.currentA[i] * load;
+                }
+                return Window.integral(s.times, power);
+            }),
     JOULE_HEAT("joule_heat", Scope.CLOSED_LOOP, Dimension.ENERGY,
             "∫ I²·R dt, R winding plus load (trapezoidal rule over the samples)", (run, w, id) -> {
                 ConductorSeries s = new ConductorSeries(w, id);
