@@ -38,6 +38,8 @@ class SceneFuzzTest {
 
     private static final long FIRST_SEED = 0x5eed_f00dL;
     private static final int INPUTS = Integer.getInteger("kinduct.fuzz.inputs", 300);
+    /** Inputs of the range to skip, so that a long run can be split between processes ({@code -Dkinduct.fuzz.skip=50000}). */
+    private static final int SKIP = Integer.getInteger("kinduct.fuzz.skip", 0);
     /** Seeds to replay instead of the range ({@code -Dkinduct.fuzz.seeds=1592652005,1592652203}). */
     private static final String REPLAY = System.getProperty("kinduct.fuzz.seeds", "");
     private static final int STEPS = 2;
@@ -53,7 +55,7 @@ class SceneFuzzTest {
         Map<Outcome, Integer> outcomes = new EnumMap<>(Outcome.class);
         long slowestNs = 0;
         long slowestSeed = 0;
-        long[] seeds = REPLAY.isBlank() ? java.util.stream.LongStream.range(FIRST_SEED, FIRST_SEED + INPUTS).toArray()
+        long[] seeds = REPLAY.isBlank() ? java.util.stream.LongStream.range(FIRST_SEED + SKIP, FIRST_SEED + SKIP + INPUTS).toArray()
                 : java.util.Arrays.stream(REPLAY.split(",", -1)).mapToLong(t -> Long.parseLong(t.strip())).toArray();
         for (long seed : seeds) {
             SplittableRandom r = new SplittableRandom(seed);
