@@ -55,7 +55,8 @@ class SceneFuzzTest {
         Map<Outcome, Integer> outcomes = new EnumMap<>(Outcome.class);
         long slowestNs = 0;
         long slowestSeed = 0;
-        long[] seeds = REPLAY.isBlank() ? java.util.stream.LongStream.range(FIRST_SEED + SKIP, FIRST_SEED + SKIP + INPUTS).toArray()
+        long first = FIRST_SEED + SKIP;
+        long[] seeds = REPLAY.isBlank() ? java.util.stream.LongStream.range(first, first + INPUTS).toArray()
                 : java.util.Arrays.stream(REPLAY.split(",", -1)).mapToLong(t -> Long.parseLong(t.strip())).toArray();
         for (long seed : seeds) {
             SplittableRandom r = new SplittableRandom(seed);
