@@ -132,6 +132,9 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conduc
          */
         double CLOSEST_VERTICES = 1e-9;
 
+        /** Most grid cells a file may ask for with its cell size (about 1450 × 1450; the automatic choice stays far below). */
+        int MOST_CELLS = 1 << 21;
+
         String id();
 
         /** The body the whole conductor rides. */
@@ -183,7 +186,7 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conduc
             Checks.nonNull(conductivity, "conductivity");
             electrodes = List.copyOf(Checks.nonNull(electrodes, "electrodes"));
             pairs = List.copyOf(Checks.nonNull(pairs, "pairs"));
-            cellM = checkCell(cellM);
+            cellM = checkCell(cellM, outline);
             List<Vec2> shape = outline;
             List<List<Vec2>> cut = holes;
             checkElectrodes(electrodes, pairs, e -> onEdge(shape, cut, e.at()), "the plate's edge (outline or a hole)");
@@ -246,7 +249,8 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conduc
             Checks.nonNull(flow, "flow");
             electrodes = List.copyOf(Checks.nonNull(electrodes, "electrodes"));
             pairs = List.copyOf(Checks.nonNull(pairs, "pairs"));
-            cellM = checkCell(cellM);
+            Vec2 side = end.minus(start).perp().times(widthM / (2 * length));
+            cellM = checkCell(cellM, List.of(start.minus(side), end.minus(side), end.plus(side), start.plus(side)));
             Vec2 from = start;
             Vec2 to = end;
             double w = widthM;
@@ -337,9 +341,25 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conduc
         }
     }
 
-    private static OptionalDouble checkCell(OptionalDouble cellM) {
+    /**
+     * A cell size the file sets, checked against the conductor's plan ({@code outline}): positive,
+     * and giving at most {@link Sheet#MOST_CELLS} cells over the outline's box, so that no file can
+     * ask for a grid that does not fit in memory.
+     */
+    private static OptionalDouble checkCell(OptionalDouble cellM, List<Vec2> outline) {
         Checks.nonNull(cellM, "cell size");
-        cellM.ifPresent(h -> Checks.positive(h, "cell size"));
+        if (cellM.isPresent()) {
+            double h = cellM.getAsDouble();
+            Checks.positive(h, "cell size");
+            Polygons.Box box = Polygons.box(outline);
+            double cells = Math.ceil((box.maxX() - box.minX()) / h) * Math.ceil((box.maxY() - box.minY()) / h);
+            if (!(cells <= Sheet.MOST_CELLS)) {
+                throw new IllegalArgumentException("a cell of " + h + " m gives about " + String.format(
+                        java.util.Locale.ROOT, "%.3g", cells) + " cells over this conductor; at most " + Sheet.MOST_CELLS
+                        + " are allowed: choose a cell of at least " + String.format(java.util.Locale.ROOT, "%.3g",
+                        Math.sqrt((box.maxX() - box.minX()) * (box.maxY() - box.minY()) / Sheet.MOST_CELLS)) + " m");
+            }
+        }
         return cellM;
     }
 

@@ -143,6 +143,13 @@ class SceneJsonValidationTest {
                                 + " \"pairs\": [{\"plus\": \"left\", \"minus\": \"rigth\"}]}]"),
                         "conductors[0].pairs[0].minus", "\"rigth\"",
                         "unknown electrode 'rigth' (did you mean 'right'?); the electrodes are left, right"),
+                error("plate cell too fine to fit in memory", doc("  \"conductors\": [{\"kind\": \"plate\", \"id\": \"p\","
+                                + " \"outline\": [[0, 0], [\"40 mm\", 0], [\"40 mm\", \"20 mm\"], [0, \"20 mm\"]],"
+                                + " \"thickness\": \"1 mm\", \"material\": \"copper\", \"cell\": \"1 um\"}]"),
+                        "conductors[0]", "{\"kind\": \"plate\"",
+                        // 40 mm × 20 mm in 1 µm cells: 40 000 × 20 000 = 8e8 cells, above 2^21 = 2 097 152.
+                        "a cell of 1.0E-6 m gives about 8.00e+08 cells over this conductor; at most 2097152 are"
+                                + " allowed: choose a cell of at least 1.95e-05 m"),
                 error("plate with material and conductivity", doc("  \"conductors\": [{\"kind\": \"plate\", \"id\": \"p\","
                                 + " \"outline\": [[0, 0], [1, 0], [0, 1]], \"thickness\": \"1 mm\", \"material\": \"copper\","
                                 + " \"conductivity\": \"58 MS/m\"}]"),
