@@ -19,6 +19,7 @@ import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Kinematics;
 import org.kinduct.solver.SceneField;
 import org.kinduct.solver.SceneSolver;
+import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.circuit.InductanceAtStart;
 import org.kinduct.solver.circuit.LoopInductance;
@@ -87,8 +88,10 @@ public final class SceneRun {
         this.request = Checks.nonNull(request, "request");
         this.monitor = Checks.nonNull(monitor, "monitor");
         this.parallel = parallel;
-        this.origin = LocalOrigin.of(scene);
-        this.local = origin.equals(Vec2.ZERO) ? scene : Scenes.movedBy(scene, origin.times(-1));
+        Vec2 centre = LocalOrigin.of(scene);
+        Scene moved = centre.equals(Vec2.ZERO) ? scene : movedOrNull(scene, centre);
+        this.origin = moved == null ? Vec2.ZERO : centre;
+        this.local = moved == null ? scene : moved;
         this.prescribed = new SceneSolver(local);
         this.fields = origin.equals(Vec2.ZERO) ? prescribed : new SceneSolver(scene);
         this.motions = Kinematics.prescribed(scene);
@@ -242,7 +245,7 @@ public final class SceneRun {
 
     private List<Snapshot> withSheets(List<Snapshot> states, Kinematics kinematics) {
         return (parallel ? states.parallelStream() : states.stream())
-                .map(s -> s.withSheets(sheets.at(s.tS(), kinematics))).toList();
+                .map(s -> s.withSheets(sheetsAt(s.tS(), kinematics))).toList();
     }
 
     /**
@@ -315,12 +318,38 @@ public final class SceneRun {
             states.add(state);
         }
         // Plates and channels are solved where the scene is drawn, after the move back.
-        return drawn(new Snapshot(s.tS(), states, s.freeBodies())).withSheets(sheets.at(tS, motions));
+        return drawn(new Snapshot(s.tS(), states, s.freeBodies())).withSheets(sheetsAt(tS, motions));
     }
 
     /** A state of {@link #local} where the scene is drawn. */
     private Snapshot drawn(Snapshot local) {
         return origin.equals(Vec2.ZERO) ? local : local.movedBy(origin);
+    }
+
+    /**
+     * {@code scene} moved so that {@code centre} is at (0, 0), or null when the move's rounding
+     * leaves a shape its model refuses (a plate's hole that only just fits, say): such a scene is
+     * solved where it is drawn.
+     */
+    private static Scene movedOrNull(Scene scene, Vec2 centre) {
+        try {
+            return Scenes.movedBy(scene, centre.times(-1));
+        } catch (IllegalArgumentException refused) {
+            return null;
+        }
+    }
+
+    /**
+     * The plates and channels at {@code tS}; a shape whose grid cannot be built (the region work
+     * counts points within a ten-billionth of its size as one, finer than the model's own checks)
+     * stops the run with the reason.
+     */
+    private List<SheetState> sheetsAt(double tS, Kinematics kinematics) {
+        try {
+            return sheets.at(tS, kinematics);
+        } catch (IllegalArgumentException refused) {
+            throw new RunFailedException("a plate or channel cannot be solved: " + refused.getMessage(), refused);
+        }
     }
 
     private static boolean rigid(Conductor.Loop loop) {

@@ -8,7 +8,7 @@ import org.kinduct.solver.dynamics.RunMonitor;
  * the steps still to come are projected from the fraction of the window covered; a run projected
  * to need more than {@link TimeSpan#MAX_STEPS} steps (as many as a window may have samples), or
  * more than {@value #MAX_STEPS_PER_SAMPLE} per sample but at least {@value #LEAST_STEPS} (a short
- * window of a fast circuit still runs: a second or so of work), is stopped at once instead of running for
+ * window of a fast circuit still runs), is stopped at once instead of running for
  * hours. A stiff free body or circuit (a response much faster than the sampling step), or a
  * prescribed motion far faster than the samples can show, makes the integrator take tiny steps
  * throughout, so the projection is reliable early (well-sampled runs take a few steps per
