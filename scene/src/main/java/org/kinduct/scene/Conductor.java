@@ -249,8 +249,7 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conduc
             Checks.nonNull(flow, "flow");
             electrodes = List.copyOf(Checks.nonNull(electrodes, "electrodes"));
             pairs = List.copyOf(Checks.nonNull(pairs, "pairs"));
-            Vec2 side = end.minus(start).perp().times(widthM / (2 * length));
-            cellM = checkCell(cellM, List.of(start.minus(side), end.minus(side), end.plus(side), start.plus(side)));
+            cellM = checkCell(cellM, corners(start, end, widthM));
             Vec2 from = start;
             Vec2 to = end;
             double w = widthM;
@@ -291,7 +290,13 @@ public sealed interface Conductor permits Conductor.Wire, Conductor.Loop, Conduc
         /** The liquid's plan, counter-clockwise from the start's right-hand corner. */
         @Override
         public List<Vec2> outline() {
-            Vec2 side = direction().perp().times(widthM / 2);
+            return corners(start, end, widthM);
+        }
+
+        /** The plan of a channel from {@code start} to {@code end}, counter-clockwise from the start's right-hand corner. */
+        private static List<Vec2> corners(Vec2 start, Vec2 end, double widthM) {
+            Vec2 along = end.minus(start);
+            Vec2 side = along.times(1 / along.length()).perp().times(widthM / 2);
             return List.of(start.minus(side), end.minus(side), end.plus(side), start.plus(side));
         }
 

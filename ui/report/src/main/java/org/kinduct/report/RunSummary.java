@@ -2,6 +2,8 @@ package org.kinduct.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
 import org.kinduct.report.metrics.MetricKind;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
@@ -63,7 +65,7 @@ public final class RunSummary {
      * {@link MetricKind#LOAD_ENERGY} against the energy audit's work in (a harvester's efficiency
      * over the run, build-up included).
      */
-    private static java.util.Optional<String> loadShare(RunResult run) {
+    private static Optional<String> loadShare(RunResult run) {
         double workJ = run.audit().map(a -> a.suppliedJ()).orElse(0.0);
         double loadJ = 0;
         for (Conductor c : run.scene().conductors()) {
@@ -72,9 +74,9 @@ public final class RunSummary {
             }
         }
         if (!(workJ > 0) || loadJ == 0) {
-            return java.util.Optional.empty();
+            return Optional.empty();
         }
-        return java.util.Optional.of(String.format(java.util.Locale.ROOT,
+        return Optional.of(String.format(Locale.ROOT,
                 "Into the load resistors: %s, %.1f %% of the work put in (%s) over the run",
                 Units.format(loadJ, MetricKind.LOAD_ENERGY.dimension()), 100 * loadJ / workJ,
                 Units.format(workJ, MetricKind.LOAD_ENERGY.dimension())));
