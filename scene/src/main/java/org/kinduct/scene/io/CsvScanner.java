@@ -2,45 +2,63 @@ package org.kinduct.scene.io;
 
 import com.fasterxml.jackson.core.io.NumberInput;
 import java.io.IOException;
-import java.io.Reader;
+import java.io.InputStream;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.util.Arrays;
 
 /**
- * Reads comma-separated numbers field by field without building a string per line, so that a
- * map of millions of samples loads in well under a second and a file without line breaks cannot
- * exhaust memory: a field longer than {@link #MAX_FIELD} characters is an error. Blank lines and
- * lines starting with {@code #} are skipped; spaces around fields are ignored; lines end at
- * {@code \n}, {@code \r\n} or {@code \r}. Quoting is not supported: the files hold numbers and
- * plain column names.
+ * Reads comma-separated numbers field by field from UTF-8 bytes, without decoding the file to
+ * characters or building a string per line or per number, so that a map of millions of samples
+ * loads in well under a second and a file without line breaks cannot exhaust memory: a field
+ * longer than {@link #MAX_FIELD} bytes is an error. Separators, spaces and line breaks are ASCII,
+ * so they are found in the bytes; a field's text is decoded (strictly) only when asked for, and
+ * comment lines are skipped undecoded. Blank lines and lines starting with {@code #} are skipped;
+ * spaces around fields are ignored; lines end at {@code \n}, {@code \r\n} or {@code \r}. Quoting
+ * is not supported: the files hold numbers and plain column names. Columns count characters, not
+ * bytes.
  */
 final class CsvScanner {
 
-    /** Longest field accepted; the longest decimal a double ever needs is 24 characters. */
+    /** Longest field accepted, in bytes; the longest decimal a double ever needs is 24 characters. */
     static final int MAX_FIELD = 64;
 
     private static final int EOF = -1;
+    /** The byte-order mark U+FEFF in UTF-8. */
+    private static final byte[] BOM = {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF};
 
-    private final Reader in;
+    private final InputStream in;
     private final String file;
-    private final char[] buffer = new char[1 << 16];
+    private final byte[] buffer = new byte[1 << 16];
     private int position;
     private int limit;
-    private final char[] field = new char[MAX_FIELD];
+    private final byte[] field = new byte[MAX_FIELD];
+    /** The current field as characters, for the number parser (numbers are ASCII). */
+    private final char[] chars = new char[MAX_FIELD];
     private int fieldLength;
     private int line = 1;
     private long lineStart;
+    /** UTF-8 continuation bytes on the current line so far: bytes that start no character. */
+    private int lineContinuations;
     private long consumed;
     private int fieldLine;
     private int fieldColumn;
     private boolean inRecord;
     private boolean recordEnded;
+    private boolean started;
 
-    CsvScanner(Reader in, String file) {
+    CsvScanner(InputStream in, String file) {
         this.in = in;
         this.file = file;
     }
 
     /** Moves to the next line that holds data; false at the end of the file. */
-    boolean nextRecord() throws IOException, FieldMapFormatException {
+    boolean nextRecord() throws IOException {
+        if (!started) {
+            skipByteOrderMark();
+        }
         if (inRecord && !recordEnded) {
             skipLine();
         }
@@ -53,12 +71,8 @@ final class CsvScanner {
             }
             if (c == '\n' || c == '\r') {
                 endLine();
-            } else if (c == '#' || (c == '\uFEFF' && line == 1)) {
-                if (c == '#') {
-                    skipLine();
-                } else {
-                    read();
-                }
+            } else if (c == '#') {
+                skipLine();
             } else {
                 inRecord = true;
                 recordEnded = false;
@@ -74,47 +88,69 @@ final class CsvScanner {
         }
         skipSpaces();
         fieldLine = line;
-        fieldColumn = (int) (here() - lineStart) + 1;
-        fieldLength = 0;
-        int trimmed = 0;
+        fieldColumn = (int) (here() - lineStart) - lineContinuations + 1;
+        int length = 0;
         while (true) {
-            int c = peek();
-            if (c == EOF || c == '\n' || c == '\r') {
+            // Find the field's end in the buffer first, then copy it at once: the loop is the load's hot spot.
+            int p = position;
+            while (p < limit) {
+                byte c = buffer[p];
+                if (c == ',' || c == '\n' || c == '\r') {
+                    break;
+                }
+                p++;
+            }
+            int n = p - position;
+            if (length + n > MAX_FIELD) {
+                throw error(fieldLine, fieldColumn, "value longer than " + MAX_FIELD + " bytes");
+            }
+            System.arraycopy(buffer, position, field, length, n);
+            length += n;
+            position = p;
+            if (p < limit) {
+                if (buffer[p] == ',') {
+                    position++;
+                } else {
+                    recordEnded = true;
+                }
+                break;
+            }
+            if (!fill()) {
                 recordEnded = true;
                 break;
             }
-            read();
-            if (c == ',') {
-                break;
-            }
-            if (fieldLength == MAX_FIELD) {
-                throw error(fieldLine, fieldColumn, "value longer than " + MAX_FIELD + " characters");
-            }
-            field[fieldLength++] = (char) c;
-            if (c != ' ' && c != '\t') {
-                trimmed = fieldLength;
+        }
+        for (int i = 0; i < length; i++) {
+            if ((field[i] & 0xC0) == 0x80) {
+                lineContinuations++;
             }
         }
-        fieldLength = trimmed;
+        while (length > 0 && (field[length - 1] == ' ' || field[length - 1] == '\t')) {
+            length--;
+        }
+        fieldLength = length;
         return true;
     }
 
-    /** The current field's text. */
-    String text() {
-        return new String(field, 0, fieldLength);
+    /** The current field's text; bytes that are not UTF-8 are an error at the field. */
+    String text() throws FieldMapFormatException {
+        try {
+            return StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(field, 0, fieldLength))
+                    .toString();
+        } catch (CharacterCodingException e) {
+            throw error(fieldLine, fieldColumn, "the text here is not UTF-8; save the file as UTF-8");
+        }
     }
 
-    /** True when the current field's text is exactly {@code text}. */
-    boolean textEquals(String text) {
-        if (text.length() != fieldLength) {
-            return false;
-        }
-        for (int i = 0; i < fieldLength; i++) {
-            if (field[i] != text.charAt(i)) {
-                return false;
-            }
-        }
-        return true;
+    /** The current field's bytes. */
+    byte[] bytes() {
+        return Arrays.copyOf(field, fieldLength);
+    }
+
+    /** True when the current field's bytes are exactly {@code bytes}. */
+    boolean sameBytes(byte[] bytes) {
+        return Arrays.equals(field, 0, fieldLength, bytes, 0, bytes.length);
     }
 
     /** The current field as a finite number; an empty, non-numeric, NaN or infinite field is an error. */
@@ -122,10 +158,17 @@ final class CsvScanner {
         if (fieldLength == 0) {
             throw error(fieldLine, fieldColumn, "missing " + what);
         }
+        for (int i = 0; i < fieldLength; i++) {
+            byte b = field[i];
+            if (b < 0) {
+                throw error(fieldLine, fieldColumn, what + " '" + text() + "' is not a number");
+            }
+            chars[i] = (char) b;
+        }
         double v;
         try {
             // Jackson's fast_float port, correctly rounded: most of a large map's load time was Double.parseDouble.
-            v = NumberInput.parseDouble(text(), true);
+            v = NumberInput.parseDouble(chars, 0, fieldLength, true);
         } catch (NumberFormatException e) {
             throw error(fieldLine, fieldColumn, what + " '" + text() + "' is not a number");
         }
@@ -145,7 +188,7 @@ final class CsvScanner {
         return fieldColumn;
     }
 
-    /** Characters consumed so far. */
+    /** Bytes consumed so far. */
     private long here() {
         return consumed + position;
     }
@@ -157,6 +200,18 @@ final class CsvScanner {
     /** An error at the current field. */
     FieldMapFormatException error(String detail) {
         return error(fieldLine, fieldColumn, detail);
+    }
+
+    /** A byte-order mark at the very start is not part of the first field, nor of its column. */
+    private void skipByteOrderMark() throws IOException {
+        started = true;
+        for (byte b : BOM) {
+            if (peek() != (b & 0xFF)) {
+                return;
+            }
+            read();
+        }
+        lineStart = here();
     }
 
     private void skipSpaces() throws IOException {
@@ -183,13 +238,14 @@ final class CsvScanner {
         }
         line++;
         lineStart = here();
+        lineContinuations = 0;
     }
 
     private int peek() throws IOException {
         if (position == limit && !fill()) {
             return EOF;
         }
-        return buffer[position];
+        return buffer[position] & 0xFF;
     }
 
     private int read() throws IOException {

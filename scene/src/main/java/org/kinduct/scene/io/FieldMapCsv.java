@@ -2,9 +2,6 @@ package org.kinduct.scene.io;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.io.Reader;
-import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
 import java.util.Locale;
@@ -39,7 +36,7 @@ public final class FieldMapCsv {
 
     /** The samples of a points-layout file; {@code name} is how messages call the file. */
     public static FieldGrid readPoints(InputStream in, String name) throws IOException, FieldMapFormatException {
-        return new PointsReader(new CsvScanner(reader(in), name)).read();
+        return new PointsReader(new CsvScanner(in, name)).read();
     }
 
     /**
@@ -51,7 +48,7 @@ public final class FieldMapCsv {
      */
     public static FieldGrid readMatrix(InputStream in, String name, Vec2 originM, Vec2 spacingM, double unitT)
             throws IOException, FieldMapFormatException {
-        CsvScanner csv = new CsvScanner(reader(in), name);
+        CsvScanner csv = new CsvScanner(in, name);
         Samples samples = new Samples(csv);
         int nx = -1;
         int ny = 0;
@@ -73,11 +70,6 @@ public final class FieldMapCsv {
         }
         return grid(csv, FieldGrid.Layout.MATRIX, Math.max(nx, 0), ny, originM.x(), originM.y(), spacingM.x(),
                 spacingM.y(), unitT, samples);
-    }
-
-    private static Reader reader(InputStream in) {
-        return new InputStreamReader(in, StandardCharsets.UTF_8.newDecoder()
-                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT));
     }
 
     private static FieldGrid grid(CsvScanner csv, FieldGrid.Layout layout, int nx, int ny, double x0, double y0,
@@ -116,8 +108,39 @@ public final class FieldMapCsv {
         }
     }
 
-    /** A coordinate as read: its SI value, its text as written, and its column. */
-    private record Cell(double value, String text, int column) {
+    /** A coordinate as read: its SI value, its text as written (a number, so ASCII), and its column. */
+    private static final class Cell {
+        private final double value;
+        private final byte[] written;
+        private final int column;
+
+        Cell(double value, byte[] written, int column) {
+            this.value = value;
+            this.written = written;
+            this.column = column;
+        }
+
+        double value() {
+            return value;
+        }
+
+        int column() {
+            return column;
+        }
+
+        /** The bytes as written, shared: never changed. */
+        byte[] written() {
+            return written;
+        }
+
+        String text() {
+            return new String(written, StandardCharsets.US_ASCII);
+        }
+
+        /** The same value and text, read again at {@code column}. */
+        Cell at(int atColumn) {
+            return new Cell(value, written, atColumn);
+        }
     }
 
     /** One column of a points file: its index and the factor from its unit to SI. */
@@ -133,13 +156,13 @@ public final class FieldMapCsv {
         private Column bz;
         private int fieldCount;
         /** The first row's x texts and values; later rows usually repeat the texts exactly. */
-        private String[] xTexts = new String[64];
+        private Cell[] xCells = new Cell[64];
         private double[] xs = new double[64];
         private int nx = -1;
         private int ny;
         private double y0;
         private double dy;
-        private String rowYText;
+        private Cell rowYCell;
         private double rowY;
         private int rowCount;
         private int rowLine;
@@ -157,30 +180,7 @@ public final class FieldMapCsv {
             }
             header();
             while (csv.nextRecord()) {
-                Cell xCell = null;
-                Cell yCell = null;
-                double bzValue = Double.NaN;
-                int f = 0;
-                while (csv.nextField()) {
-                    if (f == fieldCount) {
-                        throw csv.error("more values than the header's " + fieldCount + " columns");
-                    }
-                    if (f == x.index()) {
-                        xCell = nx > 0 && rowCount < nx && csv.textEquals(xTexts[rowCount])
-                                ? new Cell(xs[rowCount], xTexts[rowCount], csv.column())
-                                : new Cell(csv.number("x") * x.toSi(), csv.text(), csv.column());
-                    } else if (f == y.index()) {
-                        yCell = rowYText != null && csv.textEquals(rowYText) ? new Cell(rowY, rowYText, csv.column())
-                                : new Cell(csv.number("y") * y.toSi(), csv.text(), csv.column());
-                    } else if (f == bz.index()) {
-                        bzValue = csv.number("B_z") * bz.toSi();
-                    }
-                    f++;
-                }
-                if (f < fieldCount) {
-                    throw csv.error(csv.line(), 0, "this row has " + f + " values, the header has " + fieldCount);
-                }
-                sample(csv.line(), xCell, yCell, bzValue);
+                row();
             }
             endRow();
             if (nx < 0) {
@@ -189,6 +189,38 @@ public final class FieldMapCsv {
             double dx = (xs[nx - 1] - xs[0]) / (nx - 1);
             double dyAll = ny > 1 ? (rowY - y0) / (ny - 1) : 0;
             return grid(csv, FieldGrid.Layout.POINTS, nx, ny, xs[0], y0, dx, dyAll, bz.toSi(), samples);
+        }
+
+        /**
+         * Reads one data line. A method of its own so that the compiler optimises it as a whole early
+         * on, instead of compiling the loop that calls it on the fly: the first load of a large map ran
+         * three times slower than later ones that way.
+         */
+        private void row() throws IOException, FieldMapFormatException {
+            Cell xCell = null;
+            Cell yCell = null;
+            double bzValue = Double.NaN;
+            int f = 0;
+            while (csv.nextField()) {
+                if (f == fieldCount) {
+                    throw csv.error("more values than the header's " + fieldCount + " columns");
+                }
+                if (f == x.index()) {
+                    xCell = nx > 0 && rowCount < nx && csv.sameBytes(xCells[rowCount].written())
+                            ? xCells[rowCount].at(csv.column())
+                            : new Cell(csv.number("x") * x.toSi(), csv.bytes(), csv.column());
+                } else if (f == y.index()) {
+                    yCell = rowYCell != null && csv.sameBytes(rowYCell.written()) ? rowYCell.at(csv.column())
+                            : new Cell(csv.number("y") * y.toSi(), csv.bytes(), csv.column());
+                } else if (f == bz.index()) {
+                    bzValue = csv.number("B_z") * bz.toSi();
+                }
+                f++;
+            }
+            if (f < fieldCount) {
+                throw csv.error(csv.line(), 0, "this row has " + f + " values, the header has " + fieldCount);
+            }
+            sample(csv.line(), xCell, yCell, bzValue);
         }
 
         private void header() throws IOException, FieldMapFormatException {
@@ -250,30 +282,30 @@ public final class FieldMapCsv {
 
         /** Places one sample: the next in the current row, or the first of a new row. */
         private void sample(int line, Cell xCell, Cell yCell, double bzValue) throws FieldMapFormatException {
-            if (rowYText == null || yCell.value() != rowY) {
+            if (rowYCell == null || yCell.value() != rowY) {
                 endRow();
                 startRow(line, yCell);
             }
             if (nx < 0) {
                 if (rowCount > 0 && !(xCell.value() > xs[rowCount - 1])) {
                     throw csv.error(line, xCell.column(), "x must increase along a row (x fastest, rows from the"
-                            + " lowest y, as Kinduct writes); x = " + xCell.text() + " follows " + xTexts[rowCount - 1]);
+                            + " lowest y, as Kinduct writes); x = " + xCell.text() + " follows " + xCells[rowCount - 1].text());
                 }
                 if (rowCount >= 2) {
                     checkUniform(line, xCell, "x", xs[0], xs[1] - xs[0], rowCount);
                 }
                 if (rowCount == xs.length) {
                     xs = Arrays.copyOf(xs, 2 * rowCount);
-                    xTexts = Arrays.copyOf(xTexts, 2 * rowCount);
+                    xCells = Arrays.copyOf(xCells, 2 * rowCount);
                 }
                 xs[rowCount] = xCell.value();
-                xTexts[rowCount] = xCell.text();
+                xCells[rowCount] = xCell;
             } else if (rowCount >= nx) {
-                throw csv.error(line, xCell.column(), "the row at y = " + rowYText + " (from line " + rowLine
+                throw csv.error(line, xCell.column(), "the row at y = " + rowYCell.text() + " (from line " + rowLine
                         + ") has more than " + nx + " samples, the number in the first row");
             } else if (Math.abs(xCell.value() - xs[rowCount]) > SPACING_TOLERANCE * (xs[1] - xs[0])) {
                 throw csv.error(line, xCell.column(), "x = " + xCell.text() + " is not the grid's column "
-                        + (rowCount + 1) + " (x = " + xTexts[rowCount] + " in the first row); every row needs the"
+                        + (rowCount + 1) + " (x = " + xCells[rowCount].text() + " in the first row); every row needs the"
                         + " same x positions");
             }
             samples.add(bzValue);
@@ -286,27 +318,27 @@ public final class FieldMapCsv {
                 y0 = yCell.value();
             } else if (!(yCell.value() > rowY)) {
                 throw csv.error(line, yCell.column(), "y must increase from row to row (x fastest, rows from the"
-                        + " lowest y, as Kinduct writes); y = " + yCell.text() + " follows " + rowYText);
+                        + " lowest y, as Kinduct writes); y = " + yCell.text() + " follows " + rowYCell.text());
             } else if (ny == 1) {
                 dy = yCell.value() - y0;
             } else {
                 checkUniform(line, yCell, "y", y0, dy, ny);
             }
             rowY = yCell.value();
-            rowYText = yCell.text();
+            rowYCell = yCell;
             rowCount = 0;
             rowLine = line;
             ny++;
         }
 
         private void endRow() throws FieldMapFormatException {
-            if (rowYText == null) {
+            if (rowYCell == null) {
                 return;
             }
             if (nx < 0) {
                 nx = rowCount;
             } else if (rowCount != nx) {
-                throw csv.error(lastLine, 0, "the row at y = " + rowYText + " (from line " + rowLine + ") has " + rowCount
+                throw csv.error(lastLine, 0, "the row at y = " + rowYCell.text() + " (from line " + rowLine + ") has " + rowCount
                         + " samples, the first row has " + nx + "; every row needs the same x positions");
             }
         }

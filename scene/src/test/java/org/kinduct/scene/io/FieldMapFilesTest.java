@@ -60,6 +60,33 @@ class FieldMapFilesTest {
     }
 
     @Test
+    void fieldsSplitAcrossReadsAndByteOrderMarkReadAsText() throws Exception {
+        StringBuilder text = new StringBuilder("\uFEFFx [µm],y [µm],Bz [µT]\n");
+        int n = 2000; // about 60 kB per row: fields straddle the reader's 64 kB buffer
+        for (int j = 0; j < 3; j++) {
+            for (int i = 0; i < n; i++) {
+                text.append(i).append(".000000000000").append(',').append(j).append(",   ").append(i * 0.125 + j)
+                        .append('\n');
+            }
+        }
+        FieldGrid g = points(text.toString());
+        assertEquals(n, g.nx());
+        assertEquals(3, g.ny());
+        assertEquals(1e-6, g.dxM(), 1e-18);
+        assertEquals((1999 * 0.125 + 1) * 1e-6, g.at(1999, 1), 1e-18, "last sample, in µT");
+    }
+
+    @Test
+    void columnsCountCharactersAndTextThatIsNotUtf8IsNamed() {
+        assertEquals("scan.csv:1:14: column 'y' has no unit; write it as 'y_m' or 'y [mm]'",
+                problem("Bz [µT],x_µm,y\n"), "µ is two bytes but one character");
+        byte[] latin1 = "x_m,y_m,Bz [\u00b5T]\n0,0,1\n".getBytes(StandardCharsets.ISO_8859_1);
+        assertEquals("scan.csv:1:9: the text here is not UTF-8; save the file as UTF-8", assertThrows(
+                FieldMapFormatException.class, () -> FieldMapCsv.readPoints(new ByteArrayInputStream(latin1), "scan.csv"))
+                .getMessage());
+    }
+
+    @Test
     void raggedMatrixIsNamedByLine() {
         String message = assertThrows(FieldMapFormatException.class, () -> FieldMapCsv.readMatrix(
                 new ByteArrayInputStream("1,2,3\n4,5,6\n7,8\n".getBytes(StandardCharsets.UTF_8)), "m.csv", Vec2.ZERO,

@@ -29,7 +29,7 @@ import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
- * Loading a 2000 × 2000 field map (4 million samples, 107 MB in the export's form with full-precision
+ * Loading a 2000 × 2000 field map (4 million samples, 212 MB in the export's form with full-precision
  * numbers): reading and checking the CSV, and that plus the interpolation tables the first solve
  * builds. The goal is under a second for both.
  */
