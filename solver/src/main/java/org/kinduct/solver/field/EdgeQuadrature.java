@@ -288,6 +288,12 @@ public final class EdgeQuadrature {
         }
 
         Estimate integrate() {
+            Estimate estimate = refine();
+            WorkTally.add(evaluations);
+            return estimate;
+        }
+
+        private Estimate refine() {
             for (int e = 0; e < edges; e++) {
                 int next = e + 1 == xs.length ? 0 : e + 1;
                 double start = 0;

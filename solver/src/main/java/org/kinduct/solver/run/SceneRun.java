@@ -2,7 +2,6 @@ package org.kinduct.solver.run;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
 import java.util.stream.IntStream;
 import org.hipparchus.exception.MathRuntimeException;
@@ -201,19 +200,14 @@ public final class SceneRun {
         // it is sampled whichever way the count goes.
         List<Double> extras = new ArrayList<>(request.extraInstantsS());
         extras.add(gridEnd);
-        StepBudget budget = new StepBudget(monitor, steps + 1 + request.extraInstantsS().size());
+        WorkBudget budget = new WorkBudget(monitor, steps + 1 + request.extraInstantsS().size());
         CoupledRun run;
         try {
             run = new CoupledSimulation(CoupledSimulation.DEFAULT_RELATIVE_TOLERANCE, plan().circuit())
                     .simulate(local, w.t0S(), Math.max(w.t1S(), gridEnd), w.dtS(), extras, budget);
         } catch (SimulationCancelledException stopped) {
             if (budget.exceeded()) {
-                throw new RunFailedException(String.format(Locale.ROOT, "the coupled run would take about %.3g"
-                        + " integrator steps (at most %.0f are taken here: 1000 per sample, at least 100 000, at most 10 million): the scene"
-                        + " changes far faster than the sampling step dt = %s s can follow (a stiff spring, strong"
-                        + " damping or a light free body, a loop's L/R much shorter than dt with --circuit inductive,"
-                        + " or a prescribed motion much faster than dt)", budget.projectedSteps(), budget.maxSteps(),
-                        w.dtS()), stopped);
+                throw new RunFailedException(budget.reason(w.dtS()), stopped);
             }
             throw stopped;
         } catch (IllegalArgumentException | MathRuntimeException failed) {
