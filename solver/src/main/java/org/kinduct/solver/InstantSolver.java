@@ -53,10 +53,12 @@ final class InstantSolver {
     private final boolean idealVarying;
     private final double pieceM;
     private final double tS;
+    private final PairMemo memo;
 
-    InstantSolver(SceneIndex index, DifferenceStep step, Kinematics kinematics, double tS) {
+    InstantSolver(SceneIndex index, DifferenceStep step, Kinematics kinematics, double tS, PairMemo memo) {
         this.index = index;
         this.tS = tS;
+        this.memo = memo;
         now = index.frame(kinematics, tS);
         List<Conductor> conductors = index.scene().conductors();
         placed = new ArrayList<>(conductors.size());
@@ -183,8 +185,8 @@ final class InstantSolver {
         boolean anyStencil = false;
         for (int s = 0; s < sources; s++) {
             if (paired[s]) {
-                RigidPair pair = RigidPair.of((GradientField) now.field(s), now.pose(index.sourceBody(s)), at,
-                        now.pose(index.vertexBody(c, 0)));
+                RigidPair pair = memo.pair(index.scene().sources().get(s), (GradientField) now.field(s),
+                        now.pose(index.sourceBody(s)), at, now.pose(index.vertexBody(c, 0)), tS);
                 fluxNow[s] = pair.fluxWb();
                 pairedRate += pair.fluxRateWbPerS();
                 pairedMotional += pair.motionalV();

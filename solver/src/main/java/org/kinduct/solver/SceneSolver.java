@@ -60,6 +60,7 @@ public final class SceneSolver {
     private final Kinematics kinematics;
     private final SceneIndex index;
     private final DifferenceStep step;
+    private final PairMemo memo;
 
     /** Bodies follow their prescribed motions ({@link Kinematics#prescribed}). */
     public SceneSolver(Scene scene) {
@@ -67,15 +68,21 @@ public final class SceneSolver {
     }
 
     public SceneSolver(Scene scene, Kinematics kinematics) {
+        this(scene, kinematics, PairMemo.NONE);
+    }
+
+    /** @param memo rigid pairs' integrals shared with the runs of other variants of the scene */
+    public SceneSolver(Scene scene, Kinematics kinematics, PairMemo memo) {
         this.kinematics = Checks.nonNull(kinematics, "kinematics");
         this.index = new SceneIndex(Checks.nonNull(scene, "scene"));
         this.step = new DifferenceStep(scene);
+        this.memo = Checks.nonNull(memo, "memo");
     }
 
     /** Every conductor's state at {@code tS}, seconds. */
     public Snapshot at(double tS) {
         Checks.finite(tS, "time");
-        return new InstantSolver(index, step, kinematics, tS).solve();
+        return new InstantSolver(index, step, kinematics, tS, memo).solve();
     }
 
     /**

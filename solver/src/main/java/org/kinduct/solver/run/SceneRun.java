@@ -16,6 +16,7 @@ import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.Kinematics;
+import org.kinduct.solver.PairMemo;
 import org.kinduct.solver.SceneField;
 import org.kinduct.solver.SceneSolver;
 import org.kinduct.solver.SheetState;
@@ -83,6 +84,14 @@ public final class SceneRun {
      *        caller may keep cores free for its display)
      */
     public SceneRun(Scene scene, RunRequest request, RunMonitor monitor, boolean parallel) {
+        this(scene, request, monitor, parallel, PairMemo.NONE);
+    }
+
+    /**
+     * As {@link #SceneRun(Scene, RunRequest, RunMonitor, boolean)}, sharing rigid pairs' integrals
+     * with the runs of other variants of the scene through {@code memo} (the results are the same).
+     */
+    public SceneRun(Scene scene, RunRequest request, RunMonitor monitor, boolean parallel, PairMemo memo) {
         this.scene = Checks.nonNull(scene, "scene");
         this.request = Checks.nonNull(request, "request");
         this.monitor = Checks.nonNull(monitor, "monitor");
@@ -91,7 +100,7 @@ public final class SceneRun {
         Scene moved = centre.equals(Vec2.ZERO) ? scene : movedOrNull(scene, centre);
         this.origin = moved == null ? Vec2.ZERO : centre;
         this.local = moved == null ? scene : moved;
-        this.prescribed = new SceneSolver(local);
+        this.prescribed = new SceneSolver(local, Kinematics.prescribed(local), memo);
         this.fields = origin.equals(Vec2.ZERO) ? prescribed : new SceneSolver(scene);
         this.motions = Kinematics.prescribed(scene);
         this.sheets = Sheets.of(scene);

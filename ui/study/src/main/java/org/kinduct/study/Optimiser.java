@@ -18,6 +18,7 @@ import org.hipparchus.optim.univariate.SearchInterval;
 import org.hipparchus.optim.univariate.UnivariateObjectiveFunction;
 import org.hipparchus.random.MersenneTwister;
 import org.kinduct.report.metrics.Metric;
+import org.kinduct.solver.PairMemo;
 import org.kinduct.solver.dynamics.RunMonitor;
 
 /**
@@ -74,6 +75,8 @@ public final class Optimiser {
     private final Listener listener;
     private final List<Evaluation> history = new ArrayList<>();
     private final Map<List<Double>, Double> seen = new HashMap<>();
+    /** Integrals of the sources and loops the bounded values leave alone, shared by every evaluation. */
+    private final PairMemo memo = new PairMemo();
     private double goalScale = Double.NaN;
 
     public Optimiser(Optimisation optimisation, Listener listener) {
@@ -182,7 +185,8 @@ public final class Optimiser {
         o.constraints().forEach(c -> metrics.add(c.metric()));
         Evaluation e;
         try {
-            double[] read = PointRun.read(o.sceneAt(u), metrics, o.fromS(), o.circuit(), RunMonitor.NONE, true);
+            double[] read = PointRun.read(o.sceneAt(u), metrics, o.fromS(), o.circuit(), RunMonitor.NONE, true,
+                    memo);
             double[] constrained = Arrays.copyOfRange(read, 1, read.length);
             boolean feasible = !Double.isNaN(read[0]);
             for (int c = 0; c < constrained.length; c++) {

@@ -9,6 +9,7 @@ import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
 import org.kinduct.scene.Checks;
+import org.kinduct.solver.PairMemo;
 import org.kinduct.solver.dynamics.RunMonitor;
 import org.kinduct.solver.dynamics.SimulationCancelledException;
 
@@ -31,6 +32,8 @@ public final class StudyRunner {
     private final int threads;
     private final Listener listener;
     private final ConcurrentSkipListMap<Integer, Row> rows = new ConcurrentSkipListMap<>();
+    /** The points' shared integrals of the sources and loops a point's values leave alone. */
+    private final PairMemo memo = new PairMemo();
     private volatile boolean stopping;
 
     public StudyRunner(Study study, Shard shard, int threads, Listener listener) {
@@ -79,7 +82,7 @@ public final class StudyRunner {
                     int i;
                     while (!stopping && (i = next.getAndIncrement()) < points.size()) {
                         try {
-                            Row row = PointRun.run(study, points.get(i), monitor, false);
+                            Row row = PointRun.run(study, points.get(i), monitor, false, memo);
                             rows.put(row.point(), row);
                             listener.finished(row, rows.size(), points.size());
                         } catch (SimulationCancelledException stopped) {

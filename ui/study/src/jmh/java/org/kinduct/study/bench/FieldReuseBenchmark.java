@@ -1,10 +1,12 @@
 package org.kinduct.study.bench;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.kinduct.demo.Demos;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.path.SceneValues;
+import org.kinduct.solver.PairMemo;
 import org.kinduct.solver.dynamics.RunMonitor;
 import org.kinduct.solver.run.RunRequest;
 import org.kinduct.solver.run.SceneRun;
@@ -21,10 +23,10 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
- * What reusing unchanged sources between sweep points could save: one point of a stand-off
- * sweep of the carriage demo's third magnet, on one thread, with all six magnets ({@code all})
- * or with the varied magnet alone ({@code varied}), which is what a point would cost if the five
- * unchanged magnets' contributions came free from a cache. all/varied bounds the gain.
+ * What reusing unchanged sources between sweep points saves: {@value #POINTS} points of a
+ * stand-off sweep of the carriage demo's third magnet (six magnets, 401 instants a point), on one
+ * thread, with the points sharing one {@link PairMemo} ({@code shared}, as studies run) or
+ * integrating every pair afresh ({@code none}). none/shared is the gain.
  *
  * <pre>java -jar ui/study/target/benchmarks.jar FieldReuseBenchmark</pre>
  */
@@ -36,20 +38,28 @@ import org.openjdk.jmh.annotations.Warmup;
 @Measurement(iterations = 5)
 public class FieldReuseBenchmark {
 
-    @Param({"all", "varied"})
-    public String sources;
+    static final int POINTS = 8;
 
-    private Scene point;
+    @Param({"shared", "none"})
+    public String memo;
+
+    private final List<Scene> points = new ArrayList<>();
 
     @Setup
     public void setUp() {
-        Scene scene = SceneValues.of(Demos.load("carriage-pickup")).write("magnet-3.standoff", 2e-3);
-        point = sources.equals("all") ? scene
-                : scene.without(List.of("magnet-1", "magnet-2", "magnet-4", "magnet-5", "magnet-6"));
+        Scene carriage = Demos.load("carriage-pickup");
+        for (int k = 0; k < POINTS; k++) {
+            points.add(SceneValues.of(carriage).write("magnet-3.standoff", 1e-3 + k * 0.25e-3));
+        }
     }
 
     @Benchmark
-    public Object point() {
-        return new SceneRun(point, RunRequest.of(point), RunMonitor.NONE, false).result();
+    public Object sweep() {
+        PairMemo shared = memo.equals("shared") ? new PairMemo() : PairMemo.NONE;
+        List<Object> results = new ArrayList<>();
+        for (Scene point : points) {
+            results.add(new SceneRun(point, RunRequest.of(point), RunMonitor.NONE, false, shared).result());
+        }
+        return results;
     }
 }
