@@ -28,8 +28,10 @@ import org.kinduct.solver.run.SceneRun;
  * a finite value for every quantity that applies, or — for what only shows while running, such as
  * a response far faster than the sampling step — be stopped by the run with
  * {@link RunFailedException} stating the reason. Anything else — any other exception, a NaN or
- * infinite result, an input that takes longer than {@value #DEADLINE_S} s — fails, with the seed
- * to replay it.
+ * infinite result, an input that takes longer than the deadline — fails, with the seed to replay
+ * it. The deadline, 60 s, guards against a run without end on an idle machine (runs are bounded in
+ * work, {@code run.WorkBudget}, to about half a minute there); on a loaded machine
+ * {@code -Dkinduct.fuzz.deadline=S} gives the inputs more wall-clock time.
  *
  * <p>{@code -Dkinduct.fuzz.inputs=N} sets the number of inputs; the {@code fuzz} Maven profile runs
  * 100 000. Each input is solved over its first {@value #STEPS} steps.
@@ -43,7 +45,7 @@ class SceneFuzzTest {
     /** Seeds to replay instead of the range ({@code -Dkinduct.fuzz.seeds=1592652005,1592652203}). */
     private static final String REPLAY = System.getProperty("kinduct.fuzz.seeds", "");
     private static final int STEPS = 2;
-    private static final long DEADLINE_S = 60;
+    private static final long DEADLINE_S = Long.getLong("kinduct.fuzz.deadline", 60);
     private static final int SHOWN_FAILURES = 20;
 
     enum Outcome { REFUSED, SOLVED, STOPPED }
