@@ -108,16 +108,16 @@ public final class FieldMapCsv {
         }
     }
 
-    /** A coordinate as read: its SI value, its text as written (a number, so ASCII), and its column. */
+    /** The coordinate just read: its SI value, its text as written (a number, so ASCII), and its column; reused row after row. */
     private static final class Cell {
-        private final double value;
-        private final byte[] written;
-        private final int column;
+        private double value;
+        private byte[] written;
+        private int column;
 
-        Cell(double value, byte[] written, int column) {
-            this.value = value;
-            this.written = written;
-            this.column = column;
+        void set(double atValue, byte[] text, int atColumn) {
+            value = atValue;
+            written = text;
+            column = atColumn;
         }
 
         double value() {
@@ -134,13 +134,12 @@ public final class FieldMapCsv {
         }
 
         String text() {
-            return new String(written, StandardCharsets.US_ASCII);
+            return ascii(written);
         }
+    }
 
-        /** The same value and text, read again at {@code column}. */
-        Cell at(int atColumn) {
-            return new Cell(value, written, atColumn);
-        }
+    private static String ascii(byte[] text) {
+        return new String(text, StandardCharsets.US_ASCII);
     }
 
     /** One column of a points file: its index and the factor from its unit to SI. */
@@ -156,13 +155,15 @@ public final class FieldMapCsv {
         private Column bz;
         private int fieldCount;
         /** The first row's x texts and values; later rows usually repeat the texts exactly. */
-        private Cell[] xCells = new Cell[64];
+        private byte[][] xWritten = new byte[64][];
         private double[] xs = new double[64];
         private int nx = -1;
         private int ny;
         private double y0;
         private double dy;
-        private Cell rowYCell;
+        private byte[] rowYWritten;
+        private final Cell xCell = new Cell();
+        private final Cell yCell = new Cell();
         private double rowY;
         private int rowCount;
         private int rowLine;
@@ -197,8 +198,6 @@ public final class FieldMapCsv {
          * three times slower than later ones that way.
          */
         private void row() throws IOException, FieldMapFormatException {
-            Cell xCell = null;
-            Cell yCell = null;
             double bzValue = Double.NaN;
             int f = 0;
             while (csv.nextField()) {
@@ -206,12 +205,10 @@ public final class FieldMapCsv {
                     throw csv.error("more values than the header's " + fieldCount + " columns");
                 }
                 if (f == x.index()) {
-                    xCell = nx > 0 && rowCount < nx && csv.sameBytes(xCells[rowCount].written())
-                            ? xCells[rowCount].at(csv.column())
-                            : new Cell(csv.number("x") * x.toSi(), csv.bytes(), csv.column());
+                    boolean known = nx > 0 && rowCount < nx;
+                    read(xCell, known ? xWritten[rowCount] : null, known ? xs[rowCount] : 0, "x", x.toSi());
                 } else if (f == y.index()) {
-                    yCell = rowYCell != null && csv.sameBytes(rowYCell.written()) ? rowYCell.at(csv.column())
-                            : new Cell(csv.number("y") * y.toSi(), csv.bytes(), csv.column());
+                    read(yCell, rowYWritten, rowY, "y", y.toSi());
                 } else if (f == bz.index()) {
                     bzValue = csv.number("B_z") * bz.toSi();
                 }
@@ -220,7 +217,17 @@ public final class FieldMapCsv {
             if (f < fieldCount) {
                 throw csv.error(csv.line(), 0, "this row has " + f + " values, the header has " + fieldCount);
             }
-            sample(csv.line(), xCell, yCell, bzValue);
+            sample(csv.line(), bzValue);
+        }
+
+        /** Reads a coordinate into {@code cell}: the value known for {@code knownText} when the field repeats it exactly. */
+        private void read(Cell cell, byte[] knownText, double knownValue, String axis, double toSi)
+                throws FieldMapFormatException {
+            if (knownText != null && csv.sameBytes(knownText)) {
+                cell.set(knownValue, knownText, csv.column());
+            } else {
+                cell.set(csv.number(axis) * toSi, csv.bytes(), csv.column());
+            }
         }
 
         private void header() throws IOException, FieldMapFormatException {
@@ -281,31 +288,31 @@ public final class FieldMapCsv {
         }
 
         /** Places one sample: the next in the current row, or the first of a new row. */
-        private void sample(int line, Cell xCell, Cell yCell, double bzValue) throws FieldMapFormatException {
-            if (rowYCell == null || yCell.value() != rowY) {
+        private void sample(int line, double bzValue) throws FieldMapFormatException {
+            if (rowYWritten == null || yCell.value() != rowY) {
                 endRow();
-                startRow(line, yCell);
+                startRow(line);
             }
             if (nx < 0) {
                 if (rowCount > 0 && !(xCell.value() > xs[rowCount - 1])) {
                     throw csv.error(line, xCell.column(), "x must increase along a row (x fastest, rows from the"
-                            + " lowest y, as Kinduct writes); x = " + xCell.text() + " follows " + xCells[rowCount - 1].text());
+                            + " lowest y, as Kinduct writes); x = " + xCell.text() + " follows " + ascii(xWritten[rowCount - 1]));
                 }
                 if (rowCount >= 2) {
                     checkUniform(line, xCell, "x", xs[0], xs[1] - xs[0], rowCount);
                 }
                 if (rowCount == xs.length) {
                     xs = Arrays.copyOf(xs, 2 * rowCount);
-                    xCells = Arrays.copyOf(xCells, 2 * rowCount);
+                    xWritten = Arrays.copyOf(xWritten, 2 * rowCount);
                 }
                 xs[rowCount] = xCell.value();
-                xCells[rowCount] = xCell;
+                xWritten[rowCount] = xCell.written();
             } else if (rowCount >= nx) {
-                throw csv.error(line, xCell.column(), "the row at y = " + rowYCell.text() + " (from line " + rowLine
+                throw csv.error(line, xCell.column(), "the row at y = " + ascii(rowYWritten) + " (from line " + rowLine
                         + ") has more than " + nx + " samples, the number in the first row");
             } else if (Math.abs(xCell.value() - xs[rowCount]) > SPACING_TOLERANCE * (xs[1] - xs[0])) {
                 throw csv.error(line, xCell.column(), "x = " + xCell.text() + " is not the grid's column "
-                        + (rowCount + 1) + " (x = " + xCells[rowCount].text() + " in the first row); every row needs the"
+                        + (rowCount + 1) + " (x = " + ascii(xWritten[rowCount]) + " in the first row); every row needs the"
                         + " same x positions");
             }
             samples.add(bzValue);
@@ -313,32 +320,32 @@ public final class FieldMapCsv {
             lastLine = line;
         }
 
-        private void startRow(int line, Cell yCell) throws FieldMapFormatException {
+        private void startRow(int line) throws FieldMapFormatException {
             if (ny == 0) {
                 y0 = yCell.value();
             } else if (!(yCell.value() > rowY)) {
                 throw csv.error(line, yCell.column(), "y must increase from row to row (x fastest, rows from the"
-                        + " lowest y, as Kinduct writes); y = " + yCell.text() + " follows " + rowYCell.text());
+                        + " lowest y, as Kinduct writes); y = " + yCell.text() + " follows " + ascii(rowYWritten));
             } else if (ny == 1) {
                 dy = yCell.value() - y0;
             } else {
                 checkUniform(line, yCell, "y", y0, dy, ny);
             }
             rowY = yCell.value();
-            rowYCell = yCell;
+            rowYWritten = yCell.written();
             rowCount = 0;
             rowLine = line;
             ny++;
         }
 
         private void endRow() throws FieldMapFormatException {
-            if (rowYCell == null) {
+            if (rowYWritten == null) {
                 return;
             }
             if (nx < 0) {
                 nx = rowCount;
             } else if (rowCount != nx) {
-                throw csv.error(lastLine, 0, "the row at y = " + rowYCell.text() + " (from line " + rowLine + ") has " + rowCount
+                throw csv.error(lastLine, 0, "the row at y = " + ascii(rowYWritten) + " (from line " + rowLine + ") has " + rowCount
                         + " samples, the first row has " + nx + "; every row needs the same x positions");
             }
         }
