@@ -221,6 +221,42 @@ public final class EdgeQuadrature {
     }
 
     /**
+     * QUADPACK's test for an integrand whose rounding noise, not the rule, limits the error
+     * (routine {@code dqage}, its {@code iroff1}/{@code iroff2} counters and error flag 2; Piessens
+     * et al. 1983, §4.3): a bisection that changes the panel's value by no more than 1e-5 of it
+     * while removing less than 1 % of its error, six times, or that raises the error, twenty times
+     * once ten panels exist, means that further bisection only samples the noise. The integral is
+     * then as good as its integrand allows and is returned as not converged, instead of spending
+     * the budget (closed-form fields far from their source lose digits to cancellation; a loop a
+     * few hundred millimetres from a magnet spent 20 000 evaluations per integral on that noise).
+     */
+    private static final class Roundoff {
+        private int unchanged;
+        private int growing;
+
+        /**
+         * @param resolved false when a half's error estimate is as large as its integral of |f|
+         *        (the rule sees nothing yet; QUADPACK's {@code defabs} guard)
+         */
+        void bisected(double parentValue, double parentError, double halvesValue, double halvesError,
+                      boolean resolved, int panels) {
+            if (!resolved) {
+                return;
+            }
+            if (Math.abs(parentValue - halvesValue) <= 1e-5 * Math.abs(halvesValue) && halvesError >= 0.99 * parentError) {
+                unchanged++;
+            }
+            if (panels > 10 && halvesError > parentError) {
+                growing++;
+            }
+        }
+
+        boolean detected() {
+            return unchanged >= 6 || growing >= 20;
+        }
+    }
+
+    /**
      * The state of one integration; panels live in parallel primitive arrays, the values of the
      * {@code k} integrands of panel i at [i·k, i·k + k).
      */
@@ -232,6 +268,7 @@ public final class EdgeQuadrature {
         private final int edges;
         private final boolean controlFirstMoment;
         private final Breaks breaks;
+        private final Roundoff roundoff = new Roundoff();
         private int evaluations;
 
         private int count;
@@ -326,6 +363,7 @@ public final class EdgeQuadrature {
                 boolean met = true;
                 double worstShare = -1;
                 int worst = -1;
+                int worstIntegrand = 0;
                 for (int c = 0; c < k; c++) {
                     double scale = controlFirstMoment ? Math.abs(sums0[c]) + Math.abs(sums1[c]) : Math.abs(sums0[c]);
                     double tolerance = Math.max(relativeTolerance * scale, CANCELLATION_FLOOR * parts[c]);
@@ -336,21 +374,29 @@ public final class EdgeQuadrature {
                         if (panelShare > worstShare && hi[i] - lo[i] > SMALLEST_PANEL) {
                             worstShare = panelShare;
                             worst = i;
+                            worstIntegrand = c;
                         }
                     }
                 }
                 if (met) {
                     return new Estimate(sums0[0], sums1[0], totalError[0], evaluations, true);
                 }
-                if (worst < 0 || evaluations + 2 * PANEL_EVALUATIONS > maxEvaluations) {
+                if (worst < 0 || evaluations + 2 * PANEL_EVALUATIONS > maxEvaluations || roundoff.detected()) {
                     return new Estimate(sums0[0], sums1[0], totalError[0], evaluations, false);
                 }
-                split(worst);
+                int at = worst * k + worstIntegrand;
+                double parentValue = moment0[at];
+                double parentError = error[at];
+                int right = split(worst);
+                int left = worst * k + worstIntegrand;
+                int added = right * k + worstIntegrand;
+                roundoff.bisected(parentValue, parentError, moment0[left] + moment0[added], error[left] + error[added],
+                        error[left] < magnitude[left] && error[added] < magnitude[added], count);
             }
         }
 
-        /** Bisects panel {@code i} into itself and a new panel. */
-        private void split(int i) {
+        /** Bisects panel {@code i} into itself and a new panel; returns the new panel's index. */
+        private int split(int i) {
             int e = edge[i];
             double a = lo[i];
             double b = hi[i];
@@ -366,6 +412,7 @@ public final class EdgeQuadrature {
             for (int c = 0; c < k; c++) {
                 distrustSilentHalves(i * k + c, right * k + c, parent0[c], parent1[c]);
             }
+            return right;
         }
 
         /**

@@ -117,6 +117,21 @@ class EdgeQuadratureTest {
     }
 
     @Test
+    void anIntegrandWhoseNoiseLimitsTheErrorStopsEarlyAtTheNoiseLevel() {
+        // f = 1 + 1e-9·(deterministic noise in [−1, 1]): no rule gets the error below ~1e-9, so a
+        // 1e-12 tolerance is out of reach. QUADPACK's roundoff test (dqage, error flag 2; Piessens
+        // et al., QUADPACK, 1983, §4.3) stops once bisections stop reducing the error; without it
+        // the whole budget of 20 000 evaluations is spent on noise.
+        EdgeQuadrature.Estimate e = new EdgeQuadrature(1e-12, 20_000).segment((x, y, dx, dy) -> {
+            long bits = Double.doubleToLongBits(x) * 0x9E3779B97F4A7C15L;
+            return 1 + 1e-9 * ((bits >>> 11) * 0x1.0p-53 * 2 - 1);
+        }, 0, 0, 1, 0);
+        assertFalse(e.converged());
+        assertTrue(e.evaluations() < 2_000, "used " + e.evaluations());
+        assertEquals(1, e.value(), 1e-9, "as good as the integrand allows");
+    }
+
+    @Test
     void invalidSettingsAreRejectedWithTheRule() {
         IllegalArgumentException tolerance = assertThrows(IllegalArgumentException.class,
                 () -> new EdgeQuadrature(0, 1000));
