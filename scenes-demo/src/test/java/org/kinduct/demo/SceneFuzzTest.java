@@ -47,6 +47,8 @@ class SceneFuzzTest {
     private static final int STEPS = 2;
     private static final long DEADLINE_S = Long.getLong("kinduct.fuzz.deadline", 60);
     private static final int SHOWN_FAILURES = 20;
+    /** Inputs between progress lines. */
+    private static final int PROGRESS_EVERY = 1000;
 
     enum Outcome { REFUSED, SOLVED, STOPPED }
 
@@ -58,6 +60,7 @@ class SceneFuzzTest {
         long slowestNs = 0;
         long slowestSeed = 0;
         long first = FIRST_SEED + SKIP;
+        int tried = 0;
         long[] seeds = REPLAY.isBlank() ? java.util.stream.LongStream.range(first, first + INPUTS).toArray()
                 : java.util.Arrays.stream(REPLAY.split(",", -1)).mapToLong(t -> Long.parseLong(t.strip())).toArray();
         for (long seed : seeds) {
@@ -68,19 +71,29 @@ class SceneFuzzTest {
                 outcomes.merge(outcome(input), 1, Integer::sum);
             } catch (RuntimeException | AssertionError e) {
                 failures.add("seed " + seed + ": " + e);
+                System.out.println("fuzz: failed: seed " + seed + ": " + e);
             }
             long ns = System.nanoTime() - start;
             if (ns > slowestNs) {
                 slowestNs = ns;
                 slowestSeed = seed;
             }
+            tried++;
+            if (tried % PROGRESS_EVERY == 0 && tried < seeds.length) {
+                report(tried, outcomes, failures.size(), slowestNs, slowestSeed);
+            }
         }
-        System.out.printf("fuzz: %d inputs: %d refused with a located message, %d solved finite, %d stopped by the"
-                        + " run with the reason, %d failed; slowest %.2f s (seed %d)%n", seeds.length,
-                outcomes.getOrDefault(Outcome.REFUSED, 0), outcomes.getOrDefault(Outcome.SOLVED, 0),
-                outcomes.getOrDefault(Outcome.STOPPED, 0), failures.size(), slowestNs / 1e9, slowestSeed);
+        report(seeds.length, outcomes, failures.size(), slowestNs, slowestSeed);
         assertTrue(failures.isEmpty(), failures.size() + " of " + seeds.length + " inputs failed, e.g.:\n"
                 + String.join("\n", failures.subList(0, Math.min(SHOWN_FAILURES, failures.size()))));
+    }
+
+    /** Prints the outcomes so far: a long run shows its progress, and a stopped one its figures. */
+    private static void report(int tried, Map<Outcome, Integer> outcomes, int failed, long slowestNs, long slowestSeed) {
+        System.out.printf("fuzz: %d inputs: %d refused with a located message, %d solved finite, %d stopped by the"
+                        + " run with the reason, %d failed; slowest %.2f s (seed %d)%n", tried,
+                outcomes.getOrDefault(Outcome.REFUSED, 0), outcomes.getOrDefault(Outcome.SOLVED, 0),
+                outcomes.getOrDefault(Outcome.STOPPED, 0), failed, slowestNs / 1e9, slowestSeed);
     }
 
     /** What the loader and the solver make of {@code input}; throws when it is neither outcome. */
