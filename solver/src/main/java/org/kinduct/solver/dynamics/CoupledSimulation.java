@@ -63,6 +63,14 @@ import org.kinduct.solver.dynamics.StateLayout.BodyDof;
  * rails) are contacts: their force is taken by the guide, not applied to a body. Forces between
  * sources (magnet on magnet) are not modelled. Prescribed and free bodies mix.
  *
+ * <p><b>Plates and channels</b> that ride a free body, or lie under a source that does, are solved
+ * at every evaluation in the resistive limit ({@link org.kinduct.solver.plate.SheetBrakes}): their
+ * drag and torque act on their body, each moving source body takes minus its sources' share, and
+ * their Joule heat is booked as its own audit term (a channel's pump work as holding work, AC
+ * coils' share as drive work). Under a field that jumps in the plane (a patch's rim) their drag
+ * has kinks as the grid crosses the rim, and the run integrates at a relative tolerance of at
+ * most {@value #SHEETS_AT_FIELD_EDGES_TOLERANCE}.
+ *
  * <p><b>Integration.</b> The equations are {@code CoupledEquations} over the named state layout
  * {@code StateLayout}, put together from parts with one job each (free-body mechanics, loop
  * circuits, edge forces, transformer stencil, inductive forces, coil drives, energy ledger); the

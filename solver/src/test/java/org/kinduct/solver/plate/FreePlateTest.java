@@ -8,6 +8,7 @@ import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.MeanFlow;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
@@ -104,6 +105,46 @@ class FreePlateTest {
         // Conservation of energy (Griffiths, Introduction to Electrodynamics, 4th ed., 2013, §8.1):
         // the sheet's Joule heat is the work its drag takes, −F·v − τ·ω, to the solver's residual.
         assertEquals(0, audit.residualJ(), 1e-6 * audit.turnedOverJ(), "audit residual");
+    }
+
+    /**
+     * The heat of a free plate or channel supplied from elsewhere enters the audit as that supply:
+     * a shaker holding one of two magnets on its path (holding work; each magnet's body takes its
+     * own share of the reaction), a pump keeping a channel's flow against the field (holding work),
+     * an AC coil's drive (drive work). Each closes to 1e-6 of the energy turned over
+     * (conservation of energy, Griffiths §8.1).
+     */
+    @Test
+    void theAuditClosesWhateverSuppliesTheHeat() {
+        Motion.Free onSpring = new Motion.Free(0.01, 0, new Vec2(0.2, 0), 0, 0, Vec2.ZERO, Vec2.ZERO, 0,
+                List.of(new Motion.Free.Spring(Vec2.ZERO, null, 50, 0)));
+        Body slider = new Body("slider", "slider", Vec2.ZERO, onSpring);
+        Body shaker = new Body("shaker", "shaker", Vec2.ZERO, new Motion.Oscillate(0.004, 40, Math.PI / 2, 0));
+        Conductor.Plate plate = plate("plate", "slider", PlateScenes.rectangle(-0.02, -0.01, 0.02, 0.01),
+                OptionalDouble.empty());
+        Scene shaken = new Scene("shaken", "", List.of(slider, shaker), List.of(
+                new Source.CylinderMagnet("shaken", "shaker", new Vec2(-0.008, 0), 0.004, 0.005, 0.002,
+                        Source.Side.BELOW, 1.2, Source.Magnetization.PLUS_Z),
+                new Source.CylinderMagnet("still", Body.FIXED, new Vec2(0.008, 0), 0.004, 0.005, 0.002,
+                        Source.Side.BELOW, 1.2, Source.Magnetization.MINUS_Z)), List.of(plate),
+                new TimeSpan(0, 0.03, 0.001));
+        Conductor.Channel duct = new Conductor.Channel("duct", "slider", new Vec2(-0.03, 0), new Vec2(0.03, 0), 0.01,
+                0.005, 1e6, Conductor.Channel.Profile.LAMINAR, new MeanFlow.Steady(2), List.of(), List.of(),
+                OptionalDouble.empty());
+        Scene pumped = new Scene("pumped", "", List.of(slider), List.of(magnet(Source.Magnetization.PLUS_Z)),
+                List.of(duct), new TimeSpan(0, 0.03, 0.001));
+        Source.SourceCoil coil = new Source.SourceCoil("coil", Body.FIXED,
+                new Source.CoilShape.Circle(new Vec2(0.01, 0), 0.008), 200, -0.003, new Source.Drive(0, 2, 100, 0));
+        Scene driven = new Scene("driven", "", List.of(slider), List.of(coil), List.of(plate),
+                new TimeSpan(0, 0.02, 0.0005));
+        for (Scene scene : List.of(shaken, pumped, driven)) {
+            EnergyAudit audit = new SceneRun(scene).result().audit().orElseThrow();
+            System.out.println(scene.name() + ": " + audit + ", residual/turned over "
+                    + audit.residualJ() / audit.turnedOverJ());
+            double supplied = scene == driven ? audit.driveJ() : audit.holdingJ();
+            assertTrue(supplied > 0.01 * audit.eddyJ(), scene.name() + ": supplied " + supplied + " J");
+            assertEquals(0, audit.residualJ(), 1e-6 * audit.turnedOverJ(), scene.name() + ": audit residual");
+        }
     }
 
     /**
