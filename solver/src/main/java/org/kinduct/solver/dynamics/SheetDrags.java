@@ -39,6 +39,7 @@ final class SheetDrags {
         double joule = 0;
         double pump = 0;
         double drive = 0;
+        // The sheets ask for poses at tS only, so the evaluation's poses serve as the kinematics.
         for (SheetBrakes.Load load : brakes.at(tS, (bodyId, t) -> poses[index.body(bodyId)], beforeSolve)) {
             int b = index.body(load.bodyId());
             loads.fx[b] += load.forceN().x();
