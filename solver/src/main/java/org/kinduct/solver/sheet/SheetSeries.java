@@ -31,10 +31,6 @@ public final class SheetSeries {
         last = new double[operator.size()];
     }
 
-    public SheetGrid grid() {
-        return grid;
-    }
-
     /** Solves the sheet under {@code drive}, torques about {@code pivotM}; see {@link SheetSolver#solve}. */
     public SheetSolution solve(SheetConductor conductor, SheetDrive drive, Vec2 pivotM) {
         return solver.solve(grid, operator, preconditioner, hosts, electrodes, last, conductor, drive, pivotM);
