@@ -94,7 +94,7 @@ public final class SceneIndex {
     }
 
     /** True when some source's B_z jumps across edges in the plane ({@link SourceReach#jumps()}). */
-    boolean fieldJumpsInPlane() {
+    public boolean fieldJumpsInPlane() {
         for (SourceReach r : reach) {
             if (r.jumps()) {
                 return true;

@@ -1,5 +1,6 @@
 package org.kinduct.solver.dynamics;
 
+import java.util.function.DoubleConsumer;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
@@ -16,7 +17,8 @@ import org.kinduct.solver.field.PlaneField;
  * linkage, currents), {@link EdgeForces} (motional EMF and forces of the sources on the loop
  * edges, with reactions), {@link TransformerStencil} (EMF of changing sources in a loop held
  * still, quasi-static model), {@link InductiveForces} (forces from ½·IᵀMI, inductive model),
- * {@link CoilDrives} (power of AC source coils) and {@link EnergyLedger} (the audit integrals).
+ * {@link CoilDrives} (power of AC source coils), {@link SheetDrags} (drag of plates and channels,
+ * with reactions) and {@link EnergyLedger} (the audit integrals).
  *
  * <p><b>Circuit state.</b> For the {@link CircuitModel#INDUCTIVE} model, loop k's state is its
  * total linkage less its external linkage at the start, Ψ_k − λ_ext,k(t0) with Ψ_k = Σ_j M_kj I_j +
@@ -38,7 +40,10 @@ final class CoupledEquations implements OrdinaryDifferentialEquation {
     private final TransformerStencil transformer;
     private final InductiveForces inductiveForces;
     private final CoilDrives drives;
+    private final SheetDrags sheets;
     private final EnergyLedger ledger;
+    /** Called with t before each plate or channel solve: the run's stop check. */
+    private final DoubleConsumer beforeSheetSolve;
     /** Each closed loop's external linkage at t0, webers: the shift of its circuit state (inductive model). */
     private final double[] startLinkage;
     private final double[] initialState;
@@ -53,8 +58,10 @@ final class CoupledEquations implements OrdinaryDifferentialEquation {
      *        moving at their initial velocities, no loop current and nothing spent yet
      * @param timeStepS time step of the difference quotients of prescribed motion, seconds
      * @param circuitModel INDUCTIVE or QUASI_STATIC ({@link CircuitModel#resolveFor} resolves AUTO)
+     * @param beforeSheetSolve called with t before each plate or channel solve; may throw to stop the run
      */
-    CoupledEquations(Scene scene, double t0S, double timeStepS, CircuitModel circuitModel) {
+    CoupledEquations(Scene scene, double t0S, double timeStepS, CircuitModel circuitModel,
+                     DoubleConsumer beforeSheetSolve) {
         if (circuitModel == CircuitModel.AUTO) {
             throw new IllegalArgumentException("the coupled equations need a resolved circuit model, not AUTO");
         }
@@ -67,6 +74,8 @@ final class CoupledEquations implements OrdinaryDifferentialEquation {
         transformer = new TransformerStencil(index, bodies, timeStepS);
         inductiveForces = new InductiveForces(circuits, bodies, timeStepS);
         drives = new CoilDrives(index);
+        sheets = new SheetDrags(index);
+        this.beforeSheetSolve = beforeSheetSolve;
         ledger = new EnergyLedger(layout);
 
         initialState = new double[layout.dimension()];
@@ -104,6 +113,11 @@ final class CoupledEquations implements OrdinaryDifferentialEquation {
 
     SceneIndex index() {
         return index;
+    }
+
+    /** True when a plate or channel in these equations lies under a field that jumps in the plane. */
+    boolean sheetsUnderFieldEdges() {
+        return sheets.present() && index.fieldJumpsInPlane();
     }
 
     /** The state at t0 (a copy). */
@@ -184,6 +198,8 @@ final class CoupledEquations implements OrdinaryDifferentialEquation {
         // Also for a single loop: one that changes shape (a bar on rails) pushes itself with ½·I²·dL/dq.
         double inductiveHolding = inductive() && inductiveForces.present()
                 ? inductiveForces.apply(tS, poses, current, loads) : 0;
+        SheetDrags.Power eddy = sheets.present() ? sheets.apply(tS, poses, loads, beforeSheetSolve)
+                : SheetDrags.Power.NONE;
         FreeBodies.Power mechanical = bodies.addForces(tS, poses, loads);
 
         double[] derivative = new double[layout.dimension()];
@@ -196,9 +212,11 @@ final class CoupledEquations implements OrdinaryDifferentialEquation {
             joule += resistance[k] * current[k] * current[k];
         }
         ledger.book(derivative, AuditTerm.APPLIED, mechanical.appliedW());
-        ledger.book(derivative, AuditTerm.HOLDING, inductiveHolding + bodies.holdingPowerW(poses, loads));
-        ledger.book(derivative, AuditTerm.DRIVE, drives.powerW(tS, poses, current, circuits, xs, ys));
+        ledger.book(derivative, AuditTerm.HOLDING,
+                inductiveHolding + bodies.holdingPowerW(poses, loads) + eddy.pumpW());
+        ledger.book(derivative, AuditTerm.DRIVE, drives.powerW(tS, poses, current, circuits, xs, ys) + eddy.driveW());
         ledger.book(derivative, AuditTerm.JOULE, joule);
+        ledger.book(derivative, AuditTerm.EDDY, eddy.jouleW());
         ledger.book(derivative, AuditTerm.DAMPING, mechanical.dampingW());
         return new Evaluation(tS, poses, current, loopForce, inductance, derivative);
     }

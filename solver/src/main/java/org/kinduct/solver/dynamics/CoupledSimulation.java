@@ -63,6 +63,14 @@ import org.kinduct.solver.dynamics.StateLayout.BodyDof;
  * rails) are contacts: their force is taken by the guide, not applied to a body. Forces between
  * sources (magnet on magnet) are not modelled. Prescribed and free bodies mix.
  *
+ * <p><b>Plates and channels</b> that ride a free body, or lie under a source that does, are solved
+ * at every evaluation in the resistive limit ({@link org.kinduct.solver.plate.SheetBrakes}): their
+ * drag and torque act on their body, each moving source body takes minus its sources' share, and
+ * their Joule heat is booked as its own audit term (a channel's pump work as holding work, AC
+ * coils' share as drive work). Under a field that jumps in the plane (a patch's rim) their drag
+ * has kinks as the grid crosses the rim, and the run integrates at a relative tolerance of at
+ * most {@value #SHEETS_AT_FIELD_EDGES_TOLERANCE}.
+ *
  * <p><b>Integration.</b> The equations are {@code CoupledEquations} over the named state layout
  * {@code StateLayout}, put together from parts with one job each (free-body mechanics, loop
  * circuits, edge forces, transformer stencil, inductive forces, coil drives, energy ledger); the
@@ -90,6 +98,15 @@ public final class CoupledSimulation {
     public static final double DEFAULT_RELATIVE_TOLERANCE = 1e-10;
     /** Current scale for the absolute tolerance of the loop states, amperes. */
     private static final double CURRENT_SCALE_A = 1e-3;
+    /**
+     * The loosest relative tolerance of a run in which a plate or channel moves a free body across
+     * a field's edge (a patch's rim): its drag is then only piecewise linear in the pose, with a
+     * kink each time a cell's segment crosses the edge (thousands a second for a spinning disc),
+     * and at 1e-10 the integrator shrinks its steps at every kink (measured: 10 000 evaluations
+     * for a quarter of the window that takes 1100 at 1e-6). The drag's own lattice error there
+     * is some 1e-3.
+     */
+    static final double SHEETS_AT_FIELD_EDGES_TOLERANCE = 1e-6;
     /** Time step for the difference quotients of prescribed motion, as a fraction of the sampling step. */
     private static final double DIFFERENCE_STEP_FRACTION = 1e-4;
 
@@ -144,7 +161,8 @@ public final class CoupledSimulation {
         double endS = Math.max(t1S, times.last());
         stopIfCancelled(monitor, t0S, t0S, endS);
         double hS = DIFFERENCE_STEP_FRACTION * dtS;
-        CoupledEquations equations = new CoupledEquations(scene, t0S, hS, circuitModel.resolveFor(scene, t0S, dtS));
+        CoupledEquations equations = new CoupledEquations(scene, t0S, hS, circuitModel.resolveFor(scene, t0S, dtS),
+                t -> stopIfCancelled(monitor, t, t0S, endS));
         double[] y0 = equations.initialState();
         // The stop request is polled at every evaluation of the equations.
         OrdinaryDifferentialEquation watched = new OrdinaryDifferentialEquation() {
@@ -159,8 +177,9 @@ public final class CoupledSimulation {
                 return equations.computeDerivatives(t, y);
             }
         };
+        double tol = equations.sheetsUnderFieldEdges() ? Math.max(relTol, SHEETS_AT_FIELD_EDGES_TOLERANCE) : relTol;
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-12 * (endS - t0S), dtS,
-                absoluteTolerances(equations, y0, t0S, endS), relativeTolerances(equations.layout()));
+                absoluteTolerances(equations, y0, t0S, endS, tol), relativeTolerances(equations.layout(), tol));
         // Samples are made as the integrator passes their times, so the progress counts their cost too.
         RunSampler sampler = new RunSampler(equations, times);
         integrator.addStepHandler(sampler);
@@ -189,7 +208,7 @@ public final class CoupledSimulation {
         }
     }
 
-    private double[] relativeTolerances(StateLayout layout) {
+    private static double[] relativeTolerances(StateLayout layout, double relTol) {
         double[] rel = new double[layout.dimension()];
         // Body states only: the loop states get an absolute tolerance, the energy integrals none.
         Arrays.fill(rel, 0, layout.bodyStates(), relTol);
@@ -202,7 +221,8 @@ public final class CoupledSimulation {
      * and ω, and L_kk·{@value #CURRENT_SCALE_A} A for loop k's circuit state. The energy
      * integrals are not error-controlled: they ride on the steps the state needs.
      */
-    private double[] absoluteTolerances(CoupledEquations equations, double[] y0, double t0S, double t1S) {
+    private static double[] absoluteTolerances(CoupledEquations equations, double[] y0, double t0S, double t1S,
+                                               double relTol) {
         StateLayout layout = equations.layout();
         double length = equations.circuits().lengthScaleM();
         double duration = t1S - t0S;

@@ -30,7 +30,7 @@ final class EnergyLedger {
     EnergyAudit audit(double[] end, Stored first, Stored last) {
         return new EnergyAudit(end[layout.audit(AuditTerm.APPLIED)], end[layout.audit(AuditTerm.HOLDING)],
                 end[layout.audit(AuditTerm.DRIVE)], end[layout.audit(AuditTerm.JOULE)],
-                end[layout.audit(AuditTerm.DAMPING)], last.kineticJ() - first.kineticJ(),
+                end[layout.audit(AuditTerm.EDDY)], end[layout.audit(AuditTerm.DAMPING)], last.kineticJ() - first.kineticJ(),
                 last.potentialJ() - first.potentialJ(), last.magneticJ() - first.magneticJ());
     }
 }

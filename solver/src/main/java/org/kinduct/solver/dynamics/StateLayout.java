@@ -18,7 +18,7 @@ final class StateLayout {
     enum BodyDof { X, Y, ANGLE, VX, VY, OMEGA }
 
     /** The energy integrals carried in the state, in their order within the audit block ({@link EnergyAudit}). */
-    enum AuditTerm { APPLIED, HOLDING, DRIVE, JOULE, DAMPING }
+    enum AuditTerm { APPLIED, HOLDING, DRIVE, JOULE, EDDY, DAMPING }
 
     private static final int BODY_DOFS = BodyDof.values().length;
 

@@ -14,8 +14,8 @@ import org.kinduct.solver.sheet.SheetDrive;
  * R(−θ)V + ω ẑ × (q − p), linear in q, plus a channel's flow along its walls, which is fixed in
  * the frame.
  *
- * <p>The solver asks for B_z and then the induced field at the same point; the second comes from
- * the evaluation the first made. One drive per sheet and instant, used by one thread.
+ * <p>The solver asks for B_z along a segment and then the induced field at its midpoint; the
+ * second comes from the evaluation the first made. One drive per sheet and instant, used by one thread.
  */
 final class FrameDrive implements SheetDrive {
 
@@ -74,9 +74,14 @@ final class FrameDrive implements SheetDrive {
 
     @Override
     public double bzT(double x, double y) {
-        sources.sample(worldX(x, y), worldY(x, y), sample, scratch);
-        lastX = x;
-        lastY = y;
+        return bzAlongT(x, y, x, y);
+    }
+
+    @Override
+    public double bzAlongT(double ax, double ay, double bx, double by) {
+        sources.sample(worldX(ax, ay), worldY(ax, ay), worldX(bx, by), worldY(bx, by), sample, scratch);
+        lastX = 0.5 * (ax + bx);
+        lastY = 0.5 * (ay + by);
         return sample[0];
     }
 

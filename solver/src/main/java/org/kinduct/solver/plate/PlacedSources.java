@@ -1,6 +1,7 @@
 package org.kinduct.solver.plate;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
@@ -8,6 +9,7 @@ import org.kinduct.scene.Source;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Kinematics;
 import org.kinduct.solver.SourceFields;
+import org.kinduct.solver.SourceReach;
 import org.kinduct.solver.field.PhysicalSources;
 import org.kinduct.solver.field.PlaneField;
 
@@ -20,8 +22,12 @@ import org.kinduct.solver.field.PlaneField;
  */
 final class PlacedSources {
 
-    /** One placed source: its field, and its body's motion when it moves. */
-    private record Placed(PlaneField field, Pose moving, PlaneField perAmpere, double rateAPerS) {
+    /**
+     * One placed source: its field (null where only its AC part is kept), its body's motion when it
+     * moves, and for an AC-driven coil its field per ampere and the drive's rate of change.
+     */
+    private record Placed(String body, PlaneField field, boolean jumps, Pose moving, PlaneField perAmpere,
+                          double rateAPerS) {
     }
 
     private final Placed[] sources;
@@ -48,21 +54,47 @@ final class PlacedSources {
                 rate = coil.drive().rateAt(tS);
             }
             known &= !moves || field.hasPhysicalPotential();
-            placed.add(new Placed(field, moves ? pose : null, perAmpere, rate));
+            placed.add(new Placed(s.body(), field, SourceReach.of(s).jumps(), moves ? pose : null, perAmpere, rate));
         }
         return new PlacedSources(placed.toArray(Placed[]::new), known);
     }
 
+    /** The sources riding body {@code bodyId} alone. */
+    PlacedSources riding(String bodyId) {
+        return new PlacedSources(Arrays.stream(sources).filter(p -> p.body().equals(bodyId)).toArray(Placed[]::new),
+                inducedKnown);
+    }
+
     /**
-     * At (x, y): {@code out[0]} = B_z (T), {@code out[1..2]} = the current-driving part of −∂A/∂t
-     * (V/m), in scene coordinates.
+     * The AC-driven coils' −(di/dt)·A₁ alone, no B_z and no moving-source part: the share of the
+     * drive their drives supply.
      */
-    void sample(double x, double y, double[] out, double[] scratch) {
+    PlacedSources alternatingOnly() {
+        return new PlacedSources(Arrays.stream(sources).filter(p -> p.perAmpere() != null)
+                .map(p -> new Placed(p.body(), null, false, null, p.perAmpere(), p.rateAPerS())).toArray(Placed[]::new),
+                inducedKnown);
+    }
+
+    /** True when some source is an AC-driven coil. */
+    boolean alternates() {
+        return Arrays.stream(sources).anyMatch(p -> p.perAmpere() != null);
+    }
+
+    /**
+     * For the segment a → b (a point where a = b), in scene coordinates: {@code out[0]} = B_z (T)
+     * at its midpoint, or its mean along the segment for sources whose B_z jumps in the plane (a
+     * patch's rim, a map's edge: see {@link org.kinduct.solver.sheet.SheetDrive#bzAlongT}), and
+     * {@code out[1..2]} = the current-driving part of −∂A/∂t (V/m) at the midpoint, a moving
+     * source's −w × B taken with that same B_z.
+     */
+    void sample(double ax, double ay, double bx, double by, double[] out, double[] scratch) {
+        double x = 0.5 * (ax + bx);
+        double y = 0.5 * (ay + by);
         double bz = 0;
         double ex = 0;
         double ey = 0;
         for (Placed p : sources) {
-            double b = p.field().bz(x, y);
+            double b = bzOf(p, ax, ay, bx, by, scratch);
             bz += b;
             if (p.moving() != null) {
                 Pose pose = p.moving();
@@ -82,6 +114,18 @@ final class PlacedSources {
         out[0] = bz;
         out[1] = ex;
         out[2] = ey;
+    }
+
+    /** One source's B_z for the segment a → b, as {@link #sample} states; {@code scratch} takes two numbers. */
+    private static double bzOf(Placed p, double ax, double ay, double bx, double by, double[] scratch) {
+        if (p.field() == null) {
+            return 0;
+        }
+        if (p.jumps() && (ax != bx || ay != by)) {
+            p.field().bzMoments(ax, ay, bx, by, scratch);
+            return scratch[0];
+        }
+        return p.field().bz(0.5 * (ax + bx), 0.5 * (ay + by));
     }
 
     /** B_z at (x, y), tesla. */

@@ -25,5 +25,9 @@
  * <p>Each conductor's grid is built once, in its body's drawn frame, and reused at every instant:
  * the drive (fields, velocities, induced field) is sampled where each grid point is at that
  * instant and turned into the drawn frame, and the force turned back (see {@link FrameDrive}).
+ *
+ * <p>In a coupled run the sheets that can move a free body are solved at every evaluation of its
+ * equations ({@link SheetBrakes}), on the same grids; their drag, torque and heat enter the
+ * body's motion and the energy audit, and each moving source body takes its sources' share back.
  */
 package org.kinduct.solver.plate;

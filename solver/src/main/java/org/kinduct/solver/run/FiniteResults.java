@@ -33,7 +33,7 @@ final class FiniteResults {
 
     /** {@code audit}, after checking every entry is finite; null stays null (quasi-static instants have none). */
     static EnergyAudit require(EnergyAudit audit) {
-        if (audit != null && !Double.isFinite(audit.suppliedJ() + audit.jouleJ() + audit.dampingJ()
+        if (audit != null && !Double.isFinite(audit.suppliedJ() + audit.heatJ()
                 + audit.deltaKineticJ() + audit.deltaPotentialJ() + audit.deltaMagneticJ())) {
             throw new RunFailedException("the energy audit of the run came out as " + audit + " instead of numbers;"
                     + " the scene lies outside what the solver can compute");

@@ -5,13 +5,11 @@ import java.util.List;
 import java.util.Set;
 import java.util.stream.IntStream;
 import org.hipparchus.exception.MathRuntimeException;
-import org.kinduct.scene.Body;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Scenes;
-import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
@@ -29,6 +27,7 @@ import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.dynamics.RunMonitor;
 import org.kinduct.solver.dynamics.SimulationCancelledException;
 import org.kinduct.solver.plate.Sheets;
+import org.kinduct.solver.sheet.SheetConvergenceException;
 
 /**
  * The one way Kinduct turns a scene into results, for the editor, the exports and the command
@@ -200,7 +199,6 @@ public final class SceneRun {
     }
 
     private RunResult coupled() {
-        requireSheetsOffFreeBodies();
         TimeSpan w = request.window();
         int steps = w.steps();
         double gridEnd = w.at(steps);
@@ -219,7 +217,7 @@ public final class SceneRun {
                 throw new RunFailedException(budget.reason(w.dtS()), stopped);
             }
             throw stopped;
-        } catch (IllegalArgumentException | MathRuntimeException failed) {
+        } catch (IllegalArgumentException | MathRuntimeException | SheetConvergenceException failed) {
             throw new RunFailedException("the coupled run stopped: " + failed.getMessage(), failed);
         }
         List<Snapshot> samples = new ArrayList<>(run.samples().stream().map(this::drawn).toList());
@@ -239,8 +237,8 @@ public final class SceneRun {
         if (sheets.isEmpty()) {
             return result;
         }
-        // Plates and channels feel the run's motion but act on nothing in it: their own field is
-        // neglected (resistive limit) and no free body carries them or a source.
+        // The run's samples carry the free bodies' poses; the plates and channels are solved there
+        // on the grids the run's equations used, so they report the drag that moved the bodies.
         Kinematics moved = result.kinematics();
         return new RunResult(scene, plan(), withSheets(result.samples(), moved), withSheets(further, moved),
                 run.audit(), inductanceAtStart());
@@ -250,37 +248,6 @@ public final class SceneRun {
         return (parallel ? states.parallelStream() : states.stream())
                 .map(s -> s.withSheets(sheetsAt(s.tS(), kinematics))).toList();
     }
-
-    /**
-     * Plates and channels are not coupled into free-body runs yet: refuses a run in which one rides
-     * a free body, or a free body carries a source, since their drag (or its reaction on the
-     * source) would be missing from the motion.
-     */
-    private void requireSheetsOffFreeBodies() {
-        if (sheets.isEmpty()) {
-            return;
-        }
-        for (Body body : scene.bodies()) {
-            if (!(body.motion() instanceof Motion.Free)) {
-                continue;
-            }
-            for (Conductor c : scene.conductors()) {
-                if (c instanceof Conductor.Sheet && c.body().equals(body.id())) {
-                    throw new IllegalArgumentException("'" + c.id() + "' rides free body '" + body.id()
-                            + "': plates and channels are not coupled into free-body runs yet (their drag would be"
-                            + " missing from the motion); give the body a prescribed motion");
-                }
-            }
-            for (Source source : scene.sources()) {
-                if (source.body().equals(body.id())) {
-                    throw new IllegalArgumentException("source '" + source.id() + "' rides free body '" + body.id()
-                            + "' in a scene with plates or channels: their drag on it would be missing from its motion"
-                            + " (not coupled yet); give the body a prescribed motion");
-                }
-            }
-        }
-    }
-
 
     private RunResult instants() {
         TimeSpan w = request.window();

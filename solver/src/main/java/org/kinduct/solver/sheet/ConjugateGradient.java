@@ -39,21 +39,38 @@ final class ConjugateGradient {
      */
     static Outcome solve(CellOperator a, double[] b, double[] x, Preconditioner m, double tolerance,
                          int maxIterations, String method) {
-        int n = b.length;
         Arrays.fill(x, 0);
+        return solveFrom(a, b, x, m, tolerance, maxIterations, method);
+    }
+
+    /**
+     * Solves A·x = b starting from the x given (overwritten with the solution): a warm start from
+     * a nearby problem's solution saves the iterations its residual is below ‖b‖. The stopping
+     * test is the same, so the result is as good as from x = 0.
+     *
+     * @throws SheetConvergenceException when {@code maxIterations} pass without reaching the tolerance
+     */
+    static Outcome solveFrom(CellOperator a, double[] b, double[] x, Preconditioner m, double tolerance,
+                             int maxIterations, String method) {
+        int n = b.length;
         double bNorm = Math.sqrt(CellOperator.dot(b, b));
         if (bNorm == 0) {
+            Arrays.fill(x, 0);
             return new Outcome(0, 0);
         }
         double target = tolerance * bNorm;
-        double[] r = b.clone();
+        double[] r = new double[n];
+        a.residual(b, x, r);
+        double rNorm = Math.sqrt(CellOperator.dot(r, r));
+        if (rNorm <= target) {
+            return new Outcome(0, rNorm / bNorm);
+        }
         double[] z = new double[n];
         double[] p = new double[n];
         double[] q = new double[n];
         m.apply(r, z);
         System.arraycopy(z, 0, p, 0, n);
         double rz = CellOperator.dot(r, z);
-        double rNorm = bNorm;
         for (int iteration = 1; iteration <= maxIterations; iteration++) {
             a.apply(p, q);
             double alpha = rz / CellOperator.dot(p, q);

@@ -41,46 +41,33 @@ final class Currents {
         faceX = new double[(nx + 1) * ny];
         faceY = new double[nx * (ny + 1)];
         double joule = 0;
-        double fx = 0;
-        double fy = 0;
-        double torque = 0;
         for (int j = 0; j < ny; j++) {
             for (int i = 1; i < nx; i++) {
                 double open = grid.apertureX(i, j);
                 if (open > 0) {
                     int f = i + (nx + 1) * j;
                     double drop = phi[i - 1 + nx * j] - phi[i + nx * j] + emfs.emfX[f];
-                    double current = sheet * open * drop;
-                    faceX[f] = current;
-                    joule += current * drop;
-                    // Filament along +x: force (0, −I·B·h) at x = x_i.
-                    double force = -current * emfs.bzX[f] * h;
-                    fy += force;
-                    torque += (grid.originXM() + i * h - pivotX) * force;
+                    faceX[f] = sheet * open * drop;
+                    joule += faceX[f] * drop;
                 }
             }
         }
         for (int j = 1; j < ny; j++) {
-            double arm = grid.originYM() + j * h - pivotY;
             for (int i = 0; i < nx; i++) {
                 double open = grid.apertureY(i, j);
                 if (open > 0) {
                     int f = i + nx * j;
                     double drop = phi[i + nx * (j - 1)] - phi[i + nx * j] + emfs.emfY[f];
-                    double current = sheet * open * drop;
-                    faceY[f] = current;
-                    joule += current * drop;
-                    // Filament along +y: force (I·B·h, 0) at y = y_j.
-                    double force = current * emfs.bzY[f] * h;
-                    fx += force;
-                    torque -= arm * force;
+                    faceY[f] = sheet * open * drop;
+                    joule += faceY[f] * drop;
                 }
             }
         }
         joulePowerW = joule;
-        forceXN = fx;
-        forceYN = fy;
-        torqueNm = torque;
+        DriveShare sums = DriveShare.of(grid, faceX, faceY, emfs, pivotX, pivotY);
+        forceXN = sums.forceXN();
+        forceYN = sums.forceYN();
+        torqueNm = sums.torqueNm();
 
         jx = new double[nx * ny];
         jy = new double[nx * ny];

@@ -3,7 +3,8 @@ package org.kinduct.solver.sheet;
 /**
  * The drive sampled once per open face: along the segment from one cell centre to the next
  * (length h, crossing the face at its middle), the EMF ε = ∫ (v × B − ∂A/∂t)·dl and B_z at the
- * segment's midpoint. ε takes B_z and −∂A/∂t at the midpoint and the flow across the segment from
+ * segment's midpoint (or its mean along the segment where the drive's field jumps, see
+ * {@link SheetDrive#bzAlongT}). ε takes B_z and −∂A/∂t at the midpoint and the flow across the segment from
  * the drive (midpoint rule): second-order accurate where the fields are smooth, first order where
  * B_z jumps (a field patch's edge) or a corner makes the potential singular. Indices as in
  * {@link SheetGrid#apertureX} and {@link SheetGrid#apertureY}; closed faces hold zeros.
@@ -66,7 +67,7 @@ final class FaceEmfs {
     static void emf(SheetDrive drive, double ax, double ay, double bx, double by, double[] scratch, double[] out) {
         double mx = 0.5 * (ax + bx);
         double my = 0.5 * (ay + by);
-        double bz = drive.bzT(mx, my);
+        double bz = drive.bzAlongT(ax, ay, bx, by);
         drive.inducedField(mx, my, scratch);
         out[0] = -bz * drive.flowAcrossM2PerS(ax, ay, bx, by) + scratch[0] * (bx - ax) + scratch[1] * (by - ay);
         out[1] = bz;

@@ -13,6 +13,17 @@ public interface SheetDrive {
     /** B_z at (x, y, 0), tesla (&gt; 0 out of the screen). */
     double bzT(double x, double y);
 
+    /**
+     * The B_z the solver takes for the segment a → b between two cell centres, tesla: by default
+     * at its midpoint. A drive whose field jumps (a field patch's rim) may give its mean along the
+     * segment instead, which moves continuously with the conductor: sampled at a point, the drag
+     * would jump each time a cell centre crossed the rim, and a coupled run's integrator would
+     * shrink its steps at every jump.
+     */
+    default double bzAlongT(double ax, double ay, double bx, double by) {
+        return bzT(0.5 * (ax + bx), 0.5 * (ay + by));
+    }
+
     /** Velocity of the conducting material at (x, y), m/s, written to {@code out[0..1]}. */
     void velocity(double x, double y, double[] out);
 
@@ -32,7 +43,9 @@ public interface SheetDrive {
 
     /**
      * The induced electric field −∂A/∂t of sources that move or alternate, in-plane, V/m, written to
-     * {@code out[0..1]}; zero unless overridden.
+     * {@code out[0..1]}; zero unless overridden. The solver asks for it at a segment's midpoint
+     * right after {@link #bzAlongT} for that segment, so a drive may take a moving source's
+     * −w × B with the B_z it gave there.
      */
     default void inducedField(double x, double y, double[] out) {
         out[0] = 0;

@@ -95,6 +95,16 @@ public final class SheetSolution {
         return pivotM;
     }
 
+    /**
+     * The force, torque about {@link #pivotM()} and power of part of the drive on these currents
+     * (the sources of one body, say), summed over the same filaments at the same sample points as
+     * the totals, so that the parts of a drive add up to them.
+     */
+    public DriveShare shareOf(SheetDrive part) {
+        return DriveShare.of(grid, currents.faceX, currents.faceY, FaceEmfs.sample(grid, part), pivotM.x(),
+                pivotM.y());
+    }
+
     /** Joule power d·∫ |J|²/σ dA, watts. */
     public double joulePowerW() {
         return currents.joulePowerW;

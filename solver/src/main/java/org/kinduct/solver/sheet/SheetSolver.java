@@ -102,14 +102,33 @@ public record SheetSolver(Method method, double relativeTolerance, int maxIterat
      */
     public SheetSolution solve(SheetGrid grid, SheetConductor conductor, SheetDrive drive, Vec2 pivotM,
                                List<Electrode> electrodes) {
-        int[] hosts = hostCells(grid, electrodes);
-        CellOperator a = CellOperator.of(grid);
+        return series(grid, electrodes).solve(conductor, drive, pivotM);
+    }
+
+    /**
+     * A solver for many instants of one sheet (a coupled run): the operator, its preconditioner
+     * and the electrodes' host cells are built once, and each solve starts from the last one's
+     * potentials. Not thread-safe.
+     */
+    public SheetSeries series(SheetGrid grid, List<Electrode> electrodes) {
+        return new SheetSeries(this, grid, electrodes);
+    }
+
+    /** The preconditioner of this solver's method for {@code a}. */
+    ConjugateGradient.Preconditioner preconditioner(CellOperator a) {
+        return method == Method.MULTIGRID ? new Multigrid(a) : ConjugateGradient.jacobi(a);
+    }
+
+    /**
+     * Solves the sheet with the operator, preconditioner and host cells of {@code grid} already
+     * built, starting from {@code x} (overwritten with the solution).
+     */
+    SheetSolution solve(SheetGrid grid, CellOperator a, ConjugateGradient.Preconditioner preconditioner, int[] hosts,
+                        List<Electrode> electrodes, double[] x, SheetConductor conductor, SheetDrive drive,
+                        Vec2 pivotM) {
         FaceEmfs emfs = FaceEmfs.sample(grid, drive);
         double[] b = rightHandSide(grid, a, emfs);
-        double[] x = new double[a.size()];
-        ConjugateGradient.Preconditioner preconditioner = method == Method.MULTIGRID ? new Multigrid(a)
-                : ConjugateGradient.jacobi(a);
-        ConjugateGradient.Outcome outcome = ConjugateGradient.solve(a, b, x, preconditioner, relativeTolerance,
+        ConjugateGradient.Outcome outcome = ConjugateGradient.solveFrom(a, b, x, preconditioner, relativeTolerance,
                 maxIterations, method.label);
         double[] phi = potentials(grid, a, x);
         Currents currents = new Currents(grid, conductor, emfs, phi, pivotM.x(), pivotM.y());
@@ -177,7 +196,7 @@ public record SheetSolver(Method method, double relativeTolerance, int maxIterat
      * two cells of it, the one with the nearest centre that conducts at least half its area, or
      * failing that the fullest.
      */
-    private static int[] hostCells(SheetGrid grid, List<Electrode> electrodes) {
+    static int[] hostCells(SheetGrid grid, List<Electrode> electrodes) {
         int[] hosts = new int[electrodes.size()];
         Set<String> names = new HashSet<>();
         for (int e = 0; e < electrodes.size(); e++) {

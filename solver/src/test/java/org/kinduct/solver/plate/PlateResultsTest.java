@@ -80,9 +80,11 @@ class PlateResultsTest {
         double fine = dragUnderSmallPole(16);
         System.out.printf("pole drag through the scene: R/h = 8: %.5f, R/h = 16: %.5f of the finite-disc law%n",
                 coarse / expected, fine / expected);
-        // The field's jump at the rim makes the scheme first order there (the sheet tests measured
-        // −0.76 % at R/h = 16 for the same plate); the error must shrink as the cells do.
-        assertEquals(1, fine / expected, 0.01, "R/h = 16");
+        // The field's jump at the rim makes the scheme first order there. A scene's patch enters
+        // each cell segment as its mean along it (SheetDrive.bzAlongT), measured −2.2 % at R/h = 8
+        // and −1.25 % at R/h = 16 (the midpoint value gave −4.0 % and −0.75 %); the error must
+        // shrink as the cells do.
+        assertEquals(1, fine / expected, 0.015, "R/h = 16");
         assertTrue(Math.abs(fine - expected) < Math.abs(coarse - expected), "error shrinks with the cells");
     }
 

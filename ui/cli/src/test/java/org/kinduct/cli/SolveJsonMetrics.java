@@ -132,7 +132,8 @@ final class SolveJsonMetrics {
             while (k > 0 && Math.abs(v.get(k - 1) - last) <= band) {
                 k--;
             }
-            return t.get(k) - root.path("samples").get(0).path("t").asDouble();
+            // The body's first sample is the run's start (a scene may have no wire or loop samples).
+            return t.get(k) - t.get(0);
         }
         // Aitken's Δ² on the speeds a tenth of the window apart, ending at the last sample.
         int step = (int) Math.max(1, Math.round((n - 1) * 0.1));

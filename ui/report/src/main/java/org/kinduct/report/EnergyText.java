@@ -12,16 +12,16 @@ public final class EnergyText {
     }
 
     /**
-     * "Energy over the run: work in …, Joule heat …, damping …, Δ kinetic …, Δ potential …, Δ magnetic …,
+     * "Energy over the run: work in …, Joule heat …, eddy-current heat …, damping …, Δ kinetic …, Δ potential …, Δ magnetic …,
      * residual … (x of the energy turned over)"; the residual in joules reads 0 below a billionth of
      * the energy turned over, where its ratio says all there is.
      */
     public static String of(EnergyAudit a) {
-        double scale = Math.max(Math.abs(a.suppliedJ()), a.jouleJ() + a.dampingJ());
+        double scale = a.turnedOverJ();
         String share = scale > 0 ? String.format(Locale.ROOT, " (%.1e of the energy turned over)",
                 Math.abs(a.residualJ()) / scale) : "";
         return "Energy over the run: work in " + j(a.suppliedJ()) + ", Joule heat " + j(a.jouleJ())
-                + ", damping heat " + j(a.dampingJ()) + ", Δ kinetic " + j(a.deltaKineticJ())
+                + ", eddy-current heat " + j(a.eddyJ()) + ", damping heat " + j(a.dampingJ()) + ", Δ kinetic " + j(a.deltaKineticJ())
                 + ", Δ potential " + j(a.deltaPotentialJ()) + ", Δ magnetic " + j(a.deltaMagneticJ())
                 + ", residual " + j(Units.withoutNoise(a.residualJ(), scale)) + share;
     }

@@ -83,6 +83,7 @@ public final class ResultsJson {
         g.writeNumberField("holding_J", a.holdingJ());
         g.writeNumberField("drive_J", a.driveJ());
         g.writeNumberField("joule_J", a.jouleJ());
+        g.writeNumberField("eddy_J", a.eddyJ());
         g.writeNumberField("damping_J", a.dampingJ());
         g.writeNumberField("delta_kinetic_J", a.deltaKineticJ());
         g.writeNumberField("delta_potential_J", a.deltaPotentialJ());

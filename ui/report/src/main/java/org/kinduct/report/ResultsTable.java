@@ -162,10 +162,11 @@ public final class ResultsTable {
 
     /** Where the energy went, and what the balance leaves over. */
     private static void writeAudit(EnergyAudit a, PrintWriter out) {
-        out.printf(Locale.ROOT, "Energy: work in %s = Joule heat %s + damping heat %s + kinetic %s + potential %s"
-                + " + magnetic %s%n", energy(a.suppliedJ()), energy(a.jouleJ()), energy(a.dampingJ()),
-                energy(a.deltaKineticJ()), energy(a.deltaPotentialJ()), energy(a.deltaMagneticJ()));
-        double scale = Math.max(Math.abs(a.suppliedJ()), a.jouleJ() + a.dampingJ());
+        out.printf(Locale.ROOT, "Energy: work in %s = Joule heat %s + eddy-current heat %s + damping heat %s"
+                + " + kinetic %s + potential %s + magnetic %s%n", energy(a.suppliedJ()), energy(a.jouleJ()),
+                energy(a.eddyJ()), energy(a.dampingJ()), energy(a.deltaKineticJ()), energy(a.deltaPotentialJ()),
+                energy(a.deltaMagneticJ()));
+        double scale = a.turnedOverJ();
         out.printf(Locale.ROOT, "Energy residual: %s (%.1e of the energy turned over)%n%n", energy(a.residualJ()),
                 scale > 0 ? Math.abs(a.residualJ()) / scale : 0.0);
     }

@@ -116,9 +116,9 @@ class PlotSeriesTest {
 
     @Test
     void energyLineNamesEveryTermAndTheResidual() {
-        EnergyAudit a = new EnergyAudit(1e-3, 0, 0, 6e-4, 1e-4, 2e-4, 1e-4, 0);
+        EnergyAudit a = new EnergyAudit(1e-3, 0, 0, 6e-4, 0, 1e-4, 2e-4, 1e-4, 0);
         String text = EnergyText.of(a);
-        for (String term : List.of("work in", "Joule heat", "damping heat", "Δ kinetic", "Δ potential", "Δ magnetic",
+        for (String term : List.of("work in", "Joule heat", "eddy-current heat", "damping heat", "Δ kinetic", "Δ potential", "Δ magnetic",
                 "residual")) {
             assertTrue(text.contains(term), text);
         }
