@@ -1,7 +1,8 @@
 package org.kinduct.solver.field;
 
 /**
- * Integrand evaluations of edge integrals made on each thread so far: the cost of a run in units
+ * Field evaluations made on each thread so far — the integrand evaluations of edge integrals and
+ * the source samples of plate and channel cells: the cost of a run in units
  * that do not depend on the machine, so that a bound on work stops the same runs everywhere.
  * Almost all of a run's time is spent in these evaluations (closed-form kernels of a few hundred
  * nanoseconds each), and how many each instant needs varies by orders of magnitude between scenes
@@ -14,7 +15,8 @@ public final class WorkTally {
     private WorkTally() {
     }
 
-    static void add(int evaluations) {
+    /** Counts {@code evaluations} made on the calling thread (edge integrals count their own; a plate's or channel's cells call this). */
+    public static void add(int evaluations) {
         EVALUATIONS.get()[0] += evaluations;
     }
 

@@ -12,6 +12,7 @@ import org.kinduct.solver.SourceFields;
 import org.kinduct.solver.SourceReach;
 import org.kinduct.solver.field.PhysicalSources;
 import org.kinduct.solver.field.PlaneField;
+import org.kinduct.solver.field.WorkTally;
 
 /**
  * Every source of a scene placed at one instant, with what the sheets need of it at a point of
@@ -114,6 +115,7 @@ final class PlacedSources {
         out[0] = bz;
         out[1] = ex;
         out[2] = ey;
+        WorkTally.add(sources.length);
     }
 
     /** One source's B_z for the segment a → b, as {@link #sample} states; {@code scratch} takes two numbers. */

@@ -99,9 +99,9 @@ final class WorkBudget implements RunMonitor {
         }
         return String.format(Locale.ROOT, "the coupled run would need more than the %.3g field evaluations allowed"
                 + " here (%.0e per sample, at least %.0e, at most %.0e; %.3g per integrator step so far): the"
-                + " conductors' integrals are very costly at this geometry (a conductor far larger than the sources"
-                + " passing close to them, or sources touching the conductors' plane); shorten the window, or"
-                + " reshape the conductors", maxEvaluations, (double) MAX_EVALUATIONS_PER_SAMPLE,
+                + " conductors are very costly to solve at this geometry (a conductor far larger than the sources"
+                + " passing close to them, sources touching the conductors' plane, or a plate or channel of very many"
+                + " cells); shorten the window, or reshape the conductors or coarsen their cells", maxEvaluations, (double) MAX_EVALUATIONS_PER_SAMPLE,
                 (double) LEAST_EVALUATIONS, (double) MAX_EVALUATIONS, projectedEvaluations / projectedSteps());
     }
 }
