@@ -1,5 +1,6 @@
 package org.kinduct.render.paint;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.report.Labels;
 import org.kinduct.solver.run.ResultScales;
@@ -242,8 +243,11 @@ final class ConductorPainter {
         }
     }
 
-    static void placeCallouts(Surface s, ViewTransform v, Scene scene, Placement placement, Snapshot snap,
-                              ResultScales scales, LabelPlacer placer, List<Runnable> labels) {
+    /** Places each conductor's callout; returns their boxes and adds their drawing to {@code labels}. */
+    static List<LabelPlacer.Box> placeCallouts(Surface s, ViewTransform v, Scene scene, Placement placement,
+                                               Snapshot snap, ResultScales scales, LabelPlacer placer,
+                                               List<Runnable> labels) {
+        List<LabelPlacer.Box> boxes = new ArrayList<>();
         double lineH = ScenePainter.FONT + 3;
         for (Conductor c : scene.conductors()) {
             reserveIfSmall(v, placement.vertices(c), placer);
@@ -264,6 +268,7 @@ final class ConductorPainter {
             w += 12;
             double h = lines.length * lineH + 6;
             LabelPlacer.Box b = placer.place(ax, ay, w, h);
+            boxes.add(b);
             labels.add(() -> {
                 Glyphs.leader(s, b, ax, ay);
                 s.fill(Palette.LABEL_BOX);
@@ -277,6 +282,7 @@ final class ConductorPainter {
                 }
             });
         }
+        return boxes;
     }
 
     /** Keeps labels off small conductors (large ones would leave no room, so they stay open). */

@@ -4,9 +4,12 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Greedy label placement: each label tries positions on rings around its anchor, nearest first,
- * and takes the first that overlaps no earlier label or reserved line (a conductor) and stays on
- * the surface. When none is free it takes the least-overlapping one, so a label is never dropped.
+ * Greedy label placement: each label tries positions on rings around its anchor, nearest first
+ * (a callout then anywhere on the surface), and takes the first that overlaps no earlier label, reserved
+ * area or reserved line (a conductor) and stays on the surface. When none is free it takes the one
+ * covering the least text (labels, axis values, the legend), then the least of anything else: a
+ * label may hide part of a conductor or a mark, but not words a reader needs. A label is never
+ * dropped.
  */
 public final class LabelPlacer {
 
@@ -47,6 +50,8 @@ public final class LabelPlacer {
 
     private static final double PAD = 3;
     private static final double[] RINGS = {16, 36, 62, 96, 140};
+    /** Step of the scan over the whole surface for a callout that finds no free spot on the rings, px. */
+    private static final double SCAN_STEP = 10;
     private static final int DIRECTIONS = 8;
 
     /** A line labels keep off, screen pixels, as thick as {@code 2 · halfWidth}. */
@@ -87,6 +92,8 @@ public final class LabelPlacer {
     private final double width;
     private final double height;
     private final List<Box> taken = new ArrayList<>();
+    /** The taken boxes that hold words: placed labels and reserved texts. */
+    private final List<Box> words = new ArrayList<>();
     private final List<Line> lines = new ArrayList<>();
 
     public LabelPlacer(double width, double height) {
@@ -94,9 +101,15 @@ public final class LabelPlacer {
         this.height = height;
     }
 
-    /** Marks a screen area as occupied (e.g. the legend) without placing a label there. */
+    /** Marks a screen area as occupied (a mark or glyph) without placing a label there. */
     public void reserve(Box box) {
         taken.add(box);
+    }
+
+    /** Marks a screen area holding words (the legend, an axis value) as occupied: labels cover it last. */
+    public void reserveText(Box box) {
+        taken.add(box);
+        words.add(box);
     }
 
     /**
@@ -107,7 +120,11 @@ public final class LabelPlacer {
         lines.add(new Line(x0, y0, x1, y1, halfWidth));
     }
 
-    /** Places a {@code w × h} box near (ax, ay), on the side away from it (a callout with a leader), and records it. */
+    /**
+     * Places a {@code w × h} box near (ax, ay), on the side away from it (a callout with a leader), and
+     * records it; when the rings hold no free spot, the free spot nearest the anchor anywhere on the
+     * surface (a crowded picture may leave only a corner).
+     */
     public Box place(double ax, double ay, double w, double h) {
         List<Box> candidates = new ArrayList<>();
         for (double r : RINGS) {
@@ -120,6 +137,16 @@ public final class LabelPlacer {
                 double y = Math.abs(Math.sin(a)) < 1e-9 ? cy - h / 2 : (Math.sin(a) > 0 ? cy - h : cy);
                 candidates.add(onSurface(x, y, w, h));
             }
+        }
+        if (candidates.stream().noneMatch(this::isFree)) {
+            List<Box> scan = new ArrayList<>();
+            for (double y = 0; y <= height - h; y += SCAN_STEP) {
+                for (double x = 0; x <= width - w; x += SCAN_STEP) {
+                    scan.add(new Box(x, y, w, h));
+                }
+            }
+            scan.sort(java.util.Comparator.comparingDouble(b -> b.distanceTo(ax, ay)));
+            candidates.addAll(scan);
         }
         return take(candidates);
     }
@@ -141,22 +168,26 @@ public final class LabelPlacer {
         return new Box(Math.max(0, Math.min(width - w, x)), Math.max(0, Math.min(height - h, y)), w, h);
     }
 
-    /** The first free candidate, else the least covered one; recorded as taken. */
+    /** The first free candidate, else the one covering the least text, then the least else; recorded as taken. */
     private Box take(List<Box> candidates) {
         Box best = null;
+        double bestWords = Double.POSITIVE_INFINITY;
         double bestOverlap = Double.POSITIVE_INFINITY;
         for (Box b : candidates) {
             double overlap = overlap(b);
             if (overlap == 0) {
-                taken.add(b);
-                return b;
+                best = b;
+                break;
             }
-            if (overlap < bestOverlap) {
+            double onWords = covered(words, b);
+            if (onWords < bestWords || (onWords == bestWords && overlap < bestOverlap)) {
+                bestWords = onWords;
                 bestOverlap = overlap;
                 best = b;
             }
         }
         taken.add(best);
+        words.add(best);
         return best;
     }
 
@@ -166,16 +197,22 @@ public final class LabelPlacer {
     }
 
     private double overlap(Box b) {
-        double sum = 0;
-        for (Box t : taken) {
-            if (t.overlaps(b, PAD)) {
-                sum += t.overlapArea(b) + 1;
-            }
-        }
+        double sum = covered(taken, b);
         for (Line l : lines) {
             double crossed = l.lengthIn(b, PAD);
             if (crossed > 0) {
                 sum += crossed * 2 * l.halfWidth() + 1;
+            }
+        }
+        return sum;
+    }
+
+    /** How much of {@code boxes} {@code b} covers: area, plus one for each box it comes within the padding of. */
+    private static double covered(List<Box> boxes, Box b) {
+        double sum = 0;
+        for (Box t : boxes) {
+            if (t.overlaps(b, PAD)) {
+                sum += t.overlapArea(b) + 1;
             }
         }
         return sum;
