@@ -155,4 +155,18 @@ public final class Labels {
             case AUTO -> "auto";
         };
     }
+
+    /**
+     * The steady load power and the cycles it is read over: "mean load power 117 µW over the last 9
+     * cycles (450–600 ms; still rising 0.3 % a cycle), 94.7 µW over the whole run, build-up included".
+     * A change per cycle below 0.1 % is not mentioned: the state is steady to the figures shown.
+     */
+    public static String steadyLoadPower(String steady, int cycles, String from, String to, double changePerCycle,
+                                         String wholeRun) {
+        String change = Math.abs(changePerCycle) < 1e-3 ? ""
+                : String.format(Locale.ROOT, "; still %s %.1f %% a cycle", changePerCycle > 0 ? "rising" : "falling",
+                        100 * Math.abs(changePerCycle));
+        return String.format(Locale.ROOT, "mean load power %s over the last %d %s (%s–%s%s), %s over the whole run,"
+                + " build-up included", steady, cycles, cycles == 1 ? "cycle" : "cycles", from, to, change, wholeRun);
+    }
 }
