@@ -9,7 +9,9 @@ import org.kinduct.report.metrics.MetricKind;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Motion;
+import org.kinduct.scene.units.Dimension;
 import org.kinduct.scene.units.Units;
+import org.kinduct.solver.run.AlternatingPickup;
 import org.kinduct.solver.run.RunResult;
 
 /**
@@ -18,7 +20,9 @@ import org.kinduct.solver.run.RunResult;
  * and when the peak comes, the dominant frequency, and for closed loops the peak current and the
  * mean power into the load resistor (over the last whole cycles, and over the whole run); the mean
  * drag and eddy-current power of each plate and channel and the peak voltage of its first electrode
- * pair; the final and terminal speed of each free body; for a coupled run, the share of the work put in that reached the load resistors.
+ * pair; a self-crossing loop's rejection of the alternating coils' field; the final and terminal
+ * speed of each free body; for a coupled run, the share of the work put in that reached the load
+ * resistors.
  */
 public final class RunSummary {
 
@@ -50,7 +54,8 @@ public final class RunSummary {
                     kinds.remove(MetricKind.MEAN_LOAD_POWER);
                 }
             }
-            out.add(line(run, c.id(), kinds));
+            String line = line(run, c.id(), kinds);
+            out.add(run.alternatingPickup(c.id()).map(p -> line + ", " + rejection(run, c.id(), p)).orElse(line));
         }
         for (Body b : run.scene().bodies()) {
             if (b.motion() instanceof Motion.Free) {
@@ -99,6 +104,27 @@ public final class RunSummary {
             parts.add(text);
         }
         return id + ": " + String.join(", ", parts);
+    }
+
+    /**
+     * How well a self-crossing loop rejects the alternating coils' field, from the run's
+     * {@link AlternatingPickup}: its largest pickup from them against the largest of one lobe alone,
+     * and its peak EMF against that pickup, each as 20·log10 of the ratio in dB (the usual measure of a
+     * common-mode rejection and of a signal against interference, common practice).
+     */
+    private static String rejection(RunResult run, String id, AlternatingPickup pickup) {
+        double loopV = pickup.loopPeakV(0);
+        double lobeV = pickup.lobePeakV(0);
+        double shownLoopV = Units.withoutNoise(loopV, lobeV);
+        return Labels.alternatingRejection(Units.format(pickup.frequencyHz(), Dimension.FREQUENCY),
+                decibels(lobeV, loopV), Units.format(shownLoopV, Dimension.VOLTAGE),
+                Units.format(lobeV, Dimension.VOLTAGE), shownLoopV == 0,
+                decibels(MetricKind.PEAK_EMF.of(run, id), loopV));
+    }
+
+    /** 20·log10(a/b): the ratio of two amplitudes in decibels. */
+    private static double decibels(double a, double b) {
+        return 20 * Math.log10(a / b);
     }
 
     /**
