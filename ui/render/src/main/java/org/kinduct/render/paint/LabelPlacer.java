@@ -2,6 +2,7 @@ package org.kinduct.render.paint;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.stream.IntStream;
 
 /**
  * Greedy label placement: each label tries positions on rings around its anchor, nearest first
@@ -94,11 +95,79 @@ public final class LabelPlacer {
     private final List<Box> taken = new ArrayList<>();
     /** The taken boxes that hold words: placed labels and reserved texts. */
     private final List<Box> words = new ArrayList<>();
+    /** The labels placed here. */
+    private final List<Box> labels = new ArrayList<>();
     private final List<Line> lines = new ArrayList<>();
 
     public LabelPlacer(double width, double height) {
         this.width = width;
         this.height = height;
+    }
+
+    /** A copy holding what this one holds, to try placements on. */
+    private LabelPlacer copy() {
+        LabelPlacer c = new LabelPlacer(width, height);
+        c.taken.addAll(taken);
+        c.words.addAll(words);
+        c.labels.addAll(labels);
+        c.lines.addAll(lines);
+        return c;
+    }
+
+    /** A callout to place: a {@code w × h} box with a leader to (ax, ay). */
+    public record Callout(double ax, double ay, double w, double h) {
+    }
+
+    /** Most callouts whose every placing order is tried (4! = 24 orders); more are placed in the order given. */
+    private static final int ORDERED_UP_TO = 4;
+
+    /**
+     * Places several callouts ({@link #place}) in the order that keeps their leaders shortest in sum,
+     * trying every order of up to four: placed one by one, a first callout may take the only spot
+     * near a second's conductor and send that one's box across the picture. Returns their boxes in
+     * the order given; ties keep that order.
+     */
+    public List<Box> placeAll(List<Callout> callouts) {
+        List<Integer> best = IntStream.range(0, callouts.size()).boxed().toList();
+        if (callouts.size() > 1 && callouts.size() <= ORDERED_UP_TO) {
+            double shortest = Double.POSITIVE_INFINITY;
+            for (List<Integer> order : orders(best)) {
+                LabelPlacer trial = copy();
+                double sum = 0;
+                for (int i : order) {
+                    Callout c = callouts.get(i);
+                    sum += trial.place(c.ax(), c.ay(), c.w(), c.h()).distanceTo(c.ax(), c.ay());
+                }
+                if (sum < shortest) {
+                    shortest = sum;
+                    best = order;
+                }
+            }
+        }
+        Box[] boxes = new Box[callouts.size()];
+        for (int i : best) {
+            Callout c = callouts.get(i);
+            boxes[i] = place(c.ax(), c.ay(), c.w(), c.h());
+        }
+        return List.of(boxes);
+    }
+
+    /** Every order of {@code items}, the given one first. */
+    private static List<List<Integer>> orders(List<Integer> items) {
+        if (items.size() <= 1) {
+            return List.of(items);
+        }
+        List<List<Integer>> out = new ArrayList<>();
+        for (int i = 0; i < items.size(); i++) {
+            List<Integer> rest = new ArrayList<>(items);
+            Integer first = rest.remove(i);
+            for (List<Integer> tail : orders(rest)) {
+                List<Integer> order = new ArrayList<>(List.of(first));
+                order.addAll(tail);
+                out.add(order);
+            }
+        }
+        return out;
     }
 
     /** Marks a screen area as occupied (a mark or glyph) without placing a label there. */
@@ -188,7 +257,13 @@ public final class LabelPlacer {
         }
         taken.add(best);
         words.add(best);
+        labels.add(best);
         return best;
+    }
+
+    /** Whether a label placed here covers part of {@code b}. */
+    public boolean labelOver(Box b) {
+        return labels.stream().anyMatch(l -> l.overlaps(b, 0));
     }
 
     /** Whether a box would be free of every taken box. */

@@ -80,8 +80,8 @@ public final class ScenePainter {
         List<AxisValue> axisValues = f.shows(Layer.GRID) ? grid(s, v, fixed) : List.of();
         LabelPlacer placer = new LabelPlacer(s.width(), s.height());
         fixed.forEach(placer::reserveText);
-        // Labels keep off the axis values where they can; a callout that finds no other room hides
-        // the values it lands on rather than a pole label (the grid still tells the scale).
+        // Labels keep off the axis values where they can; a label that finds no other room hides the
+        // values it lands on rather than a pole label or a callout (the grid still tells the scale).
         axisValues.forEach(a -> placer.reserve(a.box()));
         Placement placement = Placement.of(f.scene(), f.tS(), f.freeBodies());
         List<Runnable> sourceLabels = f.shows(Layer.SOURCES)
@@ -103,9 +103,9 @@ public final class ScenePainter {
         // Callouts, the largest labels, are placed before the small ones, which find room around them
         // (a pole label pushed aside keeps a leader to its magnet); all are drawn last, on top.
         List<Runnable> labels = new ArrayList<>();
-        List<LabelPlacer.Box> callouts = f.shows(Layer.CALLOUTS) && f.snapshot() != null
-                ? ConductorPainter.placeCallouts(s, v, f.scene(), placement, f.snapshot(), f.scales(), placer, labels)
-                : List.of();
+        if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
+            ConductorPainter.placeCallouts(s, v, f.scene(), placement, f.snapshot(), f.scales(), placer, labels);
+        }
         sourceLabels.forEach(Runnable::run);
         if (f.shows(Layer.MOTION)) {
             MotionPainter.draw(s, v, f.scene(), placement, placer);
@@ -114,7 +114,7 @@ public final class ScenePainter {
         contourLabels.forEach(c -> placeContourLabel(s, c, placer, labels));
         s.fill(Palette.MUTED);
         for (AxisValue a : axisValues) {
-            if (callouts.stream().noneMatch(c -> c.overlaps(a.box(), 0))) {
+            if (!placer.labelOver(a.box())) {
                 s.text(a.text(), a.x(), a.y(), LABEL_FONT, false,
                         a.bottom() ? Surface.Anchor.BOTTOM_LEFT : Surface.Anchor.TOP_LEFT);
             }

@@ -10,6 +10,7 @@ import java.util.ArrayList;
 import java.util.Deque;
 import java.util.List;
 import java.util.Set;
+import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -22,7 +23,7 @@ import org.kinduct.scene.Scene;
 /**
  * On every demo's exported page (the default instant, as {@code kinduct export --demo NAME} draws
  * it), no callout box covers a word of the map that is not its own: pole labels, axis values,
- * other callouts, velocity and force labels, the legend.
+ * other callouts, velocity and force labels, the legend; and no pole label covers an axis value.
  */
 class CalloutClearanceTest {
 
@@ -69,7 +70,20 @@ class CalloutClearanceTest {
                 assertFalse(!own && c.intersects(t), demo + ": the callout " + c + " covers " + t);
             }
         }
+        // Nor does a magnet's pole label touch an axis value.
+        List<Rect> poles = map.stream().filter(t -> POLE.matcher(t.text()).matches()).toList();
+        List<Rect> axis = map.stream().filter(t -> AXIS_VALUE.matcher(t.text()).matches()).toList();
+        for (Rect p : poles) {
+            for (Rect a : axis) {
+                assertFalse(p.intersects(a), demo + ": the pole label " + p + " covers the axis value " + a);
+            }
+        }
     }
+
+    /** A magnet's pole label: its face and its moment's direction (SourcePainter). */
+    private static final Pattern POLE = Pattern.compile("[NS]|M [+−]z");
+    /** An axis value: a length (Quantities.length). */
+    private static final Pattern AXIS_VALUE = Pattern.compile("−?[0-9.]+ (nm|µm|mm|m|km)");
 
     /**
      * A surface that records each text's box (its advance width by the shipped fonts, its size as
