@@ -40,6 +40,15 @@ public record AlternatingPickup(String loopId, double frequencyHz, double[] loop
         return largest;
     }
 
+    /**
+     * The loop's rejection of the alternating field over the samples from index {@code from} on: the
+     * largest pickup of one lobe alone against its own, 20·log10 of the ratio in dB (the usual measure
+     * of a common-mode rejection, common practice); infinite when the lobes cancel exactly.
+     */
+    public double rejectionDb(int from) {
+        return 20 * Math.log10(lobePeakV(from) / loopPeakV(from));
+    }
+
     private static double peak(double[] values, int from) {
         double largest = 0;
         for (int i = from; i < values.length; i++) {

@@ -108,23 +108,18 @@ public final class RunSummary {
 
     /**
      * How well a self-crossing loop rejects the alternating coils' field, from the run's
-     * {@link AlternatingPickup}: its largest pickup from them against the largest of one lobe alone,
-     * and its peak EMF against that pickup, each as 20·log10 of the ratio in dB (the usual measure of a
-     * common-mode rejection and of a signal against interference, common practice).
+     * {@link AlternatingPickup}: its rejection, its largest pickup from them against the largest of one
+     * lobe alone, and its peak EMF against that pickup as 20·log10 of the ratio in dB (a signal against
+     * interference, common practice).
      */
     private static String rejection(RunResult run, String id, AlternatingPickup pickup) {
         double loopV = pickup.loopPeakV(0);
         double lobeV = pickup.lobePeakV(0);
         double shownLoopV = Units.withoutNoise(loopV, lobeV);
         return Labels.alternatingRejection(Units.format(pickup.frequencyHz(), Dimension.FREQUENCY),
-                decibels(lobeV, loopV), Units.format(shownLoopV, Dimension.VOLTAGE),
+                pickup.rejectionDb(0), Units.format(shownLoopV, Dimension.VOLTAGE),
                 Units.format(lobeV, Dimension.VOLTAGE), shownLoopV == 0,
-                decibels(MetricKind.PEAK_EMF.of(run, id), loopV));
-    }
-
-    /** 20·log10(a/b): the ratio of two amplitudes in decibels. */
-    private static double decibels(double a, double b) {
-        return 20 * Math.log10(a / b);
+                20 * Math.log10(MetricKind.PEAK_EMF.of(run, id) / loopV));
     }
 
     /**

@@ -45,7 +45,7 @@ class RunSummaryTest {
     private static final double RESIDUAL = 3e-8;
 
     @Test
-    void theGradiometerSummaryStatesItsRejectionOfTheMainsFieldAsTheHandCalculationGivesIt() {
+    void theGradiometerSummaryStatesItsRejectionOfTheMainsFieldAsTheHandCalculationGivesIt() throws java.io.IOException {
         RunResult run = new SceneRun(Demos.load("gradiometer")).result();
         AlternatingPickup pickup = run.alternatingPickup("figure-eight").orElseThrow();
         assertEquals(2, pickup.lobeEmfV().length, "lobes");
@@ -59,6 +59,12 @@ class RunSummaryTest {
                 20 * Math.log10(lobe / loop), Units.format(loop, Dimension.VOLTAGE), Units.format(lobe, Dimension.VOLTAGE));
         String line = RunSummary.lines(run).stream().filter(l -> l.startsWith("figure-eight: ")).findFirst().orElseThrow();
         assertTrue(line.contains(rejection), line + " should say " + rejection);
+
+        // The results file states the same figure.
+        java.io.StringWriter json = new java.io.StringWriter();
+        ResultsJson.write(run, json);
+        assertTrue(json.toString().contains("\"rejection_dB\" : " + pickup.rejectionDb(0)), json.toString()
+                .substring(json.toString().indexOf("alternating_pickup")));
     }
 
     @Test

@@ -1,16 +1,17 @@
 package org.kinduct.render.paint;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.stream.IntStream;
 
 /**
- * Greedy label placement: each label tries positions on rings around its anchor, nearest first
- * (a callout then anywhere on the surface), and takes the first that overlaps no earlier label, reserved
- * area or reserved line (a conductor) and stays on the surface. When none is free it takes the one
- * covering the least text (labels, axis values, the legend), then the least of anything else: a
- * label may hide part of a conductor or a mark, but not words a reader needs. A label is never
- * dropped.
+ * Greedy label placement: each label tries positions on rings around its anchor, nearest first (a
+ * callout then anywhere on the surface), and takes the first that overlaps no earlier label,
+ * reserved area or reserved line (a conductor) and stays on the surface. When none is free it takes
+ * the one covering the least text (labels, the legend, reserved texts), then the least of anything
+ * else: a label may hide part of a conductor or a mark, but not words a reader needs. A label is
+ * never dropped.
  */
 public final class LabelPlacer {
 
@@ -51,8 +52,15 @@ public final class LabelPlacer {
 
     private static final double PAD = 3;
     private static final double[] RINGS = {16, 36, 62, 96, 140};
-    /** Step of the scan over the whole surface for a callout that finds no free spot on the rings, px. */
+    /**
+     * The scan over the whole surface for a callout that finds no free spot on the rings: at least
+     * 10 px apart, at most 48 × 32 positions (the editor places callouts every frame).
+     */
     private static final double SCAN_STEP = 10;
+    private static final int SCAN_COLUMNS = 48;
+    private static final int SCAN_ROWS = 32;
+    /** Most callouts whose every placing order is tried (3! = 6 orders); more are placed in the order given. */
+    private static final int ORDERED_UP_TO = 3;
     private static final int DIRECTIONS = 8;
 
     /** A line labels keep off, screen pixels, as thick as {@code 2 · halfWidth}. */
@@ -118,12 +126,9 @@ public final class LabelPlacer {
     public record Callout(double ax, double ay, double w, double h) {
     }
 
-    /** Most callouts whose every placing order is tried (4! = 24 orders); more are placed in the order given. */
-    private static final int ORDERED_UP_TO = 4;
-
     /**
      * Places several callouts ({@link #place}) in the order that keeps their leaders shortest in sum,
-     * trying every order of up to four: placed one by one, a first callout may take the only spot
+     * trying every order of up to three: placed one by one, a first callout may take the only spot
      * near a second's conductor and send that one's box across the picture. Returns their boxes in
      * the order given; ties keep that order.
      */
@@ -134,8 +139,8 @@ public final class LabelPlacer {
             for (List<Integer> order : orders(best)) {
                 LabelPlacer trial = copy();
                 double sum = 0;
-                for (int i : order) {
-                    Callout c = callouts.get(i);
+                for (int k = 0; k < order.size() && sum < shortest; k++) {
+                    Callout c = callouts.get(order.get(k));
                     sum += trial.place(c.ax(), c.ay(), c.w(), c.h()).distanceTo(c.ax(), c.ay());
                 }
                 if (sum < shortest) {
@@ -209,12 +214,14 @@ public final class LabelPlacer {
         }
         if (candidates.stream().noneMatch(this::isFree)) {
             List<Box> scan = new ArrayList<>();
-            for (double y = 0; y <= height - h; y += SCAN_STEP) {
-                for (double x = 0; x <= width - w; x += SCAN_STEP) {
+            double stepX = Math.max(SCAN_STEP, width / SCAN_COLUMNS);
+            double stepY = Math.max(SCAN_STEP, height / SCAN_ROWS);
+            for (double y = 0; y <= height - h; y += stepY) {
+                for (double x = 0; x <= width - w; x += stepX) {
                     scan.add(new Box(x, y, w, h));
                 }
             }
-            scan.sort(java.util.Comparator.comparingDouble(b -> b.distanceTo(ax, ay)));
+            scan.sort(Comparator.comparingDouble(b -> b.distanceTo(ax, ay)));
             candidates.addAll(scan);
         }
         return take(candidates);
