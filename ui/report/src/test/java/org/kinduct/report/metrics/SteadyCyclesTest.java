@@ -20,13 +20,19 @@ class SteadyCyclesTest {
         return t;
     }
 
+    /** sin(2πF·t + PHASE) at each of {@code t}. */
+    private static double[] sine(double[] t) {
+        double[] out = new double[t.length];
+        for (int k = 0; k < t.length; k++) {
+            out[k] = Math.sin(2 * Math.PI * F * t[k] + PHASE);
+        }
+        return out;
+    }
+
     @Test
     void theCyclesAreTheWholePeriodsBetweenUpwardCrossingsInTheLastQuarter() {
         double[] t = times(1);
-        double[] i = new double[t.length];
-        for (int k = 0; k < t.length; k++) {
-            i[k] = Math.sin(2 * Math.PI * F * t[k] + PHASE);
-        }
+        double[] i = sine(t);
         SteadyCycles c = SteadyCycles.of(t, i).orElseThrow();
         // Upward crossings at (n − PHASE/2π)/F; the first at or after 0.75 s is n = 38, the last before 1 s n = 50.
         double first = (38 - PHASE / (2 * Math.PI)) / F;
@@ -65,10 +71,6 @@ class SteadyCyclesTest {
     @Test
     void lessThanOneWholeCycleInTheLastQuarterGivesNone() {
         double[] t = times(0.05);
-        double[] i = new double[t.length];
-        for (int k = 0; k < t.length; k++) {
-            i[k] = Math.sin(2 * Math.PI * F * t[k] + PHASE);
-        }
-        assertTrue(SteadyCycles.of(t, i).isEmpty(), "2.5 cycles in all, 0.6 in the last quarter");
+        assertTrue(SteadyCycles.of(t, sine(t)).isEmpty(), "2.5 cycles in all, 0.6 in the last quarter");
     }
 }
