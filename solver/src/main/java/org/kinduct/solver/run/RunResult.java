@@ -17,8 +17,9 @@ import org.kinduct.solver.dynamics.EnergyAudit;
 /**
  * One run of a scene, the single result every output reads: the samples on the window's grid
  * (per conductor and per free body), the further instants asked for, the energy audit of a
- * coupled run, the inductances at the start, the plan that made it, and the scales against which
- * shown values are read. Table, CSV, JSON, picture, callouts and plots of one state all read it,
+ * coupled run, the inductances at the start, what self-crossing loops pick up from alternating
+ * coils ({@link AlternatingPickup}), the plan that made it, and the scales against which shown
+ * values are read. Table, CSV, JSON, picture, callouts and plots of one state all read it,
  * so they agree by construction. Immutable.
  */
 public final class RunResult {
@@ -30,9 +31,15 @@ public final class RunResult {
     private final EnergyAudit audit;
     private final InductanceAtStart inductance;
     private final ResultScales scales;
+    private final List<AlternatingPickup> alternating;
 
     RunResult(Scene scene, RunPlan plan, List<Snapshot> samples, List<Snapshot> extras, EnergyAudit audit,
               InductanceAtStart inductance) {
+        this(scene, plan, samples, extras, audit, inductance, List.of());
+    }
+
+    private RunResult(Scene scene, RunPlan plan, List<Snapshot> samples, List<Snapshot> extras, EnergyAudit audit,
+                      InductanceAtStart inductance, List<AlternatingPickup> alternating) {
         if (samples.isEmpty()) {
             throw new IllegalArgumentException("a run has at least one sample");
         }
@@ -45,6 +52,20 @@ public final class RunResult {
         List<Snapshot> all = new java.util.ArrayList<>(this.samples);
         all.addAll(this.extras);
         this.scales = ResultScales.of(all);
+        this.alternating = List.copyOf(alternating);
+    }
+
+    /** This result with what its self-crossing loops pick up from the alternating coils. */
+    RunResult withAlternatingPickup(List<AlternatingPickup> pickup) {
+        return new RunResult(scene, plan, samples, extras, audit, inductance, pickup);
+    }
+
+    /**
+     * What loop {@code loopId} and each of its lobes pick up from the scene's alternating-current
+     * coils alone, at the samples; empty unless the loop crosses itself and the scene has such coils.
+     */
+    public Optional<AlternatingPickup> alternatingPickup(String loopId) {
+        return alternating.stream().filter(p -> p.loopId().equals(loopId)).findFirst();
     }
 
     public Scene scene() {

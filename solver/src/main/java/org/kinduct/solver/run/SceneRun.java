@@ -141,7 +141,8 @@ public final class SceneRun {
     /** The whole run, computed on first use. */
     public synchronized RunResult result() {
         if (result == null) {
-            result = plan().coupled() ? coupled() : instants();
+            RunResult run = plan().coupled() ? coupled() : instants();
+            result = run.withAlternatingPickup(AlternatingPickup.of(scene, run.samples(), run.kinematics(), parallel));
         }
         return result;
     }

@@ -85,6 +85,8 @@ final class SolveJsonMetrics {
                 }
                 return trapezoid(t, p) / (t[n - 1] - t[0]);
             }
+            case "steady_load_power":
+                return steadyMean(t, current, loadOhm);
             case "load_energy": {
                 double[] p = new double[n];
                 for (int i = 0; i < n; i++) {
@@ -186,6 +188,51 @@ final class SolveJsonMetrics {
             }
         }
         return best / (size * dt);
+    }
+
+    /**
+     * Mean of I²·R between the first and last upward zero crossing of I (crossings interpolated
+     * linearly; one counts only after I fell below −1e-6 of its largest magnitude) in the last quarter
+     * of the samples, the power interpolated linearly between samples (exact integrals); NaN with fewer
+     * than two such crossings.
+     */
+    private static double steadyMean(double[] t, double[] current, double loadOhm) {
+        int n = t.length;
+        double largest = max(abs(current));
+        List<Double> ups = new ArrayList<>();
+        boolean below = false;
+        for (int i = 0; i + 1 < n; i++) {
+            below = below || current[i] < -1e-6 * largest;
+            if (below && current[i] < 0 && current[i + 1] >= 0) {
+                double at = t[i] + (t[i + 1] - t[i]) * (-current[i]) / (current[i + 1] - current[i]);
+                if (at >= t[n - 1] - 0.25 * (t[n - 1] - t[0])) {
+                    ups.add(at);
+                }
+                below = false;
+            }
+        }
+        if (ups.size() < 2) {
+            return Double.NaN;
+        }
+        double[] p = new double[n];
+        for (int i = 0; i < n; i++) {
+            p[i] = current[i] * current[i] * loadOhm;
+        }
+        double a = ups.get(0);
+        double b = ups.get(ups.size() - 1);
+        return (runningIntegral(t, p, b) - runningIntegral(t, p, a)) / (b - a);
+    }
+
+    /** ∫ from t[0] to x of the samples' linear interpolant: whole trapezoids, then the part of the next. */
+    private static double runningIntegral(double[] t, double[] y, double x) {
+        double sum = 0;
+        int k = 0;
+        while (t[k + 1] < x) {
+            sum += (t[k + 1] - t[k]) * (y[k] + y[k + 1]) / 2;
+            k++;
+        }
+        double slope = (y[k + 1] - y[k]) / (t[k + 1] - t[k]);
+        return sum + y[k] * (x - t[k]) + slope * (x - t[k]) * (x - t[k]) / 2;
     }
 
     private static double trapezoid(double[] t, double[] y) {

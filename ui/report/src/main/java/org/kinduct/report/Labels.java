@@ -155,4 +155,34 @@ public final class Labels {
             case AUTO -> "auto";
         };
     }
+
+    /**
+     * The steady load power and the cycles it is read over: "mean load power 117 µW over the last 9
+     * cycles (450–600 ms; still rising 0.3 % a cycle), 94.7 µW over the whole run, build-up included".
+     * A change per cycle below 0.1 % is not mentioned: the state is steady to the figures shown.
+     */
+    public static String steadyLoadPower(String steady, int cycles, String from, String to, double changePerCycle,
+                                         String wholeRun) {
+        String change = Math.abs(changePerCycle) < 1e-3 ? ""
+                : String.format(Locale.ROOT, "; still %s %.1f %% a cycle", changePerCycle > 0 ? "rising" : "falling",
+                        100 * Math.abs(changePerCycle));
+        return String.format(Locale.ROOT, "mean load power %s over the last %d %s (%s–%s%s), %s over the whole run,"
+                + " build-up included", steady, cycles, cycles == 1 ? "cycle" : "cycles", from, to, change, wholeRun);
+    }
+
+    /**
+     * A self-crossing loop's rejection of the alternating coils' field, and how far its peak EMF stands
+     * above what gets through: "50 Hz rejection 49.8 dB: 603 nV at the output against 186 µV from one
+     * lobe alone; the peak EMF 83.2 dB above it". A pickup that reads 0 beside the lobe's (rounding
+     * only: the lobes cancel exactly) is said so, with the 180 dB that noise limit means.
+     */
+    public static String alternatingRejection(String frequency, double rejectionDb, String loopPeak, String lobePeak,
+                                              boolean cancelled, double peakAboveDb) {
+        if (cancelled) {
+            return String.format(Locale.ROOT, "%s rejection beyond 180 dB (the lobes cancel it to rounding): 0 V at"
+                    + " the output against %s from one lobe alone", frequency, lobePeak);
+        }
+        return String.format(Locale.ROOT, "%s rejection %.1f dB: %s at the output against %s from one lobe alone;"
+                + " the peak EMF %.1f dB above it", frequency, rejectionDb, loopPeak, lobePeak, peakAboveDb);
+    }
 }

@@ -4,17 +4,21 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import java.io.IOException;
 import java.io.Writer;
+import java.util.Optional;
+import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.dynamics.EnergyAudit;
+import org.kinduct.solver.run.AlternatingPickup;
 import org.kinduct.solver.run.RunResult;
 
 /**
  * Machine-readable results: one object per wire or loop per time under {@code samples}, one per
  * plate or channel per time under {@code plates}, one per free body per time under {@code bodies},
- * and the run's {@code energy_audit}; schema in README.md ("Results JSON"). Shared by
+ * the run's {@code energy_audit}, and what each self-crossing loop picks up from alternating coils
+ * under {@code alternating_pickup}; schema in README.md ("Results JSON"). Shared by
  * {@code kinduct solve --format json} and the export.
  */
 public final class ResultsJson {
@@ -57,6 +61,14 @@ public final class ResultsJson {
             }
             g.writeEndArray();
             writeAudit(g, results.audit().orElse(null));
+            g.writeArrayFieldStart("alternating_pickup");
+            for (Conductor c : results.scene().conductors()) {
+                Optional<AlternatingPickup> pickup = results.alternatingPickup(c.id());
+                if (pickup.isPresent()) {
+                    writePickup(g, pickup.get());
+                }
+            }
+            g.writeEndArray();
             g.writeEndObject();
         }
     }
@@ -69,6 +81,23 @@ public final class ResultsJson {
         g.writeNumberField("angle_rad", b.angleRad());
         pair(g, "velocity_mps", b.velocityMps());
         g.writeNumberField("omega_radps", b.omegaRadPerS());
+        g.writeEndObject();
+    }
+
+    /** A self-crossing loop's pickup from the alternating coils alone over the run, and one lobe's. */
+    private static void writePickup(JsonGenerator g, AlternatingPickup p) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("id", p.loopId());
+        g.writeNumberField("frequency_Hz", p.frequencyHz());
+        g.writeNumberField("loop_peak_V", p.loopPeakV(0));
+        g.writeNumberField("lobe_peak_V", p.lobePeakV(0));
+        // Lobes that cancel exactly leave no finite figure, and JSON has no infinity.
+        double db = p.rejectionDb(0);
+        if (Double.isFinite(db)) {
+            g.writeNumberField("rejection_dB", db);
+        } else {
+            g.writeNullField("rejection_dB");
+        }
         g.writeEndObject();
     }
 

@@ -4,20 +4,25 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import org.kinduct.report.metrics.LoadPower;
 import org.kinduct.report.metrics.MetricKind;
 import org.kinduct.scene.Body;
 import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Motion;
+import org.kinduct.scene.units.Dimension;
 import org.kinduct.scene.units.Units;
+import org.kinduct.solver.run.AlternatingPickup;
 import org.kinduct.solver.run.RunResult;
 
 /**
  * The answer to "how many volts, how much power, how fast" in one line per conductor and per
  * free body, from the same metrics a design study reads ({@link MetricKind}): peak and RMS EMF
  * and when the peak comes, the dominant frequency, and for closed loops the peak current and the
- * mean power into the load resistor; the mean drag and eddy-current power of each plate and
- * channel and the peak voltage of its first electrode pair; the final and terminal speed of each
- * free body; for a coupled run, the share of the work put in that reached the load resistors.
+ * mean power into the load resistor (over the last whole cycles, and over the whole run); the mean
+ * drag and eddy-current power of each plate and channel and the peak voltage of its first electrode
+ * pair; a self-crossing loop's rejection of the alternating coils' field; the final and terminal
+ * speed of each free body; for a coupled run, the share of the work put in that reached the load
+ * resistors.
  */
 public final class RunSummary {
 
@@ -49,7 +54,8 @@ public final class RunSummary {
                     kinds.remove(MetricKind.MEAN_LOAD_POWER);
                 }
             }
-            out.add(line(run, c.id(), kinds));
+            String line = line(run, c.id(), kinds);
+            out.add(run.alternatingPickup(c.id()).map(p -> line + ", " + rejection(run, c.id(), p)).orElse(line));
         }
         for (Body b : run.scene().bodies()) {
             if (b.motion() instanceof Motion.Free) {
@@ -90,13 +96,45 @@ public final class RunSummary {
             if (!Double.isFinite(v) || k == MetricKind.PEAK_TIME || (k == MetricKind.DOMINANT_FREQUENCY && v == 0)) {
                 continue;
             }
-            String text = name(k) + " " + Units.format(v, k.dimension());
+            String text = k == MetricKind.MEAN_LOAD_POWER ? loadPower(run, id, v)
+                    : name(k) + " " + Units.format(v, k.dimension());
             if (k == MetricKind.PEAK_EMF) {
                 text += " at " + Units.format(MetricKind.PEAK_TIME.of(run, id), MetricKind.PEAK_TIME.dimension());
             }
             parts.add(text);
         }
         return id + ": " + String.join(", ", parts);
+    }
+
+    /**
+     * How well a self-crossing loop rejects the alternating coils' field, from the run's
+     * {@link AlternatingPickup}: its rejection, its largest pickup from them against the largest of one
+     * lobe alone, and its peak EMF against that pickup as 20·log10 of the ratio in dB (a signal against
+     * interference, common practice).
+     */
+    private static String rejection(RunResult run, String id, AlternatingPickup pickup) {
+        double loopV = pickup.loopPeakV(0);
+        double lobeV = pickup.lobePeakV(0);
+        double shownLoopV = Units.withoutNoise(loopV, lobeV);
+        return Labels.alternatingRejection(Units.format(pickup.frequencyHz(), Dimension.FREQUENCY),
+                pickup.rejectionDb(0), Units.format(shownLoopV, Dimension.VOLTAGE),
+                Units.format(lobeV, Dimension.VOLTAGE), shownLoopV == 0,
+                20 * Math.log10(MetricKind.PEAK_EMF.of(run, id) / loopV));
+    }
+
+    /**
+     * The mean load power a designer asks for: over the whole cycles at the run's end, once the
+     * build-up is over, beside the whole run's mean ({@link LoadPower}); the whole run's alone when
+     * the current has no whole cycle in the run's last quarter.
+     */
+    private static String loadPower(RunResult run, String id, double wholeRunW) {
+        String whole = Units.format(wholeRunW, MetricKind.MEAN_LOAD_POWER.dimension());
+        LoadPower power = LoadPower.of(run, id);
+        return power.cycles().map(c -> Labels.steadyLoadPower(
+                Units.format(MetricKind.STEADY_LOAD_POWER.of(run, id), MetricKind.STEADY_LOAD_POWER.dimension()),
+                c.count(), Units.format(c.startS(), MetricKind.PEAK_TIME.dimension()),
+                Units.format(c.endS(), MetricKind.PEAK_TIME.dimension()), power.changePerCycle(c), whole))
+                .orElse(name(MetricKind.MEAN_LOAD_POWER) + " " + whole);
     }
 
     /** "peak EMF", "RMS EMF", "mean load power": the metric's key in words, abbreviations in capitals. */

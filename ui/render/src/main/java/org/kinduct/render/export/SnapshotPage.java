@@ -213,6 +213,10 @@ final class SnapshotPage {
         return mapTop;
     }
 
+    double mapHeight() {
+        return mapHeight;
+    }
+
     /** Draws the page on {@code s}, which must be {@link #WIDTH} × {@link #height()} units. */
     void draw(Surface s, FieldRaster raster) {
         s.save();

@@ -1,5 +1,6 @@
 package org.kinduct.render.paint;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.report.Labels;
 import org.kinduct.solver.run.ResultScales;
@@ -242,6 +243,10 @@ final class ConductorPainter {
         }
     }
 
+    /**
+     * Places each conductor's callout, in the order that keeps their leaders shortest
+     * ({@link LabelPlacer#placeAll}), and adds their drawing to {@code labels}.
+     */
     static void placeCallouts(Surface s, ViewTransform v, Scene scene, Placement placement, Snapshot snap,
                               ResultScales scales, LabelPlacer placer, List<Runnable> labels) {
         double lineH = ScenePainter.FONT + 3;
@@ -249,23 +254,29 @@ final class ConductorPainter {
             reserveIfSmall(v, placement.vertices(c), placer);
         }
         SheetPainter.reserveEddies(v, scene, snap, placement, placer);
+        List<String[]> texts = new ArrayList<>();
+        List<LabelPlacer.Callout> callouts = new ArrayList<>();
         for (Conductor c : scene.conductors()) {
             String[] lines = calloutLines(c, snap, scales);
             if (lines == null) {
                 continue;
             }
             Vec2 anchor = anchor(c, placement.vertices(c));
-            double ax = v.screenX(anchor.x());
-            double ay = v.screenY(anchor.y());
             double w = 0;
             for (String line : lines) {
                 w = Math.max(w, s.textWidth(line, ScenePainter.FONT, false));
             }
-            w += 12;
-            double h = lines.length * lineH + 6;
-            LabelPlacer.Box b = placer.place(ax, ay, w, h);
+            texts.add(lines);
+            callouts.add(new LabelPlacer.Callout(v.screenX(anchor.x()), v.screenY(anchor.y()), w + 12,
+                    lines.length * lineH + 6));
+        }
+        List<LabelPlacer.Box> boxes = placer.placeAll(callouts);
+        for (int k = 0; k < boxes.size(); k++) {
+            LabelPlacer.Box b = boxes.get(k);
+            LabelPlacer.Callout c = callouts.get(k);
+            String[] lines = texts.get(k);
             labels.add(() -> {
-                Glyphs.leader(s, b, ax, ay);
+                Glyphs.leader(s, b, c.ax(), c.ay());
                 s.fill(Palette.LABEL_BOX);
                 s.fillRect(b.x(), b.y(), b.w(), b.h());
                 s.stroke(Palette.LABEL_EDGE);

@@ -1,12 +1,17 @@
 package org.kinduct.render.paint;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
+import java.util.stream.IntStream;
 
 /**
- * Greedy label placement: each label tries positions on rings around its anchor, nearest first,
- * and takes the first that overlaps no earlier label or reserved line (a conductor) and stays on
- * the surface. When none is free it takes the least-overlapping one, so a label is never dropped.
+ * Greedy label placement: each label tries positions on rings around its anchor, nearest first (a
+ * callout then anywhere on the surface), and takes the first that overlaps no earlier label,
+ * reserved area or reserved line (a conductor) and stays on the surface. When none is free it takes
+ * the one covering the least text (labels, the legend, reserved texts), then the least of anything
+ * else: a label may hide part of a conductor or a mark, but not words a reader needs. A label is
+ * never dropped.
  */
 public final class LabelPlacer {
 
@@ -47,6 +52,15 @@ public final class LabelPlacer {
 
     private static final double PAD = 3;
     private static final double[] RINGS = {16, 36, 62, 96, 140};
+    /**
+     * The scan over the whole surface for a callout that finds no free spot on the rings: at least
+     * 10 px apart, at most 48 × 32 positions (the editor places callouts every frame).
+     */
+    private static final double SCAN_STEP = 10;
+    private static final int SCAN_COLUMNS = 48;
+    private static final int SCAN_ROWS = 32;
+    /** Most callouts whose every placing order is tried (3! = 6 orders); more are placed in the order given. */
+    private static final int ORDERED_UP_TO = 3;
     private static final int DIRECTIONS = 8;
 
     /** A line labels keep off, screen pixels, as thick as {@code 2 · halfWidth}. */
@@ -87,6 +101,10 @@ public final class LabelPlacer {
     private final double width;
     private final double height;
     private final List<Box> taken = new ArrayList<>();
+    /** The taken boxes that hold words: placed labels and reserved texts. */
+    private final List<Box> words = new ArrayList<>();
+    /** The labels placed here. */
+    private final List<Box> labels = new ArrayList<>();
     private final List<Line> lines = new ArrayList<>();
 
     public LabelPlacer(double width, double height) {
@@ -94,9 +112,78 @@ public final class LabelPlacer {
         this.height = height;
     }
 
-    /** Marks a screen area as occupied (e.g. the legend) without placing a label there. */
+    /** A copy holding what this one holds, to try placements on. */
+    private LabelPlacer copy() {
+        LabelPlacer c = new LabelPlacer(width, height);
+        c.taken.addAll(taken);
+        c.words.addAll(words);
+        c.labels.addAll(labels);
+        c.lines.addAll(lines);
+        return c;
+    }
+
+    /** A callout to place: a {@code w × h} box with a leader to (ax, ay). */
+    public record Callout(double ax, double ay, double w, double h) {
+    }
+
+    /**
+     * Places several callouts ({@link #place}) in the order that keeps their leaders shortest in sum,
+     * trying every order of up to three: placed one by one, a first callout may take the only spot
+     * near a second's conductor and send that one's box across the picture. Returns their boxes in
+     * the order given; ties keep that order.
+     */
+    public List<Box> placeAll(List<Callout> callouts) {
+        List<Integer> best = IntStream.range(0, callouts.size()).boxed().toList();
+        if (callouts.size() > 1 && callouts.size() <= ORDERED_UP_TO) {
+            double shortest = Double.POSITIVE_INFINITY;
+            for (List<Integer> order : orders(best)) {
+                LabelPlacer trial = copy();
+                double sum = 0;
+                for (int k = 0; k < order.size() && sum < shortest; k++) {
+                    Callout c = callouts.get(order.get(k));
+                    sum += trial.place(c.ax(), c.ay(), c.w(), c.h()).distanceTo(c.ax(), c.ay());
+                }
+                if (sum < shortest) {
+                    shortest = sum;
+                    best = order;
+                }
+            }
+        }
+        Box[] boxes = new Box[callouts.size()];
+        for (int i : best) {
+            Callout c = callouts.get(i);
+            boxes[i] = place(c.ax(), c.ay(), c.w(), c.h());
+        }
+        return List.of(boxes);
+    }
+
+    /** Every order of {@code items}, the given one first. */
+    private static List<List<Integer>> orders(List<Integer> items) {
+        if (items.size() <= 1) {
+            return List.of(items);
+        }
+        List<List<Integer>> out = new ArrayList<>();
+        for (int i = 0; i < items.size(); i++) {
+            List<Integer> rest = new ArrayList<>(items);
+            Integer first = rest.remove(i);
+            for (List<Integer> tail : orders(rest)) {
+                List<Integer> order = new ArrayList<>(List.of(first));
+                order.addAll(tail);
+                out.add(order);
+            }
+        }
+        return out;
+    }
+
+    /** Marks a screen area as occupied (a mark or glyph) without placing a label there. */
     public void reserve(Box box) {
         taken.add(box);
+    }
+
+    /** Marks a screen area holding words (the legend, an axis value) as occupied: labels cover it last. */
+    public void reserveText(Box box) {
+        taken.add(box);
+        words.add(box);
     }
 
     /**
@@ -107,7 +194,11 @@ public final class LabelPlacer {
         lines.add(new Line(x0, y0, x1, y1, halfWidth));
     }
 
-    /** Places a {@code w × h} box near (ax, ay), on the side away from it (a callout with a leader), and records it. */
+    /**
+     * Places a {@code w × h} box near (ax, ay), on the side away from it (a callout with a leader), and
+     * records it; when the rings hold no free spot, the free spot nearest the anchor anywhere on the
+     * surface (a crowded picture may leave only a corner).
+     */
     public Box place(double ax, double ay, double w, double h) {
         List<Box> candidates = new ArrayList<>();
         for (double r : RINGS) {
@@ -120,6 +211,18 @@ public final class LabelPlacer {
                 double y = Math.abs(Math.sin(a)) < 1e-9 ? cy - h / 2 : (Math.sin(a) > 0 ? cy - h : cy);
                 candidates.add(onSurface(x, y, w, h));
             }
+        }
+        if (candidates.stream().noneMatch(this::isFree)) {
+            List<Box> scan = new ArrayList<>();
+            double stepX = Math.max(SCAN_STEP, width / SCAN_COLUMNS);
+            double stepY = Math.max(SCAN_STEP, height / SCAN_ROWS);
+            for (double y = 0; y <= height - h; y += stepY) {
+                for (double x = 0; x <= width - w; x += stepX) {
+                    scan.add(new Box(x, y, w, h));
+                }
+            }
+            scan.sort(Comparator.comparingDouble(b -> b.distanceTo(ax, ay)));
+            candidates.addAll(scan);
         }
         return take(candidates);
     }
@@ -141,23 +244,33 @@ public final class LabelPlacer {
         return new Box(Math.max(0, Math.min(width - w, x)), Math.max(0, Math.min(height - h, y)), w, h);
     }
 
-    /** The first free candidate, else the least covered one; recorded as taken. */
+    /** The first free candidate, else the one covering the least text, then the least else; recorded as taken. */
     private Box take(List<Box> candidates) {
         Box best = null;
+        double bestWords = Double.POSITIVE_INFINITY;
         double bestOverlap = Double.POSITIVE_INFINITY;
         for (Box b : candidates) {
             double overlap = overlap(b);
             if (overlap == 0) {
-                taken.add(b);
-                return b;
+                best = b;
+                break;
             }
-            if (overlap < bestOverlap) {
+            double onWords = covered(words, b);
+            if (onWords < bestWords || (onWords == bestWords && overlap < bestOverlap)) {
+                bestWords = onWords;
                 bestOverlap = overlap;
                 best = b;
             }
         }
         taken.add(best);
+        words.add(best);
+        labels.add(best);
         return best;
+    }
+
+    /** Whether a label placed here covers part of {@code b}. */
+    public boolean labelOver(Box b) {
+        return labels.stream().anyMatch(l -> l.overlaps(b, 0));
     }
 
     /** Whether a box would be free of every taken box. */
@@ -166,16 +279,22 @@ public final class LabelPlacer {
     }
 
     private double overlap(Box b) {
-        double sum = 0;
-        for (Box t : taken) {
-            if (t.overlaps(b, PAD)) {
-                sum += t.overlapArea(b) + 1;
-            }
-        }
+        double sum = covered(taken, b);
         for (Line l : lines) {
             double crossed = l.lengthIn(b, PAD);
             if (crossed > 0) {
                 sum += crossed * 2 * l.halfWidth() + 1;
+            }
+        }
+        return sum;
+    }
+
+    /** How much of {@code boxes} {@code b} covers: area, plus one for each box it comes within the padding of. */
+    private static double covered(List<Box> boxes, Box b) {
+        double sum = 0;
+        for (Box t : boxes) {
+            if (t.overlaps(b, PAD)) {
+                sum += t.overlapArea(b) + 1;
             }
         }
         return sum;

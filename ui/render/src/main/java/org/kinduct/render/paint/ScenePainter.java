@@ -77,12 +77,12 @@ public final class ScenePainter {
         if (densityKey != null) {
             fixed.add(densityKey);
         }
-        // The axis values join the fixed boxes, so no callout or contour label covers them.
-        if (f.shows(Layer.GRID)) {
-            grid(s, v, fixed);
-        }
+        List<AxisValue> axisValues = f.shows(Layer.GRID) ? grid(s, v, fixed) : List.of();
         LabelPlacer placer = new LabelPlacer(s.width(), s.height());
-        fixed.forEach(placer::reserve);
+        fixed.forEach(placer::reserveText);
+        // Labels keep off the axis values where they can; a label that finds no other room hides the
+        // values it lands on rather than a pole label or a callout (the grid still tells the scale).
+        axisValues.forEach(a -> placer.reserve(a.box()));
         Placement placement = Placement.of(f.scene(), f.tS(), f.freeBodies());
         List<Runnable> sourceLabels = f.shows(Layer.SOURCES)
                 ? SourcePainter.draw(s, v, f.scene(), placement, f.marks(), placer) : List.of();
@@ -100,16 +100,25 @@ public final class ScenePainter {
         if (f.shows(Layer.MOTION)) {
             MotionPainter.reserveArrows(v, f.scene(), placement, placer);
         }
+        // Callouts, the largest labels, are placed before the small ones, which find room around them
+        // (a pole label pushed aside keeps a leader to its magnet); all are drawn last, on top.
+        List<Runnable> labels = new ArrayList<>();
+        if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
+            ConductorPainter.placeCallouts(s, v, f.scene(), placement, f.snapshot(), f.scales(), placer, labels);
+        }
         sourceLabels.forEach(Runnable::run);
         if (f.shows(Layer.MOTION)) {
             MotionPainter.draw(s, v, f.scene(), placement, placer);
             SheetPainter.drawFlow(s, v, f, placement, placer);
         }
-        List<Runnable> labels = new ArrayList<>();
-        if (f.shows(Layer.CALLOUTS) && f.snapshot() != null) {
-            ConductorPainter.placeCallouts(s, v, f.scene(), placement, f.snapshot(), f.scales(), placer, labels);
-        }
         contourLabels.forEach(c -> placeContourLabel(s, c, placer, labels));
+        s.fill(Palette.MUTED);
+        for (AxisValue a : axisValues) {
+            if (!placer.labelOver(a.box())) {
+                s.text(a.text(), a.x(), a.y(), LABEL_FONT, false,
+                        a.bottom() ? Surface.Anchor.BOTTOM_LEFT : Surface.Anchor.TOP_LEFT);
+            }
+        }
         ConductorPainter.drawMarks(s, v, f.marks());
         labels.forEach(Runnable::run);
         if (f.shows(Layer.SCALE_BAR)) {
@@ -140,8 +149,15 @@ public final class ScenePainter {
         }
     }
 
-    /** Grid lines and axis values; a value is left out where it would touch a box of {@code taken} or another value. */
-    private static void grid(Surface s, ViewTransform v, List<LabelPlacer.Box> taken) {
+    /** An axis value: its text, anchor point (bottom-left for y values, top-left for x values) and box. */
+    private record AxisValue(String text, double x, double y, boolean bottom, LabelPlacer.Box box) {
+    }
+
+    /**
+     * Draws the grid lines and returns the axis values to write, leaving out a value that would be
+     * cut off or touch a box of {@code taken} or another value (each kept value joins {@code taken}).
+     */
+    private static List<AxisValue> grid(Surface s, ViewTransform v, List<LabelPlacer.Box> taken) {
         double major = NiceSteps.atLeast(90 / v.pxPerM());
         double mantissa = major / Math.pow(10, Math.floor(Math.log10(major) + 1e-9));
         double minor = major / (Math.round(mantissa) == 2 ? 4 : 5);
@@ -153,24 +169,25 @@ public final class ScenePainter {
         s.fill(Palette.AXIS);
         s.fillRect(Math.rint(v.screenX(0)), 0, 1, s.height());
         s.fillRect(0, Math.rint(v.screenY(0)), s.width(), 1);
-        s.fill(Palette.MUTED);
+        List<AxisValue> values = new ArrayList<>();
         for (double y = Math.ceil(v.minY() / major) * major; y <= v.maxY(); y += major) {
-            axisLabel(s, Quantities.length(snap(y, major)), 4, v.screenY(y) - 2, true, taken);
+            axisValue(s, Quantities.length(snap(y, major)), 4, v.screenY(y) - 2, true, taken, values);
         }
         for (double x = Math.ceil(v.minX() / major) * major; x <= v.maxX(); x += major) {
-            axisLabel(s, Quantities.length(snap(x, major)), v.screenX(x) + 3, 30, false, taken);
+            axisValue(s, Quantities.length(snap(x, major)), v.screenX(x) + 3, 30, false, taken, values);
         }
+        return values;
     }
 
-    /** An axis label with its top-left (or bottom-left) corner at (x, y), unless it would be cut off or touch a taken box. */
-    private static void axisLabel(Surface s, String text, double x, double y, boolean bottom,
-                                  List<LabelPlacer.Box> taken) {
+    /** Adds the axis value at (x, y) to {@code values} unless it would be cut off or touch a taken box. */
+    private static void axisValue(Surface s, String text, double x, double y, boolean bottom,
+                                  List<LabelPlacer.Box> taken, List<AxisValue> values) {
         double top = bottom ? y - LABEL_FONT - 2 : y;
         LabelPlacer.Box box = new LabelPlacer.Box(x, top, s.textWidth(text, LABEL_FONT, false), LABEL_FONT + 2);
         boolean inside = box.x() + box.w() <= s.width() && box.y() >= 0 && box.y() + box.h() <= s.height();
         if (inside && taken.stream().noneMatch(t -> box.overlaps(t, 2))) {
             taken.add(box);
-            s.text(text, x, y, LABEL_FONT, false, bottom ? Surface.Anchor.BOTTOM_LEFT : Surface.Anchor.TOP_LEFT);
+            values.add(new AxisValue(text, x, y, bottom, box));
         }
     }
 
@@ -202,7 +219,7 @@ public final class ScenePainter {
                     || placed.stream().anyMatch(p -> Math.hypot(p[0] - m[0], p[1] - m[1]) < SAME_LEVEL_LABEL_GAP_PX)) {
                 continue;
             }
-            placer.reserve(b);
+            placer.reserveText(b);
             placed.add(m);
             labels.add(() -> {
                 s.fill(0xD9FFFFFF);

@@ -85,4 +85,22 @@ class LabelPlacerTest {
         assertTrue(Math.hypot(moved.centerX() - 200, moved.centerY() - 100) <= 40,
                 "stays near its anchor: " + moved);
     }
+
+    @Test
+    void calloutsTakeTheOrderThatKeepsTheirLeadersShortest() {
+        // Free only in two slots, top and bottom, both 100 × 50; a callout anchored in the middle is as
+        // near to either, one anchored in the top slot needs that one. Placed in the order given, the
+        // first would take the top slot and send the second to the bottom.
+        LabelPlacer p = new LabelPlacer(300, 200);
+        p.reserve(new LabelPlacer.Box(0, 50, 300, 100));
+        p.reserve(new LabelPlacer.Box(0, 0, 50, 50));
+        p.reserve(new LabelPlacer.Box(150, 0, 150, 50));
+        p.reserve(new LabelPlacer.Box(0, 150, 50, 50));
+        p.reserve(new LabelPlacer.Box(150, 150, 150, 50));
+        List<LabelPlacer.Box> boxes = p.placeAll(List.of(new LabelPlacer.Callout(100, 100, 80, 30),
+                new LabelPlacer.Callout(100, 10, 80, 30)));
+        assertTrue(boxes.get(0).y() >= 150, "the middle one goes to the bottom slot: " + boxes.get(0));
+        assertTrue(boxes.get(1).y() + boxes.get(1).h() <= 50, "the top one keeps its own slot: " + boxes.get(1));
+        assertFalse(overlap(boxes.get(0), boxes.get(1)));
+    }
 }

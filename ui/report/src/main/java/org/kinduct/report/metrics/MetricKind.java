@@ -2,7 +2,6 @@ package org.kinduct.report.metrics;
 
 import java.util.List;
 import org.kinduct.report.ConductorSummary;
-import org.kinduct.scene.Conductor;
 import org.kinduct.scene.units.Dimension;
 import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
@@ -34,25 +33,15 @@ public enum MetricKind {
     PEAK_CURRENT("peak_current", Scope.CLOSED_LOOP, Dimension.CURRENT, "largest |current|",
             (run, w, id) -> Math.abs(summary(w, id).peakCurrentA())),
     MEAN_LOAD_POWER("mean_load_power", Scope.CLOSED_LOOP, Dimension.POWER,
-            "time average of I²·R_load (trapezoidal rule over the samples)", (run, w, id) -> {
-                ConductorSeries s = new ConductorSeries(w, id);
-                double load = ((Conductor.Loop) run.scene().conductor(id).orElseThrow()).loadOhm();
-                double[] power = new double[s.currentA.length];
-                for (int i = 0; i < power.length; i++) {
-                    power[i] = s.currentA[i] * s.currentA[i] * load;
-                }
-                return Window.timeAverage(s.times, power);
-            }),
+            "time average of I²·R_load (trapezoidal rule over the samples)",
+            (run, w, id) -> LoadPower.of(run, w, id).average()),
+    STEADY_LOAD_POWER("steady_load_power", Scope.CLOSED_LOOP, Dimension.POWER,
+            "time average of I²·R_load over the whole cycles of the current (between its upward zero crossings)"
+                    + " in the last quarter of the samples; empty with less than one cycle there",
+            (run, w, id) -> LoadPower.of(run, w, id).steady()),
     LOAD_ENERGY("load_energy", Scope.CLOSED_LOOP, Dimension.ENERGY,
-            "∫ I²·R_load dt, the energy into the load resistor (trapezoidal rule over the samples)", (run, w, id) -> {
-                ConductorSeries s = new ConductorSeries(w, id);
-                double load = ((Conductor.Loop) run.scene().conductor(id).orElseThrow()).loadOhm();
-                double[] power = new double[s.currentA.length];
-                for (int i = 0; i < power.length; i++) {
-                    power[i] = s.currentA[i] * s.currentA[i] * load;
-                }
-                return Window.integral(s.times, power);
-            }),
+            "∫ I²·R_load dt, the energy into the load resistor (trapezoidal rule over the samples)",
+            (run, w, id) -> LoadPower.of(run, w, id).integral()),
     JOULE_HEAT("joule_heat", Scope.CLOSED_LOOP, Dimension.ENERGY,
             "∫ I²·R dt, R winding plus load (trapezoidal rule over the samples)", (run, w, id) -> {
                 ConductorSeries s = new ConductorSeries(w, id);
