@@ -19,7 +19,8 @@ import org.kinduct.solver.SourceReach;
  * width, a strip's); {@value #CELLS_PER_HOLE_WIDTH} across the narrowest hole's width 2A/P (a
  * slot). Cost caps the cells at {@value #MOST_CELLS}: a solve of that size took 0.2–0.5 s on one
  * core of a 2-core VM (a slotted plate under four magnets, whose drag changed by 0.35 % from 4600
- * to 18 000 cells and by 0.13 % from 18 000 to 73 000).
+ * to 18 000 cells and by 0.13 % from 18 000 to 73 000). The cells over the outline's bounding box
+ * stay within {@link Conductor.Sheet#MOST_CELLS}, the most a file may ask for.
  */
 final class CellSize {
 
@@ -48,7 +49,10 @@ final class CellSize {
             h = Math.min(h, width(hole) / CELLS_PER_HOLE_WIDTH);
             area -= Math.abs(Polygons.signedArea(hole));
         }
-        return Math.max(h, Math.sqrt(area / MOST_CELLS));
+        Polygons.Box box = Polygons.box(outline);
+        // A thin shape across a wide box (a sliver) would ask for cells far beyond its area's share.
+        double boxCapped = Math.sqrt((box.maxX() - box.minX()) * (box.maxY() - box.minY()) / Conductor.Sheet.MOST_CELLS);
+        return Math.max(Math.max(h, Math.sqrt(area / MOST_CELLS)), boxCapped);
     }
 
     /** The length over which a source's field changes, for resolving eddy currents; infinite for a uniform field. */

@@ -3,6 +3,7 @@ package org.kinduct.solver.sheet;
 import java.util.ArrayDeque;
 import org.apache.commons.geometry.euclidean.twod.RegionBSPTree2D;
 import org.apache.commons.geometry.euclidean.twod.Vector2D;
+import org.kinduct.scene.Conductor;
 import org.kinduct.scene.Vec2;
 
 /**
@@ -34,6 +35,12 @@ public final class SheetGrid {
 
     /** Cells conducting less than this fraction of their area are left out (see the class comment). */
     public static final double SMALL_CELL_FRACTION = 1e-6;
+    /**
+     * Most cells over the outline's box: four times what a file may ask for (two halvings of the
+     * automatic size for a narrow neck stay within it), so that no shape exhausts memory
+     * (a 1 km sliver of a plate once asked for 4 GB).
+     */
+    public static final long MOST_CELLS = 4L * Conductor.Sheet.MOST_CELLS;
 
     private final SheetShape shape;
     private final int nx;
@@ -57,9 +64,9 @@ public final class SheetGrid {
         double height = box[3] - box[1];
         long cellsX = Math.max(1, (long) Math.ceil(width / cellM * (1 - 1e-12)));
         long cellsY = Math.max(1, (long) Math.ceil(height / cellM * (1 - 1e-12)));
-        if (cellsX * cellsY > Integer.MAX_VALUE / 4) {
+        if (cellsX * cellsY > MOST_CELLS) {
             throw new IllegalArgumentException("cell size " + cellM + " m gives " + cellsX + " × " + cellsY
-                    + " cells, too many");
+                    + " cells over the outline's box, more than the " + MOST_CELLS + " a grid may have");
         }
         this.shape = shape;
         this.cellM = cellM;

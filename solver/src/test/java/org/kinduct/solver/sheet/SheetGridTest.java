@@ -115,6 +115,14 @@ class SheetGridTest {
     }
 
     @Test
+    void aGridBeyondItsMostCellsIsRefusedBeforeAnyArrayIsMade() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> SheetGrid.withCellSize(
+                SheetShape.of(points(0, 0, 1, 0, 1, 1, 0, 1)), 1e-4));
+        assertEquals("cell size 1.0E-4 m gives 10000 × 10000 cells over the outline's box, more than the 8388608 a"
+                + " grid may have", e.getMessage());
+    }
+
+    @Test
     void invalidShapesAreRejectedWithTheRuleTheyBreak() {
         List<Vec2> square = points(0, 0, 1, 0, 1, 1, 0, 1);
         assertRejected("outline needs at least 3 vertices", () -> SheetShape.of(points(0, 0, 1, 0)));
