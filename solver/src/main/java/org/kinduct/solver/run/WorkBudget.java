@@ -49,6 +49,8 @@ final class WorkBudget implements RunMonitor {
     private double fraction;
     private double projectedEvaluations;
     private volatile boolean exceeded;
+    /** Whether the evaluations, not the steps, went over. */
+    private boolean overEvaluations;
 
     /** @param samples the samples the run makes; call on the thread that runs the integrator */
     WorkBudget(RunMonitor caller, int samples) {
@@ -65,15 +67,24 @@ final class WorkBudget implements RunMonitor {
         fraction = fractionDone;
         long evaluations = WorkTally.onThisThread() - firstEvaluation;
         projectedEvaluations = fraction > 0 ? evaluations / fraction : Double.POSITIVE_INFINITY;
-        if ((steps >= PROJECT_AFTER_STEPS || evaluations >= PROJECT_AFTER_EVALUATIONS)
-                && (projectedSteps() > maxSteps || projectedEvaluations > maxEvaluations)) {
-            exceeded = true;
+        if (steps >= PROJECT_AFTER_STEPS || evaluations >= PROJECT_AFTER_EVALUATIONS) {
+            overEvaluations = projectedEvaluations > maxEvaluations;
+            exceeded = overEvaluations || projectedSteps() > maxSteps;
         }
         caller.progress(fractionDone);
     }
 
+    /**
+     * Also polled at every evaluation of the equations: a run whose first step alone spends its
+     * whole allowance (a plate of millions of cells solved at each of a step's twelve evaluations)
+     * stops then, before any progress gives a pace to project from.
+     */
     @Override
     public boolean cancelled() {
+        if (!exceeded && WorkTally.onThisThread() - firstEvaluation > maxEvaluations) {
+            overEvaluations = true;
+            exceeded = true;
+        }
         return exceeded || caller.cancelled();
     }
 
@@ -89,7 +100,7 @@ final class WorkBudget implements RunMonitor {
 
     /** Why the run was stopped, for a run of sampling step {@code dtS}. */
     String reason(double dtS) {
-        if (projectedSteps() > maxSteps) {
+        if (!overEvaluations) {
             return String.format(Locale.ROOT, "the coupled run would take about %.3g integrator steps (at most %.0f"
                     + " are taken here: %d per sample, at least %d, at most %d): the scene changes far faster than the"
                     + " sampling step dt = %s s can follow (a stiff spring, strong damping or a light free body, a"
@@ -101,7 +112,8 @@ final class WorkBudget implements RunMonitor {
                 + " here (%.0e per sample, at least %.0e, at most %.0e; %.3g per integrator step so far): the"
                 + " conductors are very costly to solve at this geometry (a conductor far larger than the sources"
                 + " passing close to them, sources touching the conductors' plane, or a plate or channel of very many"
-                + " cells); shorten the window, or reshape the conductors or coarsen their cells", maxEvaluations, (double) MAX_EVALUATIONS_PER_SAMPLE,
-                (double) LEAST_EVALUATIONS, (double) MAX_EVALUATIONS, projectedEvaluations / projectedSteps());
+                + " cells); shorten the window, or reshape the conductors or coarsen their cells", maxEvaluations,
+                (double) MAX_EVALUATIONS_PER_SAMPLE, (double) LEAST_EVALUATIONS, (double) MAX_EVALUATIONS,
+                (WorkTally.onThisThread() - firstEvaluation) / (double) Math.max(1, steps));
     }
 }

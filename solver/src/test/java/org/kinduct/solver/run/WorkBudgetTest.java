@@ -49,6 +49,17 @@ class WorkBudgetTest {
     }
 
     @Test
+    void aRunWhoseFirstStepSpendsTheWholeAllowanceStopsBeforeAnyProgress() {
+        WorkBudget budget = new WorkBudget(RunMonitor.NONE, 3);
+        spend(WorkBudget.LEAST_EVALUATIONS / 2);
+        assertFalse(budget.cancelled(), "half the allowance");
+        spend(WorkBudget.LEAST_EVALUATIONS / 2 + 1);
+        assertTrue(budget.cancelled(), "the whole allowance, with no step done");
+        assertTrue(budget.reason(1e-3).startsWith("the coupled run would need more than the 1.00e+08 field"
+                + " evaluations allowed here"), budget.reason(1e-3));
+    }
+
+    @Test
     void aRunWithinItsEvaluationsGoesOn() {
         WorkBudget budget = new WorkBudget(RunMonitor.NONE, 3);
         long spent = spend(WorkBudget.PROJECT_AFTER_EVALUATIONS);

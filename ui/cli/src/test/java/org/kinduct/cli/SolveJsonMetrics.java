@@ -28,6 +28,15 @@ final class SolveJsonMetrics {
         if (List.of("final_speed", "terminal_speed", "settling_time").contains(key)) {
             return body(key, id);
         }
+        if (key.equals("final_spin")) {
+            double[] omega = {Double.NaN};
+            root.path("bodies").forEach(b -> {
+                if (b.path("id").asText().equals(id)) {
+                    omega[0] = Math.abs(b.path("omega_radps").asDouble());
+                }
+            });
+            return omega[0];
+        }
         if (List.of("mean_drag", "mean_eddy_power", "peak_pair_voltage").contains(key)) {
             return sheet(key, id);
         }
@@ -148,7 +157,7 @@ final class SolveJsonMetrics {
         if (Math.signum(b - a) != Math.signum(c - b) || Math.abs(c - b) >= Math.abs(b - a)) {
             return Double.NaN;
         }
-        return c - (c - b) * (c - b) / ((c - b) - (b - a));
+        return Math.max(0, c - (c - b) * (c - b) / ((c - b) - (b - a)));
     }
 
     /**

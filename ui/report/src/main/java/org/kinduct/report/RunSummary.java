@@ -59,7 +59,11 @@ public final class RunSummary {
         }
         for (Body b : run.scene().bodies()) {
             if (b.motion() instanceof Motion.Free) {
-                out.add(line(run, b.id(), FREE_BODIES));
+                List<MetricKind> kinds = new ArrayList<>(FREE_BODIES);
+                if (turns(run, b.id())) {
+                    kinds.add(MetricKind.FINAL_SPIN);
+                }
+                out.add(line(run, b.id(), kinds));
             }
         }
         loadShare(run).ifPresent(out::add);
@@ -138,6 +142,11 @@ public final class RunSummary {
     }
 
     /** "peak EMF", "RMS EMF", "mean load power": the metric's key in words, abbreviations in capitals. */
+    /** Whether free body {@code id} turns at some sample (a spinning disc's spin is its motion). */
+    private static boolean turns(RunResult run, String id) {
+        return run.samples().stream().anyMatch(s -> s.freeBody(id).omegaRadPerS() != 0);
+    }
+
     private static String name(MetricKind k) {
         return k.key().replace('_', ' ').replace("rms", "RMS").replace("emf", "EMF");
     }

@@ -85,13 +85,20 @@ final class MotionPainter {
             Vec2 centre = SourcePainter.centroid(carried);
             // The velocity of the carried objects' middle: the pivot's plus ω × r.
             Vec2 velocity = pose.velocityAt(centre);
+            // Beside the rim speed of a spinning body, rounding of ω × r at its middle is not a speed.
+            double reach = 0;
+            for (Vec2 p : carried) {
+                reach = Math.max(reach, p.minus(centre).length());
+            }
+            double speed = Units.withoutNoise(velocity.length(),
+                    pose.velocity().length() + Math.abs(pose.omegaRadPerS()) * reach);
             double dx = 0;
             double dy = 0;
             String text = "";
-            if (velocity.length() > 0) {
-                dx = velocity.x() / velocity.length();
-                dy = -velocity.y() / velocity.length();
-                text = "v " + Units.format(velocity.length(), Dimension.VELOCITY);
+            if (speed > 0) {
+                dx = velocity.x() / speed;
+                dy = -velocity.y() / speed;
+                text = "v " + Units.format(speed, Dimension.VELOCITY);
             }
             if (pose.omegaRadPerS() != 0) {
                 text += (text.isEmpty() ? "" : ", ") + "ω " + Units.format(Math.abs(pose.omegaRadPerS()),

@@ -40,7 +40,7 @@ final class BodySpeeds {
      * analysis text). The last speed when the speed no longer changes (both changes within
      * {@link Units#NOISE_FRACTION} of it, rounding noise); NaN (not reached) when the three speeds
      * do not approach a limit (the changes differ in sign or do not shrink), or the window has
-     * fewer than three samples.
+     * fewer than three samples; 0 when the extrapolation passes zero (the body comes to rest).
      */
     double terminal() {
         int n = speeds.length;
@@ -60,7 +60,8 @@ final class BodySpeeds {
         if (Math.signum(d1) != Math.signum(d2) || Math.abs(d2) >= Math.abs(d1)) {
             return Double.NaN;
         }
-        return v3 - d2 * d2 / (d2 - d1);
+        // A speed has no value below zero: an extrapolation past zero is a body coming to rest.
+        return Math.max(0, v3 - d2 * d2 / (d2 - d1));
     }
 
     /**

@@ -64,9 +64,12 @@ public enum MetricKind {
             (run, w, id) -> SheetSeries.peakFirstPairVoltage(w, id)),
     FINAL_SPEED("final_speed", Scope.FREE_BODY, Dimension.VELOCITY, "speed of the body's pivot at the last sample",
             (run, w, id) -> new BodySpeeds(w, id).last()),
+    FINAL_SPIN("final_spin", Scope.FREE_BODY, Dimension.ANGULAR_SPEED, "|ω| of the body at the last sample",
+            (run, w, id) -> Math.abs(w.get(w.size() - 1).freeBody(id).omegaRadPerS())),
     TERMINAL_SPEED("terminal_speed", Scope.FREE_BODY, Dimension.VELOCITY,
             "speed approached at the end: Aitken Δ² extrapolation of the speeds a tenth of the window apart"
-                    + " (the last speed once settled); empty when the speed does not approach a limit",
+                    + " (the last speed once settled, 0 for a body coming to rest); empty when the speed does not"
+                    + " approach a limit",
             (run, w, id) -> new BodySpeeds(w, id).terminal()),
     SETTLING_TIME("settling_time", Scope.FREE_BODY, Dimension.TIME,
             "time from the run's start after which the speed stays within 2 % of its final value",

@@ -143,6 +143,21 @@ class MetricsTest {
     }
 
     @Test
+    void aBodySpinningFreeKeepsItsSpinAndItsFinalSpinIsThat() {
+        // No torque acts (no source): ω stays at its initial value (Newton's first law for rotation);
+        // clockwise, so the metric's magnitude must drop the sign.
+        Body rotor = new Body("rotor", null, Vec2.ZERO, new Motion.Free(0.01, 1e-5, Vec2.ZERO, -7.5, 0, Vec2.ZERO,
+                Vec2.ZERO, 0, List.of()));
+        Conductor coil = new Conductor.Loop("coil", "rotor", List.of(Conductor.Vertex.at(0.01, -0.01),
+                Conductor.Vertex.at(0.03, -0.01), Conductor.Vertex.at(0.03, 0.01), Conductor.Vertex.at(0.01, 0.01)), 1,
+                WireSpec.of(Material.COPPER, 0.5e-3), false, 0, 20);
+        Scene s = new Scene("spin", "", List.of(rotor), List.of(), List.of(coil), new TimeSpan(0, 0.1, 0.01));
+        RunResult run = new SceneRun(s).result();
+        assertEquals(7.5, MetricKind.FINAL_SPIN.read(run, "rotor", Double.NEGATIVE_INFINITY), 1e-9 * 7.5);
+        assertEquals(0, MetricKind.FINAL_SPEED.read(run, "rotor", Double.NEGATIVE_INFINITY), 1e-12);
+    }
+
+    @Test
     void speedsOfABodyApproachingItsTerminalSpeed() {
         RunResult run = fall();
         double end = 0.3;
