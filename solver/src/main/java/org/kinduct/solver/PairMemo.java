@@ -16,9 +16,10 @@ import org.kinduct.solver.field.GradientField;
  * function of the source as written, the two bodies' poses, the loop's placed vertices and the
  * time, which together are the key, so a kept value is the one a fresh run computes, bit for bit.
  *
- * <p>Bounded: once {@value #MAX_STORED_DOUBLES} numbers of keys are held, new pairs are computed
- * and not kept (the first point's pairs, which later points reuse, are kept first). Safe to share
- * between threads; two threads may compute the same pair once each, with the same result.
+ * <p>Bounded: once about {@value #MAX_STORED_DOUBLES} numbers of keys are held, new pairs are
+ * computed and not kept (the first point's pairs, which later points reuse, are kept first). Safe
+ * to share between threads: a pair asked for by two at once is integrated by one while the other
+ * waits for it.
  */
 public final class PairMemo {
 
@@ -65,14 +66,19 @@ public final class PairMemo {
             reused.incrementAndGet();
             return kept;
         }
-        computed.incrementAndGet();
-        RigidPair pair = RigidPair.of(field, sourcePose, loop, loopPose);
         long size = 2L * loop.xs().length;
-        if (stored.addAndGet(size) <= maxStoredDoubles) {
-            pairs.putIfAbsent(key, pair);
-        } else {
-            stored.addAndGet(-size);
+        if (stored.get() + size > maxStoredDoubles) {
+            computed.incrementAndGet();
+            return RigidPair.of(field, sourcePose, loop, loopPose);
         }
+        // Computed inside the map, so that threads asking for one pair at once integrate it once.
+        boolean[] fresh = {false};
+        RigidPair pair = pairs.computeIfAbsent(key, k -> {
+            fresh[0] = true;
+            stored.addAndGet(size);
+            return RigidPair.of(field, sourcePose, loop, loopPose);
+        });
+        (fresh[0] ? computed : reused).incrementAndGet();
         return pair;
     }
 
