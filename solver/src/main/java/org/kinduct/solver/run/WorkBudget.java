@@ -47,7 +47,6 @@ final class WorkBudget implements RunMonitor {
     private final long firstEvaluation;
     private long steps;
     private double fraction;
-    private double projectedEvaluations;
     private volatile boolean exceeded;
     /** Whether the evaluations, not the steps, went over. */
     private boolean overEvaluations;
@@ -66,7 +65,7 @@ final class WorkBudget implements RunMonitor {
         steps++;
         fraction = fractionDone;
         long evaluations = WorkTally.onThisThread() - firstEvaluation;
-        projectedEvaluations = fraction > 0 ? evaluations / fraction : Double.POSITIVE_INFINITY;
+        double projectedEvaluations = fraction > 0 ? evaluations / fraction : Double.POSITIVE_INFINITY;
         if (steps >= PROJECT_AFTER_STEPS || evaluations >= PROJECT_AFTER_EVALUATIONS) {
             overEvaluations = projectedEvaluations > maxEvaluations;
             exceeded = overEvaluations || projectedSteps() > maxSteps;
