@@ -15,7 +15,9 @@ import org.kinduct.solver.dynamics.SimulationCancelledException;
 
 /**
  * Runs the points of one shard of a study on a fixed number of threads, one point per thread
- * at a time (each run on its own thread, so two threads use two cores whatever the scene).
+ * at a time (each run on its own thread, so two threads use two cores whatever the scene);
+ * with more than one thread the first point runs alone, its instants over every core, since it
+ * integrates what the points share.
  * Rows come back in point order; which thread ran a point changes no number. A stop request
  * ({@link #stop()}) lets no new point start and ends coupled runs at their next step; the rows
  * finished by then stay available ({@link #finished()}).
@@ -63,7 +65,6 @@ public final class StudyRunner {
      * @throws InterruptedException when the calling thread is interrupted while waiting
      */
     public List<Row> run() throws InterruptedException {
-        AtomicInteger next = new AtomicInteger();
         AtomicReference<RuntimeException> fault = new AtomicReference<>();
         RunMonitor monitor = new RunMonitor() {
             @Override
@@ -71,6 +72,12 @@ public final class StudyRunner {
                 return stopping;
             }
         };
+        AtomicInteger next = new AtomicInteger();
+        if (threads > 1 && !points.isEmpty()) {
+            // The first point integrates what all points share; alone and over every core, so
+            // that no thread waits behind another for a shared integral (one per instant).
+            runPoint(next.getAndIncrement(), true, monitor, fault);
+        }
         ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
             Thread t = new Thread(r, "study-point");
             t.setDaemon(true);
@@ -81,15 +88,8 @@ public final class StudyRunner {
                 pool.execute(() -> {
                     int i;
                     while (!stopping && (i = next.getAndIncrement()) < points.size()) {
-                        try {
-                            Row row = PointRun.run(study, points.get(i), monitor, false, memo);
-                            rows.put(row.point(), row);
-                            listener.finished(row, rows.size(), points.size());
-                        } catch (SimulationCancelledException stopped) {
+                        if (!runPoint(i, false, monitor, fault)) {
                             return;
-                        } catch (RuntimeException e) {
-                            fault.compareAndSet(null, e);
-                            stopping = true;
                         }
                     }
                 });
@@ -105,6 +105,26 @@ public final class StudyRunner {
             throw fault.get();
         }
         return finished();
+    }
+
+    /**
+     * Runs the {@code i}-th point of this shard and records its row.
+     *
+     * @return false when the run was stopped before the point finished
+     */
+    private boolean runPoint(int i, boolean parallel, RunMonitor monitor, AtomicReference<RuntimeException> fault) {
+        try {
+            Row row = PointRun.run(study, points.get(i), monitor, parallel, memo);
+            rows.put(row.point(), row);
+            listener.finished(row, rows.size(), points.size());
+            return true;
+        } catch (SimulationCancelledException stopped) {
+            return false;
+        } catch (RuntimeException e) {
+            fault.compareAndSet(null, e);
+            stopping = true;
+            return true;
+        }
     }
 
     /** Asks the run to stop: no new point starts, coupled runs end at their next step. */
