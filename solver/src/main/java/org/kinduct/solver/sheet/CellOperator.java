@@ -9,6 +9,11 @@ package org.kinduct.solver.sheet;
  * <p>Vectors carry a ring of ghost cells around the grid so that the loops need no bounds
  * checks: cell (i, j) is at index (i + 1) + (j + 1)·stride; ghost entries stay zero, and so do
  * those of cells without conductance (left out, or outside the sheet).
+ *
+ * <p>The loops visit each row only from its first to its last cell with conductance: a sheet
+ * that fills a small part of its bounding box (a thin strip on the diagonal, a disc with a long
+ * spike) costs in proportion to its cells, not to the box. What they skip is zero both ways, so
+ * the numbers are the same as over the whole box.
  */
 final class CellOperator {
 
@@ -21,7 +26,12 @@ final class CellOperator {
     final double[] north;
     final double[] diagonal;
     final double[] inverseDiagonal;
+    /** Per row j, the first cell with conductance and one past the last (equal for a row without any). */
+    private final int[] rowStart;
+    private final int[] rowEnd;
     private int activeCount;
+    /** Cells the loops visit: the rows' spans. */
+    private int visitedCount;
 
     CellOperator(int nx, int ny) {
         this.nx = nx;
@@ -32,6 +42,8 @@ final class CellOperator {
         north = new double[size];
         diagonal = new double[size];
         inverseDiagonal = new double[size];
+        rowStart = new int[ny];
+        rowEnd = new int[ny];
     }
 
     /** The finest level: conductances are the grid's aperture fractions. */
@@ -63,7 +75,10 @@ final class CellOperator {
 
     void completeDiagonal() {
         activeCount = 0;
+        visitedCount = 0;
         for (int j = 0; j < ny; j++) {
+            rowStart[j] = nx;
+            rowEnd[j] = 0;
             for (int i = 0; i < nx; i++) {
                 int k = index(i, j);
                 double d = east[k] + east[k - 1] + north[k] + north[k - stride];
@@ -71,9 +86,28 @@ final class CellOperator {
                 inverseDiagonal[k] = d > 0 ? 1 / d : 0;
                 if (d > 0) {
                     activeCount++;
+                    rowStart[j] = Math.min(rowStart[j], i);
+                    rowEnd[j] = i + 1;
                 }
             }
+            rowStart[j] = Math.min(rowStart[j], rowEnd[j]);
+            visitedCount += rowEnd[j] - rowStart[j];
         }
+    }
+
+    /** Cells a pass over this level visits (those with conductance and the gaps between them in a row). */
+    int visitedCount() {
+        return visitedCount;
+    }
+
+    /** The first cell of row j with conductance (equal to {@link #rowEnd} for a row without any). */
+    int rowStart(int j) {
+        return rowStart[j];
+    }
+
+    /** One past the last cell of row j with conductance. */
+    int rowEnd(int j) {
+        return rowEnd[j];
     }
 
     /**
@@ -106,8 +140,8 @@ final class CellOperator {
     /** y = A·x. */
     void apply(double[] x, double[] y) {
         for (int j = 0; j < ny; j++) {
-            int k = index(0, j);
-            for (int end = k + nx; k < end; k++) {
+            int k = index(rowStart[j], j);
+            for (int end = index(rowEnd[j], j); k < end; k++) {
                 y[k] = diagonal[k] * x[k] - east[k] * x[k + 1] - east[k - 1] * x[k - 1] - north[k] * x[k + stride]
                         - north[k - stride] * x[k - stride];
             }
@@ -117,8 +151,8 @@ final class CellOperator {
     /** r = b − A·x. */
     void residual(double[] b, double[] x, double[] r) {
         for (int j = 0; j < ny; j++) {
-            int k = index(0, j);
-            for (int end = k + nx; k < end; k++) {
+            int k = index(rowStart[j], j);
+            for (int end = index(rowEnd[j], j); k < end; k++) {
                 r[k] = b[k] - diagonal[k] * x[k] + east[k] * x[k + 1] + east[k - 1] * x[k - 1]
                         + north[k] * x[k + stride] + north[k - stride] * x[k - stride];
             }
@@ -128,18 +162,22 @@ final class CellOperator {
     /** One Gauss–Seidel pass over the cells of one colour ((i + j) mod 2 = colour) of A·x = b. */
     void sweep(double[] b, double[] x, int colour) {
         for (int j = 0; j < ny; j++) {
-            int k = index((j + colour) & 1, j);
-            for (int end = index(0, j) + nx; k < end; k += 2) {
+            int start = rowStart[j];
+            int k = index(start + ((start + j + colour) & 1), j);
+            for (int end = index(rowEnd[j], j); k < end; k += 2) {
                 x[k] = inverseDiagonal[k] * (b[k] + east[k] * x[k + 1] + east[k - 1] * x[k - 1]
                         + north[k] * x[k + stride] + north[k - stride] * x[k - stride]);
             }
         }
     }
 
-    static double dot(double[] a, double[] b) {
+    /** a·b over this level's vectors (zero outside the cells with conductance). */
+    double dot(double[] a, double[] b) {
         double sum = 0;
-        for (int k = 0; k < a.length; k++) {
-            sum += a[k] * b[k];
+        for (int j = 0; j < ny; j++) {
+            for (int k = index(rowStart[j], j), end = index(rowEnd[j], j); k < end; k++) {
+                sum += a[k] * b[k];
+            }
         }
         return sum;
     }

@@ -94,9 +94,9 @@ final class Multigrid implements ConjugateGradient.Preconditioner {
     private static void restrict(CellOperator fine, double[] residual, CellOperator coarse, double[] out) {
         Arrays.fill(out, 0);
         for (int j = 0; j < fine.ny; j++) {
-            int k = fine.index(0, j);
+            int k = fine.index(fine.rowStart(j), j);
             int row = coarse.index(0, j >> 1);
-            for (int i = 0; i < fine.nx; i++, k++) {
+            for (int i = fine.rowStart(j); i < fine.rowEnd(j); i++, k++) {
                 out[row + (i >> 1)] += residual[k];
             }
         }
@@ -104,9 +104,9 @@ final class Multigrid implements ConjugateGradient.Preconditioner {
 
     private static void prolongAdd(CellOperator coarse, double[] correction, CellOperator fine, double[] out) {
         for (int j = 0; j < fine.ny; j++) {
-            int k = fine.index(0, j);
+            int k = fine.index(fine.rowStart(j), j);
             int row = coarse.index(0, j >> 1);
-            for (int i = 0; i < fine.nx; i++, k++) {
+            for (int i = fine.rowStart(j); i < fine.rowEnd(j); i++, k++) {
                 if (fine.diagonal[k] > 0) {
                     out[k] += correction[row + (i >> 1)];
                 }
