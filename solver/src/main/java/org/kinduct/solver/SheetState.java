@@ -3,12 +3,13 @@ package org.kinduct.solver;
 import java.util.List;
 import java.util.Optional;
 import org.kinduct.scene.Vec2;
+import org.kinduct.solver.sheet.EddyModel;
 
 /**
- * Everything computed for one plate or channel at one instant, in the resistive limit: the
- * eddy currents' force and torque on it, their Joule power, the electrodes' potentials and the
- * pairs' voltages. The extended-conductor counterpart of {@link ConductorState}; see
- * {@code org.kinduct.solver.plate} for the model.
+ * Everything computed for one plate or channel at one instant: the eddy currents' force and
+ * torque on it, their Joule power, the electrodes' potentials and the pairs' voltages, and which
+ * model made them ({@code model}). The extended-conductor counterpart of {@link ConductorState};
+ * see {@code org.kinduct.solver.plate} for the models and when each is used.
  *
  * @param forceN force of the field on the conductor's currents, N (the drag on a moving plate)
  * @param torqueNm its z torque about {@code pivotM}, N·m
@@ -18,7 +19,8 @@ import org.kinduct.scene.Vec2;
  * @param joulePowerW d·∫|J|²/σ dA, W
  * @param peakCurrentDensityAPerM2 largest cell |J|, A/m²
  * @param magneticReynolds μ0·σ·d·v (plate) or μ0·σ·w·v (channel) with the fastest speed: the
- *        neglected self-field relative to the applied one; results hold for Rm ≪ 1
+ *        currents' own field relative to the applied one; the resistive limit holds for Rm ≪ 1
+ * @param model the resistive limit, or the plate's own field included
  * @param cellM side of the grid's cells, metres
  * @param meanVelocityMPerS a channel's mean flow v̄ at this instant; NaN for a plate
  * @param electrodes potential of each electrode, in the order declared
@@ -30,11 +32,15 @@ import org.kinduct.scene.Vec2;
  */
 public record SheetState(String id, Kind kind, Vec2 forceN, double torqueNm, Vec2 pivotM, double reachM,
                          double joulePowerW,
-                         double peakCurrentDensityAPerM2, double magneticReynolds, double cellM,
+                         double peakCurrentDensityAPerM2, double magneticReynolds, EddyModel model, double cellM,
                          double meanVelocityMPerS, List<Electrode> electrodes, List<Pair> pairs,
                          boolean inducedFieldIncluded, StreamLattice streamFunction) {
 
-    /** Above this magnetic Reynolds number outputs warn that the resistive limit no longer holds. */
+    /**
+     * Above this magnetic Reynolds number the resistive limit no longer holds: a plate is solved
+     * with its own field where that model applies, and outputs warn where it does not. At Rm = 0.1
+     * the own field lowers the drag of a magnet over a sheet by 0.2 % ((3/4)(Rm/2)², Reitz 1970).
+     */
     public static final double REYNOLDS_WARNING = 0.1;
 
     public enum Kind { PLATE, CHANNEL }
@@ -44,9 +50,12 @@ public record SheetState(String id, Kind kind, Vec2 forceN, double torqueNm, Vec
         pairs = List.copyOf(pairs);
     }
 
-    /** True when Rm exceeds {@value #REYNOLDS_WARNING}, where the neglected self-field starts to matter. */
+    /**
+     * True when these results neglect an own field that matters: the resistive limit was used and
+     * Rm exceeds {@value #REYNOLDS_WARNING}.
+     */
     public boolean beyondResistiveLimit() {
-        return magneticReynolds > REYNOLDS_WARNING;
+        return model == EddyModel.RESISTIVE_LIMIT && magneticReynolds > REYNOLDS_WARNING;
     }
 
     /**

@@ -2,10 +2,14 @@ package org.kinduct.solver.plate;
 
 import org.kinduct.solver.StreamLattice;
 import org.kinduct.solver.sheet.SheetGrid;
-import org.kinduct.solver.sheet.SheetSolution;
 
 /** A solution's stream function as the {@link StreamLattice} a state keeps. */
 final class Lattices {
+
+    /** A stream function of the current density on a grid's nodes, A/m. */
+    interface NodeValues {
+        double at(int i, int j);
+    }
 
     private Lattices() {
     }
@@ -16,8 +20,7 @@ final class Lattices {
      * solution's at the nodes kept. Nodes past the grid's far sides take the side's value (ψ is
      * constant beyond the conductor).
      */
-    static StreamLattice of(SheetSolution solution) {
-        SheetGrid grid = solution.grid();
+    static StreamLattice of(SheetGrid grid, NodeValues streamFunctionAPerM) {
         int nodesX = grid.nx() + 1;
         int nodesY = grid.ny() + 1;
         int k = (int) Math.ceil(Math.sqrt((double) nodesX * nodesY / StreamLattice.MAX_NODES));
@@ -29,7 +32,7 @@ final class Lattices {
         float[] psi = new float[nx * ny];
         for (int j = 0; j < ny; j++) {
             for (int i = 0; i < nx; i++) {
-                psi[i + nx * j] = (float) solution.streamFunctionAPerM(Math.min(i * k, grid.nx()),
+                psi[i + nx * j] = (float) streamFunctionAPerM.at(Math.min(i * k, grid.nx()),
                         Math.min(j * k, grid.ny()));
             }
         }

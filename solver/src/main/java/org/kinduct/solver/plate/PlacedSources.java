@@ -76,6 +76,31 @@ final class PlacedSources {
                 inducedKnown);
     }
 
+    /**
+     * True when no source moves or alternates at this instant: the field is still, so the steady
+     * state of a plate moving through it is defined.
+     */
+    boolean still() {
+        return Arrays.stream(sources).allMatch(p -> p.moving() == null && p.perAmpere() == null);
+    }
+
+    /**
+     * The fastest speed, over {@code pointsNow}, of material moving as {@code body} relative to a
+     * moving source, m/s; 0 when no source moves. Both motions are rigid, so the relative velocity
+     * is affine in position and its largest magnitude over a polygon is at a vertex.
+     */
+    double fastestRelativeSpeed(List<Vec2> pointsNow, Pose body) {
+        double fastest = 0;
+        for (Placed p : sources) {
+            if (p.moving() != null) {
+                for (Vec2 r : pointsNow) {
+                    fastest = Math.max(fastest, body.velocityAt(r).minus(p.moving().velocityAt(r)).length());
+                }
+            }
+        }
+        return fastest;
+    }
+
     /** True when some source is an AC-driven coil. */
     boolean alternates() {
         return Arrays.stream(sources).anyMatch(p -> p.perAmpere() != null);

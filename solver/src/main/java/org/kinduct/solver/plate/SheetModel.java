@@ -1,14 +1,20 @@
 package org.kinduct.solver.plate;
 
 import java.util.ArrayList;
+import java.util.DoubleSummaryStatistics;
 import java.util.List;
+import java.util.Queue;
+import java.util.concurrent.ConcurrentLinkedQueue;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Pose;
 import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.SheetState;
 import org.kinduct.solver.sheet.ChannelFlow;
 import org.kinduct.solver.sheet.Electrode;
+import org.kinduct.solver.sheet.Plate;
+import org.kinduct.solver.sheet.PlateSolver;
 import org.kinduct.solver.sheet.SheetConductor;
 import org.kinduct.solver.sheet.SheetGrid;
 import org.kinduct.solver.sheet.SheetShape;
@@ -16,12 +22,28 @@ import org.kinduct.solver.sheet.SheetShape;
 /**
  * One plate or channel of a scene, ready to solve: its material, its electrodes moved onto the
  * edge they lie on (the file allows a millionth of the conductor's size off it), its cell size and,
- * built on first use and then kept, its grid in the body's drawn frame.
+ * built on first use and then kept, its grid in the body's drawn frame and, for a plate solved
+ * with its own field, prepared solvers (one per thread at a time).
  */
 final class SheetModel {
 
     /** An automatic cell size that splits a narrow neck is halved at most this often. */
     private static final int REFINEMENTS = 3;
+    /**
+     * A spinning plate's steady state with its own field is solved up to this Rm at the rim
+     * (a rim speed of twice the characteristic speed w = 2/(μ0σd)): the solver's preconditioner
+     * is that of a translation and converges slowly beyond (see {@link Plate}).
+     */
+    static final double MOST_SPIN_REYNOLDS = 4;
+    /**
+     * The own-field solve keeps about 95 vectors of the grid's nodes (flexible GMRES's basis and its
+     * preconditioned copies, 81, and the FFT's padded arrays): beyond this many nodes (320², some
+     * 80 MB a solver) a plate stays in the resistive limit, with the warning.
+     */
+    static final int MOST_OWN_FIELD_NODES = 320 * 320;
+    /** Outline vertices within this fraction of one distance from the pivot make a plate round about it. */
+    private static final double ROUND = 1e-3;
+    private static final PlateSolver PLATE_SOLVER = PlateSolver.standard();
 
     private final Conductor.Sheet sheet;
     private final SheetState.Kind kind;
@@ -30,6 +52,8 @@ final class SheetModel {
     private final double requestedCellM;
     private final boolean automatic;
     private SheetGrid grid;
+    /** Prepared own-field solvers not in use ({@link Plate} is not thread-safe). */
+    private final Queue<Plate> plates = new ConcurrentLinkedQueue<>();
 
     SheetModel(Conductor.Sheet sheet, Scene scene) {
         this.sheet = sheet;
@@ -85,6 +109,41 @@ final class SheetModel {
             }
         }
         return grid;
+    }
+
+    /**
+     * Whether this conductor's steady state with its own field is defined and solved for a body
+     * at {@code pose} with Rm {@code reynolds}: a plate without electrodes (the own-field model has
+     * currents, not potentials) that translates, or spins with a rim Rm up to
+     * {@value #MOST_SPIN_REYNOLDS} and is a round disc without holes about its pivot (then the
+     * spin leaves the plate where it was, and the steady state is the same at every angle); and
+     * whose grid has at most {@value #MOST_OWN_FIELD_NODES} nodes.
+     */
+    boolean ownFieldApplies(Pose pose, double reynolds) {
+        SheetGrid g = grid();
+        if (kind != SheetState.Kind.PLATE || !electrodes.isEmpty()
+                || (long) (g.nx() + 1) * (g.ny() + 1) > MOST_OWN_FIELD_NODES) {
+            return false;
+        }
+        if (pose.omegaRadPerS() == 0) {
+            return true;
+        }
+        if (reynolds > MOST_SPIN_REYNOLDS || !sheet.holes().isEmpty()) {
+            return false;
+        }
+        DoubleSummaryStatistics radii = sheet.outline().stream()
+                .mapToDouble(v -> v.minus(pose.pivot()).length()).summaryStatistics();
+        return radii.getMax() - radii.getMin() <= ROUND * radii.getMax();
+    }
+
+    /** A prepared own-field solver for this plate, to give back with {@link #giveBack} after use. */
+    Plate takePlate() {
+        Plate plate = plates.poll();
+        return plate != null ? plate : PLATE_SOLVER.prepare(grid(), material);
+    }
+
+    void giveBack(Plate plate) {
+        plates.add(plate);
     }
 
     /** A channel's flow in the drawn frame with mean velocity v̄ at {@code tS}; null for a plate. */

@@ -4,13 +4,18 @@ import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Motion;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Kinematics;
 import org.kinduct.solver.SheetState;
+import org.kinduct.solver.field.PhysicalConstants;
 import org.kinduct.solver.sheet.ChannelFlow;
+import org.kinduct.solver.sheet.EddyModel;
 import org.kinduct.solver.sheet.Electrode;
+import org.kinduct.solver.sheet.Plate;
+import org.kinduct.solver.sheet.PlateSolution;
 import org.kinduct.solver.sheet.SheetGrid;
 import org.kinduct.solver.sheet.SheetSolution;
 import org.kinduct.solver.sheet.SheetSolver;
@@ -34,10 +39,16 @@ public final class Sheets {
 
     private final Scene scene;
     private final List<SheetModel> models;
+    /**
+     * No free body: every state is of a prescribed motion. A coupled run's dynamics brake free
+     * bodies with the resistive limit ({@link SheetBrakes}), so its states use it too.
+     */
+    private final boolean prescribed;
 
     private Sheets(Scene scene, List<SheetModel> models) {
         this.scene = scene;
         this.models = models;
+        prescribed = scene.bodies().stream().noneMatch(b -> b.motion() instanceof Motion.Free);
     }
 
     public static Sheets of(Scene scene) {
@@ -69,15 +80,24 @@ public final class Sheets {
         PlacedSources sources = PlacedSources.at(scene, kinematics, tS);
         List<SheetState> states = new ArrayList<>(models.size());
         for (SheetModel m : models) {
-            states.add(solve(m, sources, kinematics.poseAt(m.sheet().body(), tS), tS));
+            states.add(solve(m, sources, kinematics.poseAt(m.sheet().body(), tS), tS, prescribed));
         }
         return states;
     }
 
-    private static SheetState solve(SheetModel m, PlacedSources sources, Pose pose, double tS) {
+    /**
+     * One plate or channel at one instant: with the plate's own field where Rm exceeds
+     * {@link SheetState#REYNOLDS_WARNING}, the motion is prescribed, the field still and the plate's
+     * steady state defined ({@link SheetModel#ownFieldApplies}); in the resistive limit otherwise.
+     */
+    private static SheetState solve(SheetModel m, PlacedSources sources, Pose pose, double tS, boolean prescribed) {
         SheetGrid grid = m.grid();
         ChannelFlow flow = m.flowAt(tS);
         FrameDrive drive = new FrameDrive(sources, pose, flow);
+        double reynolds = reynolds(m, sources, pose, drive);
+        if (prescribed && reynolds > SheetState.REYNOLDS_WARNING && sources.still() && m.ownFieldApplies(pose, reynolds)) {
+            return withOwnField(m, drive, pose, reynolds);
+        }
         SheetSolution solution = SOLVER.solve(grid, m.material(), drive, pose.pivot(), m.electrodes());
         List<SheetState.Electrode> electrodes = new ArrayList<>();
         for (Electrode e : m.electrodes()) {
@@ -97,12 +117,42 @@ public final class Sheets {
             pairs.add(new SheetState.Pair(p.plus(), p.minus(), voltage, noise, ideal,
                     ideal != 0 && Double.isFinite(ideal) ? voltage / ideal : Double.NaN));
         }
-        double reach = m.sheet().outline().stream().mapToDouble(p -> p.minus(pose.pivot()).length()).max()
-                .orElseThrow();
         return new SheetState(m.sheet().id(), m.kind(), drive.toScene(solution.forceN()), solution.torqueNm(),
-                pose.pivot().plus(pose.offset()), reach, solution.joulePowerW(), solution.peakCurrentDensityAPerM2(),
-                solution.magneticReynolds(), grid.cellM(), flow == null ? Double.NaN : flow.meanSpeedMPerS(),
-                electrodes, pairs, sources.inducedKnown(), Lattices.of(solution));
+                pose.pivot().plus(pose.offset()), reach(m, pose), solution.joulePowerW(),
+                solution.peakCurrentDensityAPerM2(), reynolds, EddyModel.RESISTIVE_LIMIT,
+                grid.cellM(), flow == null ? Double.NaN : flow.meanSpeedMPerS(), electrodes, pairs,
+                sources.inducedKnown(), Lattices.of(grid, solution::streamFunctionAPerM));
+    }
+
+    /** The plate's steady state in a still field with its own field ({@link Plate}); no electrodes. */
+    private static SheetState withOwnField(SheetModel m, FrameDrive drive, Pose pose, double reynolds) {
+        Plate plate = m.takePlate();
+        try {
+            PlateSolution solution = plate.steady(drive, pose.pivot(), EddyModel.SELF_FIELD, null);
+            return new SheetState(m.sheet().id(), m.kind(), drive.toScene(solution.forceN()), solution.torqueNm(),
+                    pose.pivot().plus(pose.offset()), reach(m, pose), solution.joulePowerW(),
+                    solution.peakCurrentDensityAPerM2(), reynolds, EddyModel.SELF_FIELD, plate.grid().cellM(),
+                    Double.NaN, List.of(), List.of(), true, Lattices.of(plate.grid(), solution::streamFunctionAPerM));
+        } finally {
+            m.giveBack(plate);
+        }
+    }
+
+    /**
+     * Rm = μ0·σ·L·v with v the fastest speed of the material through the field: its own speed at a
+     * conducting cell ({@link SheetSolver#reynolds}), or its speed relative to a moving source (a
+     * magnet sweeping over a still plate induces as the plate sweeping under it would).
+     */
+    private static double reynolds(SheetModel m, PlacedSources sources, Pose pose, FrameDrive drive) {
+        List<Vec2> outlineNow = m.sheet().outline().stream().map(pose::place).toList();
+        return Math.max(SheetSolver.reynolds(m.grid(), m.material(), drive), PhysicalConstants.MU_0
+                * m.material().sigmaSPerM() * m.material().reynoldsLengthM()
+                * sources.fastestRelativeSpeed(outlineNow, pose));
+    }
+
+    /** The largest distance from the pivot to the outline, metres. */
+    private static double reach(SheetModel m, Pose pose) {
+        return m.sheet().outline().stream().mapToDouble(p -> p.minus(pose.pivot()).length()).max().orElseThrow();
     }
 
     /**

@@ -1,5 +1,6 @@
 /**
- * Plates and liquid channels of a scene, solved at each instant in the resistive limit.
+ * Plates and liquid channels of a scene, solved at each instant in the resistive limit, or with a
+ * fast plate's own field where its steady state is defined.
  *
  * <p>Model. A plate or channel is a thin conductor in the plane z = 0: thickness (depth) d,
  * conductivity σ, material velocity v(x, y): the rigid motion of its body (glide, spin,
@@ -10,8 +11,17 @@
  * induced field is neglected: the resistive limit, valid for a magnetic Reynolds number
  * Rm = μ0·σ·d·v ≪ 1 for a plate and μ0·σ·v·L ≪ 1 for a liquid of width L (Davidson,
  * <i>An Introduction to Magnetohydrodynamics</i>, Cambridge, 2001, §4.1); it is computed for
- * every state and outputs warn above {@value org.kinduct.solver.SheetState#REYNOLDS_WARNING}.
- * The numerics are {@link org.kinduct.solver.sheet.SheetSolver}'s.
+ * every state, with the material's speed or its speed relative to a moving source, whichever is
+ * larger. The numerics are {@link org.kinduct.solver.sheet.SheetSolver}'s.
+ *
+ * <p>Above Rm = {@value org.kinduct.solver.SheetState#REYNOLDS_WARNING} a plate is solved with its
+ * own field ({@link org.kinduct.solver.sheet.Plate}, steady state) where that state is defined: the
+ * motion is prescribed (no free body in the scene: coupled runs brake bodies in the resistive
+ * limit, and their states must match), the field is still (no moving source, no AC coil), the
+ * plate has no electrodes and either translates or is a round disc without holes spinning about
+ * its centre at a rim Rm of at most 4, and its grid is small enough
+ * ({@link SheetModel#ownFieldApplies}). Elsewhere it stays in the resistive limit and outputs warn.
+ * Each state says which model made it.
  *
  * <p>The induced field −∂A/∂t of the physical sources. A magnet or steady coil whose body moves
  * rigidly with velocity field w carries its potential along, so −∂A/∂t = ∇(w·A) − w × B

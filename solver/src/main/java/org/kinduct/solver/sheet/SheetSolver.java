@@ -257,8 +257,11 @@ public record SheetSolver(Method method, double relativeTolerance, int maxIterat
         return phi[host] + sample[0] - ohmic;
     }
 
-    /** μ0·σ·L·(fastest speed at a conducting cell's centre). */
-    private static double reynolds(SheetGrid grid, SheetConductor conductor, SheetDrive drive) {
+    /**
+     * The magnetic Reynolds number of a sheet under a drive: μ0·σ·L·(fastest speed at a conducting
+     * cell's centre), L the thickness of a plate or the width of a channel.
+     */
+    public static double reynolds(SheetGrid grid, SheetConductor conductor, SheetDrive drive) {
         double[] v = new double[2];
         double fastest = 0;
         for (int j = 0; j < grid.ny(); j++) {

@@ -1,16 +1,15 @@
 package org.kinduct.report;
 
-import org.kinduct.solver.dynamics.CircuitModel;
-import org.kinduct.solver.Circulation;
-import org.kinduct.solver.ConductorState;
 import java.util.Locale;
 import java.util.Optional;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Circulation;
+import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Terminal;
 import org.kinduct.solver.dynamics.CircuitModel;
 import org.kinduct.solver.run.RunPlan;
+import org.kinduct.solver.sheet.EddyModel;
 
 /**
  * The words every output uses for results: terminals and polarity, current sense, the agreement
@@ -27,6 +26,9 @@ public final class Labels {
 
     /** An open wire's agreement: it has the motional method only, so there is nothing to compare. */
     public static final String ONE_METHOD = "n/a (open wire)";
+
+    /** Said of a plate solved with the field of its own eddy currents (Rm above the resistive limit). */
+    public static final String OWN_FIELD = "own field included";
 
     private Labels() {
     }
@@ -124,6 +126,15 @@ public final class Labels {
     /** The name of a pair's positive electrode for data files, or {@code none}. */
     public static String positiveName(Optional<String> positive) {
         return positive.orElse("none");
+    }
+
+    /**
+     * What Rm means for a plate's or channel's results: the warning when they neglect an own field
+     * that matters, {@link #OWN_FIELD} when they include it, otherwise nothing.
+     */
+    public static String reynoldsNote(SheetState st) {
+        return st.beyondResistiveLimit() ? reynoldsWarning(st.magneticReynolds())
+                : st.model() == EddyModel.SELF_FIELD ? OWN_FIELD : "";
     }
 
     /** "Rm 0.23 > 0.1: beyond the resistive limit", for a state whose own field is no longer small. */

@@ -77,7 +77,8 @@ public final class ResultsTable {
 
     /**
      * Plates and channels: peak force (the drag) with its time, peak torque, peak and mean Joule
-     * power, peak |J| and the largest Rm (flagged above {@link SheetState#REYNOLDS_WARNING}); then
+     * power, peak |J| and the largest Rm (flagged where the resistive limit was used above
+     * {@link SheetState#REYNOLDS_WARNING}, marked where the plate's own field was included); then
      * each electrode pair's peak voltage with its + electrode and, for channels, its share of B·w·v̄.
      */
     private static void writeSheets(List<SheetSummary> sheets, ResultScales scales, PrintWriter out) {
@@ -96,8 +97,8 @@ public final class ResultsTable {
                     Units.format(scales.power(r.meanJouleW()), Dimension.POWER),
                     Units.format(r.peakCurrentDensityAPerM2(), Dimension.CURRENT_DENSITY),
                     String.format(Locale.ROOT, "%.2g", r.largestReynolds())
-                            + (r.largestReynolds() > SheetState.REYNOLDS_WARNING ? "  " + Labels.reynoldsWarning(
-                            r.largestReynolds()) : ""));
+                            + (r.beyondResistiveLimit() ? "  " + Labels.reynoldsWarning(r.largestReynolds())
+                            : r.ownField() ? "  " + Labels.OWN_FIELD : ""));
         }
         List<String[]> pairs = new ArrayList<>();
         for (SheetSummary r : sheets) {

@@ -40,8 +40,9 @@ final class SheetReadoutTable extends WideningTable<SheetReadoutTable.Row> {
                 + " the drag; on a channel the force on the liquid)", r -> SheetTexts.drag(r.state(), scales));
         column("Torque", "z torque about the body's pivot", r -> SheetTexts.torque(r.state(), scales));
         column("Joule\npower", "Heat the eddy currents make, d·∫|J|²/σ dA", r -> SheetTexts.joule(r.state(), scales));
-        column("Rm", "Magnetic Reynolds number; above " + SheetState.REYNOLDS_WARNING + " the neglected own field"
-                + " makes drag and heat too large", this::reynolds);
+        column("Rm", "Magnetic Reynolds number; above " + SheetState.REYNOLDS_WARNING + " a plate is solved with its"
+                + " own field where its motion is steady, and elsewhere the neglected own field makes drag and heat"
+                + " too large", this::reynolds);
         column("Electrodes", "The pair: voltage = potential of the first − potential of the second",
                 r -> r.pair().map(SheetTexts::pair).orElse(Labels.NOT_APPLICABLE));
         column("Voltage", "Voltage of the pair ('*': a moving field patch leaves the potentials without its w·A)",
@@ -59,8 +60,8 @@ final class SheetReadoutTable extends WideningTable<SheetReadoutTable.Row> {
 
     private String reynolds(Row r) {
         SheetState st = r.state();
-        return SheetTexts.reynolds(st) + (st.beyondResistiveLimit() ? "  " + Labels.reynoldsWarning(
-                st.magneticReynolds()) : "");
+        String note = Labels.reynoldsNote(st);
+        return SheetTexts.reynolds(st) + (note.isEmpty() ? "" : "  " + note);
     }
 
     private void show() {

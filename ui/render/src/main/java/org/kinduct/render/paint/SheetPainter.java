@@ -399,7 +399,8 @@ final class SheetPainter {
     /**
      * A plate's or channel's callout: its id, the force (drag) with its direction, torque and Joule
      * power, each pair's voltage with its + electrode (and for a channel the share of B·w·v̄), the
-     * current between neighbouring streamlines, and Rm where it leaves the resistive limit.
+     * current between neighbouring streamlines, and what Rm means for them where it leaves the
+     * resistive limit ({@link Labels#reynoldsNote}).
      */
     static String[] calloutLines(Conductor.Sheet sheet, SheetState st, ResultScales scales) {
         List<String> lines = new ArrayList<>();
@@ -418,8 +419,9 @@ final class SheetPainter {
             lines.add("streamlines every " + Quantities.current(
                     Streamlines.currentStepA(st.streamFunction(), sheet.thicknessM())));
         }
-        if (st.beyondResistiveLimit()) {
-            lines.add(Labels.reynoldsWarning(st.magneticReynolds()));
+        String reynolds = Labels.reynoldsNote(st);
+        if (!reynolds.isEmpty()) {
+            lines.add(reynolds);
         }
         return lines.toArray(String[]::new);
     }
