@@ -24,6 +24,7 @@ public final class Demos {
             "frame-brake",
             "flow-electrodes",
             "plate-brake",
+            "fin-brake",
             "disc-spin-down",
             "gradiometer",
             "spinning-coil-generator",
