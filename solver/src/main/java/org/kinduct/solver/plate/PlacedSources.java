@@ -77,14 +77,6 @@ final class PlacedSources {
     }
 
     /**
-     * True when no source moves or alternates at this instant: the field is still, so the steady
-     * state of a plate moving through it is defined.
-     */
-    boolean still() {
-        return Arrays.stream(sources).allMatch(p -> p.moving() == null && p.perAmpere() == null);
-    }
-
-    /**
      * The fastest speed, over {@code pointsNow}, of material moving as {@code body} relative to a
      * moving source, m/s; 0 when no source moves. Both motions are rigid, so the relative velocity
      * is affine in position and its largest magnitude over a polygon is at a vertex.

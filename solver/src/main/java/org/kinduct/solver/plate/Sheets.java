@@ -4,13 +4,11 @@ import java.util.ArrayList;
 import java.util.List;
 import org.kinduct.scene.Checks;
 import org.kinduct.scene.Conductor;
-import org.kinduct.scene.Motion;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Kinematics;
 import org.kinduct.solver.SheetState;
-import org.kinduct.solver.field.PhysicalConstants;
 import org.kinduct.solver.sheet.ChannelFlow;
 import org.kinduct.solver.sheet.EddyModel;
 import org.kinduct.solver.sheet.Electrode;
@@ -39,16 +37,13 @@ public final class Sheets {
 
     private final Scene scene;
     private final List<SheetModel> models;
-    /**
-     * No free body: every state is of a prescribed motion. A coupled run's dynamics brake free
-     * bodies with the resistive limit ({@link SheetBrakes}), so its states use it too.
-     */
-    private final boolean prescribed;
+    /** Whether the scene allows a fast plate its own field ({@link OwnField#allowed}). */
+    private final boolean ownFieldAllowed;
 
     private Sheets(Scene scene, List<SheetModel> models) {
         this.scene = scene;
         this.models = models;
-        prescribed = scene.bodies().stream().noneMatch(b -> b.motion() instanceof Motion.Free);
+        ownFieldAllowed = OwnField.allowed(scene);
     }
 
     public static Sheets of(Scene scene) {
@@ -80,22 +75,22 @@ public final class Sheets {
         PlacedSources sources = PlacedSources.at(scene, kinematics, tS);
         List<SheetState> states = new ArrayList<>(models.size());
         for (SheetModel m : models) {
-            states.add(solve(m, sources, kinematics.poseAt(m.sheet().body(), tS), tS, prescribed));
+            states.add(solve(m, sources, kinematics.poseAt(m.sheet().body(), tS), tS, ownFieldAllowed));
         }
         return states;
     }
 
     /**
-     * One plate or channel at one instant: with the plate's own field where Rm exceeds
-     * {@link SheetState#REYNOLDS_WARNING}, the motion is prescribed, the field still and the plate's
-     * steady state defined ({@link SheetModel#ownFieldApplies}); in the resistive limit otherwise.
+     * One plate or channel at one instant: with the plate's own field where {@link OwnField} says
+     * so, in the resistive limit otherwise.
      */
-    private static SheetState solve(SheetModel m, PlacedSources sources, Pose pose, double tS, boolean prescribed) {
+    private static SheetState solve(SheetModel m, PlacedSources sources, Pose pose, double tS,
+                                    boolean ownFieldAllowed) {
         SheetGrid grid = m.grid();
         ChannelFlow flow = m.flowAt(tS);
         FrameDrive drive = new FrameDrive(sources, pose, flow);
-        double reynolds = reynolds(m, sources, pose, drive);
-        if (prescribed && reynolds > SheetState.REYNOLDS_WARNING && sources.still() && m.ownFieldApplies(pose, reynolds)) {
+        double reynolds = OwnField.reynolds(m, sources, pose, drive);
+        if (OwnField.applies(ownFieldAllowed, m, pose, reynolds)) {
             return withOwnField(m, drive, pose, reynolds);
         }
         SheetSolution solution = SOLVER.solve(grid, m.material(), drive, pose.pivot(), m.electrodes());
@@ -136,18 +131,6 @@ public final class Sheets {
         } finally {
             m.giveBack(plate);
         }
-    }
-
-    /**
-     * Rm = μ0·σ·L·v with v the fastest speed of the material through the field: its own speed at a
-     * conducting cell ({@link SheetSolver#reynolds}), or its speed relative to a moving source (a
-     * magnet sweeping over a still plate induces as the plate sweeping under it would).
-     */
-    private static double reynolds(SheetModel m, PlacedSources sources, Pose pose, FrameDrive drive) {
-        List<Vec2> outlineNow = m.sheet().outline().stream().map(pose::place).toList();
-        return Math.max(SheetSolver.reynolds(m.grid(), m.material(), drive), PhysicalConstants.MU_0
-                * m.material().sigmaSPerM() * m.material().reynoldsLengthM()
-                * sources.fastestRelativeSpeed(outlineNow, pose));
     }
 
     /** The largest distance from the pivot to the outline, metres. */
