@@ -12,6 +12,7 @@ import java.util.function.ToDoubleFunction;
 import org.kinduct.report.CautionCheck;
 import org.kinduct.report.RunSummary;
 import org.kinduct.solver.run.ResultScales;
+import org.kinduct.scene.Motion;
 import org.kinduct.scene.Scene;
 import org.kinduct.scene.io.SceneFiles;
 import org.kinduct.solver.ConductorState;
@@ -220,7 +221,8 @@ public final class Exporter {
     /**
      * Every wire's and loop's EMF and every electrode pair's voltage over the run, noise read as 0,
      * with the snapshot's instant marked; for a scene with neither (plates without electrodes), the
-     * force on each plate and channel; null when there is nothing to plot or only one sample.
+     * force on each plate and channel, or the torque when every one rides a spinning body; null
+     * when there is nothing to plot or only one sample.
      */
     private LineChart.Content waveform(RunResult result) {
         List<Snapshot> samples = result.samples();
@@ -251,12 +253,26 @@ public final class Exporter {
             return new LineChart.Content(title, lines, "t", Dimension.TIME, emf && !pairs ? "EMF" : "V", Dimension.VOLTAGE,
                     snapshot().tS());
         }
+        if (!first.sheets().isEmpty() && first.sheets().stream().allMatch(this::spins)) {
+            for (SheetState sheet : first.sheets()) {
+                lines.add(new LineChart.Series(sheet.id(), t, series(samples, s -> result.scales().torque(
+                        s.sheet(sheet.id()).orElseThrow().torqueNm()))));
+            }
+            return new LineChart.Content("Torque on the plates over the run (the braking torque)", lines, "t",
+                    Dimension.TIME, "τ", Dimension.TORQUE, snapshot().tS());
+        }
         for (SheetState sheet : first.sheets()) {
             lines.add(new LineChart.Series(sheet.id(), t, series(samples, s -> Units.withoutNoise(
                     s.sheet(sheet.id()).orElseThrow().forceN().length(), result.scales().forceN()))));
         }
         return lines.isEmpty() ? null : new LineChart.Content("Force on the plates over the run (the drag)", lines,
                 "t", Dimension.TIME, "F", Dimension.FORCE, snapshot().tS());
+    }
+
+    /** Whether a plate or channel rides a spinning body (a spin, or a free body started turning): its torque is what brakes it. */
+    private boolean spins(SheetState sheet) {
+        Motion motion = scene.conductor(sheet.id()).flatMap(c -> scene.body(c.body())).orElseThrow().motion();
+        return motion instanceof Motion.Spin || (motion instanceof Motion.Free free && free.initialOmegaRadPerS() != 0);
     }
 
     private static double[] series(List<Snapshot> samples, ToDoubleFunction<Snapshot> value) {

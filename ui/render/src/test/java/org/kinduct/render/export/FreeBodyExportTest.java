@@ -69,4 +69,16 @@ class FreeBodyExportTest {
                     p + " inside the page's map " + v.minX() + " … " + v.maxX() + ", " + v.minY() + " … " + v.maxY());
         }
     }
+
+    /** A spinning plate's page plots what brakes it, the torque; a gliding plate's the drag. */
+    @Test
+    void aSpinningPlatesPagePlotsItsTorqueAndAGlidingOnesItsDrag() {
+        Exporter spinning = new Exporter(Demos.load("disc-spin-down"), ExportFixtures.options(0, 600, 96,
+                new ViewChoice.Fit()));
+        String svg = spinning.svg();
+        assertTrue(svg.contains("Torque on the plates over the run"), "torque chart");
+        Exporter gliding = new Exporter(Demos.load("plate-brake"), ExportFixtures.options(0, 600, 96,
+                new ViewChoice.Fit()));
+        assertTrue(gliding.svg().contains("Force on the plates over the run"), "drag chart");
+    }
 }
