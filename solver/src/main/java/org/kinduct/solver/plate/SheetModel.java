@@ -5,7 +5,9 @@ import java.util.DoubleSummaryStatistics;
 import java.util.List;
 import java.util.Queue;
 import java.util.concurrent.ConcurrentLinkedQueue;
+import java.util.concurrent.Semaphore;
 import org.kinduct.scene.Conductor;
+import org.kinduct.scene.Motion;
 import org.kinduct.scene.Pose;
 import org.kinduct.scene.Polygons;
 import org.kinduct.scene.Scene;
@@ -44,8 +46,12 @@ final class SheetModel {
     /** Outline vertices within this fraction of one distance from the pivot make a plate round about it. */
     private static final double ROUND = 1e-3;
     private static final PlateSolver PLATE_SOLVER = PlateSolver.standard();
+    /** Own-field solvers one plate may have at once: two, some 160 MB at the largest grid. */
+    static final int MOST_SOLVERS = 2;
 
     private final Conductor.Sheet sheet;
+    /** The motion of the body it rides. */
+    private final Motion motion;
     private final SheetState.Kind kind;
     private final SheetConductor material;
     private final List<Electrode> electrodes;
@@ -54,9 +60,12 @@ final class SheetModel {
     private SheetGrid grid;
     /** Prepared own-field solvers not in use ({@link Plate} is not thread-safe). */
     private final Queue<Plate> plates = new ConcurrentLinkedQueue<>();
+    /** At most {@value #MOST_SOLVERS} solvers per plate exist, whatever the cores; more threads wait. */
+    private final Semaphore solvers = new Semaphore(MOST_SOLVERS);
 
     SheetModel(Conductor.Sheet sheet, Scene scene) {
         this.sheet = sheet;
+        motion = scene.body(sheet.body()).orElseThrow().motion();
         kind = sheet instanceof Conductor.Channel ? SheetState.Kind.CHANNEL : SheetState.Kind.PLATE;
         material = sheet instanceof Conductor.Channel channel
                 ? SheetConductor.liquid(channel.sigmaSPerM(), channel.depthM(), channel.widthM())
@@ -112,12 +121,14 @@ final class SheetModel {
     }
 
     /**
-     * Whether this conductor's steady state with its own field is defined and solved for a body
+     * Whether this conductor's steady state with its own field is defined and solved for its body
      * at {@code pose} with Rm {@code reynolds}: a plate without electrodes (the own-field model has
-     * currents, not potentials) that translates, or spins with a rim Rm up to
-     * {@value #MOST_SPIN_REYNOLDS} and is a round disc without holes about its pivot (then the
-     * spin leaves the plate where it was, and the steady state is the same at every angle); and
-     * whose grid has at most {@value #MOST_OWN_FIELD_NODES} nodes.
+     * currents, not potentials) whose body moves steadily, gliding at a constant velocity, or
+     * spinning at a constant rate with a rim Rm up to {@value #MOST_SPIN_REYNOLDS} as a round disc
+     * without holes about its pivot (then the spin leaves the plate where it was, and the steady
+     * state is the same at every angle); and whose grid has at most
+     * {@value #MOST_OWN_FIELD_NODES} nodes. An oscillating or accelerating plate has no steady
+     * state: its currents lag its changing speed.
      */
     boolean ownFieldApplies(Pose pose, double reynolds) {
         SheetGrid g = grid();
@@ -125,10 +136,10 @@ final class SheetModel {
                 || (long) (g.nx() + 1) * (g.ny() + 1) > MOST_OWN_FIELD_NODES) {
             return false;
         }
-        if (pose.omegaRadPerS() == 0) {
+        if (motion instanceof Motion.Glide) {
             return true;
         }
-        if (reynolds > MOST_SPIN_REYNOLDS || !sheet.holes().isEmpty()) {
+        if (!(motion instanceof Motion.Spin) || reynolds > MOST_SPIN_REYNOLDS || !sheet.holes().isEmpty()) {
             return false;
         }
         DoubleSummaryStatistics radii = sheet.outline().stream()
@@ -136,14 +147,24 @@ final class SheetModel {
         return radii.getMax() - radii.getMin() <= ROUND * radii.getMax();
     }
 
-    /** A prepared own-field solver for this plate, to give back with {@link #giveBack} after use. */
+    /**
+     * A prepared own-field solver for this plate, to give back with {@link #giveBack} after use;
+     * waits while {@value #MOST_SOLVERS} are in use.
+     */
     Plate takePlate() {
-        Plate plate = plates.poll();
-        return plate != null ? plate : PLATE_SOLVER.prepare(grid(), material);
+        solvers.acquireUninterruptibly();
+        try {
+            Plate plate = plates.poll();
+            return plate != null ? plate : PLATE_SOLVER.prepare(grid(), material);
+        } catch (RuntimeException e) {
+            solvers.release();
+            throw e;
+        }
     }
 
     void giveBack(Plate plate) {
         plates.add(plate);
+        solvers.release();
     }
 
     /** A channel's flow in the drawn frame with mean velocity v̄ at {@code tS}; null for a plate. */

@@ -17,10 +17,10 @@
  * <p>Above Rm = {@value org.kinduct.solver.SheetState#REYNOLDS_WARNING} a plate is solved with its
  * own field ({@link org.kinduct.solver.sheet.Plate}, steady state) where that state is defined: the
  * motion is prescribed (no free body in the scene: coupled runs brake bodies in the resistive
- * limit, and their states must match), the field is still (no moving source, no AC coil), the
- * plate has no electrodes and either translates or is a round disc without holes spinning about
- * its centre at a rim Rm of at most 4, and its grid is small enough
- * ({@link SheetModel#ownFieldApplies}). Elsewhere it stays in the resistive limit and outputs warn.
+ * limit, and their states must match), the field is still (every source on a still body, no AC
+ * coil), the plate has no electrodes and either glides at a constant velocity or is a round disc
+ * without holes spinning steadily about its centre at a rim Rm of at most 4, and its grid is small
+ * enough ({@link OwnField}, {@link SheetModel#ownFieldApplies}). Elsewhere it stays in the resistive limit and outputs warn.
  * Each state says which model made it.
  *
  * <p>The induced field −∂A/∂t of the physical sources. A magnet or steady coil whose body moves

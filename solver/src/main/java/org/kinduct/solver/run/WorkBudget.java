@@ -20,7 +20,8 @@ import org.kinduct.solver.field.WorkTally;
  *
  * <p>Evaluations: at most {@value #MAX_EVALUATIONS_PER_SAMPLE} per sample, but at least
  * {@value #LEAST_EVALUATIONS} (about half a minute at a few hundred nanoseconds each), and at most
- * {@value #MAX_EVALUATIONS}. The demos need at most about 26 000 per sample; a huge loop sweeping
+ * {@value #MAX_EVALUATIONS}. The coupled demos need at most about 400 000 per sample (the spinning
+ * disc, its plate's solves counted; the harvester 26 000); a huge loop sweeping
  * over a magnet at a small stand-off needed 100 000 per step and would have run for minutes within
  * its step budget. Passes progress and stop requests on to the caller's monitor.
  */

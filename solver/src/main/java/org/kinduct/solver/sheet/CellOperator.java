@@ -13,7 +13,9 @@ package org.kinduct.solver.sheet;
  * <p>The loops visit each row only from its first to its last cell with conductance: a sheet
  * that fills a small part of its bounding box (a thin strip on the diagonal, a disc with a long
  * spike) costs in proportion to its cells, not to the box. What they skip is zero both ways, so
- * the numbers are the same as over the whole box.
+ * the numbers are the same as over the whole box ({@link Multigrid} passes no residual on from a
+ * cell without conductance, so that a coarse cell cut off inside its 2 × 2 block counts the same
+ * whether a span covers it or not).
  */
 final class CellOperator {
 

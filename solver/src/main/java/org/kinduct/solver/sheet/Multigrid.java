@@ -97,7 +97,9 @@ final class Multigrid implements ConjugateGradient.Preconditioner {
             int k = fine.index(fine.rowStart(j), j);
             int row = coarse.index(0, j >> 1);
             for (int i = fine.rowStart(j); i < fine.rowEnd(j); i++, k++) {
-                out[row + (i >> 1)] += residual[k];
+                if (fine.diagonal[k] > 0) {
+                    out[row + (i >> 1)] += residual[k];
+                }
             }
         }
     }

@@ -84,24 +84,26 @@ public final class PlateSolution {
     }
 
     /**
-     * Largest |J| over the cells that conduct, A/m²: |∇ψ|/d of ψ interpolated bilinearly between a
-     * cell's four nodes, taken at its centre.
+     * Largest |J| over the cells that conduct, A/m², each cell's J as {@link SheetSolution} has it
+     * ({@code Currents}): the current through its two x faces over their open length, and likewise
+     * for y, per thickness.
      */
     public double peakCurrentDensityAPerM2() {
         SheetGrid g = grid();
         double peak = 0;
         for (int j = 0; j < g.ny(); j++) {
             for (int i = 0; i < g.nx(); i++) {
-                if (g.active(i, j)) {
-                    double dx = streamFunctionA(i + 1, j) + streamFunctionA(i + 1, j + 1) - streamFunctionA(i, j)
-                            - streamFunctionA(i, j + 1);
-                    double dy = streamFunctionA(i, j + 1) + streamFunctionA(i + 1, j + 1) - streamFunctionA(i, j)
-                            - streamFunctionA(i + 1, j);
-                    peak = Math.max(peak, Math.hypot(dx, dy));
+                if (!g.active(i, j)) {
+                    continue;
                 }
+                double openX = g.apertureX(i, j) + g.apertureX(i + 1, j);
+                double openY = g.apertureY(i, j) + g.apertureY(i, j + 1);
+                double jx = openX > 0 ? (faceCurrentXA(i, j) + faceCurrentXA(i + 1, j)) / openX : 0;
+                double jy = openY > 0 ? (faceCurrentYA(i, j) + faceCurrentYA(i, j + 1)) / openY : 0;
+                peak = Math.max(peak, Math.hypot(jx, jy));
             }
         }
-        return peak / (2 * g.cellM() * plate.conductor().thicknessM());
+        return peak / (g.cellM() * plate.conductor().thicknessM());
     }
 
     /** Current through the x face (i, j) in +x, amperes (as {@link SheetSolution#faceCurrentXA}). */

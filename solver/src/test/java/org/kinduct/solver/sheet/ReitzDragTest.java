@@ -156,11 +156,45 @@ class ReitzDragTest {
         double ratio = self.forceN().x() / limit.forceN().x();
         System.out.printf("v/w = 1e-3: self-field drag / resistive drag = %.9f (Reitz %.9f)%n", ratio, factor);
         assertEquals(factor, ratio, 1e-6);
+        // The stream-function model's peak |J| in the resistive limit is the cell solve's, cut cells
+        // included (with its own field J changes at first order in v/w, the eddies' lag: 2.5e-4 here).
+        assertEquals(sheet.peakCurrentDensityAPerM2(), limit.peakCurrentDensityAPerM2(),
+                1e-7 * sheet.peakCurrentDensityAPerM2(), "peak |J|");
         // And both approach F_image·v/(2w) = 3μ0²m²σdv/(128πh⁴), less the finite plate's share.
         double limitDrag = 3 * MU0 * MU0 * MOMENT_AM2 * MOMENT_AM2 * SIGMA_S_PER_M * THICKNESS_M * v
                 / (128 * Math.PI * Math.pow(HEIGHT_M, 4));
         assertEquals(F_IMAGE * v / (2 * W), limitDrag, 1e-12 * limitDrag, "the two forms of the limit");
         assertEquals(1, -limit.forceN().x() / limitDrag, 2e-3, "low-speed drag against Reitz's limit");
+    }
+
+    /**
+     * Where the current crowds along a slanted edge (a dipole over the rim of a disc), the peak |J|
+     * is in a cut cell: the stream-function model in the resistive limit gives the cell solve's.
+     */
+    @Test
+    void peakCurrentDensityAtACutEdgeIsTheCellSolves() {
+        SheetShape disc = SheetShape.of(SheetShape.regularPolygon(Vec2.ZERO, 4 * HEIGHT_M, 37));
+        SheetGrid grid = SheetGrid.withCellSize(disc, HEIGHT_M / 4);
+        Plate plate = PlateSolver.standard().prepare(grid, SheetConductor.plate(SIGMA_S_PER_M, THICKNESS_M));
+        SheetDrive rim = SheetDrive.rigid(SheetFixtures.dipole(MOMENT_AM2, 3.8 * HEIGHT_M, 0.5 * HEIGHT_M, 0.3 * HEIGHT_M),
+                new Vec2(0.1, 0.05), 0, Vec2.ZERO);
+        SheetSolution sheet = SheetSolver.multigrid().solve(grid, SheetConductor.plate(SIGMA_S_PER_M, THICKNESS_M),
+                rim, Vec2.ZERO, List.of());
+        PlateSolution limit = plate.steady(rim, Vec2.ZERO, EddyModel.RESISTIVE_LIMIT, null);
+        double peak = 0;
+        boolean cut = false;
+        for (int j = 0; j < grid.ny(); j++) {
+            for (int i = 0; i < grid.nx(); i++) {
+                double jxy = Math.hypot(sheet.currentDensityXAPerM2(i, j), sheet.currentDensityYAPerM2(i, j));
+                if (grid.active(i, j) && jxy > peak) {
+                    peak = jxy;
+                    cut = grid.apertureX(i, j) < 1 || grid.apertureX(i + 1, j) < 1 || grid.apertureY(i, j) < 1
+                            || grid.apertureY(i, j + 1) < 1;
+                }
+            }
+        }
+        assertTrue(cut, "the peak is in a cut cell");
+        assertEquals(sheet.peakCurrentDensityAPerM2(), limit.peakCurrentDensityAPerM2(), 1e-7 * peak, "peak |J|");
     }
 
     @Test

@@ -137,6 +137,11 @@ public final class Labels {
                 : st.model() == EddyModel.SELF_FIELD ? OWN_FIELD : "";
     }
 
+    /** The model of a plate's or channel's state for data files: {@code own-field} or {@code resistive-limit}. */
+    public static String eddyModel(SheetState st) {
+        return st.model() == EddyModel.SELF_FIELD ? "own-field" : "resistive-limit";
+    }
+
     /** "Rm 0.23 > 0.1: beyond the resistive limit", for a state whose own field is no longer small. */
     public static String reynoldsWarning(double magneticReynolds) {
         return String.format(Locale.ROOT, "Rm %.2g > %.1g: beyond the resistive limit", magneticReynolds,

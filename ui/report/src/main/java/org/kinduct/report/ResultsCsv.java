@@ -21,10 +21,10 @@ public final class ResultsCsv {
     static final String HEADER = "t_s,id,kind,flux_Wb,linkage_Wb,emf_flux_V,emf_motional_V,emf_V,disagreement,"
             + "positive_end,current_A,direction,force_x_N,force_y_N,inductance_H";
     static final String SHEET_COLUMNS = ",torque_Nm,joule_W,peak_current_density_A_per_m2,reynolds_magnetic,"
-            + "plus,minus,voltage_V,positive,ideal_voltage_V,end_shorting";
+            + "eddy_model,plus,minus,voltage_V,positive,ideal_voltage_V,end_shorting";
     /** Cells of the conductor columns a plate or channel has no value for, between kind and force. */
     private static final int BLANK_BEFORE_FORCE = 9;
-    private static final int SHEET_CELLS = 10;
+    private static final int SHEET_CELLS = 11;
     private static final int PAIR_CELLS = 6;
 
     private ResultsCsv() {
@@ -49,7 +49,7 @@ public final class ResultsCsv {
                 String lead = String.join(",", num(s.tS()), p.id(), Labels.sheetKind(p.kind())) + ",".repeat(
                         BLANK_BEFORE_FORCE + 1) + String.join(",", num(p.forceN().x()), num(p.forceN().y()), "",
                         num(p.torqueNm()), num(p.joulePowerW()), num(p.peakCurrentDensityAPerM2()),
-                        num(p.magneticReynolds()));
+                        num(p.magneticReynolds()), Labels.eddyModel(p));
                 if (p.pairs().isEmpty()) {
                     out.write(lead + ",".repeat(PAIR_CELLS) + "\n");
                 }

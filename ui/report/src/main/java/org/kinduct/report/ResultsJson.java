@@ -10,7 +10,6 @@ import org.kinduct.scene.Vec2;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.SheetState;
 import org.kinduct.solver.Snapshot;
-import org.kinduct.solver.sheet.EddyModel;
 import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.run.AlternatingPickup;
 import org.kinduct.solver.run.RunResult;
@@ -166,7 +165,7 @@ public final class ResultsJson {
         g.writeNumberField("peak_current_density_A_per_m2", p.peakCurrentDensityAPerM2());
         g.writeNumberField("reynolds_magnetic", p.magneticReynolds());
         g.writeBooleanField("resistive_limit", p.magneticReynolds() <= SheetState.REYNOLDS_WARNING);
-        g.writeStringField("eddy_model", p.model() == EddyModel.SELF_FIELD ? "own-field" : "resistive-limit");
+        g.writeStringField("eddy_model", Labels.eddyModel(p));
         number(g, "mean_velocity_mps", p.meanVelocityMPerS());
         g.writeNumberField("cell_m", p.cellM());
         g.writeBooleanField("induced_e_included", p.inducedFieldIncluded());

@@ -9,6 +9,7 @@ import org.kinduct.report.ResultsJson;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.SceneField;
 import org.kinduct.solver.SheetState;
+import org.kinduct.solver.sheet.EddyModel;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.run.RunResult;
 
@@ -40,7 +41,8 @@ public final class DataFiles {
             new SheetColumn("drag_y_N", p -> p.forceN().y()), new SheetColumn("torque_Nm", SheetState::torqueNm),
             new SheetColumn("joule_W", SheetState::joulePowerW),
             new SheetColumn("peak_current_density_A_per_m2", SheetState::peakCurrentDensityAPerM2),
-            new SheetColumn("reynolds_magnetic", SheetState::magneticReynolds));
+            new SheetColumn("reynolds_magnetic", SheetState::magneticReynolds),
+            new SheetColumn("own_field", p -> p.model() == EddyModel.SELF_FIELD ? 1 : 0));
 
     private record SheetColumn(String name, ToDoubleFunction<SheetState> value) {
     }
@@ -49,7 +51,8 @@ public final class DataFiles {
      * One row per time; per conductor the columns that apply to it, named {@code id.quantity_unit}:
      * wires {@code emf_V}; loops {@code flux_Wb, linkage_Wb, emf_V, emf_flux_V, current_A,
      * force_x_N, force_y_N}; plates and channels {@code drag_x_N, drag_y_N, torque_Nm, joule_W,
-     * peak_current_density_A_per_m2, reynolds_magnetic} and per electrode pair
+     * peak_current_density_A_per_m2, reynolds_magnetic, own_field} (1 where the plate's own field
+     * was included, 0 in the resistive limit) and per electrode pair
      * {@code id.plus-minus.voltage_V}. Empty cells for values that are not finite.
      */
     public static String seriesCsv(List<Snapshot> series) {

@@ -69,7 +69,8 @@ public record LinePlot(String title, PlotAxis x, PlotAxis y, double[] xs, List<S
         }
         double boxW = widest + 46;
         double boxH = 18 * series.size() + 6;
-        Corner corner = clearestCorner(boxW / w, boxH / h);
+        // The box as drawn, with its insets from the plot's sides.
+        Corner corner = clearestCorner((boxW + 10) / w, (boxH + 6) / h);
         double lx = ChartFrame.LEFT + (corner.right ? w - 10 - boxW : 10);
         double top = ChartFrame.TOP + (corner.bottom ? h - 6 - boxH : 6);
         s.fill(0xE6FFFFFF);
