@@ -102,8 +102,9 @@ class SolveOutputTest {
         List<String> lines = csv.out().lines().toList();
         assertTrue(lines.get(0).endsWith(",plus,minus,voltage_V,positive,ideal_voltage_V,end_shorting"), lines.get(0));
         assertEquals(lines.get(0).split(",", -1).length, lines.get(1).split(",", -1).length, "every row fills the header");
-        assertTrue(lines.get(1).contains(",duct,channel,") && lines.get(1).contains(",upper,lower,"), lines.get(1));
-        assertEquals(pair.get("voltage_V").asDouble(), Double.parseDouble(lines.get(1).split(",", -1)[21]),
+        assertTrue(lines.get(1).contains(",duct,channel,") && lines.get(1).contains(",resistive-limit,upper,lower,"),
+                lines.get(1));
+        assertEquals(pair.get("voltage_V").asDouble(), Double.parseDouble(lines.get(1).split(",", -1)[22]),
                 1e-9 * pair.get("voltage_V").asDouble(), "CSV and JSON voltage");
     }
 
