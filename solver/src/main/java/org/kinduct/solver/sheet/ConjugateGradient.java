@@ -20,6 +20,12 @@ final class ConjugateGradient {
      * five or six, since a V-cycle costs more per cell on small grids.
      */
     static final int CELLS_PER_EVALUATION = 4;
+    /**
+     * What a pass pays for each row besides its cells, in cells: a row starts a cache line in each
+     * of the operator's and the solve's arrays. A thin strip across the rows shows it: 64 000 cells
+     * on 44 642 rows of 17 took 31 ms an iteration, where 22 000 cells in wide rows took under 1 ms.
+     */
+    static final int ROW_CELLS = 8;
 
     /** z = M⁻¹·r for a symmetric positive definite M that approximates A. */
     interface Preconditioner {
@@ -40,6 +46,11 @@ final class ConjugateGradient {
     }
 
     private ConjugateGradient() {
+    }
+
+    /** The field evaluations one iteration on {@code a} counts as. */
+    private static int work(CellOperator a) {
+        return Math.max(1, (a.visitedCount() + ROW_CELLS * a.ny) / CELLS_PER_EVALUATION);
     }
 
     /**
@@ -81,7 +92,7 @@ final class ConjugateGradient {
         m.apply(r, z);
         System.arraycopy(z, 0, p, 0, n);
         double rz = a.dot(r, z);
-        int work = Math.max(1, a.visitedCount() / CELLS_PER_EVALUATION);
+        int work = work(a);
         for (int iteration = 1; iteration <= maxIterations; iteration++) {
             WorkTally.add(work);
             a.apply(p, q);
