@@ -312,13 +312,14 @@ public final class SceneRun {
 
     /**
      * The plates and channels at {@code tS}; a shape whose grid cannot be built (the region work
-     * counts points within a ten-billionth of its size as one, finer than the model's own checks)
-     * stops the run with the reason.
+     * counts points within a ten-billionth of its size as one, finer than the model's own checks),
+     * or whose solve does not converge (a sliver a million times longer than wide, found by
+     * fuzzing), stops the run with the reason.
      */
     private List<SheetState> sheetsAt(double tS, Kinematics kinematics) {
         try {
             return sheets.at(tS, kinematics);
-        } catch (IllegalArgumentException refused) {
+        } catch (IllegalArgumentException | SheetConvergenceException refused) {
             throw new RunFailedException("a plate or channel cannot be solved: " + refused.getMessage(), refused);
         }
     }
