@@ -41,7 +41,8 @@ import org.kinduct.solver.sheet.SheetConvergenceException;
  * else the nearest grid sample.
  *
  * <p>Costly work (the plan needs the loops' inductances; the result needs every sample) is done
- * on first use and kept; the methods may block while another thread computes, so an interactive
+ * on first use and kept (the plan apart from the run: asking for it never waits for the run); the
+ * methods may block while another thread computes, so an interactive
  * caller calls them from a worker, never from its display thread. A coupled run reports to the
  * run's {@link RunMonitor} and stops when it asks
  * ({@link org.kinduct.solver.dynamics.SimulationCancelledException}; a later call starts it anew).
@@ -70,6 +71,11 @@ public final class SceneRun {
     private final boolean parallel;
     private InductanceAtStart inductance;
     private RunPlan plan;
+    /**
+     * Guards {@link #result}, apart from the plan's lock: a caller asking for the plan (to know
+     * whether a long run is coming) gets it while another thread is in the middle of the run.
+     */
+    private final Object resultLock = new Object();
     private RunResult result;
 
     /** The scene's own window with the circuit model chosen automatically, instants on every core. */
@@ -139,18 +145,17 @@ public final class SceneRun {
     }
 
     /** The whole run, computed on first use. */
-    public synchronized RunResult result() {
-        if (result == null) {
-            RunResult run = plan().coupled() ? coupled() : instants();
-            result = run.withAlternatingPickup(AlternatingPickup.of(scene, run.samples(), run.kinematics(), parallel));
+    public RunResult result() {
+        synchronized (resultLock) {
+            if (result == null) {
+                RunResult run = plan().coupled() ? coupled() : instants();
+                result = run.withAlternatingPickup(AlternatingPickup.of(scene, run.samples(), run.kinematics(),
+                        parallel));
+            }
+            return result;
         }
-        return result;
     }
 
-    /** True when {@link #result()} is computed, so asking for it does not block. */
-    public synchronized boolean done() {
-        return result != null;
-    }
 
     /** The run's state at {@code tS}: exact for quasi-static instants, else as the class comment says. */
     public Snapshot instant(double tS) {
