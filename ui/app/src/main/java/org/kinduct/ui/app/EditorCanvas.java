@@ -70,7 +70,7 @@ final class EditorCanvas extends Pane {
         heightProperty().addListener(o -> resizeView());
         for (Observable o : new Observable[] {vm.document().sceneProperty(), vm.results().snapshotProperty(),
                 vm.maps().rasterProperty(), vm.view().viewProperty(), vm.view().layers(), vm.document().selection(),
-                vm.view().rangeProperty()}) {
+                vm.view().rangeProperty(), vm.dragged().solvedProperty()}) {
             o.addListener(x -> needsPaint = true);
         }
         backdrops = new BackdropWorker(Platform::runLater, (raster, b) -> {

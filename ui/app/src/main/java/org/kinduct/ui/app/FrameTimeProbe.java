@@ -25,6 +25,7 @@ import org.kinduct.scene.Scene;
 import org.kinduct.scene.Source;
 import org.kinduct.scene.TimeSpan;
 import org.kinduct.scene.Vec2;
+import org.kinduct.ui.edit.CanvasGestures;
 import org.kinduct.ui.edit.EditorViewModel;
 import org.kinduct.ui.edit.ShapeFactory;
 import org.kinduct.render.field.FieldMapper;
@@ -50,6 +51,8 @@ public final class FrameTimeProbe {
     static final int HEIGHT = 800;
     private static final int WARM_UP_FRAMES = 240;
     private static final double SIXTY_HZ_MS = 1000.0 / 60;
+    private static final int DRAG_WARM_UP_MOVES = 50;
+    private static final int DRAG_MOVES = 200;
 
     private FrameTimeProbe() {
     }
@@ -79,10 +82,10 @@ public final class FrameTimeProbe {
         double[] seriesS = {0};
         List<Double> solving = new ArrayList<>();
         CompletableFuture<Void> done = new CompletableFuture<>();
+        EditorViewModel vm = onFx(() -> new EditorViewModel(scene, work, Platform::runLater));
+        EditorCanvas canvas = onFx(() -> new EditorCanvas(vm, text -> { }));
+        Stage stage = onFx(Stage::new);
         onFx(() -> {
-            EditorViewModel vm = new EditorViewModel(scene, work, Platform::runLater);
-            EditorCanvas canvas = new EditorCanvas(vm, text -> { });
-            Stage stage = new Stage();
             stage.setScene(new javafx.scene.Scene(canvas, WIDTH, HEIGHT));
             stage.show();
             vm.view().viewProperty().set(new ViewTransform(0, 0, WIDTH / 0.32, WIDTH, HEIGHT));
@@ -116,7 +119,6 @@ public final class FrameTimeProbe {
                 } else if (i == frames) {
                     cpu.stop();
                     vm.clock().playingProperty().set(false);
-                    stage.close();
                     done.complete(null);
                 }
                 last[0] = now;
@@ -124,6 +126,11 @@ public final class FrameTimeProbe {
             return null;
         });
         done.get(5, TimeUnit.MINUTES);
+        double[] drag = dragLatency(vm, canvas);
+        onFx(() -> {
+            stage.close();
+            return null;
+        });
         work.shutdownNow();
         double[] offThread = offThreadWork(scene, 40);
         double[] meanwhile = solving.stream().mapToDouble(Double::doubleValue).toArray();
@@ -133,12 +140,57 @@ public final class FrameTimeProbe {
                         + "%.1f ms), of which painting on the UI thread %.1f / %.1f; processor time per frame "
                         + "(independent of other load): UI thread %.1f, render thread %.1f; off the UI thread per "
                         + "map: field map (4 px cells) + snapshot %.1f / %.1f, backdrop %.1f / %.1f; measured once "
-                        + "the time series was solved (%.1f s after opening; frame time meanwhile %.1f / %.1f)",
+                        + "the time series was solved (%.1f s after opening; frame time meanwhile %.1f / %.1f); "
+                        + "dragging a loop, from a mouse move to the frame with its numbers: %.1f / %.1f ms "
+                        + "(%.0f %% within %.1f ms)",
                 frames, scene.sources().size() + scene.conductors().size(), WIDTH, HEIGHT,
                 Runtime.getRuntime().availableProcessors(), median(interval), p95(interval),
                 100 * within(interval, SIXTY_HZ_MS), SIXTY_HZ_MS, median(paint), p95(paint),
                 cpu.perFrameMs("JavaFX Application Thread", frames), cpu.perFrameMs("QuantumRenderer-0", frames),
-                offThread[0], offThread[1], offThread[2], offThread[3], seriesS[0], median(meanwhile), p95(meanwhile));
+                offThread[0], offThread[1], offThread[2], offThread[3], seriesS[0], median(meanwhile), p95(meanwhile),
+                median(drag), p95(drag), 100 * within(drag, SIXTY_HZ_MS), SIXTY_HZ_MS);
+    }
+
+    /**
+     * Drags the middle loop by one pixel a move, the next move once the frame showing the last
+     * one's numbers is painted; returns the wall-clock time of each measured move to that frame, ms.
+     */
+    private static double[] dragLatency(EditorViewModel vm, EditorCanvas canvas)
+            throws InterruptedException, ExecutionException, TimeoutException {
+        double[] latency = new double[DRAG_MOVES];
+        CompletableFuture<Void> done = new CompletableFuture<>();
+        onFx(() -> {
+            vm.clock().resetTime();
+            CanvasGestures g = canvas.gestures();
+            ViewTransform v = vm.view().view();
+            // The right side of the loop in the middle, which is fixed.
+            double x0 = v.screenX(0.015);
+            double y0 = v.screenY(0);
+            g.pressed(x0, y0, CanvasGestures.Button.PRIMARY, false);
+            int[] move = {-DRAG_WARM_UP_MOVES};
+            long[] movedAt = {System.nanoTime()};
+            g.dragged(x0 - 1, y0);
+            canvas.onPainted(ms -> {
+                if (done.isDone() || g.frame("").snapshot() == null) {
+                    return;
+                }
+                long now = System.nanoTime();
+                int i = move[0]++;
+                if (i >= 0) {
+                    latency[i] = (now - movedAt[0]) * 1e-6;
+                }
+                if (i + 1 == DRAG_MOVES) {
+                    g.released();
+                    done.complete(null);
+                    return;
+                }
+                movedAt[0] = System.nanoTime();
+                g.dragged(x0 - 2 - (i + DRAG_WARM_UP_MOVES) % 100, y0);
+            });
+            return null;
+        });
+        done.get(2, TimeUnit.MINUTES);
+        return latency;
     }
 
     /** Median and 95th percentile of the map + snapshot and of the backdrop, over {@code n} times of the window. */

@@ -155,6 +155,7 @@ public final class CanvasGestures {
                 }
                 preview = moved;
             }
+            vm.dragged().ask(preview, vm.clock().time());
         } catch (IllegalArgumentException e) {
             preview = null;
             vm.say(e.getMessage());
@@ -176,6 +177,7 @@ public final class CanvasGestures {
         }
         drag = Drag.NONE;
         preview = null;
+        vm.dragged().clear();
         moving = Set.of();
         vertexHit = null;
     }
@@ -394,19 +396,21 @@ public final class CanvasGestures {
     // ---- what to paint ----
 
     /**
-     * The frame to paint now: the drag's preview while dragging (drawn at the time shown, without
-     * numbers, which belong to the scene before the drag), else the scene with the snapshot shown,
-     * at the instant its numbers are for, so overlays sit on their conductors.
+     * The frame to paint now: the drag's preview while dragging (drawn at the time shown, with its
+     * own numbers once they are solved, never with those of the scene before the drag), else the
+     * scene with the snapshot shown, at the instant its numbers are for, so overlays sit on their
+     * conductors.
      */
     public Picture frame(String note) {
-        Snapshot snap = preview != null ? null : vm.results().snapshot();
+        Snapshot snap = preview != null ? vm.dragged().snapshotOf(preview) : vm.results().snapshot();
         double t = snap != null ? snap.tS() : vm.clock().time();
         Set<String> selected = vm.document().selection();
         EditorMarks marks = drawing != null ? drawing.marks(selected)
                 : new EditorMarks(selected, drag == Drag.BAND ? band() : List.of(), true, null, "");
         ViewSettings settings = vm.view();
         return new Picture(preview != null ? preview : vm.scene(), t, snap, vm.maps().raster(), settings.view(),
-                settings.layers(), settings.rangeProperty().get(), marks, note, vm.results().scalesNow());
+                settings.layers(), settings.rangeProperty().get(), marks, note,
+                vm.results().scalesNow().including(snap));
     }
 
     private ViewTransform view() {

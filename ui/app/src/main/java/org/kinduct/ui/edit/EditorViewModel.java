@@ -32,6 +32,7 @@ public final class EditorViewModel {
 
     private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper("");
     private final SceneResults results;
+    private final DraggedInstant dragged;
     private final ViewSettings view = new ViewSettings();
     private final PlaybackClock clock;
     private final FieldMaps maps;
@@ -54,6 +55,7 @@ public final class EditorViewModel {
     EditorViewModel(Scene initial, BiFunction<Scene, RunMonitor, SceneRun> runs, Executor work, Executor ui,
                     LongSupplier clockNs) {
         results = new SceneResults(runs, work, ui, clockNs, this::say);
+        dragged = new DraggedInstant(runs, work, ui);
         clock = new PlaybackClock(initial.time(), new PlaybackClock.Moves() {
             @Override
             public void played(double wallSeconds) {
@@ -189,6 +191,11 @@ public final class EditorViewModel {
 
     public SceneResults results() {
         return results;
+    }
+
+    /** The numbers of a drag under way, before it becomes a revision. */
+    public DraggedInstant dragged() {
+        return dragged;
     }
 
     public ViewSettings view() {

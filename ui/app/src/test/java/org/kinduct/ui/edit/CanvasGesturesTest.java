@@ -96,14 +96,63 @@ class CanvasGesturesTest {
         Picture preview = g.frame("");
         assertSame(before, vm.scene(), "nothing is edited while dragging");
         assertTrue(firstVertex(preview.scene(), "a").eq(new Vec2(-0.03, 0.02), GEOMETRY_TOL), "the preview moved");
-        assertNull(preview.snapshot(), "the numbers belong to the scene before the drag");
+        assertSame(preview.scene(), vm.dragged().solvedProperty().get().scene(), "the preview was solved");
 
         g.released();
         assertTrue(firstVertex(vm.scene(), "a").eq(new Vec2(-0.03, 0.02), GEOMETRY_TOL));
         assertEquals(firstVertex(before, "b"), firstVertex(vm.scene(), "b"), "the other wire stays");
         assertSame(vm.scene(), g.frame("").scene(), "the preview ends with the drag");
+        assertNull(vm.dragged().solvedProperty().get(), "and so do its numbers");
         vm.document().undo();
         assertEquals(before, vm.scene(), "one undo takes the whole drag back");
+    }
+
+    /** A fixed magnet and a square loop beside it; with a free body, the magnet rides a sprung cart. */
+    private static Scene loopBesideAMagnet(boolean freeMagnet) {
+        Conductor.Loop loop = Conductor.Loop.simple("loop", Body.FIXED, List.of(Conductor.Vertex.at(0.02, -0.01),
+                Conductor.Vertex.at(0.04, -0.01), Conductor.Vertex.at(0.04, 0.01), Conductor.Vertex.at(0.02, 0.01)),
+                ShapeFactory.DEFAULT_WIRE);
+        Source magnet = new Source.CylinderMagnet("magnet", freeMagnet ? "cart" : Body.FIXED, Vec2.ZERO, 0.008,
+                0.005, 0.002, Source.Side.BELOW, 1.2, Source.Magnetization.PLUS_Z);
+        Scene s = Scene.empty("drag numbers").withTime(new TimeSpan(0, 0.01, 0.001));
+        if (freeMagnet) {
+            Motion.Free cart = new Motion.Free(0.02, 0, Vec2.ZERO, 0, 0, Vec2.ZERO, Vec2.ZERO, 0,
+                    List.of(new Motion.Free.Spring(new Vec2(-0.1, 0), null, 2, 0.1)));
+            s = s.withBodies(List.of(new Body("cart", "cart", Vec2.ZERO, cart)));
+        }
+        return s.withSources(List.of(magnet)).withConductors(List.of(loop));
+    }
+
+    private static double flux(org.kinduct.solver.Snapshot s) {
+        return s.conductor("loop").orElseThrow().fluxWb();
+    }
+
+    @Test
+    void aDragShowsTheNumbersOfTheSceneUnderTheMouseBeforeRelease() {
+        EditorViewModel vm = vm(loopBesideAMagnet(false));
+        CanvasGestures g = gestures(vm);
+        double before = flux(vm.results().snapshot());
+        g.pressed(sx(vm, 0.04), sy(vm, 0), Button.PRIMARY, false);
+        g.dragged(sx(vm, 0.02), sy(vm, 0));
+
+        Picture frame = g.frame("");
+        // The loop now straddles the magnet's edge: the same instant of the moved scene, solved on its own.
+        double moved = flux(new org.kinduct.solver.run.SceneRun(frame.scene()).instant(frame.tS()));
+        assertEquals(moved, flux(frame.snapshot()), 0, "the preview's own numbers");
+        assertNotEquals(before, moved, "the drag changed the flux");
+    }
+
+    @Test
+    void aDragOfASceneWithFreeBodiesShowsNoNumbersUntilItsRunIsIn() {
+        EditorViewModel vm = vm(loopBesideAMagnet(true));
+        CanvasGestures g = gestures(vm);
+        g.pressed(sx(vm, 0.04), sy(vm, 0), Button.PRIMARY, false);
+        g.dragged(sx(vm, 0.02), sy(vm, 0));
+        // Its instant is a sample of a run from t0: the frame never shows the numbers of the scene before.
+        assertNull(g.frame("").snapshot());
+        g.released();
+        assertEquals(flux(new org.kinduct.solver.run.SceneRun(vm.scene()).result().samples().get(0)),
+                flux(vm.results().snapshot()), 0, "the released scene's run");
     }
 
     @Test
