@@ -133,8 +133,20 @@ public final class Labels {
      * that matters, {@link #OWN_FIELD} when they include it, otherwise nothing.
      */
     public static String reynoldsNote(SheetState st) {
-        return st.beyondResistiveLimit() ? reynoldsWarning(st.magneticReynolds())
-                : st.model() == EddyModel.SELF_FIELD ? OWN_FIELD : "";
+        return st.beyondResistiveLimit() ? reynoldsWarning(st.magneticReynolds()) : ownFieldNote(st);
+    }
+
+    /**
+     * {@link #reynoldsNote} shortened for a narrow column whose warnings are spelled out below it:
+     * " !" for the warning, " (own field included)", or nothing.
+     */
+    public static String reynoldsMark(SheetState st) {
+        String own = ownFieldNote(st);
+        return st.beyondResistiveLimit() ? " !" : own.isEmpty() ? "" : " (" + own + ")";
+    }
+
+    private static String ownFieldNote(SheetState st) {
+        return st.model() == EddyModel.SELF_FIELD ? OWN_FIELD : "";
     }
 
     /** The model of a plate's or channel's state for data files: {@code own-field} or {@code resistive-limit}. */

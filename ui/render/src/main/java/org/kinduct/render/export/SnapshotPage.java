@@ -14,7 +14,6 @@ import org.kinduct.scene.Vec2;
 import org.kinduct.solver.Circulation;
 import org.kinduct.solver.ConductorState;
 import org.kinduct.solver.SheetState;
-import org.kinduct.solver.sheet.EddyModel;
 import org.kinduct.solver.Snapshot;
 import org.kinduct.solver.Terminal;
 import org.kinduct.render.paint.EditorMarks;
@@ -402,8 +401,7 @@ final class SnapshotPage {
     private static String[] sheetRow(SheetState st, ResultScales scales) {
         return new String[] {st.id(), SheetTexts.drag(st, scales), SheetTexts.torque(st, scales),
             SheetTexts.joule(st, scales), SheetTexts.peakCurrentDensity(st),
-            SheetTexts.reynolds(st) + (st.beyondResistiveLimit() ? " !" : st.model() == EddyModel.SELF_FIELD
-                    ? " (" + Labels.OWN_FIELD + ")" : "")};
+            SheetTexts.reynolds(st) + Labels.reynoldsMark(st)};
     }
 
     /** An electrode pair's row: conductor and electrodes, voltage, + electrode, share of B·w·v̄ (channels). */
