@@ -53,6 +53,7 @@ final class ReadoutTable extends WideningTable<ReadoutTable.Row> {
         column("Force\n(x, y)", "Magnetic force on a closed loop, in the plane", r -> closed(r, force(r)));
         SceneResults results = vm.results();
         results.snapshotProperty().addListener((obs, old, snap) -> show());
+        vm.dragged().solvedProperty().addListener((obs, old, solved) -> show());
         results.resultProperty().addListener((obs, old, run) -> show());
         vm.document().sceneProperty().addListener((obs, old, scene) -> show());
         show();
@@ -72,7 +73,7 @@ final class ReadoutTable extends WideningTable<ReadoutTable.Row> {
     }
 
     private void show() {
-        Snapshot snap = vm.results().snapshot();
+        Snapshot snap = vm.numbersShown();
         Scene scene = vm.scene();
         boolean filaments = scene.conductors().stream().anyMatch(c -> !(c instanceof Conductor.Sheet));
         placeholder.setText(filaments ? "Solving…" : "No wires or loops: draw a wire or a loop");
@@ -84,7 +85,7 @@ final class ReadoutTable extends WideningTable<ReadoutTable.Row> {
             clearRows();
             return;
         }
-        scales = vm.results().scalesNow();
+        scales = vm.results().scalesNow().including(snap);
         showRows(snap.conductors().stream().map(st -> new Row(st, scene.conductor(st.id())
                 .map(c -> c instanceof Conductor.Loop loop && !loop.open()).orElse(false))).toList());
     }

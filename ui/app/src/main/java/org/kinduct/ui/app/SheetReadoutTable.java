@@ -53,6 +53,7 @@ final class SheetReadoutTable extends WideningTable<SheetReadoutTable.Row> {
                 r -> r.pair().map(SheetTexts::endShorting).orElse(Labels.NOT_APPLICABLE));
         SceneResults results = vm.results();
         results.snapshotProperty().addListener((obs, old, snap) -> show());
+        vm.dragged().solvedProperty().addListener((obs, old, solved) -> show());
         results.resultProperty().addListener((obs, old, run) -> show());
         vm.document().sceneProperty().addListener((obs, old, scene) -> show());
         show();
@@ -68,12 +69,12 @@ final class SheetReadoutTable extends WideningTable<SheetReadoutTable.Row> {
         boolean any = vm.scene().conductors().stream().anyMatch(c -> c instanceof Conductor.Sheet);
         setVisible(any);
         setManaged(any);
-        Snapshot snap = vm.results().snapshot();
+        Snapshot snap = vm.numbersShown();
         if (snap == null) {
             clearRows();
             return;
         }
-        scales = vm.results().scalesNow();
+        scales = vm.results().scalesNow().including(snap);
         List<Row> now = new ArrayList<>();
         for (SheetState st : snap.sheets()) {
             if (st.pairs().isEmpty()) {

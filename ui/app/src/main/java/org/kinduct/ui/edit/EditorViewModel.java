@@ -193,6 +193,15 @@ public final class EditorViewModel {
         return results;
     }
 
+    /**
+     * The numbers the tables show: those of the drag under way once its latest position is
+     * solved, else the snapshot of the instant shown.
+     */
+    public Snapshot numbersShown() {
+        DraggedInstant.Solved d = dragged.solvedProperty().get();
+        return d != null ? d.snapshot() : results.snapshot();
+    }
+
     /** The numbers of a drag under way, before it becomes a revision. */
     public DraggedInstant dragged() {
         return dragged;
