@@ -169,8 +169,12 @@ public final class CanvasGestures {
             case MOVE, VERTEX -> {
                 if (preview != null) {
                     Scene target = preview;
+                    Snapshot solved = vm.dragged().snapshotOf(target);
                     vm.document().apply(drag == Drag.VERTEX ? "Move vertex" : "Move " + moving.size() + " object(s)",
                             s -> target);
+                    if (solved != null && vm.scene().equals(target)) {
+                        vm.results().showSolved(solved);
+                    }
                 }
             }
             case NONE -> { }

@@ -133,6 +133,15 @@ public final class SceneResults {
     }
 
     /**
+     * Shows at once the numbers a drag solved for the scene just made the current revision (the
+     * same instant of the same scene, solved the same way), rather than the last revision's until
+     * the revision's own solve, which {@link #solveAt} has already asked for, arrives.
+     */
+    void showSolved(Snapshot sameInstant) {
+        snapshot.set(sameInstant);
+    }
+
+    /**
      * Shows the current run's sample nearest to {@code tS} at once (playback) and fetches its
      * field for the cursor readout.
      */

@@ -143,6 +143,28 @@ class CanvasGesturesTest {
     }
 
     @Test
+    void onReleaseTheDragsNumbersStayUntilTheRevisionsOwnArrive() {
+        java.util.ArrayDeque<Runnable> queued = new java.util.ArrayDeque<>();
+        EditorViewModel vm = new EditorViewModel(loopBesideAMagnet(false), queued::add, SAME_THREAD);
+        vm.view().viewProperty().set(VIEW);
+        vm.view().layers().clear();
+        CanvasGestures g = gestures(vm);
+        while (!queued.isEmpty()) {
+            queued.poll().run();
+        }
+        double before = flux(vm.results().snapshot());
+        g.pressed(sx(vm, 0.04), sy(vm, 0), Button.PRIMARY, false);
+        g.dragged(sx(vm, 0.02), sy(vm, 0));
+        queued.poll().run(); // the drag position's solve
+        double dragged = flux(g.frame("").snapshot());
+        g.released();
+        // The revision's own solve is still queued: the table and canvas keep the drag's numbers, not the old ones.
+        assertEquals(dragged, flux(vm.numbersShown()), 0);
+        assertEquals(dragged, flux(g.frame("").snapshot()), 0);
+        assertNotEquals(before, dragged);
+    }
+
+    @Test
     void aDragOfASceneWithFreeBodiesShowsNoNumbersUntilItsRunIsIn() {
         EditorViewModel vm = vm(loopBesideAMagnet(true));
         CanvasGestures g = gestures(vm);
