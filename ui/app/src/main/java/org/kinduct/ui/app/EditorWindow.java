@@ -70,6 +70,7 @@ final class EditorWindow {
     private static final double HELP_WIDTH_PX = 640;
     /** The first tool of each group after the selection tool; a separator stands before each. */
     private static final Set<ToolKind> GROUP_STARTS = EnumSet.of(ToolKind.WIRE, ToolKind.PATCH, ToolKind.PLATE);
+    private static final Insets TOOL_PADDING = new Insets(4, 6, 4, 6);
 
     private final Stage stage;
     private final EditorViewModel vm;
@@ -367,6 +368,8 @@ final class EditorWindow {
                 bar.getChildren().add(new Separator(Orientation.VERTICAL));
             }
             ToggleButton b = new ToggleButton(kind.label());
+            // A little narrower than the default, so every tool fits one row 1280 px wide.
+            b.setPadding(TOOL_PADDING);
             b.setId("tool-" + kind.name().toLowerCase(Locale.ROOT).replace('_', '-'));
             b.setTooltip(new Tooltip(kind.help()));
             b.setToggleGroup(tools);
