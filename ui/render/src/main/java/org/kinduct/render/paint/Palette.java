@@ -17,6 +17,8 @@ final class Palette {
     static final int SELECTION = 0xFFD6007A;
     static final int PREVIEW = 0xFF006D5B;
     static final int LABEL_BOX = 0xEBFFFFFF;
+    /** Behind axis and contour values: readable over the strongest field colours, the grid faintly through. */
+    static final int VALUE_BACKING = 0xD9FFFFFF;
     static final int LABEL_EDGE = 0xFF8C8C8C;
     static final int WARNING = 0xFFB00020;
 

@@ -112,9 +112,12 @@ public final class ScenePainter {
             SheetPainter.drawFlow(s, v, f, placement, placer);
         }
         contourLabels.forEach(c -> placeContourLabel(s, c, placer, labels));
-        s.fill(Palette.MUTED);
         for (AxisValue a : axisValues) {
             if (!placer.labelOver(a.box())) {
+                LabelPlacer.Box b = a.box();
+                s.fill(Palette.VALUE_BACKING);
+                s.fillRect(b.x() - 1, b.y(), b.w() + 2, b.h());
+                s.fill(Palette.MUTED);
                 s.text(a.text(), a.x(), a.y(), LABEL_FONT, false,
                         a.bottom() ? Surface.Anchor.BOTTOM_LEFT : Surface.Anchor.TOP_LEFT);
             }
@@ -222,7 +225,7 @@ public final class ScenePainter {
             placer.reserveText(b);
             placed.add(m);
             labels.add(() -> {
-                s.fill(0xD9FFFFFF);
+                s.fill(Palette.VALUE_BACKING);
                 s.fillRect(b.x(), b.y(), b.w(), b.h());
                 s.fill(Palette.INK);
                 s.text(label.text(), b.centerX(), b.centerY(), LABEL_FONT, false, Surface.Anchor.CENTER);

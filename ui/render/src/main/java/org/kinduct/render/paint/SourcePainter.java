@@ -92,7 +92,8 @@ public final class SourcePainter {
                     s.strokePath();
                     s.dash();
                     Vec2 corner = outline.get(3);
-                    label(s, v, corner, map.id() + " · " + map.grid().nx() + " × " + map.grid().ny() + " samples", 2);
+                    labels.add(cornerLabel(s, v, placer, corner,
+                            map.id() + " · " + map.grid().nx() + " × " + map.grid().ny() + " samples"));
                     return null;
                 }
             });
@@ -297,13 +298,20 @@ public final class SourcePainter {
         }
     }
 
-    private static void label(Surface s, ViewTransform v, Vec2 at, String text, double dy) {
-        double x = v.screenX(at.x());
-        double y = v.screenY(at.y()) + dy;
+    /**
+     * A map's name and size just inside its top-left corner, kept whole on the surface when the
+     * corner is off it; its place is taken at once, so the labels placed later keep off it.
+     */
+    private static Runnable cornerLabel(Surface s, ViewTransform v, LabelPlacer placer, Vec2 corner, String text) {
         double w = s.textWidth(text, 11, false) + 6;
-        s.fill(0xC0FFFFFF);
-        s.fillRect(x - w / 2, y, w, 14);
-        s.fill(Palette.INK);
-        s.text(text, x, y + 7, 11, false, Surface.Anchor.CENTER);
+        double x = Math.max(2, Math.min(v.screenX(corner.x()) + 2, s.width() - w - 2));
+        double y = Math.max(2, Math.min(v.screenY(corner.y()) + 2, s.height() - 16));
+        placer.reserveText(new LabelPlacer.Box(x, y, w, 14));
+        return () -> {
+            s.fill(0xC0FFFFFF);
+            s.fillRect(x, y, w, 14);
+            s.fill(Palette.INK);
+            s.text(text, x + 3, y + 7, 11, false, Surface.Anchor.LEFT);
+        };
     }
 }
