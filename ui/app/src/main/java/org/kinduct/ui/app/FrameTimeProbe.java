@@ -256,14 +256,15 @@ public final class FrameTimeProbe {
         return w;
     }
 
+    /** NaN when nothing was measured (no frame came while the series was solved, say). */
     private static double median(double[] ms) {
         double[] w = sorted(ms);
-        return w[w.length / 2];
+        return w.length == 0 ? Double.NaN : w[w.length / 2];
     }
 
     private static double p95(double[] ms) {
         double[] w = sorted(ms);
-        return w[(int) (w.length * 0.95)];
+        return w.length == 0 ? Double.NaN : w[(int) (w.length * 0.95)];
     }
 
     private static <T> T onFx(Callable<T> task) throws InterruptedException, ExecutionException {
