@@ -87,7 +87,7 @@ final class TimePlot extends Pane {
         return switch (quantity) {
             case POSITION_X, POSITION_Y, SPEED -> " — no moving bodies";
             case PAIR_VOLTAGE -> " — no electrode pairs";
-            case DRAG -> " — no plates or channels";
+            case DRAG, TORQUE, JOULE_HEAT -> " — no plates or channels";
             case EMF, CURRENT, FLUX, FORCE_X, FORCE_Y -> " — no wires or loops";
         };
     }

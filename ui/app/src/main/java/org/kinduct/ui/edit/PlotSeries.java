@@ -22,7 +22,7 @@ import org.kinduct.solver.Snapshot;
 /**
  * The lines of the time plot: a conductor quantity for the selected conductors (all when no
  * conductor is selected, so selecting a magnet leaves the plot as it was), a plate or channel
- * quantity (pair voltages, drag) likewise for the selected plates and channels, or a body quantity for
+ * quantity (pair voltages, drag, torque, Joule heat) likewise for the selected plates and channels, or a body quantity for
  * the bodies the selected objects ride (all moving bodies when none is selected). Free bodies are
  * read from the simulated poses, the others from their motion.
  */
@@ -39,6 +39,10 @@ public final class PlotSeries {
         PAIR_VOLTAGE("Electrode pair voltage", Dimension.VOLTAGE, null, null),
         /** One line per plate or channel: the magnitude of the field's force on its eddy currents. */
         DRAG("Drag on plate or channel", Dimension.FORCE, null, null),
+        /** One line per plate or channel: the field's torque on it about its body's pivot, positive counter-clockwise. */
+        TORQUE("Torque on plate or channel", Dimension.TORQUE, null, null),
+        /** One line per plate or channel: the heat its eddy currents make, d·∫|J|²/σ dA. */
+        JOULE_HEAT("Joule heat in plate or channel", Dimension.POWER, null, null),
         POSITION_X("Body position x", Dimension.LENGTH, null, p -> p.pivot().x() + p.offset().x()),
         POSITION_Y("Body position y", Dimension.LENGTH, null, p -> p.pivot().y() + p.offset().y()),
         SPEED("Body speed", Dimension.VELOCITY, null, p -> p.velocity().length());
@@ -61,7 +65,7 @@ public final class PlotSeries {
         }
 
         public boolean ofSheets() {
-            return this == PAIR_VOLTAGE || this == DRAG;
+            return this == PAIR_VOLTAGE || this == DRAG || this == TORQUE || this == JOULE_HEAT;
         }
 
         /** The run's largest value of this conductor quantity. */
@@ -72,6 +76,8 @@ public final class PlotSeries {
                 case FLUX -> scales.fluxWb();
                 case FORCE_X, FORCE_Y, DRAG -> scales.forceN();
                 case PAIR_VOLTAGE -> scales.emfV();
+                case TORQUE -> scales.torqueNm();
+                case JOULE_HEAT -> scales.powerW();
                 default -> throw new IllegalStateException(this + " is a body quantity");
             };
         }
@@ -155,6 +161,10 @@ public final class PlotSeries {
             }
             if (q == Quantity.DRAG) {
                 lines.add(line(first.id(), t, reference, i -> sheet(series, i, first).forceN().length()));
+            } else if (q == Quantity.TORQUE) {
+                lines.add(line(first.id(), t, reference, i -> sheet(series, i, first).torqueNm()));
+            } else if (q == Quantity.JOULE_HEAT) {
+                lines.add(line(first.id(), t, reference, i -> sheet(series, i, first).joulePowerW()));
             } else {
                 for (int p = 0; p < first.pairs().size(); p++) {
                     int pair = p;

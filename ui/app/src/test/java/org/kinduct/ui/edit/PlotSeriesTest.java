@@ -154,6 +154,33 @@ class PlotSeriesTest {
     }
 
     @Test
+    void aSpinningDiscsJouleHeatLineIsThePowerItsTorqueLineTakesFromTheSpin() {
+        // A 24-gon disc 40 mm across, 1 mm thick, spinning at 20 rad/s about its centre over a small
+        // still magnet 12 mm out from the axle.
+        List<Vec2> disc = new java.util.ArrayList<>();
+        for (int k = 0; k < 24; k++) {
+            disc.add(new Vec2(0.02 * Math.cos(2 * Math.PI * k / 24), 0.02 * Math.sin(2 * Math.PI * k / 24)));
+        }
+        double omega = 20;
+        Scene s = Scene.empty("disc").withBodies(List.of(new Body("axle", "axle", Vec2.ZERO,
+                        new Motion.Spin(omega, 0))))
+                .withSources(List.of(new org.kinduct.scene.Source.CylinderMagnet("m", Body.FIXED, new Vec2(0.012, 0),
+                        0.004, 0.004, 0.001, org.kinduct.scene.Source.Side.BELOW, 1.2,
+                        org.kinduct.scene.Source.Magnetization.PLUS_Z)))
+                .withConductors(List.of(new Conductor.Plate("disc", "axle", disc, List.of(), 0.001,
+                        ShapeFactory.PLATE_CONDUCTIVITY, List.of(), List.of(), java.util.OptionalDouble.empty())));
+        RunResult run = run(s, new TimeSpan(0, 0.02, 0.01));
+        double[] torque = PlotSeries.lines(run, Set.of(), PlotSeries.Quantity.TORQUE).get(0).values();
+        double[] heat = PlotSeries.lines(run, Set.of(), PlotSeries.Quantity.JOULE_HEAT).get(0).values();
+        for (int i = 0; i < torque.length; i++) {
+            // With still sources all the heat comes from the spin: P = −τ·ω (energy conservation, Griffiths
+            // (2013) §8.1); the field brakes the spin, so τ opposes ω.
+            assertEquals(-torque[i] * omega, heat[i], 1e-6 * heat[i]);
+            assertTrue(torque[i] < 0, "braking torque " + torque[i]);
+        }
+    }
+
+    @Test
     void aSceneOfPlatesAloneTurnsAWireQuantityIntoItsPairVoltagesOrDragAndOtherwiseTheChoiceStays() {
         Scene plate = Scene.empty("plate").withConductors(List.of(new Conductor.Plate("plate", Body.FIXED,
                 List.of(new Vec2(0, 0), new Vec2(0.06, 0), new Vec2(0.06, 0.04), new Vec2(0, 0.04)), List.of(), 0.002,
