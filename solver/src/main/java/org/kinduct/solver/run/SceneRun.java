@@ -2,6 +2,7 @@ package org.kinduct.solver.run;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Set;
 import java.util.stream.IntStream;
 import org.hipparchus.exception.MathRuntimeException;
@@ -26,6 +27,7 @@ import org.kinduct.solver.dynamics.CoupledSimulation;
 import org.kinduct.solver.dynamics.EnergyAudit;
 import org.kinduct.solver.dynamics.RunMonitor;
 import org.kinduct.solver.dynamics.SimulationCancelledException;
+import org.kinduct.solver.field.WorkTally;
 import org.kinduct.solver.plate.Sheets;
 import org.kinduct.solver.sheet.SheetConvergenceException;
 
@@ -76,6 +78,13 @@ public final class SceneRun {
      * whether a long run is coming) gets it while another thread is in the middle of the run.
      */
     private final Object resultLock = new Object();
+    /**
+     * Field evaluations one quasi-static instant may make ({@link WorkTally}): about half a minute.
+     * The costliest instants of the demos and benchmarks make well under 10⁷ (6400 magnet–loop
+     * pairs: about 8·10⁶); a plate drawn 100 km across with a magnet touching the plane (found by
+     * fuzzing) would have taken hours.
+     */
+    static final long MAX_INSTANT_EVALUATIONS = 100_000_000L;
     private RunResult result;
 
     /** The scene's own window with the circuit model chosen automatically, instants on every core. */
@@ -284,6 +293,17 @@ public final class SceneRun {
      * unchanged); a loop that changes shape (a bar on rails) gets it computed anew.
      */
     private Snapshot solveInstant(double tS, InductanceAtStart start) {
+        try {
+            return WorkTally.within(MAX_INSTANT_EVALUATIONS, () -> solveInstantUnbounded(tS, start));
+        } catch (WorkTally.AllowanceExceededException over) {
+            throw new RunFailedException(String.format(Locale.ROOT, "the instant at t = %s s would need more than"
+                    + " %.1e field evaluations (about half a minute): a plate or loop far larger than the"
+                    + " fields it lies in, or a magnet touching the plane under a coarse grid, makes that;"
+                    + " draw it smaller or give the plate a cell size", tS, (double) MAX_INSTANT_EVALUATIONS), over);
+        }
+    }
+
+    private Snapshot solveInstantUnbounded(double tS, InductanceAtStart start) {
         Snapshot s = prescribed.at(tS);
         List<ConductorState> states = new ArrayList<>(s.conductors().size());
         for (ConductorState state : s.conductors()) {
