@@ -296,7 +296,7 @@ public final class SceneRun {
         try {
             return WorkTally.within(MAX_INSTANT_EVALUATIONS, () -> solveInstantUnbounded(tS, start));
         } catch (WorkTally.AllowanceExceededException over) {
-            throw new RunFailedException(String.format(Locale.ROOT, "the instant at t = %s s would need more than"
+            throw new RunFailedException(String.format(Locale.ROOT, "the instant at t = %.6g s would need more than"
                     + " %.1e field evaluations (about half a minute): a plate or loop far larger than the"
                     + " fields it lies in, or a magnet touching the plane under a coarse grid, makes that;"
                     + " draw it smaller or give the plate a cell size", tS, (double) MAX_INSTANT_EVALUATIONS), over);
