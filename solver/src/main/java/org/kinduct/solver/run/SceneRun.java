@@ -57,6 +57,14 @@ import org.kinduct.solver.sheet.SheetConvergenceException;
  */
 public final class SceneRun {
 
+    /**
+     * Field evaluations one quasi-static instant may make ({@link WorkTally}): about half a minute.
+     * The costliest instants of the demos and benchmarks make well under 10⁷ (6400 magnet–loop
+     * pairs: about 8·10⁶); a plate drawn 100 km across with a magnet touching the plane (found by
+     * fuzzing) would have taken hours.
+     */
+    static final long MAX_INSTANT_EVALUATIONS = 100_000_000L;
+
     private final Scene scene;
     /** The scene as solved: moved so that {@link #origin} is at (0, 0). */
     private final Scene local;
@@ -78,13 +86,6 @@ public final class SceneRun {
      * whether a long run is coming) gets it while another thread is in the middle of the run.
      */
     private final Object resultLock = new Object();
-    /**
-     * Field evaluations one quasi-static instant may make ({@link WorkTally}): about half a minute.
-     * The costliest instants of the demos and benchmarks make well under 10⁷ (6400 magnet–loop
-     * pairs: about 8·10⁶); a plate drawn 100 km across with a magnet touching the plane (found by
-     * fuzzing) would have taken hours.
-     */
-    static final long MAX_INSTANT_EVALUATIONS = 100_000_000L;
     private RunResult result;
 
     /** The scene's own window with the circuit model chosen automatically, instants on every core. */
@@ -164,7 +165,6 @@ public final class SceneRun {
             return result;
         }
     }
-
 
     /** The run's state at {@code tS}: exact for quasi-static instants, else as the class comment says. */
     public Snapshot instant(double tS) {

@@ -414,7 +414,7 @@ public final class CanvasGestures {
         ViewSettings settings = vm.view();
         return new Picture(preview != null ? preview : vm.scene(), t, snap, vm.maps().raster(), settings.view(),
                 settings.layers(), settings.rangeProperty().get(), marks, note,
-                vm.results().scalesNow().including(snap));
+                preview != null ? vm.results().scalesNow().including(snap) : vm.results().scalesNow());
     }
 
     private ViewTransform view() {
