@@ -71,7 +71,7 @@ final class Currents {
 
         jx = new double[nx * ny];
         jy = new double[nx * ny];
-        double peak = 0;
+        double peakSquared = 0;
         double perArea = 1 / (conductor.thicknessM() * h);
         for (int j = 0; j < ny; j++) {
             for (int i = 0; i < nx; i++) {
@@ -83,16 +83,17 @@ final class Currents {
                 double openY = grid.apertureY(i, j) + grid.apertureY(i, j + 1);
                 jx[c] = openX > 0 ? (faceX[i + (nx + 1) * j] + faceX[i + 1 + (nx + 1) * j]) * perArea / openX : 0;
                 jy[c] = openY > 0 ? (faceY[i + nx * j] + faceY[i + nx * (j + 1)]) * perArea / openY : 0;
-                peak = Math.max(peak, Math.hypot(jx[c], jy[c]));
+                peakSquared = Math.max(peakSquared, jx[c] * jx[c] + jy[c] * jy[c]);
             }
         }
-        peakCurrentDensityAPerM2 = peak;
+        peakCurrentDensityAPerM2 = Math.sqrt(peakSquared);
     }
 
     /**
      * Stream function on the grid's nodes, A/m (current per unit thickness), with J = ∇ψ × ẑ:
      * the current through a face is d times the difference of ψ across it. Summed up each column
-     * of x faces from ψ = 0 on the grid's bottom edge, so the x faces hold exactly; the y faces,
+     * of x faces from ψ = 0 on the grid's bottom edge (a row at a time, in memory order), so the x
+     * faces hold exactly; the y faces,
      * and ψ = 0 along the outline's top and one constant inside each hole, hold to the solver's
      * tolerance (each is a sum of the cells' current balances).
      */
@@ -100,8 +101,8 @@ final class Currents {
         int nx = grid.nx();
         int ny = grid.ny();
         double[] psi = new double[(nx + 1) * (ny + 1)];
-        for (int i = 0; i <= nx; i++) {
-            for (int j = 0; j < ny; j++) {
+        for (int j = 0; j < ny; j++) {
+            for (int i = 0; i <= nx; i++) {
                 psi[i + (nx + 1) * (j + 1)] = psi[i + (nx + 1) * j] + faceX[i + (nx + 1) * j] / thicknessM;
             }
         }

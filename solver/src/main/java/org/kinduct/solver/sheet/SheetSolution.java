@@ -17,20 +17,22 @@ public final class SheetSolution {
     private final SheetGrid grid;
     private final double[] potentialV;
     private final Currents currents;
-    private final double[] streamFunctionAPerM;
+    private final double thicknessM;
+    /** Made on first use: only drawn samples need it, not a coupled run's every solve. */
+    private volatile double[] streamFunctionAPerM;
     private final Vec2 pivotM;
     private final Map<String, Double> electrodePotentialsV;
     private final double magneticReynolds;
     private final int iterations;
     private final double relativeResidual;
 
-    SheetSolution(SheetGrid grid, double[] potentialV, Currents currents, double[] streamFunctionAPerM, Vec2 pivotM,
+    SheetSolution(SheetGrid grid, double[] potentialV, Currents currents, double thicknessM, Vec2 pivotM,
                   Map<String, Double> electrodePotentialsV, double magneticReynolds, int iterations,
                   double relativeResidual) {
         this.grid = grid;
         this.potentialV = potentialV;
         this.currents = currents;
-        this.streamFunctionAPerM = streamFunctionAPerM;
+        this.thicknessM = thicknessM;
         this.pivotM = pivotM;
         this.electrodePotentialsV = Collections.unmodifiableMap(new LinkedHashMap<>(electrodePotentialsV));
         this.magneticReynolds = magneticReynolds;
@@ -73,7 +75,13 @@ public final class SheetSolution {
      * Zero on the outer edge, one constant inside each hole.
      */
     public double streamFunctionAPerM(int i, int j) {
-        return streamFunctionAPerM[i + (grid.nx() + 1) * j];
+        double[] psi = streamFunctionAPerM;
+        if (psi == null) {
+            // Two threads may both compute it; they get the same values.
+            psi = currents.streamFunction(grid, thicknessM);
+            streamFunctionAPerM = psi;
+        }
+        return psi[i + (grid.nx() + 1) * j];
     }
 
     /** Largest cell current density magnitude, A/m². */
