@@ -31,7 +31,7 @@ import org.w3c.dom.NodeList;
  * One export, one truth: {@code kinduct export --csv --json --svg} of one scene writes the same
  * EMFs, currents and senses, and the same drags and electrode voltages of plates and channels, in
  * all three files, and the picture shows the instant of the largest EMF or electrode voltage (the
- * default {@code --at peak}; the largest drag where there is no voltage), for every demo and for a
+ * default {@code --at peak}; the largest Joule power where there is no voltage), for every demo and for a
  * loop whose inductance matters (200 turns, 100 × 100 mm, 1 mm copper wire, gliding at 1 m/s into a
  * 0.5 T patch: L/R of some milliseconds, so its current lags the EMF and the run is inductive). The
  * picture's tables are read from the SVG, which is drawn from the same page as the PNG.
@@ -115,7 +115,7 @@ class OutputsAgreeTest {
         assertTrue(compared >= lines.size() - 1, name + ": compared " + compared + " values");
 
         // The picture shows, by default, the earliest sample of largest |EMF| or pair voltage (of
-        // largest drag without either); its tables hold the JSON's values there.
+        // largest Joule power without either); its tables hold the JSON's values there.
         double t = peakTime(samples, plates);
         List<String> texts = texts(Files.readString(svg));
         assertTrue(texts.contains("t = " + Quantities.time(t)), name + ": the picture shows the peak at t = " + t);
@@ -166,7 +166,7 @@ class OutputsAgreeTest {
 
     /**
      * The instant the picture shows by default (ExportInstant.Peak's rule, from the JSON alone): the
-     * largest |EMF| or |pair voltage| (else |drag|); of the samples within 1e-6 of it (a plateau),
+     * largest |EMF| or |pair voltage| (else the plates' Joule power); of the samples within 1e-6 of it (a plateau),
      * the earliest where no loop is at a field edge (every disagreement a number), else the earliest.
      */
     private static double peakTime(JsonNode samples, JsonNode plates) {
@@ -183,7 +183,7 @@ class OutputsAgreeTest {
         }
         for (JsonNode p : plates) {
             double t = p.get("t").asDouble();
-            double value = Math.hypot(p.get("drag_N").get(0).asDouble(), p.get("drag_N").get(1).asDouble());
+            double value = p.get("joule_W").asDouble();
             if (volts) {
                 value = 0;
                 for (JsonNode pair : p.get("pairs")) {

@@ -33,6 +33,9 @@ public final class DraggedInstant {
     private final ReadOnlyObjectWrapper<Solved> solved = new ReadOnlyObjectWrapper<>();
     /** Counts requests (UI thread only), so a solve that arrives after a newer request or a clear is dropped. */
     private long asked;
+    /** The last request's scene and time (UI thread only): a move the grid snaps to the same place asks nothing. */
+    private Scene lastPreview;
+    private double lastTimeS;
 
     DraggedInstant(BiFunction<Scene, RunMonitor, SceneRun> runs, Executor work, Executor ui) {
         this.runs = Objects.requireNonNull(runs);
@@ -42,6 +45,11 @@ public final class DraggedInstant {
 
     /** Solves {@code preview} at {@code tS} off this thread; its numbers replace the last drag position's. */
     void ask(Scene preview, double tS) {
+        if (tS == lastTimeS && preview.equals(lastPreview)) {
+            return;
+        }
+        lastPreview = preview;
+        lastTimeS = tS;
         long ask = ++asked;
         jobs.submit(() -> {
             Solved done = solve(preview, tS);
@@ -56,6 +64,7 @@ public final class DraggedInstant {
     /** The drag ended: its numbers go, and any still being solved are dropped. */
     void clear() {
         asked++;
+        lastPreview = null;
         solved.set(null);
     }
 

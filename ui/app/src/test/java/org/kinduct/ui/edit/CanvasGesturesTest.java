@@ -165,6 +165,27 @@ class CanvasGesturesTest {
     }
 
     @Test
+    void aMoveThatLeavesTheDraggedSceneAsItWasAsksNoSolve() {
+        java.util.concurrent.atomic.AtomicInteger previewRuns = new java.util.concurrent.atomic.AtomicInteger();
+        Scene initial = loopBesideAMagnet(false);
+        EditorViewModel vm = new EditorViewModel(initial, (scene, monitor) -> {
+            if (!scene.equals(initial)) {
+                previewRuns.incrementAndGet();
+            }
+            return EditorViewModel.run(scene, monitor);
+        }, SAME_THREAD, SAME_THREAD, System::nanoTime);
+        vm.view().viewProperty().set(VIEW);
+        vm.view().layers().clear();
+        CanvasGestures g = gestures(vm);
+        g.pressed(sx(vm, 0.04), sy(vm, 0), Button.PRIMARY, false);
+        g.dragged(sx(vm, 0.02), sy(vm, 0));
+        g.dragged(sx(vm, 0.02), sy(vm, 0));
+        assertEquals(1, previewRuns.get(), "the second move left the preview as it was");
+        g.dragged(sx(vm, 0.03), sy(vm, 0));
+        assertEquals(2, previewRuns.get(), "a move that changes it is solved");
+    }
+
+    @Test
     void aDragOfASceneWithFreeBodiesShowsNoNumbersUntilItsRunIsIn() {
         EditorViewModel vm = vm(loopBesideAMagnet(true));
         CanvasGestures g = gestures(vm);

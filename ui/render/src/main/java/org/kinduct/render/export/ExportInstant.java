@@ -30,7 +30,8 @@ public sealed interface ExportInstant permits ExportInstant.At, ExportInstant.Pe
      * The sample of the run where the answer is largest: |EMF| of a wire or loop, or |voltage| of
      * an electrode pair of a plate or channel, over every conductor or over the one named
      * {@code conductorId} (null: every conductor); where there is no voltage at all (plates without
-     * electrodes), the force on the plates. Of the samples within {@value #TIE} of the peak (a
+     * electrodes), the plates' Joule power, the rate at which they brake whatever moves, translation
+     * and spin alike (a spinning disc's drag force is near zero). Of the samples within {@value #TIE} of the peak (a
      * plateau), the earliest where the flux rule is a check (no conductor at a field edge), else the
      * earliest; the first sample when everything is zero.
      */
@@ -69,18 +70,18 @@ public sealed interface ExportInstant permits ExportInstant.At, ExportInstant.Pe
         /** Relative nearness to the peak that counts as the peak (a flat top computed to rounding). */
         private static final double TIE = 1e-6;
 
-        /** The largest |EMF| or pair |voltage| of the conductors taken, or with {@code volts} false their largest force. */
+        /** The largest |EMF| or pair |voltage| of the conductors taken, or with {@code volts} false their largest Joule power. */
         private double largest(Snapshot s, boolean volts) {
             double m = 0;
             for (ConductorState c : s.conductors()) {
-                if (conductorId == null || c.id().equals(conductorId)) {
-                    m = Math.max(m, volts ? Math.abs(c.emfV()) : c.forceN().length());
+                if (volts && (conductorId == null || c.id().equals(conductorId))) {
+                    m = Math.max(m, Math.abs(c.emfV()));
                 }
             }
             for (SheetState p : s.sheets()) {
                 if (conductorId == null || p.id().equals(conductorId)) {
                     m = Math.max(m, volts ? p.pairs().stream().mapToDouble(q -> Math.abs(q.voltageV())).max().orElse(0)
-                            : p.forceN().length());
+                            : p.joulePowerW());
                 }
             }
             return m;
