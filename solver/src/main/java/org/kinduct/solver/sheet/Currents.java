@@ -93,9 +93,8 @@ final class Currents {
      * Stream function on the grid's nodes, A/m (current per unit thickness), with J = ∇ψ × ẑ:
      * the current through a face is d times the difference of ψ across it. Summed up each column
      * of x faces from ψ = 0 on the grid's bottom edge (a row at a time, in memory order), so the x
-     * faces hold exactly; the y faces,
-     * and ψ = 0 along the outline's top and one constant inside each hole, hold to the solver's
-     * tolerance (each is a sum of the cells' current balances).
+     * faces hold exactly; the y faces, and ψ = 0 along the outline's top and one constant inside
+     * each hole, hold to the solver's tolerance (each is a sum of the cells' current balances).
      */
     double[] streamFunction(SheetGrid grid, double thicknessM) {
         int nx = grid.nx();

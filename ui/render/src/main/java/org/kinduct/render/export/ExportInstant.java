@@ -31,9 +31,9 @@ public sealed interface ExportInstant permits ExportInstant.At, ExportInstant.Pe
      * an electrode pair of a plate or channel, over every conductor or over the one named
      * {@code conductorId} (null: every conductor); where there is no voltage at all (plates without
      * electrodes), the plates' Joule power, the rate at which they brake whatever moves, translation
-     * and spin alike (a spinning disc's drag force is near zero). Of the samples within {@value #TIE} of the peak (a
-     * plateau), the earliest where the flux rule is a check (no conductor at a field edge), else the
-     * earliest; the first sample when everything is zero.
+     * and spin alike (a spinning disc's drag force is near zero). Of the samples within
+     * {@value #TIE} of the peak (a plateau), the earliest where the flux rule is a check (no
+     * conductor at a field edge), else the earliest; the first sample when everything is zero.
      */
     record Peak(String conductorId) implements ExportInstant {
 
