@@ -105,15 +105,14 @@ public final class BlockMagnetField extends CurrentSourceField {
         double x2 = u - halfX;
         double y1 = v + halfY;
         double y2 = v - halfY;
-        double sum = -corner(x1, y1, dzBottom) + corner(x2, y1, dzBottom) + corner(x1, y2, dzBottom)
-                - corner(x2, y2, dzBottom)
-                + corner(x1, y1, dzTop) - corner(x2, y1, dzTop) - corner(x1, y2, dzTop) + corner(x2, y2, dzTop);
-        return brOver4Pi * sum;
-    }
-
-    /** atan[X·Y/(Z·R)]; Z = ±0 gives ±π/2·sign(XY), and XY = 0 gives 0 (mean of both sides). */
-    private static double corner(double dx, double dy, double dz) {
-        return corner(dx, dy, dz, Math.sqrt(dx * dx + dy * dy + dz * dz));
+        double p11 = x1 * x1 + y1 * y1;
+        double p21 = x2 * x2 + y1 * y1;
+        double p12 = x1 * x1 + y2 * y2;
+        double p22 = x2 * x2 + y2 * y2;
+        return brOver4Pi * (face(x1, x2, y1, y2, dzTop, Math.sqrt(p11 + zHighSquared), Math.sqrt(p21 + zHighSquared),
+                Math.sqrt(p12 + zHighSquared), Math.sqrt(p22 + zHighSquared))
+                - face(x1, x2, y1, y2, dzBottom, Math.sqrt(p11 + zLowSquared), Math.sqrt(p21 + zLowSquared),
+                Math.sqrt(p12 + zLowSquared), Math.sqrt(p22 + zLowSquared)));
     }
 
     @Override
@@ -198,13 +197,53 @@ public final class BlockMagnetField extends CurrentSourceField {
         double x2 = -tx2;
         double y1 = -ty1;
         double y2 = -ty2;
-        out[6] = brOver4Pi * (-corner(x1, y1, dzBottom, low11) + corner(x2, y1, dzBottom, low21)
-                + corner(x1, y2, dzBottom, low12) - corner(x2, y2, dzBottom, low22)
-                + corner(x1, y1, dzTop, high11) - corner(x2, y1, dzTop, high21)
-                - corner(x1, y2, dzTop, high12) + corner(x2, y2, dzTop, high22));
+        out[6] = brOver4Pi * (face(x1, x2, y1, y2, dzTop, high11, high21, high12, high22)
+                - face(x1, x2, y1, y2, dzBottom, low11, low21, low12, low22));
     }
 
-    /** {@link #corner(double, double, double)} given the corner distance r. */
+    /**
+     * One face's part of the B_z sum, Σ (−1)^{i+j} atan[x_i·y_j/(dz·r_ij)] with x_i, y_j the offsets
+     * from the face's corners and r_ij the distances to them: the solid angle the face subtends,
+     * signed as dz. Off the plane it is the argument of the product of w_ij = dz·r_ij + i·x_i·y_j
+     * (each w's argument is its arctangent, plus π when dz &lt; 0, which cancels over the four),
+     * conjugated where the sign is −, so one atan2 replaces four arctangents. The argument is
+     * taken in (−π, π]; a rectangle subtends more than π only from over its footprint, where
+     * all four terms share dz's sign (no cancellation), and there it is moved into [0, 2π)·sign(dz).
+     * A face in the plane (dz = ±0) sums {@link #corner} terms, whose signed zeros give the limit
+     * from outside. The product is of degree 8 in lengths: within range for scenes from a
+     * nanometre to 10¹² m.
+     */
+    private static double face(double x1, double x2, double y1, double y2, double dz,
+                               double r11, double r21, double r12, double r22) {
+        if (dz == 0) {
+            return corner(x1, y1, dz, r11) - corner(x2, y1, dz, r21) - corner(x1, y2, dz, r12)
+                    + corner(x2, y2, dz, r22);
+        }
+        double a11 = dz * r11;
+        double b11 = x1 * y1;
+        double a21 = dz * r21;
+        double b21 = x2 * y1;
+        double a12 = dz * r12;
+        double b12 = x1 * y2;
+        double a22 = dz * r22;
+        double b22 = x2 * y2;
+        // w11·conj(w21) and conj(w12)·w22, then their product.
+        double pRe = a11 * a21 + b11 * b21;
+        double pIm = b11 * a21 - a11 * b21;
+        double qRe = a12 * a22 + b12 * b22;
+        double qIm = a12 * b22 - b12 * a22;
+        double angle = Math.atan2(pRe * qIm + pIm * qRe, pRe * qRe - pIm * qIm);
+        if (x1 > 0 && x2 < 0 && y1 > 0 && y2 < 0) {
+            if (dz > 0 && angle < 0) {
+                angle += 2 * Math.PI;
+            } else if (dz < 0 && angle > 0) {
+                angle -= 2 * Math.PI;
+            }
+        }
+        return angle;
+    }
+
+    /** atan[X·Y/(Z·R)] given the corner distance R; Z = ±0 gives ±π/2·sign(XY), and XY = 0 gives 0 (mean of both sides). */
     private static double corner(double dx, double dy, double dz, double r) {
         double n = dx * dy;
         if (n == 0) {

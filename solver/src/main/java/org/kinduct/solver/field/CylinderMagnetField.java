@@ -128,38 +128,75 @@ public final class CylinderMagnetField extends CurrentSourceField {
         double dx = x - cx;
         double dy = y - cy;
         double rho = Axisymmetric.distance(dx, dy);
-        Axisymmetric.jet(dx, dy, rho, rho == 0 ? 0 : aPhi(rho), bzAt(rho), out);
+        if (rho == 0) {
+            Axisymmetric.jet(dx, dy, rho, 0, bzAt(rho), out);
+            return;
+        }
+        double[] both = new double[2];
+        both(rho, both);
+        Axisymmetric.jet(dx, dy, rho, both[0], both[1], out);
     }
 
-    /** A_φ at distance ρ from the axis, T·m; see the class documentation. */
+    /** A_φ at distance ρ &gt; 0 from the axis, T·m; see the class documentation. */
     double aPhi(double rho) {
+        double[] both = new double[2];
+        both(rho, both);
+        return both[0];
+    }
+
+    /**
+     * A_φ and B_z at distance ρ &gt; 0 into out[0..1]. Away from the axis each face's three
+     * elliptic integrals, cel(kc, γ², 1, γ) for B_z and cel(kc, 1, γ², 1), cel(kc, γ², 1, 1) for
+     * A_φ, come from one iteration ({@link EllipticIntegrals#celBases}).
+     */
+    private void both(double rho, double[] out) {
         double sum = radiusM + rho;
         double diff = radiusM - rho;
-        double p = (diff / sum) * (diff / sum);
+        double gamma = diff / sum;
+        double p = gamma * gamma;
         double q = 4 * radiusM * rho / (sum * sum);
-        double faces = faceA(zHighM, sum, diff, p, q) - faceA(zLowM, sum, diff, p, q);
-        return remanenceT * radiusM * q / Math.PI * faces;
+        double[] face = new double[2];
+        double[] bases = new double[4];
+        face(zHighM, sum, diff, gamma, p, q, bases, face);
+        double aHigh = face[0];
+        double bzHigh = face[1];
+        face(zLowM, sum, diff, gamma, p, q, bases, face);
+        out[0] = remanenceT * radiusM * q / Math.PI * (aHigh - face[0]);
+        out[1] = remanenceT / Math.PI * radiusM / sum * (bzHigh - face[1]);
     }
 
-    /** z_f·I(z_f)/√((a + ρ)² + z_f²); zero for a face in the plane. */
-    private static double faceA(double zFace, double sum, double diff, double p, double q) {
+    /**
+     * A face's terms of A_φ and of B_z (each summed top minus bottom) into out[0..1]:
+     * z_f·I(z_f)/√((a + ρ)² + z_f²) and z_f·cel(kc, γ², 1, γ)/√((a + ρ)² + z_f²) = −β(−z_f)·cel;
+     * zero for a face in the plane.
+     */
+    private static void face(double zFace, double sum, double diff, double gamma, double p, double q,
+                             double[] bases, double[] out) {
         if (zFace == 0) {
-            return 0;
+            out[0] = 0;
+            out[1] = 0;
+            return;
         }
         double z2 = zFace * zFace;
         double outer2 = z2 + sum * sum;
         double kc2 = (z2 + diff * diff) / outer2;
+        double kc = Math.sqrt(kc2);
         double integral;
+        double bzCel;
         if (q >= CEL_FROM_Q) {
-            double kc = Math.sqrt(kc2);
-            integral = (EllipticIntegrals.cel(kc, 1, p, 1) - p * EllipticIntegrals.cel(kc, p, 1, 1)) / (q * q);
+            EllipticIntegrals.celBases(kc, p, bases);
+            bzCel = bases[0] + gamma * bases[1];
+            integral = (p * bases[2] + bases[3] - p * (bases[0] + bases[1])) / (q * q);
         } else {
+            bzCel = EllipticIntegrals.cel(kc, p, 1, gamma);
             integral = 0;
             for (int i = 0; i < NEAR_AXIS_POINTS; i++) {
                 integral += WEIGHT_SIN2_COS2[i]
                         / ((COS2[i] + p * SIN2[i]) * Math.sqrt(COS2[i] + kc2 * SIN2[i]));
             }
         }
-        return zFace * integral / Math.sqrt(outer2);
+        double outer = Math.sqrt(outer2);
+        out[0] = zFace * integral / outer;
+        out[1] = zFace / outer * bzCel;
     }
 }

@@ -73,4 +73,98 @@ public final class EllipticIntegrals {
         }
         return Math.PI / 2 * (ss + cc * em) / (em * (em + pp));
     }
+
+    /**
+     * cel(kc, p, 1, 0), cel(kc, p, 0, 1), cel(kc, 1, 1, 0) and cel(kc, 1, 0, 1) into out[0..3], in
+     * one iteration. The iteration's sequence in kc is the same for every p, and each step is linear
+     * in (c, s), so any cel(kc, p, c, s) = c·out[0] + s·out[1] and cel(kc, 1, c, s) = c·out[2] +
+     * s·out[3]: a cylinder magnet's field and potential need three integrals at one kc, made here
+     * for the square roots of one.
+     */
+    public static void celBases(double kc, double p, double[] out) {
+        if (kc == 0) {
+            java.util.Arrays.fill(out, 0, 4, Double.NaN);
+            return;
+        }
+        double k = Math.abs(kc);
+        // Bulirsch's start for (c, s) = (1, 0) and (0, 1) at p, and at p = 1 (where pp = 1, ss = s).
+        double pp;
+        double c1;
+        double s1;
+        double c2;
+        double s2;
+        if (p > 0) {
+            pp = Math.sqrt(p);
+            c1 = 1;
+            s1 = 0;
+            c2 = 0;
+            s2 = 1 / pp;
+        } else {
+            double f = kc * kc;
+            double q = 1 - f;
+            double g = 1 - p;
+            f -= p;
+            pp = Math.sqrt(f / g);
+            c1 = 1 / g;
+            s1 = q * p / (g * g * pp) + c1 * pp;
+            c2 = -1 / g;
+            s2 = -q / (g * g * pp) + c2 * pp;
+        }
+        double c3 = 1;
+        double s3 = 0;
+        double c4 = 0;
+        double s4 = 1;
+        double pu = 1;
+        double em = 1;
+        double kk = k;
+        double inv = 1 / pp;
+        double g = k * inv;
+        double f = c1;
+        c1 += s1 * inv;
+        s1 = 2 * (s1 + f * g);
+        f = c2;
+        c2 += s2 * inv;
+        s2 = 2 * (s2 + f * g);
+        pp += g;
+        double gu = k;
+        f = c3;
+        c3 += s3;
+        s3 = 2 * (s3 + f * gu);
+        f = c4;
+        c4 += s4;
+        s4 = 2 * (s4 + f * gu);
+        pu += gu;
+        double previous = em;
+        em += k;
+        for (int step = 0; Math.abs(previous - k) > previous * RELATIVE_STOP && step < MAX_STEPS; step++) {
+            k = 2 * Math.sqrt(kk);
+            kk = k * em;
+            inv = 1 / pp;
+            g = kk * inv;
+            f = c1;
+            c1 += s1 * inv;
+            s1 = 2 * (s1 + f * g);
+            f = c2;
+            c2 += s2 * inv;
+            s2 = 2 * (s2 + f * g);
+            pp += g;
+            double invU = 1 / pu;
+            gu = kk * invU;
+            f = c3;
+            c3 += s3 * invU;
+            s3 = 2 * (s3 + f * gu);
+            f = c4;
+            c4 += s4 * invU;
+            s4 = 2 * (s4 + f * gu);
+            pu += gu;
+            previous = em;
+            em += k;
+        }
+        double scale = Math.PI / 2 / (em * (em + pp));
+        out[0] = scale * (s1 + c1 * em);
+        out[1] = scale * (s2 + c2 * em);
+        double scaleU = Math.PI / 2 / (em * (em + pu));
+        out[2] = scaleU * (s3 + c3 * em);
+        out[3] = scaleU * (s4 + c4 * em);
+    }
 }

@@ -63,6 +63,29 @@ class BlockMagnetFieldTest {
         assertEquals(expected, actual, QUADRATURE_LEVEL * Math.abs(expected) + 1e-13, "seed " + seed);
     }
 
+    @RepeatedTest(30)
+    void farFieldMatchesNumericalSurfaceChargeIntegralToTheRoundingOfItsArctangents(RepetitionInfo info) {
+        long seed = SEED + 1500 + info.getCurrentRepetition();
+        SplittableRandom r = new SplittableRandom(seed);
+        double sizes = new double[] {10, 30, 100}[info.getCurrentRepetition() % 3];
+        double direction = r.nextDouble(0, 2 * Math.PI);
+        double distance = sizes * 0.020;
+        double x = distance * Math.cos(direction);
+        double y = distance * Math.sin(direction);
+        double standoff = r.nextDouble(0.002, 0.01);
+        // The same charge-model reference as above. Far away each face's arctangents are near ±π/2
+        // and their sum, the face's solid angle, falls as (size/distance)³: rounding of the terms,
+        // a few ulp of π/2, is that much larger relative to B_z.
+        double expected = BR / (4 * Math.PI)
+                * (faceIntegral(x, y, -standoff) - faceIntegral(x, y, -standoff - 0.005));
+        BlockMagnetField magnet = below(0, 0, 0, standoff);
+        double tolerance = 1e-13 * sizes * sizes * sizes * Math.abs(expected);
+        assertEquals(expected, magnet.bz(x, y), tolerance, "seed " + seed + ", " + sizes + " sizes away");
+        double[] jet = new double[GradientField.JET_SIZE];
+        magnet.jet(x, y, jet);
+        assertEquals(magnet.bz(x, y), jet[6], 0, "the jet's B_z is the field's");
+    }
+
     private static double faceIntegral(double x, double y, double zFace) {
         double dz = -zFace;
         return NumericalReference.integrateRectangle((u, v) -> {

@@ -80,6 +80,42 @@ class EllipticIntegralsTest {
         assertEquals(expected, EllipticIntegrals.cel(Math.sqrt(1 - m), 0, 1, 0), ULP_LEVEL * expected);
     }
 
+    @RepeatedTest(200)
+    void celBasesGiveTheCompleteIntegralsOfAllThreeKinds(RepetitionInfo info) {
+        long seed = SEED + 4000 + info.getCurrentRepetition();
+        SplittableRandom random = new SplittableRandom(seed);
+        double m = drawParameter(random);
+        double kc = Math.sqrt(1 - m);
+        double n = 1 - Math.pow(10, random.nextDouble(-2, 1));
+        double[] bases = new double[4];
+        EllipticIntegrals.celBases(kc, 1 - n, bases);
+        // References: Hipparchus' K(m), E(m) and Π(n|m), parameter convention; cel(kc, 1, 1, 1) = K,
+        // cel(kc, 1, 1, kc²) = E, cel(kc, 1 − n, 1, 1) = Π(n|m) (DLMF §19.2(iii)).
+        String at = "seed " + seed + ", m " + m + ", n " + n;
+        double bigK = LegendreEllipticIntegral.bigK(m);
+        assertEquals(bigK, bases[2] + bases[3], ULP_LEVEL * bigK, at);
+        double bigE = LegendreEllipticIntegral.bigE(m);
+        assertEquals(bigE, bases[2] + kc * kc * bases[3], ULP_LEVEL * bigE, at);
+        double bigPi = LegendreEllipticIntegral.bigPi(n, m);
+        assertEquals(bigPi, bases[0] + bases[1], ULP_LEVEL * Math.abs(bigPi), at);
+    }
+
+    @RepeatedTest(50)
+    void celBasesFollowBulirschsTransformationForNonPositiveP(RepetitionInfo info) {
+        long seed = SEED + 5000 + info.getCurrentRepetition();
+        SplittableRandom random = new SplittableRandom(seed);
+        double kc = random.nextDouble(0.05, 2);
+        // p = 0 is a cylinder magnet's rim (ρ = a); p < 0 the principal value.
+        double p = info.getCurrentRepetition() == 1 ? 0 : -Math.pow(10, random.nextDouble(-2, 1));
+        double c = random.nextDouble(-2, 2);
+        double s = random.nextDouble(-2, 2);
+        double[] bases = new double[4];
+        EllipticIntegrals.celBases(kc, p, bases);
+        double expected = EllipticIntegrals.cel(kc, p, c, s);
+        assertEquals(expected, c * bases[0] + s * bases[1], ULP_LEVEL * (Math.abs(c) + Math.abs(s)) * 10,
+                "seed " + seed + " kc " + kc + " p " + p);
+    }
+
     @Test
     void divergentModulusGivesNaN() {
         assertTrue(Double.isNaN(EllipticIntegrals.cel(0, 1, 1, 1)));
