@@ -232,7 +232,7 @@ public final class BlockMagnetField extends CurrentSourceField {
         double pIm = b11 * a21 - a11 * b21;
         double qRe = a12 * a22 + b12 * b22;
         double qIm = a12 * b22 - b12 * a22;
-        double angle = Math.atan2(pRe * qIm + pIm * qRe, pRe * qRe - pIm * qIm);
+        double angle = Arctangent.atan2(pRe * qIm + pIm * qRe, pRe * qRe - pIm * qIm);
         if (x1 > 0 && x2 < 0 && y1 > 0 && y2 < 0) {
             if (dz > 0 && angle < 0) {
                 angle += 2 * Math.PI;
@@ -249,7 +249,7 @@ public final class BlockMagnetField extends CurrentSourceField {
         if (n == 0) {
             return 0;
         }
-        return Math.atan(n / (dz * r));
+        return Arctangent.atan(n / (dz * r));
     }
 
     /**
@@ -321,7 +321,7 @@ public final class BlockMagnetField extends CurrentSourceField {
         double yHigh = c * zHigh * cross(t1, t2, c, zHigh, r1High, r2High);
         double xLow = c * c * r1Low * r2Low + t1 * t2 * zLow * zLow;
         double yLow = c * zLow * cross(t1, t2, c, zLow, r1Low, r2Low);
-        return Math.atan2(yHigh * xLow - xHigh * yLow, xHigh * xLow + yHigh * yLow);
+        return Arctangent.atan2(yHigh * xLow - xHigh * yLow, xHigh * xLow + yHigh * yLow);
     }
 
     /** t2·r1 − t1·r2 without cancellation; see {@link #atanDifference}. */
