@@ -35,20 +35,41 @@ final class PlateFieldOperator {
      * @param padding period as a multiple of the cells, at least 2 (exact); larger only to measure
      */
     PlateFieldOperator(int nx, int ny, double cellM, double padding) {
+        this(nx, ny, cellM, requirePadding(padding, nx), requirePadding(padding, ny));
+    }
+
+    /**
+     * The same operator made circular on the smallest power-of-two period that holds the interior
+     * nodes, with the kernel cut to its nearest images (|Δ| below half the period): a quarter of
+     * the exact operator's transform size in 2-D. For preconditioners, which are approximate
+     * anyway: the wrapped plate's coupling to its own far side is what the cut leaves out.
+     */
+    static PlateFieldOperator circular(int nx, int ny, double cellM) {
+        return new PlateFieldOperator(nx, ny, cellM, powerOfTwo(nx - 1), powerOfTwo(ny - 1));
+    }
+
+    private static int requirePadding(double padding, int cells) {
         if (!(padding >= 2)) {
             throw new IllegalArgumentException("padding must be at least 2 (a period of twice the grid), got "
                     + padding);
         }
+        return powerOfTwo(Math.max(2 * cells - 1, (int) Math.ceil(padding * cells)));
+    }
+
+    private PlateFieldOperator(int nx, int ny, double cellM, int periodX, int periodY) {
         nodesX = nx + 1;
         nodesY = ny + 1;
-        periodX = powerOfTwo(Math.max(2 * nx - 1, (int) Math.ceil(padding * nx)));
-        periodY = powerOfTwo(Math.max(2 * ny - 1, (int) Math.ceil(padding * ny)));
+        this.periodX = periodX;
+        this.periodY = periodY;
         fft = new DoubleFFT_2D(periodY, periodX);
         double scale = PhysicalConstants.MU_0 * cellM;
         double[] kernel = new double[periodX * periodY];
-        for (int dj = -(ny - 1); dj <= ny - 1; dj++) {
+        // Every offset up to the grid's extent, or (circular) up to just below half the period.
+        int reachX = Math.min(nx - 1, (periodX - 1) / 2);
+        int reachY = Math.min(ny - 1, (periodY - 1) / 2);
+        for (int dj = -reachY; dj <= reachY; dj++) {
             int row = Math.floorMod(dj, periodY) * periodX;
-            for (int di = -(nx - 1); di <= nx - 1; di++) {
+            for (int di = -reachX; di <= reachX; di++) {
                 kernel[row + Math.floorMod(di, periodX)] = scale * sharpened(di, dj);
             }
         }
@@ -253,9 +274,11 @@ final class PlateFieldOperator {
         }
     }
 
+    /** The nodes the period holds (a circular operator's period leaves out the last border row and column). */
     private void store(double[] nodes) {
-        for (int j = 0; j < nodesY; j++) {
-            System.arraycopy(work, j * periodX, nodes, j * nodesX, nodesX);
+        int columns = Math.min(nodesX, periodX);
+        for (int j = 0; j < Math.min(nodesY, periodY); j++) {
+            System.arraycopy(work, j * periodX, nodes, j * nodesX, columns);
         }
     }
 }

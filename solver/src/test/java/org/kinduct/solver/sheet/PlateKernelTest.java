@@ -125,6 +125,33 @@ class PlateKernelTest {
         assertTrue(Math.abs(previous) < 2e-3, "64 cells: " + previous);
     }
 
+    /**
+     * The circular operator (the time step's preconditioner factor) has a period of 64 nodes on a
+     * 64² grid, a quarter of the exact one's area: a single mesh current at node 8 of the middle row
+     * gives the exact flux at every node less than half the period away (offsets up to 31), none at
+     * offset 32 (the kernel is cut there), and beyond, the wrapped image's: node 60 lies 52 to the
+     * right, or 12 to the left across the period, where the even kernel gives node 20's flux.
+     */
+    @Test
+    void theCircularOperatorMatchesTheExactOneOutToHalfItsPeriodAndWrapsBeyond() {
+        int n = 64;
+        double h = 1e-3;
+        int nodes = n + 1;
+        int row = nodes * (n / 2);
+        double[] psi = new double[nodes * nodes];
+        psi[8 + row] = 1;
+        double[] exact = new double[psi.length];
+        double[] circular = new double[psi.length];
+        new PlateFieldOperator(n, n, h, 2).apply(psi, exact);
+        PlateFieldOperator.circular(n, n, h).apply(psi, circular);
+        double scale = Math.abs(exact[8 + row]);
+        for (int d = 0; d < 32; d++) {
+            assertEquals(exact[8 + d + row], circular[8 + d + row], 1e-12 * scale, "offset " + d);
+        }
+        assertEquals(0, circular[40 + row], 1e-12 * scale, "offset 32");
+        assertEquals(exact[20 + row], circular[60 + row], 1e-12 * scale, "offset 52, wrapped to -12");
+    }
+
     @Test
     void multiplierFollowsTheFourierConventionOfTheDerivatives() {
         int n = 10;
