@@ -301,7 +301,7 @@ public final class EdgeQuadrature {
             this.ys = ys;
             this.edges = edges;
             this.controlFirstMoment = controlFirstMoment;
-            int capacity = Math.max(16, 2 * edges);
+            int capacity = 2 * edges + 2;
             edge = new int[capacity];
             lo = new double[capacity];
             hi = new double[capacity];

@@ -28,6 +28,12 @@ class GradientFieldTest {
     private static final double GRADIENT_LEVEL = 1e-6;
     /** A and B_z: the same closed forms, summed in another order at most. */
     private static final double SAME_FORM_LEVEL = 1e-13;
+    /**
+     * A cylinder magnet's jet interpolates its closed forms ({@link RadialTable}): relative to the
+     * field's size there (the gradient's, which stays finite where B_z crosses zero); the table's own
+     * test bounds it against the closed forms.
+     */
+    private static final double TABLE_LEVEL = 1e-12;
     /** Curl and divergence against B_z: the jet's own rounding. */
     private static final double IDENTITY_LEVEL = 1e-11;
 
@@ -58,10 +64,13 @@ class GradientFieldTest {
             field.jet(x, y, jet);
             field.potential(x, y, a);
             double aScale = Math.hypot(a[0], a[1]);
-            assertEquals(a[0], jet[0], SAME_FORM_LEVEL * aScale, where);
-            assertEquals(a[1], jet[1], SAME_FORM_LEVEL * aScale, where);
             double bz = field.bz(x, y);
-            assertEquals(bz, jet[6], SAME_FORM_LEVEL * Math.abs(bz) + 1e-18, where);
+            double jetScale = Math.abs(jet[2]) + Math.abs(jet[3]) + Math.abs(jet[4]) + Math.abs(jet[5]);
+            boolean tabulated = field instanceof CylinderMagnetField;
+            double aLevel = (tabulated ? TABLE_LEVEL : SAME_FORM_LEVEL) * aScale;
+            assertEquals(a[0], jet[0], aLevel, where);
+            assertEquals(a[1], jet[1], aLevel, where);
+            assertEquals(bz, jet[6], tabulated ? TABLE_LEVEL * jetScale : SAME_FORM_LEVEL * Math.abs(bz) + 1e-18, where);
 
             double[] ddx = derivative(field, x, y, 1, 0);
             double[] ddy = derivative(field, x, y, 0, 1);
@@ -70,7 +79,6 @@ class GradientFieldTest {
             assertEquals(ddy[0], jet[3], GRADIENT_LEVEL * scale, "∂A_x/∂y " + where);
             assertEquals(ddx[1], jet[4], GRADIENT_LEVEL * scale, "∂A_y/∂x " + where);
             assertEquals(ddy[1], jet[5], GRADIENT_LEVEL * scale, "∂A_y/∂y " + where);
-            double jetScale = Math.abs(jet[2]) + Math.abs(jet[3]) + Math.abs(jet[4]) + Math.abs(jet[5]);
             assertEquals(0, jet[2] + jet[5], IDENTITY_LEVEL * jetScale, "divergence " + where);
             assertEquals(bz, jet[4] - jet[3], IDENTITY_LEVEL * jetScale, "curl " + where);
         }
