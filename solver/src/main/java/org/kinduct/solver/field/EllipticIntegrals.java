@@ -117,31 +117,11 @@ public final class EllipticIntegrals {
         double pu = 1;
         double em = 1;
         double kk = k;
-        double inv = 1 / pp;
-        double g = k * inv;
-        double f = c1;
-        c1 += s1 * inv;
-        s1 = 2 * (s1 + f * g);
-        f = c2;
-        c2 += s2 * inv;
-        s2 = 2 * (s2 + f * g);
-        pp += g;
-        double gu = k;
-        f = c3;
-        c3 += s3;
-        s3 = 2 * (s3 + f * gu);
-        f = c4;
-        c4 += s4;
-        s4 = 2 * (s4 + f * gu);
-        pu += gu;
-        double previous = em;
-        em += k;
-        for (int step = 0; Math.abs(previous - k) > previous * RELATIVE_STOP && step < MAX_STEPS; step++) {
-            k = 2 * Math.sqrt(kk);
-            kk = k * em;
-            inv = 1 / pp;
-            g = kk * inv;
-            f = c1;
+        // Bulirsch's step for both p at once; its first pass has kk = k (the loop's update comes after).
+        for (int step = 0; ; step++) {
+            double inv = 1 / pp;
+            double g = kk * inv;
+            double f = c1;
             c1 += s1 * inv;
             s1 = 2 * (s1 + f * g);
             f = c2;
@@ -149,7 +129,7 @@ public final class EllipticIntegrals {
             s2 = 2 * (s2 + f * g);
             pp += g;
             double invU = 1 / pu;
-            gu = kk * invU;
+            double gu = kk * invU;
             f = c3;
             c3 += s3 * invU;
             s3 = 2 * (s3 + f * gu);
@@ -157,8 +137,13 @@ public final class EllipticIntegrals {
             c4 += s4 * invU;
             s4 = 2 * (s4 + f * gu);
             pu += gu;
-            previous = em;
+            double previous = em;
             em += k;
+            if (!(Math.abs(previous - k) > previous * RELATIVE_STOP) || step == MAX_STEPS) {
+                break;
+            }
+            k = 2 * Math.sqrt(kk);
+            kk = k * em;
         }
         double scale = Math.PI / 2 / (em * (em + pp));
         out[0] = scale * (s1 + c1 * em);
