@@ -60,6 +60,7 @@ public final class FrameTimeProbe {
     public static void main(String[] args) throws Exception {
         int frames = args.length > 0 ? Integer.parseInt(args[0]) : 300;
         System.setProperty("javafx.animation.fullspeed", "true");
+        ShippedFonts.use();
         Platform.startup(() -> { });
         try {
             System.out.println(measure(frames));

@@ -37,6 +37,7 @@ public final class GuiLauncher implements EditorLauncher {
         initialFile = sceneFileOrNull;
         initialDemo = demoResourceOrNull;
         JAVAFX_LOG.setLevel(Level.SEVERE);
+        ShippedFonts.use();
         Application.launch(KinductApp.class);
     }
 
