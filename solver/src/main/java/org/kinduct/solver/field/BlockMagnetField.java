@@ -82,7 +82,7 @@ public final class BlockMagnetField extends CurrentSourceField {
     @Override
     public EdgeQuadrature.Breaks breaks() {
         if (zLowM != 0 && zHighM != 0) {
-            return super.breaks();
+            return Clearance.aroundDisc(cx, cy, Math.hypot(halfX, halfY), Math.min(Math.abs(zLowM), Math.abs(zHighM)));
         }
         // The footprint's corners, counter-clockwise, in scene coordinates.
         double[] px = new double[4];

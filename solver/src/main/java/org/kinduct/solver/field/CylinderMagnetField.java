@@ -97,7 +97,8 @@ public final class CylinderMagnetField extends CurrentSourceField {
     @Override
     public EdgeQuadrature.Breaks breaks() {
         return zLowM == 0 || zHighM == 0
-                ? (ax, ay, bx, by) -> Crossings.ofCircle(ax, ay, bx, by, cx, cy, radiusM) : super.breaks();
+                ? (ax, ay, bx, by) -> Crossings.ofCircle(ax, ay, bx, by, cx, cy, radiusM)
+                : Clearance.aroundDisc(cx, cy, radiusM, Math.min(Math.abs(zLowM), Math.abs(zHighM)));
     }
 
     @Override
