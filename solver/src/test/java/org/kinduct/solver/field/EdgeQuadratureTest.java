@@ -145,6 +145,31 @@ class EdgeQuadratureTest {
     }
 
     @Test
+    void theFifteenPointPairIsExactToDegree13And22() {
+        // 7-point Gauss: degree 13; its 15-point Kronrod extension: 3·7 + 1 = 22 (Piessens et al.,
+        // QUADPACK, 1983, §2.2). A stated clearance far beyond the segment selects the pair.
+        EdgeQuadrature.Breaks far = new EdgeQuadrature.Breaks() {
+            @Override
+            public double[] along(double ax, double ay, double bx, double by) {
+                return new double[0];
+            }
+
+            @Override
+            public double clearanceM(double ax, double ay, double bx, double by) {
+                return 1e3;
+            }
+        };
+        EdgeQuadrature onePanel = new EdgeQuadrature(1e-15, EdgeQuadrature.PANEL_EVALUATIONS);
+        EdgeQuadrature.Estimate degree12 = onePanel.segment((x, y, dx, dy) -> Math.pow(x, 12), 0, 0, 1, 0, far);
+        EdgeQuadrature.Estimate degree22 = onePanel.segment((x, y, dx, dy) -> Math.pow(x, 22), 0, 0, 1, 0, far);
+        assertEquals(15, degree12.evaluations());
+        assertEquals(1.0 / 13, degree12.value(), ROUNDING_LEVEL);
+        assertEquals(0, degree12.errorEstimate(), ROUNDING_LEVEL, "Gauss and Kronrod agree up to degree 13");
+        assertEquals(1.0 / 23, degree22.value(), ROUNDING_LEVEL);
+        assertTrue(degree22.errorEstimate() > 1e-10, "Gauss alone is not exact on degree 22");
+    }
+
+    @Test
     void exhaustedBudgetIsReportedNotHidden() {
         EdgeQuadrature small = new EdgeQuadrature(1e-12, 100);
         // A Lorentzian of width 1e-6 needs far more than 100 evaluations.
