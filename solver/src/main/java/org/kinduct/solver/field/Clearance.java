@@ -6,7 +6,8 @@ package org.kinduct.solver.field;
  * distance from any point of the segment to any point of the source,
  * √(max(0, d − r)² + h²), d the in-plane distance from the segment to the axis, r the radius and h
  * the distance from the plane. What {@link EdgeQuadrature.Breaks#clearanceM} asks of a field that is
- * analytic off its source.
+ * analytic off its source. Square roots of sums of squares rather than {@link Math#hypot}: scene
+ * lengths lie far from where the squares over- or underflow, and the quadrature asks for every edge.
  */
 final class Clearance {
 
@@ -24,7 +25,7 @@ final class Clearance {
             @Override
             public double clearanceM(double ax, double ay, double bx, double by) {
                 double outside = Math.max(0, segmentDistance(ax, ay, bx, by, cx, cy) - radiusM);
-                return Math.hypot(outside, planeDistanceM);
+                return Math.sqrt(outside * outside + planeDistanceM * planeDistanceM);
             }
         };
     }
@@ -36,6 +37,8 @@ final class Clearance {
         double lengthSquared = dx * dx + dy * dy;
         double t = lengthSquared > 0 ? ((px - ax) * dx + (py - ay) * dy) / lengthSquared : 0;
         t = Math.max(0, Math.min(1, t));
-        return Math.hypot(px - (ax + t * dx), py - (ay + t * dy));
+        double ex = px - (ax + t * dx);
+        double ey = py - (ay + t * dy);
+        return Math.sqrt(ex * ex + ey * ey);
     }
 }

@@ -361,7 +361,9 @@ public final class EdgeQuadrature {
             clearance = new double[edges];
             for (int e = 0; e < edges; e++) {
                 int next = e + 1 == xs.length ? 0 : e + 1;
-                edgeLength[e] = Math.hypot(xs[next] - xs[e], ys[next] - ys[e]);
+                double dx = xs[next] - xs[e];
+                double dy = ys[next] - ys[e];
+                edgeLength[e] = Math.sqrt(dx * dx + dy * dy);
                 clearance[e] = breaks.clearanceM(xs[e], ys[e], xs[next], ys[next]);
             }
             int capacity = 2 * edges + 2;

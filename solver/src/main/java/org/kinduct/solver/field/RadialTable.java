@@ -58,7 +58,7 @@ final class RadialTable {
 
     /** Cell boundaries, ascending from 0; cell c is [edges[c], edges[c + 1]). */
     private final double[] edges;
-    /** Per cell, the A_φ/ρ coefficients then the B_z coefficients, {@value #NODES} each. */
+    /** Per cell, the A_φ/ρ coefficients then the B_z coefficients, as many of each as matter ({@link #truncated}). */
     private final double[][] coefficients;
 
     private RadialTable(double[] edges, double[][] coefficients) {
@@ -126,9 +126,35 @@ final class RadialTable {
                 cell[j] = weight * sa;
                 cell[NODES + j] = weight * sb;
             }
-            coefficients[c] = cell;
+            coefficients[c] = truncated(cell);
         }
         return new RadialTable(edges.stream().mapToDouble(Double::doubleValue).toArray(), coefficients);
+    }
+
+    /**
+     * The cell's coefficients up to the last that matters: the A_φ/ρ series then the B_z series,
+     * each cut after its last coefficient above 1e-17 of its largest (the cells outside the rim
+     * need fewer terms than the 24 points give), the two series padded to one length.
+     */
+    private static double[] truncated(double[] cell) {
+        int terms = Math.max(significant(cell, 0), significant(cell, NODES));
+        double[] kept = new double[2 * terms];
+        System.arraycopy(cell, 0, kept, 0, terms);
+        System.arraycopy(cell, NODES, kept, terms, terms);
+        return kept;
+    }
+
+    /** One more than the index of the last coefficient of the series at {@code from} above 1e-17 of its largest. */
+    private static int significant(double[] cell, int from) {
+        double largest = 0;
+        for (int j = 0; j < NODES; j++) {
+            largest = Math.max(largest, Math.abs(cell[from + j]));
+        }
+        int terms = NODES;
+        while (terms > 1 && !(Math.abs(cell[from + terms - 1]) > 1e-17 * largest)) {
+            terms--;
+        }
+        return terms;
     }
 
     /** Whether ρ lies within the cells. */
@@ -140,6 +166,7 @@ final class RadialTable {
     void at(double rho, double[] out) {
         int c = cell(rho);
         double[] cell = coefficients[c];
+        int terms = cell.length / 2;
         double lo = edges[c];
         double hi = edges[c + 1];
         double x = (2 * rho - lo - hi) / (hi - lo);
@@ -148,16 +175,16 @@ final class RadialTable {
         double a2 = 0;
         double b1 = 0;
         double b2 = 0;
-        for (int j = NODES - 1; j >= 1; j--) {
+        for (int j = terms - 1; j >= 1; j--) {
             double a0 = twoX * a1 - a2 + cell[j];
             a2 = a1;
             a1 = a0;
-            double b0 = twoX * b1 - b2 + cell[NODES + j];
+            double b0 = twoX * b1 - b2 + cell[terms + j];
             b2 = b1;
             b1 = b0;
         }
         out[0] = rho * (x * a1 - a2 + cell[0]);
-        out[1] = x * b1 - b2 + cell[NODES];
+        out[1] = x * b1 - b2 + cell[terms];
     }
 
     /** The cell holding ρ, by bisection over the edges. */
