@@ -31,6 +31,12 @@ public final class CircleCoilField extends CurrentSourceField {
         this.ampereTurns = Checks.finite(ampereTurns, "ampere-turns");
     }
 
+    /** No break in the plane; the filament keeps at least |z0| off it, and its circle's distance in it. */
+    @Override
+    public EdgeQuadrature.Breaks breaks() {
+        return Clearance.aroundDisc(cx, cy, radiusM, Math.abs(z0M));
+    }
+
     @Override
     public double bz(double x, double y) {
         return CircularFilament.bz(radiusM, z0M, ampereTurns, Axisymmetric.distance(x - cx, y - cy));

@@ -47,12 +47,11 @@ abstract sealed class CurrentSourceField implements GradientField
      * Where B_z jumps and A kinks along a segment in the plane: the edge of a magnet's face lying
      * in the plane (stand-off 0). Quadrature panels start and end there, which keeps the flux
      * accurate, and smooth in time as a loop moves, to a few ulp instead of the 1e-5 a singularity
-     * inside a panel left. None for fields smooth in the plane.
+     * inside a panel left. Fields smooth in the plane have none, and state their clearance from a
+     * segment instead ({@link EdgeQuadrature.Breaks#clearanceM}).
      */
     @Override
-    public EdgeQuadrature.Breaks breaks() {
-        return EdgeQuadrature.Breaks.NONE;
-    }
+    public abstract EdgeQuadrature.Breaks breaks();
 
     static void requirePolygon(double[] xs, double[] ys, String what) {
         if (xs.length != ys.length || xs.length < 3) {

@@ -53,6 +53,19 @@ public final class PolygonCoilField extends CurrentSourceField {
         }
     }
 
+    /**
+     * No break in the plane; the filaments keep at least |z0| off it, and the distance to a disc
+     * round the first vertex that holds every vertex in it.
+     */
+    @Override
+    public EdgeQuadrature.Breaks breaks() {
+        double reach = 0;
+        for (int i = 1; i < xs.length; i++) {
+            reach = Math.max(reach, Math.hypot(xs[i] - xs[0], ys[i] - ys[0]));
+        }
+        return Clearance.aroundDisc(xs[0], ys[0], reach, Math.abs(z0M));
+    }
+
     @Override
     public double bz(double x, double y) {
         double sum = 0;

@@ -61,6 +61,44 @@ class ClearanceTest {
     }
 
     /**
+     * Coils state their clearance through {@link CurrentSourceField#breaks}: never more than the
+     * distance from a point of a random segment to a point of the filament (a circle, and a
+     * pentagon, at their coil plane).
+     */
+    @Test
+    void aCoilsClearanceNeverExceedsADistanceToItsFilament() {
+        double[] px = {-0.01, 0.012, 0.015, 0.0, -0.014};
+        double[] py = {-0.012, -0.01, 0.008, 0.016, 0.004};
+        CircleCoilField circle = new CircleCoilField(0.002, -0.001, 0.012, -0.005, 7);
+        PolygonCoilField pentagon = new PolygonCoilField(px, py, 0.004, 10);
+        SplittableRandom r = new SplittableRandom(SEED);
+        for (int c = 0; c < 2_000; c++) {
+            double ax = r.nextDouble(-0.1, 0.1);
+            double ay = r.nextDouble(-0.1, 0.1);
+            double bx = r.nextDouble(-0.1, 0.1);
+            double by = r.nextDouble(-0.1, 0.1);
+            double circleClearance = circle.breaks().clearanceM(ax, ay, bx, by);
+            double pentagonClearance = pentagon.breaks().clearanceM(ax, ay, bx, by);
+            for (int k = 0; k < 400; k++) {
+                double s = r.nextDouble();
+                double x = ax + s * (bx - ax);
+                double y = ay + s * (by - ay);
+                double angle = r.nextDouble(0, 2 * Math.PI);
+                double toCircle = Math.sqrt(Math.pow(x - 0.002 - 0.012 * Math.cos(angle), 2)
+                        + Math.pow(y + 0.001 - 0.012 * Math.sin(angle), 2) + 0.005 * 0.005);
+                int i = r.nextInt(px.length);
+                int j = (i + 1) % px.length;
+                double t = r.nextDouble();
+                double toPentagon = Math.sqrt(Math.pow(x - px[i] - t * (px[j] - px[i]), 2)
+                        + Math.pow(y - py[i] - t * (py[j] - py[i]), 2) + 0.004 * 0.004);
+                String where = "seed " + SEED + " case " + c;
+                assertTrue(circleClearance <= toCircle, where + ": circle " + circleClearance + " > " + toCircle);
+                assertTrue(pentagonClearance <= toPentagon, where + ": pentagon " + pentagonClearance + " > " + toPentagon);
+            }
+        }
+    }
+
+    /**
      * Where the nearest points are known, the bound is the distance: a segment across the x axis
      * at x = 0.05 from a disc of radius 0.02 at the origin, 0.003 below the plane, is nearest to its
      * rim point (0.02, 0, −0.003).
