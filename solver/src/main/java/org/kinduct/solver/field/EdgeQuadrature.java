@@ -10,7 +10,7 @@ import java.util.Arrays;
  * rule (nodes and weights of QUADPACK's {@code qk21}: R. Piessens, E. de Doncker-Kapenga,
  * C. W. Überhuber &amp; D. K. Kahaner, <i>QUADPACK</i>, Springer 1983), or, where the caller states
  * that the integrand's singularities keep at least three panel lengths away
- * ({@link Breaks#clearanceM}: a magnet off the plane), with the 15-point pair of {@code qk15}
+ * ({@link Breaks#clearanceM}: a magnet off the plane, a coil), with the 15-point pair of {@code qk15}
  * (a third fewer evaluations for the same accuracy there; see {@code panel}). The panel's error estimate
  * is |Kronrod − Gauss| (pessimistic: the Gauss rule's error, while the Kronrod value is returned)
  * plus a guard for the slivers between the outermost nodes and the panel's ends, where a jump is
