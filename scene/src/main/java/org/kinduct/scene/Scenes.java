@@ -158,18 +158,23 @@ public final class Scenes {
 
             @Override
             public Source coil(Source.SourceCoil c) {
-                Source.CoilShape shape = c.shape().match(new Source.CoilShape.Cases<>() {
-                    @Override
-                    public Source.CoilShape polygon(Source.CoilShape.Polygon p) {
-                        return new Source.CoilShape.Polygon(p.vertices().stream().map(f).toList());
-                    }
+                return new Source.SourceCoil(c.id(), c.body(), mapPositions(c.shape(), f), c.turns(), c.planeZM(),
+                        c.drive());
+            }
+        });
+    }
 
-                    @Override
-                    public Source.CoilShape circle(Source.CoilShape.Circle circle) {
-                        return new Source.CoilShape.Circle(f.apply(circle.center()), circle.radiusM());
-                    }
-                });
-                return new Source.SourceCoil(c.id(), c.body(), shape, c.turns(), c.planeZM(), c.drive());
+    /** A coil's shape with {@code f} applied to its vertices or centre (a circle keeps its radius). */
+    public static Source.CoilShape mapPositions(Source.CoilShape shape, UnaryOperator<Vec2> f) {
+        return shape.match(new Source.CoilShape.Cases<>() {
+            @Override
+            public Source.CoilShape polygon(Source.CoilShape.Polygon p) {
+                return new Source.CoilShape.Polygon(p.vertices().stream().map(f).toList());
+            }
+
+            @Override
+            public Source.CoilShape circle(Source.CoilShape.Circle circle) {
+                return new Source.CoilShape.Circle(f.apply(circle.center()), circle.radiusM());
             }
         });
     }

@@ -46,18 +46,8 @@ public final class Shapes {
 
             @Override
             public Source coil(Source.SourceCoil c) {
-                Source.CoilShape shape = c.shape().match(new Source.CoilShape.Cases<>() {
-                    @Override
-                    public Source.CoilShape polygon(Source.CoilShape.Polygon polygon) {
-                        return new Source.CoilShape.Polygon(points(polygon.vertices(), f));
-                    }
-
-                    @Override
-                    public Source.CoilShape circle(Source.CoilShape.Circle circle) {
-                        return new Source.CoilShape.Circle(f.apply(circle.center()), circle.radiusM());
-                    }
-                });
-                return new Source.SourceCoil(c.id(), c.body(), shape, c.turns(), c.planeZM(), c.drive());
+                return new Source.SourceCoil(c.id(), c.body(), Scenes.mapPositions(c.shape(), f), c.turns(),
+                        c.planeZM(), c.drive());
             }
 
             /** A map moves with its centre; its samples keep their axes, so it turns only with its body. */
