@@ -156,7 +156,7 @@ public final class CylinderMagnetField extends CurrentSourceField {
     /** A_φ at distance ρ &gt; 0 from the axis by the closed forms, T·m; see the class documentation. */
     double aPhi(double rho) {
         double[] both = new double[2];
-        exactBoth(rho, both);
+        exact(rho, both, false);
         return both[0];
     }
 
@@ -177,6 +177,11 @@ public final class CylinderMagnetField extends CurrentSourceField {
      * A_φ, come from one iteration ({@link EllipticIntegrals#celBases}).
      */
     void exactBoth(double rho, double[] out) {
+        exact(rho, out, true);
+    }
+
+    /** A_φ into out[0] and, when {@code withBz}, B_z into out[1] (else out[1] is not a field value). */
+    private void exact(double rho, double[] out, boolean withBz) {
         double sum = radiusM + rho;
         double diff = radiusM - rho;
         double gamma = diff / sum;
@@ -184,10 +189,10 @@ public final class CylinderMagnetField extends CurrentSourceField {
         double q = 4 * radiusM * rho / (sum * sum);
         double[] face = new double[2];
         double[] bases = new double[4];
-        face(zHighM, sum, diff, gamma, p, q, bases, face);
+        face(zHighM, sum, diff, gamma, p, q, withBz, bases, face);
         double aHigh = face[0];
         double bzHigh = face[1];
-        face(zLowM, sum, diff, gamma, p, q, bases, face);
+        face(zLowM, sum, diff, gamma, p, q, withBz, bases, face);
         out[0] = remanenceT * radiusM * q / Math.PI * (aHigh - face[0]);
         out[1] = remanenceT / Math.PI * radiusM / sum * (bzHigh - face[1]);
     }
@@ -198,7 +203,7 @@ public final class CylinderMagnetField extends CurrentSourceField {
      * zero for a face in the plane.
      */
     private static void face(double zFace, double sum, double diff, double gamma, double p, double q,
-                             double[] bases, double[] out) {
+                             boolean withBz, double[] bases, double[] out) {
         if (zFace == 0) {
             out[0] = 0;
             out[1] = 0;
@@ -215,7 +220,8 @@ public final class CylinderMagnetField extends CurrentSourceField {
             bzCel = bases[0] + gamma * bases[1];
             integral = (p * bases[2] + bases[3] - p * (bases[0] + bases[1])) / (q * q);
         } else {
-            bzCel = EllipticIntegrals.cel(kc, p, 1, gamma);
+            // Near the axis B_z's cel is a call of its own: made only when asked for.
+            bzCel = withBz ? EllipticIntegrals.cel(kc, p, 1, gamma) : Double.NaN;
             integral = 0;
             for (int i = 0; i < NEAR_AXIS_POINTS; i++) {
                 integral += WEIGHT_SIN2_COS2[i]
